@@ -1,0 +1,58 @@
+/**
+ * Activity-coefficient models. Every model offered here has the form
+ * log10 γ_z = −A z² F(I), so one number F(I) per ionic strength serves every charge.
+ * Neutral species (and zwitterions of net charge 0) have γ = 1.
+ */
+import { ChemError, MESSAGES } from './errors';
+
+/** The activity models a user can choose. */
+export type ActivityModel = 'davies' | 'ideal' | 'bates-guggenheim';
+
+/** Every model name, in the order offered to users; the first is the default. */
+export const ACTIVITY_MODELS: readonly ActivityModel[] = ['davies', 'ideal', 'bates-guggenheim'];
+
+/** Ionic strength (mol/L) above which Davies and Bates–Guggenheim are extrapolations; a warning is raised past it. Davies 1962, Ion Association, ch. 3: fit for I ≲ 0.1–0.5 M. */
+export const ACTIVITY_MODEL_LIMIT_M = 0.5;
+
+/**
+ * The ionic-strength factor F(I) of a model, so that log10 γ_z = −A z² F(I).
+ *
+ * - davies: F = √I/(1+√I) − 0.3 I (C. W. Davies, Ion Association, Butterworths 1962).
+ * - bates-guggenheim: F = √I/(1 + 1.5 √I), the extended Debye–Hückel form used to assign
+ *   the primary pH standards (Buck et al., Pure Appl. Chem. 74 (2002) 2169, sec. 5).
+ * - ideal: F = 0 (γ = 1).
+ *
+ * @param model - activity model
+ * @param ionicStrengthM - ionic strength in mol/L (≥ 0)
+ * @returns F(I), dimensionless
+ */
+export function ionicStrengthFactor(model: ActivityModel, ionicStrengthM: number): number {
+  if (model === 'ideal') return 0;
+  const s = Math.sqrt(ionicStrengthM);
+  if (model === 'davies') return s / (1 + s) - 0.3 * ionicStrengthM;
+  return s / (1 + 1.5 * s);
+}
+
+/**
+ * log10 of the activity coefficient of an ion of charge z.
+ *
+ * @param model - activity model
+ * @param charge - ionic charge z
+ * @param ionicStrengthM - ionic strength in mol/L
+ * @param a - Debye–Hückel A at the temperature (see `debyeHuckelA`)
+ */
+export function log10Gamma(model: ActivityModel, charge: number, ionicStrengthM: number, a: number): number {
+  return -a * charge * charge * ionicStrengthFactor(model, ionicStrengthM);
+}
+
+/** Returns the model named, or throws a typed error listing the allowed names. */
+export function parseActivityModel(field: string, value: unknown): ActivityModel {
+  if (value === undefined) return 'davies';
+  const name = typeof value === 'string' ? value.trim().toLowerCase() : '';
+  const found = ACTIVITY_MODELS.find((m) => m === name);
+  if (!found) {
+    const allowed = ACTIVITY_MODELS.join(', ');
+    throw new ChemError('invalid-input', 'unknownModel', MESSAGES.unknownModel(field, String(value), allowed), field, allowed);
+  }
+  return found;
+}

@@ -1,0 +1,146 @@
+/**
+ * Buffer capacity, and how the pH answers to a load of acid or base, dilution and
+ * temperature.
+ */
+import { Composition, prepare } from './composition';
+import { requireNumber } from './errors';
+import { SpeciationResult, speciate, solvePrepared } from './speciation';
+import { netStrongBaseForPh } from './titration';
+
+/** pH step for the central difference β = dC_b/dpH. Small enough that curvature error is < 1e-6 relative for any buffer, large enough to stay clear of rounding. */
+const CAPACITY_STEP_PH = 1e-3;
+
+/** Buffer capacity at a composition's own pH. */
+export interface Capacity {
+  /** The composition's pH. */
+  readonly pH: number;
+  /** β = dC_b/dpH, mol/L per pH unit (strong base as Na⁺ or strong acid as Cl⁻). */
+  readonly betaMPerPh: number;
+  /** mM of strong base that raises the pH by 0.1. */
+  readonly baseMmPerTenthPh: number;
+  /** mM of strong acid that lowers the pH by 0.1. */
+  readonly acidMmPerTenthPh: number;
+}
+
+
+/**
+ * Buffer capacity of a composition at its own pH, with the composition's activity model.
+ *
+ * Method: β by central difference of the strong base needed for pH ± 0.001; the 0.1-pH
+ * figures are exact differences (not β × 0.1), since capacity changes over 0.1 pH.
+ * Practitioners read "mM of strong acid or base per 0.1 pH" more easily than β.
+ *
+ * @param composition - the solution
+ * @returns pH, β in mol/L per pH, and mM of base and of acid per 0.1 pH
+ */
+export function capacity(composition: Composition): Capacity {
+  const p = prepare(composition);
+  const pH = solvePrepared(p).pH;
+  const at = (x: number) => netStrongBaseForPh(p, x);
+  const here = at(pH);
+  const beta = (at(pH + CAPACITY_STEP_PH) - at(pH - CAPACITY_STEP_PH)) / (2 * CAPACITY_STEP_PH);
+  return {
+    pH,
+    betaMPerPh: beta,
+    baseMmPerTenthPh: (at(pH + 0.1) - here) * 1000,
+    acidMmPerTenthPh: (here - at(pH - 0.1)) * 1000,
+  };
+}
+
+/**
+ * Ideal (γ = 1) buffer capacity by the closed form of Van Slyke, at a given pH.
+ *
+ * Method: β = ln10 (h + Kw/h + Σ C·var(n)), var(n) the variance of the number of protons
+ * lost per molecule (for one step: C·Ka·h/(Ka + h)²). D. D. Van Slyke, J. Biol. Chem. 52
+ * (1922) 525. Strong ions do not enter.
+ *
+ * @param composition - systems and temperature (the activity model is ignored)
+ * @param pH - pH at which to evaluate
+ * @returns β in mol/L per pH
+ */
+export function idealCapacityAt(composition: Composition, pH: number): number {
+  const p = prepare({ ...composition, activityModel: 'ideal' });
+  const h = Math.pow(10, -pH);
+  let beta = h + p.kw / h;
+  for (let j = 0; j < p.totals.length; j++) {
+    const first = p.firstStep[j];
+    let t = 1;
+    let sum = 1;
+    let s1 = 0;
+    let s2 = 0;
+    for (let k = 1; k <= p.stepCount[j]; k++) {
+      t *= p.ka[first + k - 1] / h;
+      sum += t;
+      s1 += k * t;
+      s2 += k * k * t;
+    }
+    const nb = s1 / sum;
+    beta += p.totals[j] * (s2 / sum - nb * nb);
+  }
+  return Math.LN10 * beta;
+}
+
+/** A load of strong acid or base, mol/L of solution. */
+export interface AcidBaseLoad {
+  /** Strong base added, mol/L (as `baseCation`, default Na⁺). */
+  readonly baseM?: number;
+  /** Strong acid added, mol/L (as `acidAnion`, default Cl⁻). */
+  readonly acidM?: number;
+  readonly baseCation?: string;
+  readonly acidAnion?: string;
+}
+
+/**
+ * The solution after a load of strong acid and/or base (no volume change).
+ *
+ * @param composition - the solution
+ * @param load - strong base and acid in mol/L
+ * @returns the speciation after the load
+ */
+export function afterLoad(composition: Composition, load: AcidBaseLoad): SpeciationResult {
+  const baseM = requireNumber('load.baseM', load.baseM ?? 0, 0, 20);
+  const acidM = requireNumber('load.acidM', load.acidM ?? 0, 0, 20);
+  const ions: Record<string, number> = { ...(composition.strongIons ?? {}) };
+  const cation = load.baseCation ?? 'Na+';
+  const anion = load.acidAnion ?? 'Cl-';
+  ions[cation] = (ions[cation] ?? 0) + baseM;
+  ions[anion] = (ions[anion] ?? 0) + acidM;
+  return speciate({ ...composition, strongIons: ions });
+}
+
+/** Largest dilution factor accepted. */
+export const MAX_DILUTION_FACTOR = 1e6;
+
+/**
+ * The solution diluted with pure water by a factor (10 = one part plus nine of water).
+ *
+ * @param composition - the solution
+ * @param factor - final volume over initial volume, ≥ 1
+ * @returns the speciation after dilution
+ */
+export function afterDilution(composition: Composition, factor: number): SpeciationResult {
+  requireNumber('factor', factor, 1, MAX_DILUTION_FACTOR, `1 to ${MAX_DILUTION_FACTOR}`);
+  return speciate(scaleComposition(composition, 1 / factor));
+}
+
+/** Every concentration of a composition multiplied by `scale`. */
+export function scaleComposition(composition: Composition, scale: number): Composition {
+  const strongIons: Record<string, number> = {};
+  for (const [name, c] of Object.entries(composition.strongIons ?? {})) strongIons[name] = c * scale;
+  return {
+    ...composition,
+    systems: composition.systems.map((s) => ({ ...s, totalM: s.totalM * scale })),
+    strongIons,
+  };
+}
+
+/**
+ * The same composition at another temperature (concentrations unchanged; the small
+ * change of volume with temperature is neglected).
+ *
+ * @param composition - the solution
+ * @param temperatureC - new temperature, °C
+ */
+export function atTemperature(composition: Composition, temperatureC: number): SpeciationResult {
+  return speciate({ ...composition, temperatureC });
+}

@@ -1,0 +1,184 @@
+/**
+ * What a solution contains, as the core accepts it, and its validation into a compact
+ * prepared form (constants at the temperature, flat arrays) that the solver iterates on.
+ */
+import { ActivityModel, parseActivityModel } from './activity';
+import { ChemError, MESSAGES, requireInteger, requireNumber } from './errors';
+import { findStrongIon } from './strongIons';
+import { pKaAt } from './vantHoff';
+import { debyeHuckelA, pKw } from './water';
+
+/** One proton-dissociation step of an acid–base system, constants at 25 °C and I = 0. */
+export interface AcidBaseStep {
+  /** pKa at 25 °C, I = 0. */
+  readonly pKa: number;
+  /** Standard enthalpy of ionisation, kJ/mol (0 if unknown: the pKa then does not move with temperature). */
+  readonly deltaHkJ?: number;
+  /** Standard heat-capacity change of ionisation, J K⁻¹ mol⁻¹ (0 if unknown). */
+  readonly deltaCpJ?: number;
+}
+
+/** The chemistry of one acid–base system, without an amount. */
+export interface AcidBaseChemistry {
+  readonly name: string;
+  /** Charge of the most protonated form (e.g. 0 for phosphoric acid, +1 for tris-H⁺, +1 for glycine's cation). */
+  readonly chargeOfMostProtonated: number;
+  /** Steps in order of proton loss; pKa values ascend. */
+  readonly steps: readonly AcidBaseStep[];
+}
+
+/** An acid–base system at a total concentration (all its protonation states together). */
+export interface AcidBaseSystem extends AcidBaseChemistry {
+  /** Total concentration of the system in mol/L of solution. */
+  readonly totalM: number;
+}
+
+/** A solution to solve. */
+export interface Composition {
+  readonly systems: readonly AcidBaseSystem[];
+  /** Strong ions in mol/L, keyed by ion name (`Na+`, `Cl-`, …; see STRONG_IONS). */
+  readonly strongIons?: Readonly<Record<string, number>>;
+  /** Temperature in °C (default 25). */
+  readonly temperatureC?: number;
+  /** Activity model (default `davies`). */
+  readonly activityModel?: ActivityModel;
+}
+
+/** Lowest temperature accepted, °C: liquid water at 1 atm. */
+export const MIN_TEMPERATURE_C = 0;
+/** Highest temperature accepted, °C: liquid water at 1 atm. */
+export const MAX_TEMPERATURE_C = 100;
+/** Above this temperature (°C) most pKa fits are extrapolated (Goldberg et al. 2002 fit most data within 0–60 °C); results carry a warning. */
+export const FITTED_RANGE_MAX_C = 60;
+/** Largest total concentration of one system or strong ion accepted, mol/L (beyond any buffer's solubility; a guard against unit slips). */
+export const MAX_CONCENTRATION_M = 20;
+/** Most steps one system may have. */
+export const MAX_STEPS = 8;
+
+/** A composition validated and reduced to numbers at its temperature. Internal to the solver. */
+export interface PreparedComposition {
+  readonly temperatureC: number;
+  readonly model: ActivityModel;
+  /** Debye–Hückel A at the temperature. */
+  readonly a: number;
+  /** Thermodynamic Kw at the temperature. */
+  readonly kw: number;
+  /** Per system: total (mol/L), charge of the most protonated form, index of its first step, number of steps. */
+  readonly totals: Float64Array;
+  readonly z0: Float64Array;
+  readonly firstStep: Int32Array;
+  readonly stepCount: Int32Array;
+  /** Per step: thermodynamic Ka at the temperature, and 2·z(HA) − 1 (the z² difference between acid and base). */
+  readonly ka: Float64Array;
+  readonly zSquaredDiff: Float64Array;
+  /** Σ z·c of strong ions (mol/L) and ½ Σ z²·c of strong ions (mol/L). */
+  readonly strongCharge: number;
+  readonly strongIonicStrength: number;
+  /** Largest ionic strength the composition could reach (every system in its most charged state), mol/L; scales rounding floors. */
+  readonly ionicStrengthScale: number;
+  readonly warnings: string[];
+}
+
+/** Validates an acid–base system's chemistry; `field` names it in messages. */
+export function validateChemistry(field: string, chem: AcidBaseChemistry): void {
+  requireInteger(`${field}.chargeOfMostProtonated`, chem.chargeOfMostProtonated, -6, 6);
+  if (!Array.isArray(chem.steps) || chem.steps.length === 0 || chem.steps.length > MAX_STEPS) {
+    const allowed = `1 to ${MAX_STEPS} steps`;
+    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(`${field}.steps`, Array.isArray(chem.steps) ? chem.steps.length : chem.steps, allowed), `${field}.steps`, allowed);
+  }
+  let prev = -Infinity;
+  chem.steps.forEach((step, k) => {
+    const pka = requireNumber(`${field}.steps[${k}].pKa`, step.pKa, -10, 25);
+    if (step.deltaHkJ !== undefined) requireNumber(`${field}.steps[${k}].deltaHkJ`, step.deltaHkJ, -200, 200);
+    if (step.deltaCpJ !== undefined) requireNumber(`${field}.steps[${k}].deltaCpJ`, step.deltaCpJ, -2000, 2000);
+    if (pka <= prev) {
+      throw new ChemError('invalid-input', 'stepsOutOfOrder', MESSAGES.stepsOutOfOrder(`${field}.steps`, prev, pka), `${field}.steps`, 'ascending pKa values');
+    }
+    prev = pka;
+  });
+}
+
+/**
+ * Validates a composition and computes its constants at the temperature.
+ * Throws ChemError (invalid-input) naming the field, value and what is allowed.
+ */
+export function prepare(composition: Composition): PreparedComposition {
+  if (composition === null || typeof composition !== 'object') {
+    throw new ChemError('invalid-input', 'emptyComposition', MESSAGES.emptyComposition(), 'composition');
+  }
+  const temperatureC = composition.temperatureC === undefined ? 25 : requireNumber('temperatureC', composition.temperatureC, MIN_TEMPERATURE_C, MAX_TEMPERATURE_C, `${MIN_TEMPERATURE_C} to ${MAX_TEMPERATURE_C} °C`);
+  const model = parseActivityModel('activityModel', composition.activityModel);
+  const systems = composition.systems ?? [];
+  if (!Array.isArray(systems)) {
+    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('systems', systems, 'a list of acid–base systems'), 'systems', 'a list');
+  }
+  const ions = composition.strongIons ?? {};
+  const ionNames = Object.keys(ions);
+  if (systems.length === 0 && ionNames.length === 0) {
+    throw new ChemError('invalid-input', 'emptyComposition', MESSAGES.emptyComposition(), 'systems');
+  }
+
+  const n = systems.length;
+  let stepTotal = 0;
+  for (let j = 0; j < n; j++) {
+    const field = `systems[${j}]`;
+    validateChemistry(field, systems[j]);
+    requireNumber(`${field}.totalM`, systems[j].totalM, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
+    stepTotal += systems[j].steps.length;
+  }
+
+  const totals = new Float64Array(n);
+  const z0 = new Float64Array(n);
+  const firstStep = new Int32Array(n);
+  const stepCount = new Int32Array(n);
+  const ka = new Float64Array(stepTotal);
+  const zSquaredDiff = new Float64Array(stepTotal);
+  let s = 0;
+  let ionicStrengthScale = 1e-7;
+  for (let j = 0; j < n; j++) {
+    const sys = systems[j];
+    totals[j] = sys.totalM;
+    z0[j] = sys.chargeOfMostProtonated;
+    firstStep[j] = s;
+    stepCount[j] = sys.steps.length;
+    const zMax = Math.max(Math.abs(sys.chargeOfMostProtonated), Math.abs(sys.chargeOfMostProtonated - sys.steps.length));
+    ionicStrengthScale += 0.5 * sys.totalM * zMax * zMax;
+    for (let k = 0; k < sys.steps.length; k++, s++) {
+      const step = sys.steps[k];
+      const pka = temperatureC === 25 ? step.pKa : pKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, temperatureC);
+      ka[s] = Math.pow(10, -pka);
+      zSquaredDiff[s] = 2 * (sys.chargeOfMostProtonated - k) - 1;
+    }
+  }
+
+  let strongCharge = 0;
+  let strongIonicStrength = 0;
+  for (const name of ionNames) {
+    const field = `strongIons.${name}`;
+    const ion = findStrongIon('strongIons', name);
+    const c = requireNumber(field, ions[name], 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
+    strongCharge += ion.charge * c;
+    strongIonicStrength += 0.5 * ion.charge * ion.charge * c;
+  }
+
+  const warnings: string[] = [];
+  if (temperatureC > FITTED_RANGE_MAX_C) {
+    warnings.push(`Temperature ${temperatureC} °C is above ${FITTED_RANGE_MAX_C} °C, beyond the range most pKa temperature fits were made over; treat the pH as an estimate.`);
+  }
+  return {
+    temperatureC,
+    model,
+    a: debyeHuckelA(temperatureC),
+    kw: Math.pow(10, -pKw(temperatureC)),
+    totals,
+    z0,
+    firstStep,
+    stepCount,
+    ka,
+    zSquaredDiff,
+    strongCharge,
+    strongIonicStrength,
+    ionicStrengthScale: ionicStrengthScale + strongIonicStrength,
+    warnings,
+  };
+}

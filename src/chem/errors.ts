@@ -1,0 +1,95 @@
+/**
+ * Typed errors raised by the chemistry core, with every message drawn from one catalogue.
+ *
+ * Hosts (worksheet functions, command line, task pane) translate these into their own
+ * error forms; they never parse message text, they read `kind`, `field` and `allowed`.
+ */
+
+/** The three things that can go wrong in the core. */
+export type ChemErrorKind = 'invalid-input' | 'no-convergence' | 'infeasible-target';
+
+/** Every message the core can produce, keyed by a stable code. */
+export const MESSAGES = {
+  notFinite: (field: string, value: unknown) =>
+    `${field} must be a finite number; got ${describe(value)}.`,
+  outOfRange: (field: string, value: unknown, allowed: string) =>
+    `${field} is ${describe(value)}; allowed: ${allowed}.`,
+  notInteger: (field: string, value: unknown) =>
+    `${field} must be a whole number; got ${describe(value)}.`,
+  emptyComposition: () =>
+    'The composition is empty: give at least one acid–base system or strong ion.',
+  stepsOutOfOrder: (field: string, prev: number, next: number) =>
+    `${field}: pKa values must ascend (each step loses one proton); got ${prev} then ${next}.`,
+  listLengthMismatch: (field: string, expected: number, got: number) =>
+    `${field} must list one value per pKa step (${expected}); got ${got}.`,
+  unknownIon: (field: string, name: string, allowed: string) =>
+    `${field}: "${name}" is not a strong ion this tool knows; allowed: ${allowed}.`,
+  unknownModel: (field: string, name: string, allowed: string) =>
+    `${field}: "${name}" is not an activity model; allowed: ${allowed}.`,
+  noConvergence: (what: string, iterations: number) =>
+    `${what} did not converge within ${iterations} iterations.`,
+  unreachablePh: (targetPh: number, detail: string) =>
+    `pH ${targetPh} cannot be reached: ${detail}.`,
+  unknownSubstance: (field: string, name: string, suggestions: readonly string[]) =>
+    suggestions.length > 0
+      ? `${field}: "${name}" is not in the substance library; did you mean ${suggestions.map((s) => `"${s}"`).join(', ')}?`
+      : `${field}: "${name}" is not in the substance library; list the library to see every name it knows.`,
+  duplicateSubstance: (field: string, name: string, existing: string) =>
+    `${field}: "${name}" is already a name in the substance library (${existing}); choose another name.`,
+  badFormula: (field: string, formula: string, detail: string) =>
+    `${field}: cannot read the formula "${formula}": ${detail}.`,
+  formNotNeutral: (field: string, name: string, netCharge: number) =>
+    `${field}: the form "${name}" would add a net charge of ${netCharge} per mole; protons lost and counter-ions must balance to 0.`,
+  missingValue: (field: string, what: string) =>
+    `${field} is missing; give ${what}.`,
+} as const;
+
+export type MessageCode = keyof typeof MESSAGES;
+
+function describe(value: unknown): string {
+  if (typeof value === 'string') return JSON.stringify(value);
+  if (typeof value === 'number') return Number.isNaN(value) ? 'NaN' : String(value);
+  if (value === undefined) return 'nothing';
+  if (value === null) return 'null';
+  return typeof value;
+}
+
+/** An error from the chemistry core: what was wrong, where, and what is allowed. */
+export class ChemError extends Error {
+  readonly kind: ChemErrorKind;
+  readonly code: MessageCode;
+  /** The input field at fault, as a dotted path (e.g. `systems[1].pKa[0]`), when there is one. */
+  readonly field?: string;
+  /** What the field would accept, in words, when that can be said. */
+  readonly allowed?: string;
+
+  constructor(kind: ChemErrorKind, code: MessageCode, message: string, field?: string, allowed?: string) {
+    super(message);
+    this.name = 'ChemError';
+    this.kind = kind;
+    this.code = code;
+    this.field = field;
+    this.allowed = allowed;
+  }
+}
+
+/** Throws unless `value` is a finite number within [min, max]. Returns the value. */
+export function requireNumber(field: string, value: unknown, min: number, max: number, allowed?: string): number {
+  if (typeof value !== 'number' || !Number.isFinite(value)) {
+    throw new ChemError('invalid-input', 'notFinite', MESSAGES.notFinite(field, value), field, allowed ?? `${min} to ${max}`);
+  }
+  if (value < min || value > max) {
+    const words = allowed ?? `${min} to ${max}`;
+    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(field, value, words), field, words);
+  }
+  return value;
+}
+
+/** Throws unless `value` is a whole number within [min, max]. Returns the value. */
+export function requireInteger(field: string, value: unknown, min: number, max: number): number {
+  requireNumber(field, value, min, max);
+  if (!Number.isInteger(value)) {
+    throw new ChemError('invalid-input', 'notInteger', MESSAGES.notInteger(field, value), field, `whole numbers ${min} to ${max}`);
+  }
+  return value as number;
+}

@@ -1,0 +1,211 @@
+/**
+ * How much titrant brings a composition to a target pH.
+ *
+ * Method: at the target the hydrogen-ion activity is known, so every species of the
+ * composition has a known charge; the titrant's charge per mole at that pH is known too
+ * (+1 for NaOH's Na⁺, −1 for HCl's Cl⁻, z₀ − n̄(a_H) plus counter-ions for a weak
+ * titrant). The charge balance is then linear in the titrant amount:
+ *   c_t = −f₀(a_H, I) / q_t(a_H, I),
+ * iterated only on the ionic strength (which the titrant itself raises). No nested root
+ * finding (SCIENCE.md, "Amount of a titrant for a known target pH").
+ */
+import { ionicStrengthFactor } from './activity';
+import { AcidBaseChemistry, Composition, MAX_CONCENTRATION_M, PreparedComposition, prepare, validateChemistry } from './composition';
+import { ChemError, MESSAGES, requireNumber } from './errors';
+import { findStrongIon } from './strongIons';
+import { solvePrepared } from './speciation';
+import { pKaAt } from './vantHoff';
+
+/** A titrant: what one mole of it adds to the solution. */
+export interface Titrant {
+  /** Name for messages, e.g. `NaOH`. */
+  readonly name: string;
+  /** Strong ions added per mole of titrant, e.g. `{ 'Na+': 1 }` for NaOH, `{ 'Cl-': 1 }` for HCl. */
+  readonly strongIons?: Readonly<Record<string, number>>;
+  /** A weak acid–base system added per mole of titrant (weak titrants such as acetic acid or tris base). */
+  readonly system?: AcidBaseChemistry;
+  /** Moles of that system per mole of titrant (default 1). */
+  readonly systemPerMole?: number;
+}
+
+/** Sodium hydroxide: each mole adds one Na⁺ (its OH⁻ becomes water). */
+export const SODIUM_HYDROXIDE: Titrant = { name: 'NaOH', strongIons: { 'Na+': 1 } };
+/** Hydrochloric acid: each mole adds one Cl⁻ (its H⁺ joins the equilibrium). */
+export const HYDROCHLORIC_ACID: Titrant = { name: 'HCl', strongIons: { 'Cl-': 1 } };
+
+/** Lowest and highest target pH accepted. */
+export const MIN_TARGET_PH = 0;
+export const MAX_TARGET_PH = 14;
+/** Relative convergence of the ionic strength (as in the speciation solver). */
+const IONIC_STRENGTH_TOLERANCE = 1e-12;
+/** Ionic-strength iterations allowed for a titrant amount. */
+const MAX_ITERATIONS = 100;
+
+/** The titrant amount that brings a composition to a target pH. */
+export interface TitrantAmount {
+  /** Titrant in mol per litre of the final solution. */
+  readonly concentrationM: number;
+  /** Ionic strength of the titrated solution, mol/L. */
+  readonly ionicStrengthM: number;
+  /** Charge the titrant carries per mole at the target (sign says acid or base). */
+  readonly chargePerMole: number;
+  readonly iterations: number;
+}
+
+/** A titrant reduced to numbers at a temperature. */
+interface PreparedTitrant {
+  readonly strongCharge: number;
+  readonly strongHalfZ2: number;
+  readonly ka: Float64Array;
+  readonly zd: Float64Array;
+  readonly z0: number;
+  readonly perMole: number;
+}
+
+function prepareTitrant(titrant: Titrant, temperatureC: number): PreparedTitrant {
+  let strongCharge = 0;
+  let strongHalfZ2 = 0;
+  for (const [name, perMole] of Object.entries(titrant.strongIons ?? {})) {
+    const ion = findStrongIon('titrant.strongIons', name);
+    requireNumber(`titrant.strongIons.${name}`, perMole, 0, 10);
+    strongCharge += ion.charge * perMole;
+    strongHalfZ2 += 0.5 * ion.charge * ion.charge * perMole;
+  }
+  const sys = titrant.system;
+  if (!sys) return { strongCharge, strongHalfZ2, ka: new Float64Array(0), zd: new Float64Array(0), z0: 0, perMole: 0 };
+  validateChemistry('titrant.system', sys);
+  const perMole = titrant.systemPerMole === undefined ? 1 : requireNumber('titrant.systemPerMole', titrant.systemPerMole, 0, 10);
+  const ka = new Float64Array(sys.steps.length);
+  const zd = new Float64Array(sys.steps.length);
+  sys.steps.forEach((step, k) => {
+    ka[k] = Math.pow(10, -pKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, temperatureC));
+    zd[k] = 2 * (sys.chargeOfMostProtonated - k) - 1;
+  });
+  return { strongCharge, strongHalfZ2, ka, zd, z0: sys.chargeOfMostProtonated, perMole };
+}
+
+/**
+ * Charge balance of the composition alone at a fixed a_H and ionic strength
+ * (f₀, mol/L) and 2·I of its non-strong species. Mirrors the solver's evaluation.
+ */
+function chargeAt(p: PreparedComposition, aH: number, lnG: number): { f: number; i2: number } {
+  const g1 = Math.exp(lnG);
+  const hc = aH / g1;
+  const ohc = p.kw / (aH * g1);
+  let f = p.strongCharge + hc - ohc;
+  let i2 = hc + ohc;
+  for (let j = 0; j < p.totals.length; j++) {
+    const m = systemCharge(p.ka, p.zSquaredDiff, p.firstStep[j], p.stepCount[j], p.z0[j], aH, lnG);
+    f += p.totals[j] * m.q;
+    i2 += p.totals[j] * m.q2;
+  }
+  return { f, i2 };
+}
+
+/** Mean charge and mean squared charge per molecule of one system at a_H and ln γ₁ (summed species by species, as in the solver). */
+function systemCharge(ka: Float64Array, zd: Float64Array, first: number, steps: number, z: number, aH: number, lnG: number): { q: number; q2: number } {
+  let t = 1;
+  let sum = 1;
+  let q = z;
+  let q2 = z * z;
+  for (let k = 1; k <= steps; k++) {
+    const s = first + k - 1;
+    t *= (ka[s] * Math.exp(lnG * zd[s])) / aH;
+    sum += t;
+    q += (z - k) * t;
+    q2 += (z - k) * (z - k) * t;
+  }
+  return { q: q / sum, q2: q2 / sum };
+}
+
+/**
+ * Titrant needed to bring a composition to a target pH, in mol/L of final solution.
+ *
+ * @param composition - the solution before titrant (mol/L of the final volume)
+ * @param titrant - what one mole of titrant adds
+ * @param targetPh - pH to reach (0–14) at the composition's temperature
+ * @returns concentration of titrant in the final solution and the resulting ionic strength
+ * @throws ChemError infeasible-target when this titrant moves the pH the wrong way or
+ *   cannot reach the target; invalid-input for a bad composition, titrant or target
+ * @example titrantForPh(acetate 0.1 M, SODIUM_HYDROXIDE, 4.76).concentrationM // ≈ 0.05
+ */
+export function titrantForPh(composition: Composition, titrant: Titrant, targetPh: number): TitrantAmount {
+  requireNumber('targetPh', targetPh, MIN_TARGET_PH, MAX_TARGET_PH, `${MIN_TARGET_PH} to ${MAX_TARGET_PH}`);
+  const p = prepare(composition);
+  return titrantForPhPrepared(p, prepareTitrant(titrant, p.temperatureC), titrant.name, targetPh);
+}
+
+function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: string, targetPh: number): TitrantAmount {
+  const aH = Math.pow(10, -targetPh);
+  let ionicStrength = p.strongIonicStrength;
+  for (let it = 1; it <= MAX_ITERATIONS; it++) {
+    const lnG = -p.a * ionicStrengthFactor(p.model, ionicStrength) * Math.LN10;
+    const base = chargeAt(p, aH, lnG);
+    let q = t.strongCharge;
+    let i2t = 2 * t.strongHalfZ2;
+    if (t.perMole > 0) {
+      const m = systemCharge(t.ka, t.zd, 0, t.ka.length, t.z0, aH, lnG);
+      q += t.perMole * m.q;
+      i2t += t.perMole * m.q2;
+    }
+    const c = q === 0 ? Infinity : -base.f / q;
+    if (!Number.isFinite(c) || Math.abs(c) > MAX_CONCENTRATION_M) throw unreachable(p, name, targetPh, q, c);
+    // A negative amount mid-iteration may still turn positive as I settles; judge the sign at convergence.
+    const next = p.strongIonicStrength + 0.5 * (base.i2 + Math.abs(c) * i2t);
+    const converged = p.model === 'ideal' || Math.abs(next - ionicStrength) <= IONIC_STRENGTH_TOLERANCE * next + 1e-14 * (p.ionicStrengthScale + Math.abs(c));
+    ionicStrength = next;
+    if (converged) {
+      if (c < 0) throw unreachable(p, name, targetPh, q, c);
+      return { concentrationM: c, ionicStrengthM: ionicStrength, chargePerMole: q, iterations: it };
+    }
+  }
+  throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The titrant amount', MAX_ITERATIONS));
+}
+
+/**
+ * Signed strong-base equivalent that brings a prepared composition to a pH, mol/L:
+ * positive is strong base added as Na⁺, negative is strong acid added as Cl⁻. Both are
+ * monovalent, so the ionic strength sees |c|. Used for capacity, where the pH moves both ways.
+ */
+export function netStrongBaseForPh(p: PreparedComposition, pH: number): number {
+  const aH = Math.pow(10, -pH);
+  let ionicStrength = p.strongIonicStrength;
+  for (let it = 1; it <= MAX_ITERATIONS; it++) {
+    const base = chargeAt(p, aH, -p.a * ionicStrengthFactor(p.model, ionicStrength) * Math.LN10);
+    const c = -base.f;
+    const next = p.strongIonicStrength + 0.5 * (base.i2 + Math.abs(c));
+    const converged = p.model === 'ideal' || Math.abs(next - ionicStrength) <= IONIC_STRENGTH_TOLERANCE * next + 1e-14 * (p.ionicStrengthScale + Math.abs(c));
+    ionicStrength = next;
+    if (converged) return c;
+  }
+  throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The strong-base equivalent', MAX_ITERATIONS));
+}
+
+function unreachable(p: PreparedComposition, name: string, targetPh: number, q: number, c: number): ChemError {
+  let detail: string;
+  if (q === 0 || !Number.isFinite(c) || Math.abs(c) > MAX_CONCENTRATION_M) {
+    detail = `${name} carries too little charge at this pH to get there (it would take more than ${MAX_CONCENTRATION_M} M)`;
+  } else {
+    const startPh = solvePrepared(p).pH;
+    const direction = q > 0 ? 'raises' : 'lowers';
+    detail = `${name} ${direction} the pH, and without it the solution is already at pH ${startPh.toFixed(2)}`;
+  }
+  return new ChemError('infeasible-target', 'unreachablePh', MESSAGES.unreachablePh(targetPh, detail), 'targetPh', q > 0 ? 'a pH above the starting pH' : 'a pH below the starting pH');
+}
+
+/**
+ * The composition with a titrant added at a concentration (mol/L of final solution).
+ * A weak titrant's system is added as a system of its own.
+ */
+export function withTitrant(composition: Composition, titrant: Titrant, concentrationM: number): Composition {
+  const strongIons: Record<string, number> = { ...(composition.strongIons ?? {}) };
+  for (const [name, perMole] of Object.entries(titrant.strongIons ?? {})) {
+    const key = findStrongIon('titrant.strongIons', name).name;
+    const existing = Object.keys(strongIons).find((k) => findStrongIon('strongIons', k).name === key);
+    strongIons[existing ?? key] = (strongIons[existing ?? key] ?? 0) + perMole * concentrationM;
+  }
+  const systems = titrant.system
+    ? [...composition.systems, { ...titrant.system, totalM: (titrant.systemPerMole ?? 1) * concentrationM }]
+    : composition.systems;
+  return { ...composition, systems, strongIons };
+}
