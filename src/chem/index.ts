@@ -15,5 +15,6 @@ export { HYDROCHLORIC_ACID, SODIUM_HYDROXIDE, titrantForPh, withTitrant, netStro
 export type { Titrant, TitrantAmount } from './titration';
 export { afterDilution, afterLoad, atTemperature, capacity, idealCapacityAt, scaleComposition } from './capacity';
 export type { AcidBaseLoad, Capacity } from './capacity';
+export { idealOsmolarity } from './osmolarity';
 export { pKaAt } from './vantHoff';
 export { debyeHuckelA, pKw, waterDensity, waterPermittivity } from './water';

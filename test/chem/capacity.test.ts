@@ -1,4 +1,4 @@
-import { Composition, afterDilution, afterLoad, atTemperature, capacity, idealCapacityAt, solvePh } from '../../src/chem';
+import { Composition, afterDilution, afterLoad, atTemperature, capacity, idealCapacityAt, idealOsmolarity, solvePh } from '../../src/chem';
 import { ACETATE, CITRATE, PHOSPHATE, TRIS, expectClose } from './fixtures';
 
 describe('buffer capacity', () => {
@@ -54,5 +54,16 @@ describe('dilution and temperature', () => {
 
   it('refuses a dilution factor below 1', () => {
     expect(() => afterDilution({ systems: [{ ...TRIS, totalM: 0.05 }] }, 0.5)).toThrow(/factor is 0.5; allowed: 1 to/);
+  });
+});
+
+describe('ideal osmolarity', () => {
+  it('150 mM NaCl is 300 mOsm/L ideal (every particle counts once)', () => {
+    const r = afterLoad({ systems: [], strongIons: { 'Na+': 0.15, 'Cl-': 0.15 } }, {});
+    expectClose('NaCl osm', idealOsmolarity(r), 0.3, 1e-6);
+  });
+  it('counts neutral buffer species as well as ions', () => {
+    const r = afterLoad({ systems: [{ ...TRIS, totalM: 0.05 }], strongIons: { 'Cl-': 0.025 } }, {});
+    expectClose('tris osm', idealOsmolarity(r), 0.075, 1e-5);
   });
 });
