@@ -75,7 +75,12 @@ export interface SubstanceLibrary {
   compositionFromForms(items: readonly FormAmount[], options?: CompositionOptions): Composition;
 }
 
-/** The chemistry part of a substance record, as the solver wants it. */
+/**
+ * The chemistry part of a substance record, as the solver wants it (no sources or forms).
+ *
+ * @param record - a substance record
+ * @returns name, charge of the most protonated form, and steps (pKa, ΔH° kJ/mol, ΔCp° J K⁻¹ mol⁻¹)
+ */
 export function chemistryOf(record: SubstanceRecord): AcidBaseChemistry {
   return {
     name: record.name,
