@@ -42,6 +42,16 @@ export const MESSAGES = {
     `${field}: the form "${name}" would add a net charge of ${netCharge} per mole; protons lost and counter-ions must balance to 0.`,
   missingValue: (field: string, what: string) =>
     `${field} is missing; give ${what}.`,
+  formNotOfSystem: (field: string, form: string, system: string) =>
+    `${field}: "${form}" does not contain ${system}; choose a form of ${system}.`,
+  formsOfSystem: (field: string, system: string, forms: readonly string[]) =>
+    `${field}: name the forms of ${system} to weigh; its forms are ${forms.join(', ')}.`,
+  unreachableByMixing: (targetPh: number, lowPh: number, highPh: number) =>
+    `pH ${targetPh} cannot be reached by mixing these two forms: they span pH ${lowPh.toFixed(2)} to ${highPh.toFixed(2)} at this concentration and temperature.`,
+  notATitrant: (field: string, form: string) =>
+    `${field}: "${form}" cannot serve as a titrant (it adds more than one acid–base system).`,
+  saltTargetUnreachable: (what: string, target: number, reached: number) =>
+    `The ${what} target ${target} cannot be met: without any added salt the buffer already gives ${reached}.`,
 } as const;
 
 export type MessageCode = keyof typeof MESSAGES;

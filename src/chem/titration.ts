@@ -20,7 +20,7 @@ import { pKaAt } from './vantHoff';
 export interface Titrant {
   /** Name for messages, e.g. `NaOH`. */
   readonly name: string;
-  /** Strong ions added per mole of titrant, e.g. `{ 'Na+': 1 }` for NaOH, `{ 'Cl-': 1 }` for HCl. */
+  /** Strong ions added per mole of titrant, e.g. `{ "Na+": 1 }` for NaOH, `{ "Cl-": 1 }` for HCl; negative for ions a form swap takes away. */
   readonly strongIons?: Readonly<Record<string, number>>;
   /** A weak acid–base system added per mole of titrant (weak titrants such as acetic acid or tris base). */
   readonly system?: AcidBaseChemistry;
@@ -67,7 +67,7 @@ function prepareTitrant(titrant: Titrant, temperatureC: number): PreparedTitrant
   let strongHalfZ2 = 0;
   for (const [name, perMole] of Object.entries(titrant.strongIons ?? {})) {
     const ion = findStrongIon('titrant.strongIons', name);
-    requireNumber(`titrant.strongIons.${name}`, perMole, 0, 10);
+    requireNumber(`titrant.strongIons.${name}`, perMole, -10, 10);
     strongCharge += ion.charge * perMole;
     strongHalfZ2 += 0.5 * ion.charge * ion.charge * perMole;
   }

@@ -12,6 +12,8 @@ export const SOURCES = {
   bates1973: 'R. G. Bates, Determination of pH, 2nd ed., Wiley (1973)',
   crcDissociation:
     'CRC Handbook of Chemistry and Physics, "Dissociation constants of organic acids and bases" (edition not checked)',
+  crcSolubility:
+    'CRC Handbook of Chemistry and Physics, "Aqueous solubility of inorganic compounds at various temperatures" (edition not checked), converted to grams per litre of saturated solution',
   commonlyStated: 'Value commonly stated in textbooks (no primary source checked)',
   supplierLabel: 'Molar mass as printed on common suppliers\' labels and catalogues (written from memory; checked against the formula with CIAAW 2021 atomic weights)',
   userDefined: 'Defined by the user',

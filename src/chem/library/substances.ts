@@ -169,7 +169,9 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
 
   // ── Amines ──────────────────────────────────────────────────────────────────────────
   system('tris', ['tris(hydroxymethyl)aminomethane', 'trometamol', 'tromethamine', 'THAM', '2-amino-2-(hydroxymethyl)propane-1,3-diol', 'Trizma'], 1, [gv('tris', 8.072, 47.45, -59)], [
-    form('tris base', ['tris', 'tris free base', 'Trizma base', 'tromethamine base'], 'C4H11NO3', 121.14, [['tris', 1, 1]]),
+    form('tris base', ['tris', 'tris free base', 'Trizma base', 'tromethamine base'], 'C4H11NO3', 121.14, [['tris', 1, 1]], {}, {
+      solubility: { gramsPerLitre: 550, temperatureC: 25, source: 'supplierLabel', verified: false },
+    }),
     form('tris hydrochloride', ['tris HCl', 'tris-HCl', 'Trizma hydrochloride', 'tromethamine hydrochloride'], 'C4H11NO3·HCl', 157.6, [['tris', 1, 0]], { 'Cl-': 1 }),
   ], { cautionNote: 'Irritating to eyes as a powder. Its pH moves about −0.03 per °C: adjust at the working temperature.', cautions: ['irritant'] }),
   system('bis-tris propane', ['BTP', '1,3-bis[tris(hydroxymethyl)methylamino]propane', 'bis tris propane'], 2, [
@@ -250,7 +252,9 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form('sodium phosphate monobasic anhydrous', ['sodium dihydrogen phosphate', 'monosodium phosphate', 'NaH2PO4', 'NaH2PO4 anhydrous', 'sodium phosphate monobasic', 'sodium dihydrogen phosphate anhydrous'], 'NaH2PO4', 119.98, [['phosphate', 1, 1]], { 'Na+': 1 }),
     form('sodium phosphate monobasic monohydrate', ['NaH2PO4·H2O', 'sodium dihydrogen phosphate monohydrate', 'monosodium phosphate monohydrate'], 'NaH2PO4·H2O', 137.99, [['phosphate', 1, 1]], { 'Na+': 1 }),
     form('sodium phosphate monobasic dihydrate', ['NaH2PO4·2H2O', 'sodium dihydrogen phosphate dihydrate', 'monosodium phosphate dihydrate'], 'NaH2PO4·2H2O', 156.01, [['phosphate', 1, 1]], { 'Na+': 1 }),
-    form('sodium phosphate dibasic anhydrous', ['disodium hydrogen phosphate', 'disodium phosphate', 'Na2HPO4', 'Na2HPO4 anhydrous', 'sodium phosphate dibasic', 'disodium hydrogen phosphate anhydrous'], 'Na2HPO4', 141.96, [['phosphate', 1, 2]], { 'Na+': 2 }),
+    form('sodium phosphate dibasic anhydrous', ['disodium hydrogen phosphate', 'disodium phosphate', 'Na2HPO4', 'Na2HPO4 anhydrous', 'sodium phosphate dibasic', 'disodium hydrogen phosphate anhydrous'], 'Na2HPO4', 141.96, [['phosphate', 1, 2]], { 'Na+': 2 }, {
+      solubility: { gramsPerLitre: 77, temperatureC: 20, source: 'crcSolubility', verified: false },
+    }),
     form('sodium phosphate dibasic dihydrate', ['Na2HPO4·2H2O', 'disodium hydrogen phosphate dihydrate', 'disodium phosphate dihydrate'], 'Na2HPO4·2H2O', 177.99, [['phosphate', 1, 2]], { 'Na+': 2 }),
     form('sodium phosphate dibasic heptahydrate', ['Na2HPO4·7H2O', 'disodium hydrogen phosphate heptahydrate', 'disodium phosphate heptahydrate'], 'Na2HPO4·7H2O', 268.07, [['phosphate', 1, 2]], { 'Na+': 2 }),
     form('sodium phosphate dibasic dodecahydrate', ['Na2HPO4·12H2O', 'disodium hydrogen phosphate dodecahydrate', 'disodium phosphate dodecahydrate'], 'Na2HPO4·12H2O', 358.14, [['phosphate', 1, 2]], { 'Na+': 2 }),
@@ -390,7 +394,9 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
   }),
 
   // ── Strong electrolytes and titrants ────────────────────────────────────────────────
-  strong('sodium chloride', ['NaCl', 'salt'], [form('sodium chloride', ['NaCl', 'halite'], 'NaCl', 58.44, [], { 'Na+': 1, 'Cl-': 1 })]),
+  strong('sodium chloride', ['NaCl', 'salt'], [form('sodium chloride', ['NaCl', 'halite'], 'NaCl', 58.44, [], { 'Na+': 1, 'Cl-': 1 }, {
+      solubility: { gramsPerLitre: 317, temperatureC: 25, source: 'crcSolubility', verified: false },
+    })]),
   strong('potassium chloride', ['KCl'], [form('potassium chloride', ['KCl', 'sylvite'], 'KCl', 74.55, [], { 'K+': 1, 'Cl-': 1 })]),
   strong('magnesium chloride', ['MgCl2'], [
     form('magnesium chloride anhydrous', ['MgCl2', 'magnesium chloride'], 'MgCl2', 95.21, [], { 'Mg2+': 1, 'Cl-': 2 }, { note: 'Anhydrous MgCl2 takes up water from air and dissolves exothermically; the hexahydrate is the usual form.' }),

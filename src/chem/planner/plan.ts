@@ -1,0 +1,485 @@
+/**
+ * The recipe planner: from a target (buffer, concentration, pH at the temperature of use,
+ * volume, salt) to what to weigh, what to pour, what the meter must read at the bench
+ * temperature and part volume, and what to expect of the finished buffer.
+ *
+ * Method: the finished buffer is fixed by the target at the temperature of use; the
+ * titrant (or the split between two forms) follows directly from the charge balance at
+ * the target pH (titration.ts). The meter reading is the pH of the same solution at the
+ * bench temperature with every concentration raised by 1/(part-volume fraction), because
+ * at adjustment everything weighed and titrated sits in that smaller volume. A stock is
+ * the finished buffer times its fold, so its dilution lands on target by construction.
+ * A salt target is met by bisection on the salt concentration (ionic strength and ideal
+ * osmolarity rise with salt), re-solving the titrant at each step.
+ */
+import { ActivityModel, parseActivityModel } from '../activity';
+import { capacity, scaleComposition } from '../capacity';
+import { AcidBaseSystem, Composition } from '../composition';
+import { ChemError, MESSAGES, requireNumber } from '../errors';
+import { SOURCES } from '../library/sources';
+import { LibraryForm, SubstanceRecord } from '../library/types';
+import { SubstanceLibrary, chemistryOf, defaultLibrary } from '../library/lookup';
+import { nameKey } from '../library/names';
+import { idealOsmolarity } from '../osmolarity';
+import { speciate, solvePh } from '../speciation';
+import { findStrongIon } from '../strongIons';
+import { MAX_TARGET_PH, MIN_TARGET_PH, Titrant, titrantForPh, withTitrant } from '../titration';
+import { pKaAt } from '../vantHoff';
+import { RecipeComponent, RecipeInput, RecipePlan, RecipeRoute, TitrationPlan } from './types';
+import { cautionsFor, protocolSteps } from './protocol';
+
+/** pKa uncertainty used where the library gives none: published tables scatter by about ±0.01–0.02 (common practice, e.g. tris 8.06–8.08). */
+export const DEFAULT_PKA_UNCERTAINTY = 0.02;
+/** Stock tolerance used where the user gives none, %: common practice for a volumetric standard solution. */
+export const DEFAULT_STOCK_TOLERANCE_PERCENT = 1;
+/** Part of the final volume in which the pH is adjusted, by default (common practice: 70–90 %). */
+export const DEFAULT_PART_VOLUME_FRACTION = 0.8;
+/** The first titrant portion is this share of the low end of the band, so it cannot overshoot. */
+export const FIRST_PORTION_SHARE = 0.9;
+/** Warn when the target is further than this from every pKa: a step buffers usefully within pKa ± 1 (common practice). */
+export const BUFFERING_HALF_WIDTH = 1;
+/** Largest dilution fold for a stock. */
+export const MAX_STOCK_FOLD = 100;
+/** Largest salt concentration the salt-target search tries, mol/L (beyond any buffer recipe). */
+const MAX_SALT_TARGET_M = 5;
+/** Bisection steps for a salt target: 60 halvings of 5 M reach 4e-18 M. */
+const SALT_TARGET_STEPS = 60;
+/** Step for dpH/dT by central difference, °C. */
+const DPH_DT_STEP_C = 0.5;
+
+const ROUTES: readonly RecipeRoute[] = ['titrate', 'two-forms', 'stock'];
+
+/** The numbers a route fixes: the finished buffer and how it was put together. */
+interface RouteResult {
+  readonly composition: Composition;
+  /** Forms weighed with their concentrations in the solution made, mol/L. */
+  readonly weighed: readonly { readonly role: RecipeComponent['role']; readonly form: LibraryForm; readonly concentrationM: number }[];
+  readonly titrant?: {
+    readonly form: LibraryForm;
+    readonly titrant: Titrant;
+    readonly concentrationM: number;
+    readonly stock: { concentrationM: number; tolerancePercent: number };
+    /** The solution before any titrant. */
+    readonly before: Composition;
+  };
+}
+
+/** Validated, defaulted input. */
+interface Settled {
+  readonly input: RecipeInput;
+  readonly library: SubstanceLibrary;
+  readonly system: SubstanceRecord;
+  readonly route: RecipeRoute;
+  readonly targetPh: number;
+  readonly useT: number;
+  readonly benchT: number;
+  readonly concentrationM: number;
+  readonly volumeL: number;
+  readonly partFraction: number;
+  readonly model: ActivityModel;
+  readonly salts: readonly { form: LibraryForm; concentrationM: number }[];
+}
+
+/**
+ * Plans a buffer recipe.
+ *
+ * @param input - the target and what is on the shelf (units in the field names)
+ * @param library - substance library (default: the built-in one; pass createLibrary(user) for user substances)
+ * @returns amounts, the bench protocol, the meter reading, predictions, warnings and cautions
+ * @throws ChemError invalid-input (naming the field) or infeasible-target
+ * @example planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } }).titration?.volumeMl
+ */
+export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defaultLibrary()): RecipePlan {
+  const s = settle(input, library);
+  const base = solveWithSaltTarget(s);
+  const fold = s.route === 'stock' ? requireNumber('stock.fold', input.stock?.fold, 1, MAX_STOCK_FOLD, `1 to ${MAX_STOCK_FOLD}`) : 1;
+  const stockVolumeL = s.route === 'stock' ? requireNumber('stock.volumeMl', input.stock?.volumeMl ?? input.volumeMl, 0.001, 1e6, '0.001 to 1,000,000 mL') / 1000 : s.volumeL;
+
+  // What is physically made on the bench: the finished buffer, or the stock (fold × it).
+  const made = fold === 1 ? base : scaleRoute(base, fold);
+  const madeVolumeL = stockVolumeL;
+  const finished = base.composition;
+
+  const meterPh = solvePh({ ...scaleComposition(made.composition, 1 / s.partFraction), temperatureC: s.benchT });
+  const titration = made.titrant ? titrationPlan(s, made, madeVolumeL) : undefined;
+
+  const result = speciate(finished);
+  const cap = capacity(finished);
+  const warnings = [...result.warnings];
+  const predictions = {
+    useTemperatureC: s.useT,
+    pHAtUse: result.pH,
+    pHAtBench: solvePh({ ...finished, temperatureC: s.benchT }),
+    ionicStrengthM: result.ionicStrengthM,
+    idealOsmolarityMosm: idealOsmolarity(result) * 1000,
+    baseMmPerTenthPh: cap.baseMmPerTenthPh,
+    acidMmPerTenthPh: cap.acidMmPerTenthPh,
+    betaMPerPh: cap.betaMPerPh,
+    pHPerDegreeC: dpHdT(finished, s.useT),
+    pHAfterTenfoldDilution: solvePh(scaleComposition(finished, 0.1)),
+  };
+
+  const components = componentsOf(s, made, madeVolumeL, titration);
+  const stock =
+    s.route === 'stock'
+      ? {
+          fold,
+          stockVolumeMl: madeVolumeL * 1000,
+          stockPhAtUse: solvePh(made.composition),
+          stockPerBatchMl: (s.volumeL * 1000) / fold,
+          waterPerBatchMl: s.volumeL * 1000 * (1 - 1 / fold),
+        }
+      : undefined;
+
+  warnings.push(...planWarnings(s, made, madeVolumeL, titration));
+  const constants = s.system.steps.map((step) => ({
+    pKa25: step.pKa,
+    pKaAtUse: pKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, s.useT),
+    source: `${SOURCES[step.source]}${step.entry ? `, entry ${step.entry}` : ''}${step.verified ? '' : ' (written from memory, not yet checked against the source)'}`,
+  }));
+  const meter = { pH: meterPh, benchTemperatureC: s.benchT, partVolumeMl: madeVolumeL * 1000 * s.partFraction, partVolumeFraction: s.partFraction };
+  const plan: RecipePlan = {
+    route: s.route,
+    buffer: s.system.name,
+    targetPh: s.targetPh,
+    concentrationMm: s.concentrationM * 1000,
+    volumeMl: s.volumeL * 1000,
+    activityModel: s.model,
+    components,
+    ...(titration ? { titration } : {}),
+    meter,
+    ...(stock ? { stock } : {}),
+    predictions,
+    steps: [],
+    warnings: dedupe(warnings),
+    cautions: cautionsFor(made.weighed.map((w) => w.form).concat(made.titrant ? [made.titrant.form] : [])),
+    constants,
+    composition: finished,
+  };
+  return { ...plan, steps: protocolSteps(plan) };
+}
+
+function dedupe(xs: readonly string[]): string[] {
+  return [...new Set(xs)];
+}
+
+/** Validates the input and fills defaults. */
+function settle(input: RecipeInput, library: SubstanceLibrary): Settled {
+  if (input === null || typeof input !== 'object') {
+    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('recipe', 'a recipe input object'), 'recipe', 'an object');
+  }
+  const strong = library.records().find((r) => r.kind === 'strong' && [r.name, ...r.aliases].some((n) => nameKey(n) === nameKey(String(input.buffer))));
+  if (strong) {
+    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('buffer', input.buffer, 'an acid–base buffer system (this is a strong electrolyte: add it as a salt)'), 'buffer', 'an acid–base buffer system');
+  }
+  const system = library.findSystem(input.buffer);
+  if (system.kind !== 'acid-base') {
+    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('buffer', input.buffer, 'an acid–base buffer system'), 'buffer', 'an acid–base buffer system');
+  }
+  const route = input.route ?? 'titrate';
+  if (!ROUTES.includes(route)) {
+    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('route', route, ROUTES.join(', ')), 'route', ROUTES.join(', '));
+  }
+  const useT = requireNumber('useTemperatureC', input.useTemperatureC ?? 25, 0, 100, '0 to 100 °C');
+  const salts = (input.salts ?? []).map((salt, i) => ({
+    form: library.findForm(salt?.form),
+    concentrationM: requireNumber(`salts[${i}].concentrationMm`, salt?.concentrationMm, 0, 5000, '0 to 5000 mM') / 1000,
+  }));
+  return {
+    input,
+    library,
+    system,
+    route,
+    targetPh: requireNumber('targetPh', input.targetPh, MIN_TARGET_PH, MAX_TARGET_PH, `${MIN_TARGET_PH} to ${MAX_TARGET_PH}`),
+    useT,
+    benchT: requireNumber('benchTemperatureC', input.benchTemperatureC ?? useT, 0, 100, '0 to 100 °C'),
+    concentrationM: requireNumber('concentrationMm', input.concentrationMm, 0.001, 5000, '0.001 to 5000 mM') / 1000,
+    volumeL: requireNumber('volumeMl', input.volumeMl, 0.001, 1e6, '0.001 to 1,000,000 mL') / 1000,
+    partFraction: requireNumber('partVolumeFraction', input.partVolumeFraction ?? DEFAULT_PART_VOLUME_FRACTION, 0.1, 1, '0.1 to 1'),
+    model: parseActivityModel('activityModel', input.activityModel),
+    salts,
+  };
+}
+
+/** Moles of the buffer system one mole of a form adds (0 if none). */
+function systemMolesIn(form: LibraryForm, system: SubstanceRecord): number {
+  const key = nameKey(system.name);
+  return form.adds.filter((a) => nameKey(a.system) === key).reduce((sum, a) => sum + a.moles, 0);
+}
+
+function requireFormOf(field: string, name: string | undefined, s: Settled): LibraryForm {
+  if (name === undefined || name === '') {
+    throw new ChemError('invalid-input', 'formsOfSystem', MESSAGES.formsOfSystem(field, s.system.name, s.system.forms.map((f) => f.name)), field, s.system.forms.map((f) => f.name).join(', '));
+  }
+  const form = s.library.findForm(name);
+  if (systemMolesIn(form, s.system) === 0) {
+    throw new ChemError('invalid-input', 'formNotOfSystem', MESSAGES.formNotOfSystem(field, form.name, s.system.name), field, s.system.forms.map((f) => f.name).join(', '));
+  }
+  return form;
+}
+
+/** The form weighed on the titrate and stock routes: the one named, or the system's first form without counter-ions. */
+function weighedForm(s: Settled): LibraryForm {
+  if (s.input.form !== undefined) return requireFormOf('form', s.input.form, s);
+  const plain = s.system.forms.find((f) => Object.keys(f.counterIons).length === 0 && f.adds.length === 1);
+  return requireFormOf('form', plain?.name, s);
+}
+
+/** A titrant from a form: its counter-ions, and its acid–base system if it has one. */
+function titrantOf(form: LibraryForm, library: SubstanceLibrary): Titrant {
+  if (form.adds.length > 1) {
+    throw new ChemError('invalid-input', 'notATitrant', MESSAGES.notATitrant('titrant.form', form.name), 'titrant.form', 'a strong acid or base, or a form of one weak acid or base');
+  }
+  const portion = form.adds[0];
+  return {
+    name: form.name,
+    strongIons: form.counterIons,
+    ...(portion ? { system: chemistryOf(library.findSystem(portion.system)), systemPerMole: portion.moles } : {}),
+  };
+}
+
+/** The starting composition: the weighed forms and salts at the temperature of use. */
+function baseComposition(s: Settled, items: readonly { form: LibraryForm; concentrationM: number }[], saltTargetM: number): Composition {
+  const all = [...items, ...s.salts];
+  if (saltTargetM > 0 && s.input.saltTarget) all.push({ form: s.library.findForm(s.input.saltTarget.form), concentrationM: saltTargetM });
+  return s.library.compositionFromForms(
+    all.map((i) => ({ form: i.form, concentrationM: i.concentrationM })),
+    { temperatureC: s.useT, activityModel: s.model },
+  );
+}
+
+function saltComponents(s: Settled, saltTargetM: number): RouteResult['weighed'] {
+  const salts: { role: RecipeComponent['role']; form: LibraryForm; concentrationM: number }[] = s.salts.map((x) => ({ role: 'salt', ...x }));
+  if (saltTargetM > 0 && s.input.saltTarget) salts.push({ role: 'salt', form: s.library.findForm(s.input.saltTarget.form), concentrationM: saltTargetM });
+  return salts;
+}
+
+/** Route 1 (and the stock route's finished buffer): one form plus titrant. */
+function titrateRoute(s: Settled, saltTargetM: number): RouteResult {
+  const form = weighedForm(s);
+  const formM = s.concentrationM / systemMolesIn(form, s.system);
+  const start = baseComposition(s, [{ form, concentrationM: formM }], saltTargetM);
+  const chosen = chooseTitrant(s, start);
+  const composition = withTitrant(start, chosen.titrant, chosen.concentrationM);
+  return {
+    composition,
+    weighed: [{ role: 'buffer', form, concentrationM: formM }, ...saltComponents(s, saltTargetM)],
+    titrant: { ...chosen, before: start },
+  };
+}
+
+/** The titrant named, or 1 M NaOH / 1 M HCl, whichever reaches the target. */
+function chooseTitrant(s: Settled, start: Composition): Omit<NonNullable<RouteResult['titrant']>, 'before'> {
+  const given = s.input.titrant;
+  const candidates = given ? [given] : [{ form: 'sodium hydroxide', concentrationM: 1 }, { form: 'hydrochloric acid', concentrationM: 1 }];
+  let firstError: unknown;
+  for (const stock of candidates) {
+    const form = s.library.findForm(stock.form);
+    const concentrationM = requireNumber('titrant.concentrationM', stock.concentrationM, 1e-6, 30, '0.000001 to 30 mol/L');
+    const tolerancePercent = requireNumber('titrant.tolerancePercent', stock.tolerancePercent ?? DEFAULT_STOCK_TOLERANCE_PERCENT, 0, 50, '0 to 50 %');
+    const titrant = titrantOf(form, s.library);
+    try {
+      const amount = titrantForPh(start, titrant, s.targetPh);
+      return { form, titrant, concentrationM: amount.concentrationM, stock: { concentrationM, tolerancePercent } };
+    } catch (e) {
+      firstError ??= e;
+    }
+  }
+  throw firstError;
+}
+
+/** Route 2: two forms of the same system in the proportion that gives the target. */
+function twoFormsRoute(s: Settled, saltTargetM: number): RouteResult {
+  const acid = requireFormOf('acidForm', s.input.acidForm, s);
+  const base = requireFormOf('baseForm', s.input.baseForm, s);
+  const mA = systemMolesIn(acid, s.system);
+  const mB = systemMolesIn(base, s.system);
+  // Start from all-acid-form; swapping one mole of base form in for mB/mA moles of acid
+  // form changes only the counter-ions, so the split follows from the charge balance at
+  // the target exactly as a titrant amount does.
+  const allAcid = baseComposition(s, [{ form: acid, concentrationM: s.concentrationM / mA }], saltTargetM);
+  const swap: Record<string, number> = {};
+  for (const [ion, n] of Object.entries(base.counterIons)) swap[ion] = (swap[ion] ?? 0) + n;
+  for (const [ion, n] of Object.entries(acid.counterIons)) swap[ion] = (swap[ion] ?? 0) - (n * mB) / mA;
+  const maxBaseM = s.concentrationM / mB;
+  let baseM: number;
+  try {
+    baseM = titrantForPh(allAcid, { name: base.name, strongIons: swap }, s.targetPh).concentrationM;
+  } catch (e) {
+    if (!(e instanceof ChemError) || e.kind !== 'infeasible-target') throw e;
+    baseM = Infinity;
+  }
+  if (!(baseM <= maxBaseM * (1 + 1e-12))) {
+    const allBase = baseComposition(s, [{ form: base, concentrationM: maxBaseM }], saltTargetM);
+    const [lo, hi] = [solvePh(allAcid), solvePh(allBase)].sort((a, b) => a - b);
+    throw new ChemError('infeasible-target', 'unreachableByMixing', MESSAGES.unreachableByMixing(s.targetPh, lo, hi), 'targetPh', `pH ${lo.toFixed(2)} to ${hi.toFixed(2)}`);
+  }
+  baseM = Math.min(baseM, maxBaseM);
+  const acidM = Math.max(0, (s.concentrationM - baseM * mB) / mA);
+  const weighed = [
+    { role: 'acid form' as const, form: acid, concentrationM: acidM },
+    { role: 'base form' as const, form: base, concentrationM: baseM },
+  ];
+  return {
+    composition: baseComposition(s, weighed, saltTargetM),
+    weighed: [...weighed, ...saltComponents(s, saltTargetM)],
+  };
+}
+
+function routeResult(s: Settled, saltTargetM: number): RouteResult {
+  return s.route === 'two-forms' ? twoFormsRoute(s, saltTargetM) : titrateRoute(s, saltTargetM);
+}
+
+/** Solves the route, adding the salt-target salt by bisection when one is asked for. */
+function solveWithSaltTarget(s: Settled): RouteResult {
+  const target = s.input.saltTarget;
+  if (!target) return routeResult(s, 0);
+  s.library.findForm(target.form);
+  const byIonicStrength = target.ionicStrengthM !== undefined;
+  if (byIonicStrength === (target.idealOsmolarityMosm !== undefined)) {
+    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('saltTarget', 'either ionicStrengthM or idealOsmolarityMosm'), 'saltTarget', 'ionicStrengthM or idealOsmolarityMosm');
+  }
+  const goal = byIonicStrength
+    ? requireNumber('saltTarget.ionicStrengthM', target.ionicStrengthM, 0, 5, '0 to 5 mol/L')
+    : requireNumber('saltTarget.idealOsmolarityMosm', target.idealOsmolarityMosm, 0, 10000, '0 to 10,000 mOsm/L') / 1000;
+  const measure = (r: RouteResult) => {
+    const sp = speciate(r.composition);
+    return byIonicStrength ? sp.ionicStrengthM : idealOsmolarity(sp);
+  };
+  const none = routeResult(s, 0);
+  const reached = measure(none);
+  if (reached > goal) {
+    const what = byIonicStrength ? 'ionic strength (mol/L)' : 'ideal osmolarity (mOsm/L)';
+    const shown = byIonicStrength ? Number(reached.toPrecision(4)) : Number((reached * 1000).toPrecision(4));
+    throw new ChemError('infeasible-target', 'saltTargetUnreachable', MESSAGES.saltTargetUnreachable(what, byIonicStrength ? goal : goal * 1000, shown), 'saltTarget', `a target above ${shown}`);
+  }
+  let lo = 0;
+  let hi = MAX_SALT_TARGET_M;
+  for (let i = 0; i < SALT_TARGET_STEPS && hi - lo > 1e-12 * hi; i++) {
+    const mid = 0.5 * (lo + hi);
+    if (measure(routeResult(s, mid)) < goal) lo = mid;
+    else hi = mid;
+  }
+  return routeResult(s, 0.5 * (lo + hi));
+}
+
+/** A route's result with every concentration multiplied by a fold (the stock). */
+function scaleRoute(r: RouteResult, fold: number): RouteResult {
+  return {
+    composition: scaleComposition(r.composition, fold),
+    weighed: r.weighed.map((w) => ({ ...w, concentrationM: w.concentrationM * fold })),
+    ...(r.titrant ? { titrant: { ...r.titrant, concentrationM: r.titrant.concentrationM * fold, before: scaleComposition(r.titrant.before, fold) } } : {}),
+  };
+}
+
+/** The titrant volume and its band from the pKa uncertainty and the stock tolerance. */
+function titrationPlan(s: Settled, made: RouteResult, volumeL: number): TitrationPlan {
+  const t = made.titrant!;
+  const volumeMl = ((t.concentrationM * volumeL) / t.stock.concentrationM) * 1000;
+  const u = Math.max(...s.system.steps.map((step) => step.pKaUncertainty ?? DEFAULT_PKA_UNCERTAINTY));
+  // The amount needed with every pKa of the buffer moved by ±u.
+  const before = t.before;
+  const amounts = [-u, u].map((shift) => {
+    const shifted = shiftSystem(before, s.system.name, shift);
+    try {
+      return titrantForPh(shifted, t.titrant, solvePh(made.composition)).concentrationM;
+    } catch {
+      return 0;
+    }
+  });
+  const tol = t.stock.tolerancePercent / 100;
+  const toMl = (c: number, stockM: number) => ((c * volumeL) / stockM) * 1000;
+  const lowMl = Math.min(volumeMl, toMl(Math.min(...amounts), t.stock.concentrationM * (1 + tol)));
+  const highMl = Math.max(volumeMl, toMl(Math.max(...amounts), t.stock.concentrationM * (1 - tol)));
+  return {
+    titrant: t.form.name,
+    stockM: t.stock.concentrationM,
+    direction: t.titrant.system ? (solvePh(made.composition) > solvePh(before) ? 'raises' : 'lowers') : chargeOf(t.titrant) > 0 ? 'raises' : 'lowers',
+    volumeMl,
+    lowMl,
+    highMl,
+    firstPortionMl: FIRST_PORTION_SHARE * lowMl,
+    pKaUncertainty: u,
+    tolerancePercent: t.stock.tolerancePercent,
+  };
+}
+
+/** Net charge a strong titrant adds per mole (positive: a base). */
+function chargeOf(t: Titrant): number {
+  let q = 0;
+  for (const [ion, n] of Object.entries(t.strongIons ?? {})) q += findStrongIon('titrant', ion).charge * n;
+  return q;
+}
+
+/** The composition with every pKa of one system moved by `shift`. */
+function shiftSystem(c: Composition, name: string, shift: number): Composition {
+  return {
+    ...c,
+    systems: c.systems.map((sys): AcidBaseSystem => (sys.name === name ? { ...sys, steps: sys.steps.map((st) => ({ ...st, pKa: st.pKa + shift })) } : sys)),
+  };
+}
+
+/** dpH/dT of a composition at a temperature, by central difference (one-sided at 0 and 100 °C). */
+function dpHdT(c: Composition, t: number): number {
+  const lo = Math.max(0, t - DPH_DT_STEP_C);
+  const hi = Math.min(100, t + DPH_DT_STEP_C);
+  return (solvePh({ ...c, temperatureC: hi }) - solvePh({ ...c, temperatureC: lo })) / (hi - lo);
+}
+
+function purityOf(s: Settled, form: LibraryForm): number {
+  const table = s.input.purityPercent ?? {};
+  for (const [name, value] of Object.entries(table)) {
+    if (nameKey(name) === nameKey(form.name) || form.aliases.some((a) => nameKey(a) === nameKey(name))) {
+      return requireNumber(`purityPercent.${name}`, value, 1, 100, '1 to 100 %');
+    }
+  }
+  return 100;
+}
+
+function componentsOf(s: Settled, made: RouteResult, volumeL: number, titration: TitrationPlan | undefined): RecipeComponent[] {
+  const out: RecipeComponent[] = made.weighed.map((w) => {
+    const purity = purityOf(s, w.form);
+    return {
+      role: w.role,
+      name: w.form.name,
+      formula: w.form.formula,
+      molarMass: w.form.molarMass,
+      concentrationMm: w.concentrationM * 1000,
+      grams: (w.concentrationM * volumeL * w.form.molarMass) / (purity / 100),
+      purityPercent: purity,
+    };
+  });
+  if (titration && made.titrant) {
+    out.push({ role: 'titrant', name: `${titration.stockM} M ${made.titrant.form.name}`, formula: made.titrant.form.formula, concentrationMm: made.titrant.concentrationM * 1000, millilitres: titration.volumeMl });
+  }
+  // Solids take up volume too, so water is given as "to volume", never as a subtraction.
+  out.push({ role: 'water', name: 'water, to final volume', millilitres: volumeL * 1000 });
+  return out;
+}
+
+function planWarnings(s: Settled, made: RouteResult, volumeL: number, titration: TitrationPlan | undefined): string[] {
+  const w: string[] = [];
+  const near = s.system.steps.some((st) => Math.abs(pKaAt(st.pKa, st.deltaHkJ ?? 0, st.deltaCpJ ?? 0, s.useT) - s.targetPh) <= BUFFERING_HALF_WIDTH);
+  if (!near) {
+    const pkas = s.system.steps.map((st) => pKaAt(st.pKa, st.deltaHkJ ?? 0, st.deltaCpJ ?? 0, s.useT).toFixed(2)).join(', ');
+    w.push(`pH ${s.targetPh} is more than ${BUFFERING_HALF_WIDTH} unit from every pKa of ${s.system.name} at ${s.useT} °C (${pkas}): it will buffer weakly there.`);
+  }
+  if (titration) {
+    const totalMl = volumeL * 1000;
+    if (titration.volumeMl > 0.5 * totalMl) {
+      w.push(`The titrant (${titration.volumeMl.toFixed(1)} mL) is more than half the final volume (${totalMl.toFixed(0)} mL): use a more concentrated stock.`);
+    }
+    if (titration.highMl > totalMl * s.partFraction) {
+      w.push(`The titrant may not fit: up to ${titration.highMl.toFixed(1)} mL is expected, more than the ${(totalMl * s.partFraction).toFixed(0)} mL part volume; use a more concentrated stock.`);
+    }
+  }
+  for (const item of made.weighed) {
+    const sol = item.form.solubility;
+    if (!sol) continue;
+    const gPerL = (item.concentrationM * item.form.molarMass) / s.partFraction;
+    if (gPerL > sol.gramsPerLitre) {
+      w.push(`${item.form.name} at ${gPerL.toFixed(0)} g/L in the part volume is above its solubility (about ${sol.gramsPerLitre} g/L at ${sol.temperatureC} °C).`);
+    }
+  }
+  return w;
+}

@@ -1,0 +1,137 @@
+/**
+ * The bench protocol and the cautions of a recipe, in plain words, and a printable text
+ * of the whole plan. Numbers are rounded here, for reading; the plan keeps full precision.
+ */
+import type { LibraryForm } from '../library/types';
+import type { RecipeComponent, RecipePlan } from './types';
+
+/** Said with every recipe: a planning aid, not a licence. */
+export const GENERAL_CAUTION =
+  'Planning aid only: verify the final pH with a calibrated meter at the temperature of use, and follow your safety data sheets, local rules and licensed practice.';
+
+/** Plain caution lines for each hazard flag. */
+const FLAG_WORDS: Readonly<Record<string, string>> = {
+  corrosive: 'corrosive: wear eye protection and gloves; add it slowly, with stirring',
+  toxic: 'toxic: handle with gloves, avoid dust, dispose of as your lab requires',
+  arsenic: 'contains arsenic: toxic, collect waste separately',
+  controlled: 'controlled substance: check your local rules before use',
+  irritant: 'irritant: avoid contact with skin and eyes',
+  oxidiser: 'oxidiser: keep away from organic material',
+};
+
+/**
+ * Caution lines for the forms a recipe uses, most serious first, then the general caution.
+ *
+ * @param forms - every form weighed or poured
+ * @returns one line per hazardous form, then GENERAL_CAUTION
+ */
+export function cautionsFor(forms: readonly LibraryForm[]): string[] {
+  const lines: string[] = [];
+  const seen = new Set<string>();
+  for (const form of forms) {
+    if (seen.has(form.name) || form.allCautions.length === 0) continue;
+    seen.add(form.name);
+    const words = form.allCautions.map((f) => FLAG_WORDS[f] ?? f).join('; ');
+    lines.push(`${form.name}: ${words}.${form.cautionText ? ` ${form.cautionText}` : ''}`);
+  }
+  lines.push(GENERAL_CAUTION);
+  return lines;
+}
+
+/** Rounds for reading: 4 significant figures for masses, mL to 0.1 (0.01 below 10 mL). */
+export function formatGrams(g: number): string {
+  if (g >= 100) return g.toFixed(1);
+  if (g >= 10) return g.toFixed(2);
+  if (g >= 1) return g.toFixed(3);
+  return g.toPrecision(3);
+}
+
+export function formatMl(ml: number): string {
+  if (ml >= 100) return ml.toFixed(0);
+  if (ml >= 10) return ml.toFixed(1);
+  return ml.toFixed(2);
+}
+
+/** pH to two decimals: what a bench meter shows. */
+export function formatPh(pH: number): string {
+  return pH.toFixed(2);
+}
+
+function weighLine(c: RecipeComponent): string {
+  const purity = c.purityPercent !== undefined && c.purityPercent < 100 ? `, ${c.purityPercent} % pure` : '';
+  return `${formatGrams(c.grams!)} g of ${c.name} (${c.formula}, ${c.molarMass!.toFixed(2)} g/mol${purity})`;
+}
+
+/**
+ * The bench steps of a plan, in order.
+ *
+ * @param plan - a plan (its steps field is ignored)
+ * @returns numbered-in-order plain sentences
+ */
+export function protocolSteps(plan: RecipePlan): string[] {
+  const weighed = plan.components.filter((c) => c.grams !== undefined);
+  const t = plan.titration;
+  const m = plan.meter;
+  const finalMl = plan.stock ? plan.stock.stockVolumeMl : plan.volumeMl;
+  const steps: string[] = [];
+  steps.push(`Weigh ${weighed.map(weighLine).join('; and ')}.`);
+  const dissolveMl = Math.max(0, m.partVolumeMl - (t?.volumeMl ?? 0));
+  steps.push(`Dissolve in about ${formatMl(dissolveMl)} mL of water, leaving room for the pH adjustment in about ${formatMl(m.partVolumeMl)} mL (${Math.round(m.partVolumeFraction * 100)} % of the ${formatMl(finalMl)} mL).`);
+  steps.push(`Bring the solution to ${m.benchTemperatureC} °C and calibrate the pH meter at that temperature.`);
+  if (t) {
+    steps.push(
+      `Add about ${formatMl(t.firstPortionMl)} mL of ${t.stockM} M ${t.titrant} (a safe first portion; expect ${formatMl(t.lowMl)}–${formatMl(t.highMl)} mL in all, about ${formatMl(t.volumeMl)} mL), mix, then add more in small portions until the meter reads ${formatPh(m.pH)} at ${m.benchTemperatureC} °C.`,
+    );
+  } else {
+    steps.push(`Mix until dissolved; the meter should read ${formatPh(m.pH)} at ${m.benchTemperatureC} °C. If it is off by more than 0.05, adjust with small portions of the acid or base form, or of dilute strong acid or base.`);
+  }
+  steps.push(`Transfer to a ${formatMl(finalMl)} mL volumetric flask or graduated vessel, rinse in, and bring to ${formatMl(finalMl)} mL with water at ${m.benchTemperatureC} °C.`);
+  if (plan.stock) {
+    steps.push(`Mix well. The stock reads about pH ${formatPh(plan.stock.stockPhAtUse)} at ${plan.predictions.useTemperatureC} °C; that is expected, not an error.`);
+    steps.push(`For ${formatMl(plan.volumeMl)} mL of working buffer, mix ${formatMl(plan.stock.stockPerBatchMl)} mL of stock with ${formatMl(plan.stock.waterPerBatchMl)} mL of water.`);
+  } else {
+    steps.push('Mix well.');
+  }
+  steps.push(`Check: at ${plan.predictions.useTemperatureC} °C the buffer should read pH ${formatPh(plan.predictions.pHAtUse)}; verify with a calibrated meter at that temperature.`);
+  return steps;
+}
+
+/**
+ * The whole plan as printable text: components, steps, predictions, warnings, cautions.
+ *
+ * @param plan - a plan from planRecipe
+ * @returns text for a terminal or a printed sheet
+ */
+export function formatRecipe(plan: RecipePlan): string {
+  const p = plan.predictions;
+  const lines: string[] = [];
+  lines.push(`${plan.buffer} buffer, ${plan.concentrationMm} mM, pH ${plan.targetPh} at ${p.useTemperatureC} °C, ${formatMl(plan.volumeMl)} mL (${plan.route})`);
+  if (plan.stock) lines.push(`Made as ${formatMl(plan.stock.stockVolumeMl)} mL of ${plan.stock.fold}× stock (${(plan.concentrationMm * plan.stock.fold).toPrecision(4)} mM), diluted for use`);
+  lines.push('');
+  lines.push('Amounts');
+  for (const c of plan.components) {
+    const amount = c.grams !== undefined ? `${formatGrams(c.grams)} g` : `${c.role === 'water' ? 'to ' : ''}${formatMl(c.millilitres ?? 0)} mL`;
+    lines.push(`  ${c.role.padEnd(9)} ${amount.padStart(10)}  ${c.name}${c.concentrationMm !== undefined ? ` (${c.concentrationMm.toPrecision(4)} mM)` : ''}`);
+  }
+  lines.push('');
+  lines.push('Steps');
+  plan.steps.forEach((s, i) => lines.push(`  ${i + 1}. ${s}`));
+  lines.push('');
+  lines.push('Predicted');
+  lines.push(`  meter while adjusting   pH ${formatPh(plan.meter.pH)} at ${plan.meter.benchTemperatureC} °C in ${formatMl(plan.meter.partVolumeMl)} mL`);
+  lines.push(`  pH at use               ${formatPh(p.pHAtUse)} at ${p.useTemperatureC} °C; ${formatPh(p.pHAtBench)} at ${plan.meter.benchTemperatureC} °C`);
+  lines.push(`  ionic strength          ${(p.ionicStrengthM * 1000).toFixed(1)} mM`);
+  lines.push(`  ideal osmolarity        ${p.idealOsmolarityMosm.toFixed(0)} mOsm/L`);
+  lines.push(`  capacity                ${p.baseMmPerTenthPh.toFixed(2)} mM base or ${p.acidMmPerTenthPh.toFixed(2)} mM acid per 0.1 pH`);
+  lines.push(`  temperature             ${p.pHPerDegreeC.toFixed(4)} pH per °C`);
+  lines.push(`  tenfold dilution        pH ${formatPh(p.pHAfterTenfoldDilution)}`);
+  if (plan.warnings.length) {
+    lines.push('');
+    lines.push('Warnings');
+    for (const w of plan.warnings) lines.push(`  ! ${w}`);
+  }
+  lines.push('');
+  lines.push('Cautions');
+  for (const c of plan.cautions) lines.push(`  - ${c}`);
+  return lines.join('\n');
+}
