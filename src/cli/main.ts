@@ -9,11 +9,16 @@
  */
 import { readFileSync } from 'fs';
 import { ChemError, speciate } from '../chem';
-import { compositionInputSchema, describeSchemaError, toComposition } from './compositionInput';
+import { defaultLibrary } from '../chem/library';
+import { formatRecipe, planRecipe } from '../chem/planner';
+import { compositionInputSchema, describeSchemaError, libraryFor, toComposition } from './compositionInput';
 import { DEMO_COMPOSITION } from './demo';
+import { recipeInputSchema, toRecipeInput } from './recipeInput';
 
 const USAGE = `Usage:
   proton-ledger solve [--json '<composition JSON>'] [--pretty]   read a composition (stdin if no --json), print the equilibrium
+  proton-ledger recipe [--json '<recipe JSON>'] [--text]         plan a buffer: amounts, bench steps, meter reading, predictions
+  proton-ledger substances [--json]                              list the substance library (a table, or JSON)
   proton-ledger demo [--pretty]                                  solve the demo composition (our QC lab's HEPES saline)
   proton-ledger help                                             this text`;
 
@@ -40,6 +45,23 @@ function solveCommand(raw: unknown): unknown {
   return speciate(toComposition(parsed.data));
 }
 
+function recipeCommand(raw: unknown) {
+  const parsed = recipeInputSchema.safeParse(raw);
+  if (!parsed.success) throw new CliFailure(describeSchemaError(parsed.error));
+  const { recipe, userSubstances } = toRecipeInput(parsed.data);
+  return planRecipe(recipe, libraryFor(userSubstances));
+}
+
+/** The library as a plain-text table: name, pKa values at 25 °C, forms. */
+function substanceTable(): string {
+  const rows = defaultLibrary()
+    .list()
+    .map((s) => [s.name, s.kind === 'strong' ? 'strong' : s.pKa.map((p) => p.toFixed(2)).join(', '), s.forms.join('; ')]);
+  const width = [Math.max(...rows.map((r) => r[0].length)), Math.max(...rows.map((r) => r[1].length))];
+  const head = ['substance'.padEnd(width[0]), 'pKa at 25 °C'.padEnd(width[1]), 'forms'].join('  ');
+  return [head, ...rows.map((r) => [r[0].padEnd(width[0]), r[1].padEnd(width[1]), r[2]].join('  '))].join('\n') + '\n';
+}
+
 /** Runs one command; returns the process exit code. Exported for tests. */
 export function run(args: string[], write: (text: string) => void): number {
   const pretty = args.includes('--pretty');
@@ -49,6 +71,16 @@ export function run(args: string[], write: (text: string) => void): number {
     switch (command) {
       case 'solve':
         print(solveCommand(readInput(args)));
+        return 0;
+      case 'recipe': {
+        const plan = recipeCommand(readInput(args));
+        if (args.includes('--text')) write(formatRecipe(plan) + '\n');
+        else print(plan);
+        return 0;
+      }
+      case 'substances':
+        if (args.includes('--json')) print(defaultLibrary().list());
+        else write(substanceTable());
         return 0;
       case 'demo':
         print({ composition: DEMO_COMPOSITION, result: solveCommand(DEMO_COMPOSITION) });

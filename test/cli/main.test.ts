@@ -3,7 +3,7 @@ import { run } from '../../src/cli/main';
 function call(args: string[]): { code: number; out: any } {
   let text = '';
   const code = run(args, (t) => (text += t));
-  return { code, out: text.startsWith('{') ? JSON.parse(text) : text };
+  return { code, out: text.startsWith('{') || text.startsWith('[') ? JSON.parse(text) : text };
 }
 
 describe('proton-ledger solve', () => {
@@ -37,5 +37,57 @@ describe('proton-ledger solve', () => {
 
   it('prints usage for help', () => {
     expect(call(['help']).out).toMatch(/Usage:/);
+  });
+});
+
+describe('proton-ledger solve with forms by name', () => {
+  it('takes forms in mM or as grams in a volume: KH2PO4 + Na2HPO4 (0.025 + 0.025) solves to the IUPAC 6.865 standard within 0.015 (Buck et al. 2002)', () => {
+    const { code, out } = call(['solve', '--json', JSON.stringify({ forms: [{ form: 'KH2PO4', mM: 25 }, { form: 'Na2HPO4', grams: 0.025 * 141.96, volumeMl: 1000 }] })]);
+    expect(code).toBe(0);
+    expect(Math.abs(out.pH - 6.865)).toBeLessThan(0.015);
+  });
+
+  it('refuses an unknown form with did-you-mean', () => {
+    const { code, out } = call(['solve', '--json', JSON.stringify({ forms: [{ form: 'tris bas', mM: 25 }] })]);
+    expect(code).toBe(2);
+    expect(out.error.message).toMatch(/did you mean/i);
+  });
+
+  it('accepts user substances', () => {
+    const userSubstances = [{ name: 'lab acid Y', chargeOfMostProtonated: 0, pKa: [5.5], forms: [{ name: 'lab acid Y free acid', molarMass: 100, protonsLost: 0 }] }];
+    const { code, out } = call(['solve', '--json', JSON.stringify({ forms: [{ form: 'lab acid Y free acid', mM: 10 }], strongIonsMm: { 'Na+': 5 }, userSubstances, activityModel: 'ideal' })]);
+    expect(code).toBe(0);
+    expect(Math.abs(out.pH - 5.5)).toBeLessThan(0.01);
+  });
+});
+
+describe('proton-ledger recipe and substances', () => {
+  const recipe = { buffer: 'tris', targetPh: 7.5, concentrationMm: 20, volumeMl: 1000, titrant: { form: 'HCl', concentrationM: 1 } };
+
+  it('prints the plan as JSON', () => {
+    const { code, out } = call(['recipe', '--json', JSON.stringify(recipe)]);
+    expect(code).toBe(0);
+    expect(Math.abs(out.predictions.pHAtUse - 7.5)).toBeLessThan(0.001);
+    expect(out.titration.titrant).toBe('hydrochloric acid');
+  });
+
+  it('prints the plan as text with --text', () => {
+    const { code, out } = call(['recipe', '--text', '--json', JSON.stringify(recipe)]);
+    expect(code).toBe(0);
+    expect(out).toMatch(/Weigh 2\.42\d g of tris base/);
+    expect(out).toMatch(/Cautions/);
+  });
+
+  it('refuses a misspelt field', () => {
+    const { code, out } = call(['recipe', '--json', JSON.stringify({ ...recipe, volumeML: 5 })]);
+    expect(code).toBe(2);
+    expect(out.error.message).toMatch(/Unrecognized key/);
+  });
+
+  it('lists the library as a table and as JSON', () => {
+    expect(call(['substances']).out).toMatch(/^substance\s+pKa at 25 °C\s+forms/);
+    const { out } = call(['substances', '--json']);
+    expect(out.length).toBeGreaterThanOrEqual(45);
+    expect(out.find((s: { name: string }) => s.name === 'HEPES').pKa).toEqual([7.564]);
   });
 });
