@@ -1,0 +1,167 @@
+/**
+ * Argument coercion, in one place: what a user types into a cell becomes what the core
+ * wants. Numbers may come as text ("7.4", " 25 "); blank cells and omitted arguments take
+ * defaults; a single cell or a literal stands for a 1×1 range; names are matched without
+ * regard to case by the library; purity may be a fraction or a percentage.
+ *
+ * Hosts hand values over already unwrapped: numbers, strings, booleans, null for blank.
+ */
+import { ACTIVITY_MODELS, ActivityModel, MESSAGES } from '../chem';
+import { invalid } from './errors';
+import { SHEET_MESSAGES } from './messages';
+
+/** A cell value as hosts pass it. */
+export type CellInput = number | string | boolean | null | undefined;
+
+/** True for an omitted argument, an empty cell or an empty string. */
+export function isBlank(value: unknown): boolean {
+  return value === undefined || value === null || (typeof value === 'string' && value.trim() === '');
+}
+
+/** A number from a number or numeric text; `undefined` when the text is not a number. */
+function parseNumber(value: unknown): number | undefined {
+  if (typeof value === 'number') return Number.isFinite(value) ? value : undefined;
+  if (typeof value !== 'string') return undefined;
+  const text = value.trim();
+  // Number('') is 0 and Number('0x1F') is 31: accept plain decimal notation only.
+  if (!/^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(text)) return undefined;
+  return Number(text);
+}
+
+/** Limits for a numeric argument. */
+export interface NumberRule {
+  /** Used when the argument is blank; without it a blank is an error. */
+  readonly default?: number;
+  readonly min?: number;
+  readonly max?: number;
+  /** Words for the allowed range, with units (e.g. `0 to 100 °C`). */
+  readonly allowed?: string;
+  /** Require a whole number. */
+  readonly integer?: boolean;
+}
+
+/**
+ * A numeric argument.
+ *
+ * @param argument - the parameter's name as the user sees it
+ * @param value - the cell value
+ * @param rule - default and limits
+ * @returns the number
+ */
+export function toNumber(argument: string, value: unknown, rule: NumberRule = {}): number {
+  if (isBlank(value)) {
+    if (rule.default !== undefined) return rule.default;
+    throw invalid(SHEET_MESSAGES.blank(argument, rule.allowed ? `a number, ${rule.allowed}` : 'a number'));
+  }
+  const n = parseNumber(value);
+  if (n === undefined) throw invalid(SHEET_MESSAGES.notANumber(argument, value));
+  const min = rule.min ?? -Infinity;
+  const max = rule.max ?? Infinity;
+  const allowed = rule.allowed ?? `${min} to ${max}`;
+  if (n < min || n > max) throw invalid(MESSAGES.outOfRange(argument, n, allowed));
+  if (rule.integer && !Number.isInteger(n)) throw invalid(MESSAGES.notInteger(argument, n));
+  return n;
+}
+
+/**
+ * A text argument (numbers are accepted as their text: a substance could be named "3").
+ *
+ * @param argument - the parameter's name
+ * @param value - the cell value
+ * @param fallback - used when blank; without it a blank is an error
+ * @returns the trimmed text
+ */
+export function toText(argument: string, value: unknown, fallback?: string): string {
+  if (isBlank(value)) {
+    if (fallback !== undefined) return fallback;
+    throw invalid(SHEET_MESSAGES.blank(argument, 'a name'));
+  }
+  if (typeof value === 'number') return String(value);
+  if (typeof value !== 'string') throw invalid(SHEET_MESSAGES.notText(argument, value));
+  return value.trim();
+}
+
+/**
+ * A 2-D range from whatever the host passed: a range stays, a single value becomes 1×1,
+ * a blank becomes an empty range.
+ */
+export function toRange(value: unknown): readonly (readonly unknown[])[] {
+  if (isBlank(value)) return [];
+  if (!Array.isArray(value)) return [[value]];
+  return value.map((row) => (Array.isArray(row) ? row : [row]));
+}
+
+/** True when a range holds nothing but blanks. */
+export function isBlankRange(value: unknown): boolean {
+  return toRange(value).every((row) => row.every(isBlank));
+}
+
+/** Temperature argument: blank means 25 °C; 0–100 °C (liquid water at 1 atm, as the core accepts). */
+export function toTemperature(argument: string, value: unknown, required = false): number {
+  return toNumber(argument, value, { ...(required ? {} : { default: 25 }), min: 0, max: 100, allowed: '0 to 100 °C' });
+}
+
+/**
+ * Activity model: blank means Davies; case, spaces and underscores do not matter
+ * ("Bates Guggenheim" is "bates-guggenheim").
+ */
+export function toActivityModel(argument: string, value: unknown): ActivityModel {
+  const text = toText(argument, value, ACTIVITY_MODELS[0]).toLowerCase().replace(/[\s_–]+/g, '-');
+  const found = ACTIVITY_MODELS.find((m) => m === text);
+  if (!found) throw invalid(MESSAGES.unknownModel(argument, String(value), ACTIVITY_MODELS.join(', ')));
+  return found;
+}
+
+/**
+ * Purity of a weighed form as a fraction. Blank is 1 (pure). A number above 0 up to 1 is a
+ * fraction (0.995); above 1 up to 100 a percentage (99.5); text may end in "%" ("99.5%").
+ * A cell formatted as a percentage already holds the fraction.
+ */
+export function toPurity(value: unknown): number {
+  if (isBlank(value)) return 1;
+  let n: number | undefined;
+  if (typeof value === 'string' && value.trim().endsWith('%')) {
+    const p = parseNumber(value.trim().slice(0, -1));
+    n = p === undefined ? undefined : p / 100;
+    if (n !== undefined && !(n > 0 && n <= 1)) n = undefined;
+  } else {
+    const raw = parseNumber(value);
+    if (raw !== undefined && raw > 0 && raw <= 1) n = raw;
+    else if (raw !== undefined && raw > 1 && raw <= 100) n = raw / 100;
+  }
+  if (n === undefined) throw invalid(SHEET_MESSAGES.badPurity(value));
+  return n;
+}
+
+/**
+ * One of a few words (case and spacing ignored).
+ *
+ * @param argument - the parameter's name
+ * @param value - the cell value
+ * @param choices - canonical word → accepted spellings (normalised: lower case, no spaces)
+ * @param fallback - canonical word used when blank
+ */
+export function toChoice<T extends string>(argument: string, value: unknown, choices: Readonly<Record<T, readonly string[]>>, fallback: T): T {
+  if (isBlank(value)) return fallback;
+  const key = toText(argument, value).toLowerCase().replace(/\s+/g, '');
+  for (const [word, spellings] of Object.entries(choices) as [T, readonly string[]][]) {
+    if (word === key || spellings.includes(key)) return word;
+  }
+  throw invalid(SHEET_MESSAGES.unknownChoice(argument, value, Object.keys(choices)));
+}
+
+/**
+ * A list of numbers from one cell: a number, or text such as "6.1; 7.2" (also
+ * separated by spaces, or by commas when no semicolon is used).
+ *
+ * @returns the numbers; empty for a blank
+ */
+export function toNumberList(argument: string, value: unknown): number[] {
+  if (isBlank(value)) return [];
+  if (typeof value === 'number') return [value];
+  const text = toText(argument, value);
+  const parts = text.split(text.includes(';') ? /\s*;\s*/ : /[\s,]+/).filter((p) => p !== '');
+  const numbers = parts.map(parseNumber);
+  if (numbers.some((n) => n === undefined)) throw invalid(SHEET_MESSAGES.badList(argument, text));
+  return numbers as number[];
+}

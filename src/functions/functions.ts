@@ -1,0 +1,320 @@
+/**
+ * The worksheet function catalog. Each function is a thin adapter: arguments are coerced
+ * (coerce.ts), names resolved through the substance library, the core called, and the
+ * result shaped for a cell. The JSDoc blocks below are the single source of the function
+ * metadata (`npm run metadata` → metadata.json); Excel and the formula engine both
+ * register from that file. Functions throw on bad input; the hosts turn what they throw
+ * into spreadsheet errors (errors.ts). Nothing here touches Office or a formula engine.
+ *
+ * In Excel every name carries the add-in's namespace (PROTON, set in manifest.xml):
+ * `=PROTON.PH(A2:B4)`.
+ */
+/* eslint-disable @typescript-eslint/no-explicit-any -- `any` is how custom-functions metadata spells a cell of any type */
+import { capacity, idealOsmolarity, log10Gamma, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
+import type { Titrant } from '../chem';
+import { chemistryOf } from '../chem/library';
+import { toActivityModel, toChoice, toNumber, toPurity, toTemperature, toText } from './coerce';
+import { compositionFrom, MAX_AMOUNT_MM } from './composition';
+import { SheetError, invalid } from './errors';
+import { memoised } from './memo';
+import { SHEET_MESSAGES } from './messages';
+import { libraryFor, userRowCount } from './userRange';
+
+/** Rows of the SPECIES table, header included: fixed so every host knows the spill size before computing (HyperFormula sizes arrays at parse time). 29 species covers H⁺, OH⁻, the strong ions and several polyprotic systems. */
+export const SPECIES_TABLE_ROWS = 30;
+/** Columns of the SPECIES table. */
+export const SPECIES_TABLE_HEADER = ['species', 'mM', 'activity (mM)', 'charge'] as const;
+/** Largest volume accepted, mL (a 1000 L tank; a guard against unit slips). */
+const MAX_VOLUME_ML = 1e6;
+/** Largest dilution factor accepted (the core's limit). */
+const MAX_DILUTION = 1e6;
+/** Largest ionic strength accepted for an apparent pKa, mM (the core's concentration limit). */
+const MAX_IONIC_STRENGTH_MM = 20000;
+
+function setup(temperatureC: any, activityModel: any, userSubstances: any, temperatureRequired = false) {
+  return {
+    library: libraryFor(userSubstances),
+    temperatureC: toTemperature('temperatureC', temperatureC, temperatureRequired),
+    model: toActivityModel('activityModel', activityModel),
+  };
+}
+
+function solution(composition: any, temperatureC: any, activityModel: any, userSubstances: any) {
+  const s = setup(temperatureC, activityModel, userSubstances);
+  return compositionFrom(s.library, composition, s.temperatureC, s.model);
+}
+
+/**
+ * Predicted pH of a solution given as a range of names and amounts.
+ * @customfunction PH PH
+ * @helpurl https://localhost:3000/help/functions.html#ph
+ * @param composition Two columns: substance or form name (e.g. "tris base", "Na2HPO4·7H2O", "NaCl"), then amount in mM. Blank rows are ignored.
+ * @param [temperatureC] Temperature in °C (blank: 25).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances (see the help page for its columns).
+ * @returns pH, as a calibrated meter would read it at that temperature.
+ */
+export function ph(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
+  return memoised('PH', [composition, temperatureC, activityModel, userSubstances], () => solvePh(solution(composition, temperatureC, activityModel, userSubstances)));
+}
+
+/**
+ * Volume of titrant stock, in mL, that brings a weighed form to a target pH.
+ * @customfunction TITRANT.ML TITRANT.ML
+ * @helpurl https://localhost:3000/help/functions.html#titrant-ml
+ * @param form Form weighed out (e.g. "HEPES free acid", "tris base").
+ * @param concentrationMm Its concentration in the final solution, mM.
+ * @param finalVolumeMl Final volume of the solution, mL.
+ * @param targetPh pH to reach (0 to 14).
+ * @param titrant Titrant form (e.g. "NaOH", "HCl", "KOH", or a weak base or acid such as "tris base").
+ * @param titrantConcentrationM Concentration of the titrant stock, mol/L.
+ * @param [temperatureC] Temperature at which the pH is adjusted, °C (blank: 25).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances.
+ * @returns Titrant stock to add, mL.
+ */
+export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, targetPh: any, titrant: any, titrantConcentrationM: any, temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
+  return memoised('TITRANT.ML', [form, concentrationMm, finalVolumeMl, targetPh, titrant, titrantConcentrationM, temperatureC, activityModel, userSubstances], () => {
+    const s = setup(temperatureC, activityModel, userSubstances);
+    const formName = toText('form', form);
+    const mM = toNumber('concentrationMm', concentrationMm, { min: 0, max: MAX_AMOUNT_MM, allowed: `0 to ${MAX_AMOUNT_MM} mM` });
+    const volumeMl = toNumber('finalVolumeMl', finalVolumeMl, { min: Number.MIN_VALUE, max: MAX_VOLUME_ML, allowed: `above 0 up to ${MAX_VOLUME_ML} mL` });
+    const target = toNumber('targetPh', targetPh, { min: 0, max: 14, allowed: '0 to 14' });
+    const stockM = toNumber('titrantConcentrationM', titrantConcentrationM, { min: Number.MIN_VALUE, max: 20, allowed: 'above 0 up to 20 mol/L' });
+    const composition = compositionFrom(s.library, [[formName, mM]], s.temperatureC, s.model);
+    const titrantForm = s.library.findForm(toText('titrant', titrant));
+    if (titrantForm.adds.length > 1) throw invalid(SHEET_MESSAGES.notATitrant('titrant', titrantForm.name));
+    const portion = titrantForm.adds[0];
+    const t: Titrant = {
+      name: titrantForm.name,
+      strongIons: titrantForm.counterIons,
+      ...(portion ? { system: chemistryOf(s.library.findSystem(portion.system)), systemPerMole: portion.moles } : {}),
+    };
+    const ml = (titrantForPh(composition, t, target).concentrationM * volumeMl) / stockM;
+    if (ml > volumeMl) throw new SheetError('na', SHEET_MESSAGES.titrantExceedsVolume(ml, volumeMl));
+    return ml;
+  });
+}
+
+/**
+ * Buffer capacity of a solution at its own pH.
+ * @customfunction CAPACITY CAPACITY
+ * @helpurl https://localhost:3000/help/functions.html#capacity
+ * @param composition Two columns: substance or form name, then amount in mM.
+ * @param [measure] "base" (blank): mM of strong base that raises the pH by 0.1; "acid": mM of strong acid that lowers it by 0.1; "beta": mol/L per pH unit.
+ * @param [temperatureC] Temperature in °C (blank: 25).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances.
+ * @returns Capacity in the measure chosen.
+ */
+export function capacityOf(composition: any[][], measure?: any, temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
+  return memoised('CAPACITY', [composition, measure, temperatureC, activityModel, userSubstances], () => {
+    const which = toChoice<'base' | 'acid' | 'beta'>('measure', measure, { base: ['mmbase', 'basemm', 'mm', 'mm/0.1ph'], acid: ['mmacid', 'acidmm'], beta: ['β', 'm/ph', 'mperph', 'mol/l/ph'] }, 'base');
+    const result = capacity(solution(composition, temperatureC, activityModel, userSubstances));
+    if (which === 'acid') return result.acidMmPerTenthPh;
+    if (which === 'beta') return result.betaMPerPh;
+    return result.baseMmPerTenthPh;
+  });
+}
+
+/**
+ * pH of a solution after dilution with pure water.
+ * @customfunction PH.DILUTED PH.DILUTED
+ * @helpurl https://localhost:3000/help/functions.html#ph-diluted
+ * @param composition Two columns: substance or form name, then amount in mM (before dilution).
+ * @param dilutionFactor Final volume over starting volume (10 for one part plus nine of water); 1 or more.
+ * @param [temperatureC] Temperature in °C (blank: 25).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances.
+ * @returns pH after dilution.
+ */
+export function phDiluted(composition: any[][], dilutionFactor: any, temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
+  return memoised('PH.DILUTED', [composition, dilutionFactor, temperatureC, activityModel, userSubstances], () => {
+    const factor = toNumber('dilutionFactor', dilutionFactor, { min: 1, max: MAX_DILUTION, allowed: `1 to ${MAX_DILUTION}` });
+    return afterDilution(solution(composition, temperatureC, activityModel, userSubstances), factor).pH;
+  });
+}
+
+/**
+ * pH of the same solution at another temperature (amounts unchanged), e.g. a buffer made up at room temperature and used in the cold room.
+ * @customfunction PH.AT.TEMPERATURE PH.AT.TEMPERATURE
+ * @helpurl https://localhost:3000/help/functions.html#ph-at-temperature
+ * @param composition Two columns: substance or form name, then amount in mM.
+ * @param temperatureC Temperature of use, °C (0 to 100).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances.
+ * @returns pH at that temperature.
+ */
+export function phAtTemperature(composition: any[][], temperatureC: any, activityModel?: any, userSubstances?: any[][]): number {
+  return memoised('PH.AT.TEMPERATURE', [composition, temperatureC, activityModel, userSubstances], () => {
+    const s = setup(temperatureC, activityModel, userSubstances, true);
+    return atTemperature(compositionFrom(s.library, composition, 25, s.model), s.temperatureC).pH;
+  });
+}
+
+/**
+ * Apparent pKa′ of one step of a substance at a temperature and ionic strength.
+ * @customfunction PKA PKA
+ * @helpurl https://localhost:3000/help/functions.html#pka
+ * @param substance Substance or form name (e.g. "phosphate", "HEPES", "tris HCl").
+ * @param [step] Which proton-loss step, 1 for the first (blank: 1).
+ * @param [temperatureC] Temperature in °C (blank: 25).
+ * @param [ionicStrengthMm] Ionic strength in mM (blank: 0, the thermodynamic pKa).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances.
+ * @returns pKa′, to be used with pH = −log a(H+).
+ */
+export function pka(substance: any, step?: any, temperatureC?: any, ionicStrengthMm?: any, activityModel?: any, userSubstances?: any[][]): number {
+  return memoised('PKA', [substance, step, temperatureC, ionicStrengthMm, activityModel, userSubstances], () => {
+    const s = setup(temperatureC, activityModel, userSubstances);
+    const record = s.library.findSystem(toText('substance', substance));
+    if (record.steps.length === 0) throw invalid(SHEET_MESSAGES.noSuchStep('step', record.name, 1, 0));
+    const k = toNumber('step', step, { default: 1, min: 1, max: record.steps.length, integer: true, allowed: `whole numbers 1 to ${record.steps.length}` });
+    const ionicStrengthM = toNumber('ionicStrengthMm', ionicStrengthMm, { default: 0, min: 0, max: MAX_IONIC_STRENGTH_MM, allowed: `0 to ${MAX_IONIC_STRENGTH_MM} mM` }) / 1000;
+    const st = record.steps[k - 1];
+    const a = debyeHuckelA(s.temperatureC);
+    const acidCharge = record.chargeOfMostProtonated - (k - 1);
+    // pK′ = pKa(T) + log γ(A) − log γ(HA) (SCIENCE.md, ionic-strength dependence).
+    return pKaAt(st.pKa, st.deltaHkJ ?? 0, st.deltaCpJ ?? 0, s.temperatureC) + log10Gamma(s.model, acidCharge - 1, ionicStrengthM, a) - log10Gamma(s.model, acidCharge, ionicStrengthM, a);
+  });
+}
+
+/**
+ * Grams of a form to weigh for a concentration and volume.
+ * @customfunction GRAMS GRAMS
+ * @helpurl https://localhost:3000/help/functions.html#grams
+ * @param form Form to weigh, as on the bottle (e.g. "Na2HPO4·7H2O", "tris hydrochloride").
+ * @param concentrationMm Concentration in the final solution, mM.
+ * @param volumeMl Final volume, mL.
+ * @param [purity] Assay of the reagent: a fraction (0.995), a percentage (99.5) or text ("99.5%"); blank: pure.
+ * @param [userSubstances] Range of your own substances.
+ * @returns Mass to weigh, g.
+ */
+export function grams(form: any, concentrationMm: any, volumeMl: any, purity?: any, userSubstances?: any[][]): number {
+  return memoised('GRAMS', [form, concentrationMm, volumeMl, purity, userSubstances], () => {
+    const found = libraryFor(userSubstances).findForm(toText('form', form));
+    const mM = toNumber('concentrationMm', concentrationMm, { min: 0, max: MAX_AMOUNT_MM, allowed: `0 to ${MAX_AMOUNT_MM} mM` });
+    const ml = toNumber('volumeMl', volumeMl, { min: 0, max: MAX_VOLUME_ML, allowed: `0 to ${MAX_VOLUME_ML} mL` });
+    return ((mM / 1000) * (ml / 1000) * found.molarMass) / toPurity(purity);
+  });
+}
+
+/**
+ * Ionic strength of a solution, in mM, after its acid–base equilibria settle.
+ * @customfunction IONIC.STRENGTH.MM IONIC.STRENGTH.MM
+ * @helpurl https://localhost:3000/help/functions.html#ionic-strength-mm
+ * @param composition Two columns: substance or form name, then amount in mM.
+ * @param [temperatureC] Temperature in °C (blank: 25).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances.
+ * @returns Ionic strength, mM.
+ */
+export function ionicStrengthMm(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
+  return memoised('IONIC.STRENGTH.MM', [composition, temperatureC, activityModel, userSubstances], () => speciate(solution(composition, temperatureC, activityModel, userSubstances)).ionicStrengthM * 1000);
+}
+
+/**
+ * Ideal osmolarity, in mOsm/L: the sum of every dissolved particle with no osmotic coefficient (an osmometer reads lower).
+ * @customfunction OSMOLARITY.IDEAL OSMOLARITY.IDEAL
+ * @helpurl https://localhost:3000/help/functions.html#osmolarity-ideal
+ * @param composition Two columns: substance or form name, then amount in mM.
+ * @param [temperatureC] Temperature in °C (blank: 25).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances.
+ * @returns Ideal osmolarity, mOsm/L.
+ */
+export function osmolarityIdeal(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
+  return memoised('OSMOLARITY.IDEAL', [composition, temperatureC, activityModel, userSubstances], () => idealOsmolarity(speciate(solution(composition, temperatureC, activityModel, userSubstances))) * 1000);
+}
+
+/**
+ * Every species of a solution: name, concentration (mM), activity (mM) and charge. Spills a fixed 30 rows × 4 columns, header first, padded with blanks.
+ * @customfunction SPECIES SPECIES
+ * @helpurl https://localhost:3000/help/functions.html#species
+ * @param composition Two columns: substance or form name, then amount in mM.
+ * @param [temperatureC] Temperature in °C (blank: 25).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances.
+ * @returns Table of species.
+ */
+export function species(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): any[][] {
+  return memoised('SPECIES', [composition, temperatureC, activityModel, userSubstances], () => {
+    const result = speciate(solution(composition, temperatureC, activityModel, userSubstances));
+    if (result.species.length > SPECIES_TABLE_ROWS - 1) throw invalid(SHEET_MESSAGES.tooManySpecies(result.species.length, SPECIES_TABLE_ROWS - 1));
+    const rows: (string | number)[][] = [[...SPECIES_TABLE_HEADER]];
+    for (const sp of result.species) rows.push([sp.name, sp.concentrationM * 1000, sp.activity * 1000, sp.charge]);
+    while (rows.length < SPECIES_TABLE_ROWS) rows.push(['', '', '', '']);
+    return rows;
+  });
+}
+
+/**
+ * Names of every substance in the library (and your own), one per row, for drop-down lists. Spills the library's count plus one row per row of userSubstances, padded with blanks.
+ * @customfunction SUBSTANCES SUBSTANCES
+ * @helpurl https://localhost:3000/help/functions.html#substances
+ * @param [userSubstances] Range of your own substances, listed after the library's.
+ * @returns One column of names.
+ */
+export function substances(userSubstances?: any[][]): string[][] {
+  return memoised('SUBSTANCES', [userSubstances], () => padColumn(libraryFor(userSubstances).list().map((r) => r.name), listLength('substances', userSubstances)));
+}
+
+/**
+ * Names of every form on the shelf (salts, hydrates, free acids and bases), one per row, for drop-down lists of composition names. Spills the library's count plus one row per row of userSubstances, padded with blanks.
+ * @customfunction FORMS FORMS
+ * @helpurl https://localhost:3000/help/functions.html#forms
+ * @param [userSubstances] Range of your own substances, whose forms are listed after the library's.
+ * @returns One column of form names.
+ */
+export function forms(userSubstances?: any[][]): string[][] {
+  return memoised('FORMS', [userSubstances], () => padColumn(formNames(libraryFor(userSubstances)), listLength('forms', userSubstances)));
+}
+
+function formNames(library: ReturnType<typeof libraryFor>): string[] {
+  return library.records().flatMap((r) => r.forms.map((f) => f.name));
+}
+
+/**
+ * Rows a SUBSTANCES or FORMS list spills: the built-in library's count plus one per row of
+ * the user range, so the size follows from the arguments' shape alone.
+ *
+ * @param list - which list
+ * @param userSubstances - the user range argument (only its row count matters)
+ */
+export function listLength(list: 'substances' | 'forms', userSubstances: unknown): number {
+  const library = libraryFor(undefined);
+  return (list === 'substances' ? library.list().length : formNames(library).length) + userRowCount(userSubstances);
+}
+
+function padColumn(names: readonly string[], rows: number): string[][] {
+  const out = names.slice(0, rows).map((n) => [n]);
+  while (out.length < rows) out.push(['']);
+  return out;
+}
+
+/** Size of a spilled result: rows × columns. */
+export interface SpillShape {
+  readonly rows: number;
+  readonly columns: number;
+}
+
+/**
+ * The size a spilling function's result will have, from the row counts of its arguments
+ * alone (0 for an omitted argument). Every host can size the spill before computing it;
+ * HyperFormula must. Undefined for functions that return one value.
+ *
+ * @param id - function id
+ * @param argumentRows - row count of each argument as passed (1 for a single value)
+ */
+export function spillShape(id: string, argumentRows: readonly number[]): SpillShape | undefined {
+  switch (id) {
+    case 'SPECIES':
+      return { rows: SPECIES_TABLE_ROWS, columns: SPECIES_TABLE_HEADER.length };
+    case 'SUBSTANCES':
+      return { rows: listLength('substances', new Array(argumentRows[0] ?? 0)), columns: 1 };
+    case 'FORMS':
+      return { rows: listLength('forms', new Array(argumentRows[0] ?? 0)), columns: 1 };
+    default:
+      return undefined;
+  }
+}
