@@ -12,6 +12,7 @@ import { ChemError, speciate } from '../chem';
 import { defaultLibrary } from '../chem/library';
 import { formatRecipe, planRecipe } from '../chem/planner';
 import { compositionInputSchema, describeSchemaError, libraryFor, toComposition } from './compositionInput';
+import { runCalc } from './calc';
 import { DEMO_COMPOSITION } from './demo';
 import { recipeInputSchema, toRecipeInput } from './recipeInput';
 
@@ -20,6 +21,7 @@ const USAGE = `Usage:
   proton-ledger recipe [--json '<recipe JSON>'] [--text]         plan a buffer: amounts, bench steps, meter reading, predictions
   proton-ledger substances [--json]                              list the substance library (a table, or JSON)
   proton-ledger demo [--pretty]                                  solve the demo composition (our QC lab's HEPES saline)
+  proton-ledger calc <book.xlsx|.csv> -o <filled.xlsx|.csv>      evaluate a workbook's formulas (PROTON functions included), write values
   proton-ledger help                                             this text`;
 
 /** A failure to report as JSON with an exit code. */
@@ -105,6 +107,14 @@ export function run(args: string[], write: (text: string) => void): number {
   }
 }
 
+/** Runs any command, the asynchronous `calc` included; resolves to the exit code. */
+export async function main(args: string[], write: (text: string) => void): Promise<number> {
+  if (args[0] === 'calc') return runCalc(args.slice(1), write);
+  return run(args, write);
+}
+
 if (require.main === module) {
-  process.exitCode = run(process.argv.slice(2), (t) => process.stdout.write(t));
+  void main(process.argv.slice(2), (t) => process.stdout.write(t)).then((code) => {
+    process.exitCode = code;
+  });
 }

@@ -104,12 +104,13 @@ export function registerFormulaFunctions(): void {
  * A HyperFormula instance with every PROTON function registered.
  *
  * @param sheets - sheet name → rows of cells (numbers, text, booleans, null, formulas as "=…")
- * @param config - more HyperFormula settings (the licence key is set for you)
+ * @param config - more HyperFormula settings (the licence key is set, and smartRounding turned off, for you)
  * @returns the engine; read values with getCellValue / getSheetValues
  */
 export function createFormulaEngine(sheets: Record<string, unknown[][]> = { Sheet1: [] }, config: Partial<ConfigParams> = {}): HyperFormula {
   registerFormulaFunctions();
-  return HyperFormula.buildFromSheets(sheets as Parameters<typeof HyperFormula.buildFromSheets>[0], { licenseKey: HYPERFORMULA_LICENSE_KEY, ...config });
+  // smartRounding off: results come back exactly as computed, not rounded to 10 digits.
+  return HyperFormula.buildFromSheets(sheets as Parameters<typeof HyperFormula.buildFromSheets>[0], { licenseKey: HYPERFORMULA_LICENSE_KEY, smartRounding: false, ...config });
 }
 
 const SAVED_NAMES = new Map(CATALOG.map((fn) => [`${NAMESPACE}_${fn.id.replace(/\./g, '_')}`, engineName(fn)]));
