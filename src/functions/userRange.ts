@@ -145,10 +145,14 @@ export function libraryFor(value: unknown): SubstanceLibrary {
   try {
     library = createLibrary(parsed.substances);
   } catch (error) {
-    const m = error instanceof ChemError && error.field ? /^userSubstances\[(\d+)\](?:\.forms\[(\d+)\])?/.exec(error.field) : null;
-    if (m) {
-      const where = parsed.rows[Number(m[1])];
-      const row = m[2] === undefined ? where.first : where.forms[Number(m[2])];
+    // The core names the record by index (validation) or by name (a clash with the library).
+    const field = error instanceof ChemError ? error.field ?? '' : '';
+    const byIndex = /^userSubstances\[(\d+)\](?:\.forms\[(\d+)\])?/.exec(field);
+    const byName = /^userSubstances\["(.*?)"\]/.exec(field);
+    const index = byIndex ? Number(byIndex[1]) : byName ? parsed.substances.findIndex((u) => u.name === byName[1]) : -1;
+    if (index >= 0 && index < parsed.rows.length) {
+      const where = parsed.rows[index];
+      const row = byIndex?.[2] === undefined ? where.first : where.forms[Number(byIndex[2])];
       withContext(error, USER_SUBSTANCES_ARGUMENT, row);
     }
     throw error;
