@@ -40,7 +40,7 @@ describe('userSubstances range', () => {
     const composition = library.compositionFromForms([{ form: 'Lab amine base', concentrationM: 0.02 }, { form: 'Lab amine HCl', concentrationM: 0.03 }]);
     expect(ph([['lab amine base', 20], ['LAB AMINE HCL', 30]], 25, '', USER)).toBeCloseTo(solvePh(composition), SAME_DIGITS);
     expect(ph([['Lab diacid', 10], ['Lab diacid disodium', 5]], '', '', USER)).toBeCloseTo(
-      speciate(createLibrary([{ name: 'Lab diacid', chargeOfMostProtonated: 0, pKa: [3.1, 5.9], deltaHkJ: [1, 2], deltaCpJ: [0, 0], forms: [{ name: 'Lab diacid', molarMass: 95.1, protonsLost: 0 }, { name: 'Lab diacid disodium', formula: 'C4H4Na2O4', protonsLost: 2, counterIons: { 'Na+': 2 } }] }).compositionFromForms([{ form: 'Lab diacid', concentrationM: 0.01 }, { form: 'Lab diacid disodium', concentrationM: 0.005 }])).pH,
+      speciate(createLibrary([{ name: 'Lab diacid', chargeOfMostProtonated: 0, pKa: [3.1, 5.9], deltaHkJ: [1, 2], deltaCpJ: [0, 0], forms: [{ name: 'Lab diacid', molarMass: 95.1, protonsLost: 0 }, { name: 'Lab diacid disodium', formula: 'C4H4Na2O4', protonsLost: 2, counterIons: { 'Na+': 2 } }] }]).compositionFromForms([{ form: 'Lab diacid', concentrationM: 0.01 }, { form: 'Lab diacid disodium', concentrationM: 0.005 }])).pH,
       SAME_DIGITS,
     );
   });
