@@ -48,6 +48,7 @@ export function log10Gamma(model: ActivityModel, charge: number, ionicStrengthM:
 /** Returns the model named, or throws a typed error listing the allowed names. */
 export function parseActivityModel(field: string, value: unknown): ActivityModel {
   if (value === undefined) return 'davies';
+  if (value === 'davies' || value === 'ideal' || value === 'bates-guggenheim') return value;
   const name = typeof value === 'string' ? value.trim().toLowerCase() : '';
   const found = ACTIVITY_MODELS.find((m) => m === name);
   if (!found) {

@@ -79,23 +79,36 @@ export interface PreparedComposition {
   readonly warnings: string[];
 }
 
-/** Validates an acid–base system's chemistry; `field` names it in messages. */
-export function validateChemistry(field: string, chem: AcidBaseChemistry): void {
-  requireInteger(`${field}.chargeOfMostProtonated`, chem.chargeOfMostProtonated, -6, 6);
-  if (!Array.isArray(chem.steps) || chem.steps.length === 0 || chem.steps.length > MAX_STEPS) {
+/** True when `v` is a number within [min, max] (NaN fails): the cheap test made before any message is built. */
+function inRange(v: unknown, min: number, max: number): boolean {
+  return typeof v === 'number' && v >= min && v <= max;
+}
+
+/**
+ * Validates an acid–base system's chemistry. `prefix` and `index` name it in messages
+ * (`systems[2]`); the name is only built when something is wrong, to keep the hot path cheap.
+ */
+export function validateChemistry(prefix: string, chem: AcidBaseChemistry, index?: number): void {
+  const field = () => (index === undefined ? prefix : `${prefix}[${index}]`);
+  const z = chem.chargeOfMostProtonated;
+  if (!(Number.isInteger(z) && z >= -6 && z <= 6)) requireInteger(`${field()}.chargeOfMostProtonated`, z, -6, 6);
+  const steps = chem.steps;
+  if (!Array.isArray(steps) || steps.length === 0 || steps.length > MAX_STEPS) {
     const allowed = `1 to ${MAX_STEPS} steps`;
-    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(`${field}.steps`, Array.isArray(chem.steps) ? chem.steps.length : chem.steps, allowed), `${field}.steps`, allowed);
+    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(`${field()}.steps`, Array.isArray(steps) ? steps.length : steps, allowed), `${field()}.steps`, allowed);
   }
   let prev = -Infinity;
-  chem.steps.forEach((step, k) => {
-    const pka = requireNumber(`${field}.steps[${k}].pKa`, step.pKa, -10, 25);
-    if (step.deltaHkJ !== undefined) requireNumber(`${field}.steps[${k}].deltaHkJ`, step.deltaHkJ, -200, 200);
-    if (step.deltaCpJ !== undefined) requireNumber(`${field}.steps[${k}].deltaCpJ`, step.deltaCpJ, -2000, 2000);
+  for (let k = 0; k < steps.length; k++) {
+    const step = steps[k];
+    const pka = step.pKa;
+    if (!inRange(pka, -10, 25)) requireNumber(`${field()}.steps[${k}].pKa`, pka, -10, 25);
+    if (step.deltaHkJ !== undefined && !inRange(step.deltaHkJ, -200, 200)) requireNumber(`${field()}.steps[${k}].deltaHkJ`, step.deltaHkJ, -200, 200);
+    if (step.deltaCpJ !== undefined && !inRange(step.deltaCpJ, -2000, 2000)) requireNumber(`${field()}.steps[${k}].deltaCpJ`, step.deltaCpJ, -2000, 2000);
     if (pka <= prev) {
-      throw new ChemError('invalid-input', 'stepsOutOfOrder', MESSAGES.stepsOutOfOrder(`${field}.steps`, prev, pka), `${field}.steps`, 'ascending pKa values');
+      throw new ChemError('invalid-input', 'stepsOutOfOrder', MESSAGES.stepsOutOfOrder(`${field()}.steps`, prev, pka), `${field()}.steps`, 'ascending pKa values');
     }
     prev = pka;
-  });
+  }
 }
 
 /**
@@ -106,7 +119,8 @@ export function prepare(composition: Composition): PreparedComposition {
   if (composition === null || typeof composition !== 'object') {
     throw new ChemError('invalid-input', 'emptyComposition', MESSAGES.emptyComposition(), 'composition');
   }
-  const temperatureC = composition.temperatureC === undefined ? 25 : requireNumber('temperatureC', composition.temperatureC, MIN_TEMPERATURE_C, MAX_TEMPERATURE_C, `${MIN_TEMPERATURE_C} to ${MAX_TEMPERATURE_C} °C`);
+  const t = composition.temperatureC;
+  const temperatureC = t === undefined ? 25 : inRange(t, MIN_TEMPERATURE_C, MAX_TEMPERATURE_C) ? (t as number) : requireNumber('temperatureC', t, MIN_TEMPERATURE_C, MAX_TEMPERATURE_C, `${MIN_TEMPERATURE_C} to ${MAX_TEMPERATURE_C} °C`);
   const model = parseActivityModel('activityModel', composition.activityModel);
   const systems = composition.systems ?? [];
   if (!Array.isArray(systems)) {
@@ -121,9 +135,9 @@ export function prepare(composition: Composition): PreparedComposition {
   const n = systems.length;
   let stepTotal = 0;
   for (let j = 0; j < n; j++) {
-    const field = `systems[${j}]`;
-    validateChemistry(field, systems[j]);
-    requireNumber(`${field}.totalM`, systems[j].totalM, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
+    validateChemistry('systems', systems[j], j);
+    const total = systems[j].totalM;
+    if (!inRange(total, 0, MAX_CONCENTRATION_M)) requireNumber(`systems[${j}].totalM`, total, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
     stepTotal += systems[j].steps.length;
   }
 
@@ -154,9 +168,9 @@ export function prepare(composition: Composition): PreparedComposition {
   let strongCharge = 0;
   let strongIonicStrength = 0;
   for (const name of ionNames) {
-    const field = `strongIons.${name}`;
     const ion = findStrongIon('strongIons', name);
-    const c = requireNumber(field, ions[name], 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
+    const c = ions[name];
+    if (!inRange(c, 0, MAX_CONCENTRATION_M)) requireNumber(`strongIons.${name}`, c, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
     strongCharge += ion.charge * c;
     strongIonicStrength += 0.5 * ion.charge * ion.charge * c;
   }

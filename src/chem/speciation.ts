@@ -18,6 +18,7 @@
 import { ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M } from './activity';
 import { Composition, PreparedComposition, prepare } from './composition';
 import { ChemError, MESSAGES } from './errors';
+import { selfConsistentIonicStrength } from './ionicStrength';
 import { STRONG_IONS, findStrongIon } from './strongIons';
 import { pKw } from './water';
 
@@ -27,15 +28,8 @@ export const PH_BRACKET_HIGH = 16;
 export const PH_BRACKET_LOW = -2;
 /** Newton/bisection steps allowed in one pH solve (bisection alone needs ~45 for the bracket at 1e-12). */
 const MAX_PH_ITERATIONS = 200;
-/** Ionic-strength updates allowed (the fixed point contracts fast; a handful is typical). */
-const MAX_IONIC_STRENGTH_ITERATIONS = 100;
-/** Convergence in ln a(H⁺): 1e-13 in ln units is ~4e-14 pH. */
-const LN_AH_TOLERANCE = 1e-13;
-/** Relative convergence of the ionic strength: above the ~1e-12 noise that the pH tolerance leaves in I, far below anything that moves a pH. */
-const IONIC_STRENGTH_TOLERANCE = 1e-10;
-/** Absolute floor for that test, relative to the largest ionic strength the composition could have: I is a sum whose terms can cancel (z² − 2z·n̄ + ⟨n²⟩), leaving rounding of this order. */
-const ROUNDING_FLOOR = 1e-14;
-
+/** A Newton step in ln a(H⁺) this small (relative) is taken and the solve ends: the error left is ~(step)², below 1e-13. */
+const NEWTON_ACCEPT = 1e-7;
 const LN_AH_MIN = -PH_BRACKET_HIGH * Math.LN10;
 const LN_AH_MAX = -PH_BRACKET_LOW * Math.LN10;
 
@@ -43,6 +37,8 @@ const LN_AH_MAX = -PH_BRACKET_LOW * Math.LN10;
 let evF = 0;
 let evD = 0;
 let evI2 = 0;
+/** d(2I)/d ln a_H, so that 2I can be carried to a point reached by a final Newton step without evaluating there. */
+let evDI2 = 0;
 
 /**
  * Charge balance f, its derivative df/d ln a_H, and 2·I of all non-strong species, at a_H.
@@ -54,6 +50,7 @@ function evaluate(p: PreparedComposition, kp: Float64Array, aH: number, g1: numb
   let f = p.strongCharge + hc - ohc;
   let d = hc + ohc;
   let i2 = hc + ohc;
+  let di2 = hc - ohc;
   const inv = 1 / aH;
   const totals = p.totals;
   const n = totals.length;
@@ -71,6 +68,7 @@ function evaluate(p: PreparedComposition, kp: Float64Array, aH: number, g1: numb
     let s2 = 0;
     let q = z;
     let q2 = z * z;
+    let kq2 = 0;
     for (let k = 1; k <= steps; k++) {
       t *= kp[first + k - 1] * inv;
       const zk = z - k;
@@ -79,15 +77,20 @@ function evaluate(p: PreparedComposition, kp: Float64Array, aH: number, g1: numb
       s2 += k * k * t;
       q += zk * t;
       q2 += zk * zk * t;
+      kq2 += k * zk * zk * t;
     }
     const nb = s1 / sum;
+    const meanQ2 = q2 / sum;
     f += (c * q) / sum;
     d += c * (s2 / sum - nb * nb);
-    i2 += (c * q2) / sum;
+    i2 += c * meanQ2;
+    // Weights go as a_H^−k, so d⟨g⟩/d ln a_H = −(⟨k·g⟩ − ⟨k⟩⟨g⟩).
+    di2 -= c * (kq2 / sum - nb * meanQ2);
   }
   evF = f;
   evD = d;
   evI2 = i2;
+  evDI2 = di2;
 }
 
 /** Sets the mixed constants for an ionic strength; returns γ₁. */
@@ -120,11 +123,14 @@ function solveChargeBalance(p: PreparedComposition, kp: Float64Array, g1: number
     }
     const newtonStep = f / evD;
     let next = x - newtonStep;
-    const converged = Math.abs(newtonStep) <= LN_AH_TOLERANCE * Math.max(1, Math.abs(x));
+    // Newton converges quadratically here: once a step is below 1e-7, the next would be ~1e-14,
+    // so the step is taken and accepted without paying for another evaluation.
+    const converged = Math.abs(newtonStep) <= NEWTON_ACCEPT * Math.max(1, Math.abs(x));
     if (!converged && !(next > lo && next < hi)) next = 0.5 * (lo + hi);
     if (converged || next === x) {
       // A root pinned against an edge never seen from the other side is no root at all.
       if ((!loChecked && next <= LN_AH_MIN + 1e-6) || (!hiChecked && next >= LN_AH_MAX - 1e-6)) break;
+      evI2 += evDI2 * (next - x);
       return next;
     }
     x = next;
@@ -157,29 +163,22 @@ export interface EquilibriumState {
 export function solvePrepared(p: PreparedComposition, guessPh = 7): EquilibriumState {
   const kp = new Float64Array(p.ka.length);
   const counter = { n: 0 };
-  let ionicStrength = p.strongIonicStrength;
-  for (let j = 0; j < p.totals.length; j++) ionicStrength += 0.5 * p.totals[j] * p.z0[j] * p.z0[j];
   let x = -guessPh * Math.LN10;
   let g1 = 1;
   let outer = 0;
-  for (;;) {
+  const speciesIonicStrength = (ionicStrengthM: number) => {
     outer++;
-    g1 = conditionalConstants(p, ionicStrength, kp);
+    g1 = conditionalConstants(p, ionicStrengthM, kp);
     x = solveChargeBalance(p, kp, g1, x, counter);
-    if (p.model === 'ideal') break;
-    const next = p.strongIonicStrength + 0.5 * evI2;
-    const change = Math.abs(next - ionicStrength);
-    ionicStrength = next;
-    if (change <= IONIC_STRENGTH_TOLERANCE * ionicStrength + ROUNDING_FLOOR * p.ionicStrengthScale) {
-      // Final pH solve at the constants of the converged ionic strength, so the reported
-      // state satisfies the charge balance at exactly the constants it reports.
-      g1 = conditionalConstants(p, ionicStrength, kp);
-      x = solveChargeBalance(p, kp, g1, x, counter);
-      break;
-    }
-    if (outer >= MAX_IONIC_STRENGTH_ITERATIONS) {
-      throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The ionic-strength iteration', MAX_IONIC_STRENGTH_ITERATIONS));
-    }
+    return p.strongIonicStrength + 0.5 * evI2;
+  };
+  let ionicStrength: number;
+  if (p.model === 'ideal') {
+    ionicStrength = speciesIonicStrength(0);
+  } else {
+    let start = p.strongIonicStrength;
+    for (let j = 0; j < p.totals.length; j++) start += 0.5 * p.totals[j] * p.z0[j] * p.z0[j];
+    ionicStrength = selfConsistentIonicStrength(start, speciesIonicStrength, p.ionicStrengthScale, 'The ionic-strength iteration');
   }
   return { pH: -x / Math.LN10, ionicStrengthM: ionicStrength, gamma1: g1, mixedKa: kp, evaluations: counter.n, ionicStrengthIterations: outer };
 }

@@ -29,7 +29,10 @@ export const STRONG_IONS: readonly StrongIon[] = [
 ];
 
 const BY_KEY = new Map<string, StrongIon>();
+/** Names exactly as usually written (`Na+`), looked up before any normalising. */
+const BY_NAME = new Map<string, StrongIon>();
 for (const ion of STRONG_IONS) {
+  BY_NAME.set(ion.name, ion);
   for (const key of [ion.name, ...ion.aliases]) BY_KEY.set(normaliseIonKey(key), ion);
 }
 
@@ -39,7 +42,7 @@ function normaliseIonKey(name: string): string {
 
 /** Looks up a strong ion by name or alias; throws a typed error listing the allowed names. */
 export function findStrongIon(field: string, name: string): StrongIon {
-  const ion = BY_KEY.get(normaliseIonKey(name));
+  const ion = BY_NAME.get(name) ?? (typeof name === 'string' ? BY_KEY.get(normaliseIonKey(name)) : undefined);
   if (!ion) {
     const allowed = STRONG_IONS.map((i) => i.name).join(', ');
     throw new ChemError('invalid-input', 'unknownIon', MESSAGES.unknownIon(field, name, allowed), field, allowed);

@@ -12,6 +12,7 @@
 import { ionicStrengthFactor } from './activity';
 import { AcidBaseChemistry, Composition, MAX_CONCENTRATION_M, PreparedComposition, prepare, validateChemistry } from './composition';
 import { ChemError, MESSAGES, requireNumber } from './errors';
+import { selfConsistentIonicStrength } from './ionicStrength';
 import { findStrongIon } from './strongIons';
 import { solvePrepared } from './speciation';
 import { pKaAt } from './vantHoff';
@@ -36,10 +37,6 @@ export const HYDROCHLORIC_ACID: Titrant = { name: 'HCl', strongIons: { 'Cl-': 1 
 /** Lowest and highest target pH accepted. */
 export const MIN_TARGET_PH = 0;
 export const MAX_TARGET_PH = 14;
-/** Relative convergence of the ionic strength (as in the speciation solver). */
-const IONIC_STRENGTH_TOLERANCE = 1e-12;
-/** Ionic-strength iterations allowed for a titrant amount. */
-const MAX_ITERATIONS = 100;
 
 /** The titrant amount that brings a composition to a target pH. */
 export interface TitrantAmount {
@@ -137,29 +134,28 @@ export function titrantForPh(composition: Composition, titrant: Titrant, targetP
 
 function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: string, targetPh: number): TitrantAmount {
   const aH = Math.pow(10, -targetPh);
-  let ionicStrength = p.strongIonicStrength;
-  for (let it = 1; it <= MAX_ITERATIONS; it++) {
-    const lnG = -p.a * ionicStrengthFactor(p.model, ionicStrength) * Math.LN10;
+  let c = 0;
+  let q = 0;
+  let iterations = 0;
+  // A negative amount mid-iteration may still turn positive as I settles; the sign is judged at the end.
+  const speciesIonicStrength = (ionicStrengthM: number) => {
+    iterations++;
+    const lnG = -p.a * ionicStrengthFactor(p.model, ionicStrengthM) * Math.LN10;
     const base = chargeAt(p, aH, lnG);
-    let q = t.strongCharge;
+    q = t.strongCharge;
     let i2t = 2 * t.strongHalfZ2;
     if (t.perMole > 0) {
       const m = systemCharge(t.ka, t.zd, 0, t.ka.length, t.z0, aH, lnG);
       q += t.perMole * m.q;
       i2t += t.perMole * m.q2;
     }
-    const c = q === 0 ? Infinity : -base.f / q;
+    c = q === 0 ? Infinity : -base.f / q;
     if (!Number.isFinite(c) || Math.abs(c) > MAX_CONCENTRATION_M) throw unreachable(p, name, targetPh, q, c);
-    // A negative amount mid-iteration may still turn positive as I settles; judge the sign at convergence.
-    const next = p.strongIonicStrength + 0.5 * (base.i2 + Math.abs(c) * i2t);
-    const converged = p.model === 'ideal' || Math.abs(next - ionicStrength) <= IONIC_STRENGTH_TOLERANCE * next + 1e-14 * (p.ionicStrengthScale + Math.abs(c));
-    ionicStrength = next;
-    if (converged) {
-      if (c < 0) throw unreachable(p, name, targetPh, q, c);
-      return { concentrationM: c, ionicStrengthM: ionicStrength, chargePerMole: q, iterations: it };
-    }
-  }
-  throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The titrant amount', MAX_ITERATIONS));
+    return Math.max(0, p.strongIonicStrength + 0.5 * (base.i2 + Math.abs(c) * i2t));
+  };
+  const ionicStrength = p.model === 'ideal' ? speciesIonicStrength(0) : selfConsistentIonicStrength(p.strongIonicStrength, speciesIonicStrength, p.ionicStrengthScale + 1, 'The titrant amount');
+  if (c < 0) throw unreachable(p, name, targetPh, q, c);
+  return { concentrationM: c, ionicStrengthM: ionicStrength, chargePerMole: q, iterations };
 }
 
 /**
@@ -169,16 +165,15 @@ function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: 
  */
 export function netStrongBaseForPh(p: PreparedComposition, pH: number): number {
   const aH = Math.pow(10, -pH);
-  let ionicStrength = p.strongIonicStrength;
-  for (let it = 1; it <= MAX_ITERATIONS; it++) {
-    const base = chargeAt(p, aH, -p.a * ionicStrengthFactor(p.model, ionicStrength) * Math.LN10);
-    const c = -base.f;
-    const next = p.strongIonicStrength + 0.5 * (base.i2 + Math.abs(c));
-    const converged = p.model === 'ideal' || Math.abs(next - ionicStrength) <= IONIC_STRENGTH_TOLERANCE * next + 1e-14 * (p.ionicStrengthScale + Math.abs(c));
-    ionicStrength = next;
-    if (converged) return c;
-  }
-  throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The strong-base equivalent', MAX_ITERATIONS));
+  let c = 0;
+  const speciesIonicStrength = (ionicStrengthM: number) => {
+    const base = chargeAt(p, aH, -p.a * ionicStrengthFactor(p.model, ionicStrengthM) * Math.LN10);
+    c = -base.f;
+    return p.strongIonicStrength + 0.5 * (base.i2 + Math.abs(c));
+  };
+  if (p.model === 'ideal') speciesIonicStrength(0);
+  else selfConsistentIonicStrength(p.strongIonicStrength, speciesIonicStrength, p.ionicStrengthScale + 1, 'The strong-base equivalent');
+  return c;
 }
 
 function unreachable(p: PreparedComposition, name: string, targetPh: number, q: number, c: number): ChemError {
