@@ -5,7 +5,7 @@
 import { ActivityModel, parseActivityModel } from './activity';
 import { ChemError, MESSAGES, requireInteger, requireNumber } from './errors';
 import { findStrongIon } from './strongIons';
-import { pKaAt } from './vantHoff';
+import { lnKaAt, vantHoffTerms } from './vantHoff';
 import { debyeHuckelA, pKw } from './water';
 
 /** One proton-dissociation step of an acid–base system, constants at 25 °C and I = 0. */
@@ -64,13 +64,13 @@ export interface PreparedComposition {
   /** Thermodynamic Kw at the temperature. */
   readonly kw: number;
   /** Per system: total (mol/L), charge of the most protonated form, index of its first step, number of steps. */
-  readonly totals: Float64Array;
-  readonly z0: Float64Array;
-  readonly firstStep: Int32Array;
-  readonly stepCount: Int32Array;
+  readonly totals: readonly number[];
+  readonly z0: readonly number[];
+  readonly firstStep: readonly number[];
+  readonly stepCount: readonly number[];
   /** Per step: thermodynamic Ka at the temperature, and 2·z(HA) − 1 (the z² difference between acid and base). */
-  readonly ka: Float64Array;
-  readonly zSquaredDiff: Float64Array;
+  readonly ka: readonly number[];
+  readonly zSquaredDiff: readonly number[];
   /** Σ z·c of strong ions (mol/L) and ½ Σ z²·c of strong ions (mol/L). */
   readonly strongCharge: number;
   readonly strongIonicStrength: number;
@@ -141,27 +141,28 @@ export function prepare(composition: Composition): PreparedComposition {
     stepTotal += systems[j].steps.length;
   }
 
-  const totals = new Float64Array(n);
-  const z0 = new Float64Array(n);
-  const firstStep = new Int32Array(n);
-  const stepCount = new Int32Array(n);
-  const ka = new Float64Array(stepTotal);
-  const zSquaredDiff = new Float64Array(stepTotal);
+  // Plain arrays: for the handful of entries a buffer has they allocate several times faster than typed arrays.
+  const totals: number[] = [];
+  const z0: number[] = [];
+  const firstStep: number[] = [];
+  const stepCount: number[] = [];
+  const ka: number[] = [];
+  const zSquaredDiff: number[] = [];
+  const terms = vantHoffTerms(temperatureC);
   let s = 0;
   let ionicStrengthScale = 1e-7;
   for (let j = 0; j < n; j++) {
     const sys = systems[j];
-    totals[j] = sys.totalM;
-    z0[j] = sys.chargeOfMostProtonated;
-    firstStep[j] = s;
-    stepCount[j] = sys.steps.length;
+    totals.push(sys.totalM);
+    z0.push(sys.chargeOfMostProtonated);
+    firstStep.push(s);
+    stepCount.push(sys.steps.length);
     const zMax = Math.max(Math.abs(sys.chargeOfMostProtonated), Math.abs(sys.chargeOfMostProtonated - sys.steps.length));
     ionicStrengthScale += 0.5 * sys.totalM * zMax * zMax;
     for (let k = 0; k < sys.steps.length; k++, s++) {
       const step = sys.steps[k];
-      const pka = temperatureC === 25 ? step.pKa : pKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, temperatureC);
-      ka[s] = Math.pow(10, -pka);
-      zSquaredDiff[s] = 2 * (sys.chargeOfMostProtonated - k) - 1;
+      ka.push(Math.exp(lnKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, terms)));
+      zSquaredDiff.push(2 * (sys.chargeOfMostProtonated - k) - 1);
     }
   }
 

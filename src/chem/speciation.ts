@@ -44,7 +44,7 @@ let evDI2 = 0;
  * Charge balance f, its derivative df/d ln a_H, and 2·I of all non-strong species, at a_H.
  * `kp` are the mixed constants at the current ionic strength; `g1` is γ of a 1-charge ion.
  */
-function evaluate(p: PreparedComposition, kp: Float64Array, aH: number, g1: number): void {
+function evaluate(p: PreparedComposition, kp: number[], aH: number, g1: number): void {
   const hc = aH / g1;
   const ohc = p.kw / (aH * g1);
   let f = p.strongCharge + hc - ohc;
@@ -94,7 +94,7 @@ function evaluate(p: PreparedComposition, kp: Float64Array, aH: number, g1: numb
 }
 
 /** Sets the mixed constants for an ionic strength; returns γ₁. */
-function conditionalConstants(p: PreparedComposition, ionicStrengthM: number, kp: Float64Array): number {
+function conditionalConstants(p: PreparedComposition, ionicStrengthM: number, kp: number[]): number {
   const lnG = -p.a * ionicStrengthFactor(p.model, ionicStrengthM) * Math.LN10;
   const ka = p.ka;
   const zd = p.zSquaredDiff;
@@ -103,7 +103,7 @@ function conditionalConstants(p: PreparedComposition, ionicStrengthM: number, kp
 }
 
 /** Solves f(x) = 0 at fixed constants from a warm start; returns x = ln a_H and counts iterations. */
-function solveChargeBalance(p: PreparedComposition, kp: Float64Array, g1: number, x0: number, counter: { n: number }): number {
+function solveChargeBalance(p: PreparedComposition, kp: number[], g1: number, x0: number, counter: { n: number }): number {
   let lo = LN_AH_MIN;
   let hi = LN_AH_MAX;
   let loChecked = false;
@@ -150,7 +150,7 @@ export interface EquilibriumState {
   /** Activity coefficient of a singly charged ion at that ionic strength. */
   readonly gamma1: number;
   /** Mixed constants K′ per step at that ionic strength (a_H·[A]/[HA]). */
-  readonly mixedKa: Float64Array;
+  readonly mixedKa: readonly number[];
   /** Charge-balance evaluations made, and ionic-strength updates made. */
   readonly evaluations: number;
   readonly ionicStrengthIterations: number;
@@ -161,7 +161,7 @@ export interface EquilibriumState {
  * Throws ChemError (no-convergence, infeasible-target).
  */
 export function solvePrepared(p: PreparedComposition, guessPh = 7): EquilibriumState {
-  const kp = new Float64Array(p.ka.length);
+  const kp: number[] = new Array<number>(p.ka.length).fill(0);
   const counter = { n: 0 };
   let x = -guessPh * Math.LN10;
   let g1 = 1;
@@ -288,7 +288,7 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
       totalM: sys.totalM,
       meanCharge,
       fractions,
-      apparentPKa: Array.from(state.mixedKa.subarray(first, first + n), (k) => -Math.log10(k)),
+      apparentPKa: state.mixedKa.slice(first, first + n).map((k) => -Math.log10(k)),
     });
   });
   const warnings = [...p.warnings];

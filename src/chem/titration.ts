@@ -53,8 +53,8 @@ export interface TitrantAmount {
 interface PreparedTitrant {
   readonly strongCharge: number;
   readonly strongHalfZ2: number;
-  readonly ka: Float64Array;
-  readonly zd: Float64Array;
+  readonly ka: readonly number[];
+  readonly zd: readonly number[];
   readonly z0: number;
   readonly perMole: number;
 }
@@ -69,11 +69,11 @@ function prepareTitrant(titrant: Titrant, temperatureC: number): PreparedTitrant
     strongHalfZ2 += 0.5 * ion.charge * ion.charge * perMole;
   }
   const sys = titrant.system;
-  if (!sys) return { strongCharge, strongHalfZ2, ka: new Float64Array(0), zd: new Float64Array(0), z0: 0, perMole: 0 };
+  if (!sys) return { strongCharge, strongHalfZ2, ka: [], zd: [], z0: 0, perMole: 0 };
   validateChemistry('titrant.system', sys);
   const perMole = titrant.systemPerMole === undefined ? 1 : requireNumber('titrant.systemPerMole', titrant.systemPerMole, 0, 10);
-  const ka = new Float64Array(sys.steps.length);
-  const zd = new Float64Array(sys.steps.length);
+  const ka: number[] = [];
+  const zd: number[] = [];
   sys.steps.forEach((step, k) => {
     ka[k] = Math.pow(10, -pKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, temperatureC));
     zd[k] = 2 * (sys.chargeOfMostProtonated - k) - 1;
@@ -100,7 +100,7 @@ function chargeAt(p: PreparedComposition, aH: number, lnG: number): { f: number;
 }
 
 /** Mean charge and mean squared charge per molecule of one system at a_H and ln γ₁ (summed species by species, as in the solver). */
-function systemCharge(ka: Float64Array, zd: Float64Array, first: number, steps: number, z: number, aH: number, lnG: number): { q: number; q2: number } {
+function systemCharge(ka: readonly number[], zd: readonly number[], first: number, steps: number, z: number, aH: number, lnG: number): { q: number; q2: number } {
   let t = 1;
   let sum = 1;
   let q = z;

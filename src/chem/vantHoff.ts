@@ -21,11 +21,28 @@ import { GAS_CONSTANT, KELVIN_OFFSET, REFERENCE_TEMPERATURE_K } from './water';
  * @example pKaAt(8.072, 47.45, -59, 37) // ≈ 7.77 (tris)
  */
 export function pKaAt(pKa25: number, deltaHkJ: number, deltaCpJ: number, temperatureC: number): number {
+  return -lnKaAt(pKa25, deltaHkJ, deltaCpJ, vantHoffTerms(temperatureC)) / Math.LN10;
+}
+
+/** The temperature parts of the van 't Hoff equation, shared by every step at one temperature. */
+export interface VantHoffTerms {
+  /** (1/T − 1/θ)/R, mol/J. */
+  readonly enthalpyTerm: number;
+  /** (θ/T − 1 + ln(T/θ))/R, mol K/J. */
+  readonly heatCapacityTerm: number;
+}
+
+/** Computes the temperature parts once, so that each step costs a multiply-add (see pKaAt). */
+export function vantHoffTerms(temperatureC: number): VantHoffTerms {
   const t = temperatureC + KELVIN_OFFSET;
   const theta = REFERENCE_TEMPERATURE_K;
-  const lnK =
-    -pKa25 * Math.LN10 -
-    ((deltaHkJ * 1000) / GAS_CONSTANT) * (1 / t - 1 / theta) +
-    (deltaCpJ / GAS_CONSTANT) * (theta / t - 1 + Math.log(t / theta));
-  return -lnK / Math.LN10;
+  return {
+    enthalpyTerm: (1 / t - 1 / theta) / GAS_CONSTANT,
+    heatCapacityTerm: (theta / t - 1 + Math.log(t / theta)) / GAS_CONSTANT,
+  };
+}
+
+/** ln Ka at the temperature of `terms` (see pKaAt for the method). */
+export function lnKaAt(pKa25: number, deltaHkJ: number, deltaCpJ: number, terms: VantHoffTerms): number {
+  return -pKa25 * Math.LN10 - deltaHkJ * 1000 * terms.enthalpyTerm + deltaCpJ * terms.heatCapacityTerm;
 }
