@@ -3,12 +3,14 @@
  * figures compare from run to run. Calls are timed in batches of 100 (one clock read per
  * call would cost as much as the call); the per-call figure of each batch is a sample.
  *
- * Run: npm run bench
+ * Run: npm run bench (compiled with tsc and run with node, as shipped code runs)
  */
 import { Composition, HYDROCHLORIC_ACID, capacity, speciate, solvePh, titrantForPh } from '../src/chem';
+import { measure } from './measure';
 
 const CALLS = 100_000;
 const BATCH = 100;
+const run = (label: string, fn: () => unknown) => measure(label, fn, CALLS, BATCH);
 
 /** Constants as in test/chem/fixtures.ts (Goldberg et al. 2002, from memory). */
 const acetate = { name: 'acetate', chargeOfMostProtonated: 0, steps: [{ pKa: 4.756, deltaHkJ: -0.41, deltaCpJ: -142 }] };
@@ -20,24 +22,10 @@ const oneSystem: Composition = { systems: [{ ...acetate, totalM: 0.05 }], strong
 const twoSystems: Composition = { systems: [{ ...phosphate, totalM: 0.02 }, { ...tris, totalM: 0.025 }], strongIons: { 'Na+': 0.18, 'Cl-': 0.15, 'K+': 0.005 }, temperatureC: 4 };
 const threeSystems: Composition = { systems: [{ ...citrate, totalM: 0.01 }, { ...phosphate, totalM: 0.02 }, { ...tris, totalM: 0.02 }], strongIons: { 'Na+': 0.2, 'Cl-': 0.15, 'Mg2+': 0.002 }, temperatureC: 37 };
 
-function measure(label: string, fn: () => unknown, calls = CALLS): void {
-  for (let i = 0; i < 2000; i++) fn(); // warm up the JIT
-  const samples: number[] = [];
-  for (let b = 0; b < calls / BATCH; b++) {
-    const t0 = process.hrtime.bigint();
-    for (let i = 0; i < BATCH; i++) fn();
-    samples.push(Number(process.hrtime.bigint() - t0) / 1000 / BATCH);
-  }
-  samples.sort((a, b) => a - b);
-  const median = samples[Math.floor(samples.length / 2)];
-  const p95 = samples[Math.floor(samples.length * 0.95)];
-  console.log(`${label.padEnd(58)} median ${median.toFixed(2).padStart(7)} µs   p95 ${p95.toFixed(2).padStart(7)} µs   (${calls} calls)`);
-}
-
 console.log(`Proton Ledger solver bench — node ${process.version}, ${new Date().toISOString()}`);
-measure('pH only, 1 system + salts (acetate, NaCl, 20 °C)', () => solvePh(oneSystem));
-measure('pH only, 2 systems + salts (phosphate, tris, 4 °C)', () => solvePh(twoSystems));
-measure('pH only, 3 systems + salts (citrate, phosphate, tris)', () => solvePh(threeSystems));
-measure('full speciation report, 2 systems + salts', () => speciate(twoSystems));
-measure('titrant amount (HCl to pH 7.4), 2 systems + salts', () => titrantForPh(twoSystems, HYDROCHLORIC_ACID, 7.4));
-measure('capacity (β and mM per 0.1 pH), 2 systems + salts', () => capacity(twoSystems));
+run('pH only, 1 system + salts (acetate, NaCl, 20 °C)', () => solvePh(oneSystem));
+run('pH only, 2 systems + salts (phosphate, tris, 4 °C)', () => solvePh(twoSystems));
+run('pH only, 3 systems + salts (citrate, phosphate, tris)', () => solvePh(threeSystems));
+run('full speciation report, 2 systems + salts', () => speciate(twoSystems));
+run('titrant amount (HCl to pH 7.4), 2 systems + salts', () => titrantForPh(twoSystems, HYDROCHLORIC_ACID, 7.4));
+run('capacity (β and mM per 0.1 pH), 2 systems + salts', () => capacity(twoSystems));

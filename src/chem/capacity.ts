@@ -2,7 +2,7 @@
  * Buffer capacity, and how the pH answers to a load of acid or base, dilution and
  * temperature.
  */
-import { Composition, prepare } from './composition';
+import { Composition, PreparedComposition, prepare } from './composition';
 import { requireNumber } from './errors';
 import { SpeciationResult, speciate, solvePrepared } from './speciation';
 import { netStrongBaseForPh } from './titration';
@@ -35,7 +35,17 @@ export interface Capacity {
  */
 export function capacity(composition: Composition): Capacity {
   const p = prepare(composition);
-  const pH = solvePrepared(p).pH;
+  return capacityOfPrepared(p, solvePrepared(p).pH);
+}
+
+/**
+ * Buffer capacity of a prepared composition whose pH is already known (saves a solve
+ * where the caller has one; see capacity for the method).
+ *
+ * @param p - the prepared composition
+ * @param pH - its solved pH
+ */
+export function capacityOfPrepared(p: PreparedComposition, pH: number): Capacity {
   const at = (x: number) => netStrongBaseForPh(p, x);
   const here = at(pH);
   const beta = (at(pH + CAPACITY_STEP_PH) - at(pH - CAPACITY_STEP_PH)) / (2 * CAPACITY_STEP_PH);

@@ -13,7 +13,7 @@ export { chargeLabel, report, solvePh, solvePrepared, speciate } from './speciat
 export type { SpeciationResult, SpeciesAmount, SystemSpeciation } from './speciation';
 export { HYDROCHLORIC_ACID, SODIUM_HYDROXIDE, titrantForPh, withTitrant, netStrongBaseForPh } from './titration';
 export type { Titrant, TitrantAmount } from './titration';
-export { afterDilution, afterLoad, atTemperature, capacity, idealCapacityAt, scaleComposition } from './capacity';
+export { afterDilution, afterLoad, atTemperature, capacity, capacityOfPrepared, idealCapacityAt, scaleComposition } from './capacity';
 export type { AcidBaseLoad, Capacity } from './capacity';
 export { idealOsmolarity } from './osmolarity';
 export { pKaAt } from './vantHoff';

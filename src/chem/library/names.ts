@@ -28,6 +28,21 @@ const HYDRATE_WORDS: Readonly<Record<string, number>> = {
  * @example nameKey('Na2HPO4 x 7H2O') // 'na2hpo4·7h2o', as for 'Na2HPO4*7H2O' and 'Na2HPO4·7H2O'
  */
 export function nameKey(name: string): string {
+  const cached = KEY_CACHE.get(name);
+  if (cached !== undefined) return cached;
+  const key = computeNameKey(name);
+  // Names repeat (every recipe looks up the same few), so keys are remembered; the cache is
+  // emptied when full so that a long session cannot grow it without bound.
+  if (KEY_CACHE.size >= KEY_CACHE_LIMIT) KEY_CACHE.clear();
+  KEY_CACHE.set(name, key);
+  return key;
+}
+
+/** Most names whose keys are remembered at once. */
+const KEY_CACHE_LIMIT = 5000;
+const KEY_CACHE = new Map<string, string>();
+
+function computeNameKey(name: string): string {
   let s = name.normalize('NFKC').toLowerCase().trim();
   s = s.replace(/[•∙⋅*×]/g, '·');
   s = s.replace(/([a-z)\]\d])\s*[x·]\s*(\d+(?:\.\d+)?)?\s*h2o\b/g, (_m, before: string, n?: string) => `${before}·${n ?? '1'}h2o`);

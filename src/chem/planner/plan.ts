@@ -13,15 +13,15 @@
  * osmolarity rise with salt), re-solving the titrant at each step.
  */
 import { ActivityModel, parseActivityModel } from '../activity';
-import { capacity, scaleComposition } from '../capacity';
-import { AcidBaseSystem, Composition } from '../composition';
+import { capacityOfPrepared, scaleComposition } from '../capacity';
+import { AcidBaseSystem, Composition, prepare } from '../composition';
 import { ChemError, MESSAGES, requireNumber } from '../errors';
 import { SOURCES } from '../library/sources';
 import { LibraryForm, SubstanceRecord } from '../library/types';
 import { SubstanceLibrary, chemistryOf, defaultLibrary } from '../library/lookup';
 import { nameKey } from '../library/names';
 import { idealOsmolarity } from '../osmolarity';
-import { speciate, solvePh } from '../speciation';
+import { report, speciate, solvePh, solvePrepared } from '../speciation';
 import { findStrongIon } from '../strongIons';
 import { MAX_TARGET_PH, MIN_TARGET_PH, Titrant, titrantForPh, withTitrant } from '../titration';
 import { pKaAt } from '../vantHoff';
@@ -103,8 +103,10 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const meterPh = solvePh({ ...scaleComposition(made.composition, 1 / s.partFraction), temperatureC: s.benchT });
   const titration = made.titrant ? titrationPlan(s, made, madeVolumeL) : undefined;
 
-  const result = speciate(finished);
-  const cap = capacity(finished);
+  const prepared = prepare(finished);
+  const state = solvePrepared(prepared, s.targetPh);
+  const result = report(prepared, state, finished);
+  const cap = capacityOfPrepared(prepared, state.pH);
   const warnings = [...result.warnings];
   const predictions = {
     useTemperatureC: s.useT,
@@ -168,11 +170,16 @@ function settle(input: RecipeInput, library: SubstanceLibrary): Settled {
   if (input === null || typeof input !== 'object') {
     throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('recipe', 'a recipe input object'), 'recipe', 'an object');
   }
-  const strong = library.records().find((r) => r.kind === 'strong' && [r.name, ...r.aliases].some((n) => nameKey(n) === nameKey(String(input.buffer))));
-  if (strong) {
+  let system: SubstanceRecord;
+  try {
+    system = library.findSystem(input.buffer);
+  } catch (e) {
+    // A strong electrolyte (NaCl, HCl) named as the buffer gets a message that says so.
+    const key = typeof input.buffer === 'string' ? nameKey(input.buffer) : '';
+    const strong = library.records().find((r) => r.kind === 'strong' && [r.name, ...r.aliases].some((n) => nameKey(n) === key));
+    if (!strong) throw e;
     throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('buffer', input.buffer, 'an acid–base buffer system (this is a strong electrolyte: add it as a salt)'), 'buffer', 'an acid–base buffer system');
   }
-  const system = library.findSystem(input.buffer);
   if (system.kind !== 'acid-base') {
     throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('buffer', input.buffer, 'an acid–base buffer system'), 'buffer', 'an acid–base buffer system');
   }
@@ -377,12 +384,13 @@ function titrationPlan(s: Settled, made: RouteResult, volumeL: number): Titratio
   const t = made.titrant!;
   const volumeMl = ((t.concentrationM * volumeL) / t.stock.concentrationM) * 1000;
   const u = Math.max(...s.system.steps.map((step) => step.pKaUncertainty ?? DEFAULT_PKA_UNCERTAINTY));
-  // The amount needed with every pKa of the buffer moved by ±u.
+  // The amount needed with every pKa of the buffer moved by ±u, to the pH the made solution has.
   const before = t.before;
+  const madePh = s.route === 'stock' ? solvePh(made.composition) : s.targetPh;
   const amounts = [-u, u].map((shift) => {
     const shifted = shiftSystem(before, s.system.name, shift);
     try {
-      return titrantForPh(shifted, t.titrant, solvePh(made.composition)).concentrationM;
+      return titrantForPh(shifted, t.titrant, madePh).concentrationM;
     } catch {
       return 0;
     }
@@ -394,7 +402,7 @@ function titrationPlan(s: Settled, made: RouteResult, volumeL: number): Titratio
   return {
     titrant: t.form.name,
     stockM: t.stock.concentrationM,
-    direction: t.titrant.system ? (solvePh(made.composition) > solvePh(before) ? 'raises' : 'lowers') : chargeOf(t.titrant) > 0 ? 'raises' : 'lowers',
+    direction: t.titrant.system ? (madePh > solvePh(before) ? 'raises' : 'lowers') : chargeOf(t.titrant) > 0 ? 'raises' : 'lowers',
     volumeMl,
     lowMl,
     highMl,
