@@ -1,8 +1,8 @@
 /**
  * Acid–base systems used by the core's tests, with constants from Goldberg, Kishore &
- * Lennen, J. Phys. Chem. Ref. Data 31 (2002) 231, table of recommended values (25 °C,
- * I = 0). Written from memory of that table; the substance library's tests check the
- * same numbers against the source as transcribed there.
+ * Lennen, J. Phys. Chem. Ref. Data 31 (2002) 231, table of selected values (25 °C,
+ * I = 0). Written from memory of that table, except where a line says it was checked; the
+ * substance library (src/chem/library) records which values were checked against a copy.
  */
 import type { AcidBaseChemistry } from '../../src/chem';
 
@@ -16,12 +16,12 @@ export const PHTHALATE: AcidBaseChemistry = {
   ],
 };
 
-/** Phosphoric acid: pKa 2.148, 7.198, 12.35; ΔH° 8.0, 3.6, 16.0 kJ/mol; ΔCp° −141, −230, −242. Goldberg et al. 2002 (memory). */
+/** Phosphoric acid: pKa 2.148, 7.198, 12.35; ΔH° −8.0, 3.6, 16.0 kJ/mol; ΔCp° −141, −230, −242. Goldberg et al. 2002, as checked against a transcription in the substance library. */
 export const PHOSPHATE: AcidBaseChemistry = {
   name: 'phosphate',
   chargeOfMostProtonated: 0,
   steps: [
-    { pKa: 2.148, deltaHkJ: 8.0, deltaCpJ: -141 },
+    { pKa: 2.148, deltaHkJ: -8.0, deltaCpJ: -141 },
     { pKa: 7.198, deltaHkJ: 3.6, deltaCpJ: -230 },
     { pKa: 12.35, deltaHkJ: 16.0, deltaCpJ: -242 },
   ],
