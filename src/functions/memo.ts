@@ -36,8 +36,8 @@ export class Lru<V> {
 /** An outcome kept in the cache: a value, or the error it raised. */
 type Outcome = { readonly ok: true; readonly value: unknown } | { readonly ok: false; readonly error: unknown };
 
-/** Calls remembered per process: enough for a what-if table, small enough to stay cheap. */
-export const CALL_CACHE_SIZE = 2000;
+/** Calls remembered per process: a 100 × 100 what-if table recalculates from memory; a few MB at most. */
+export const CALL_CACHE_SIZE = 10000;
 
 const calls = new Lru<Outcome>(CALL_CACHE_SIZE);
 
