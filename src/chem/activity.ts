@@ -57,3 +57,19 @@ export function parseActivityModel(field: string, value: unknown): ActivityModel
   }
   return found;
 }
+
+/**
+ * Apparent (mixed) pKa′ of one step at an ionic strength, for use with pH = −log a(H⁺):
+ * pK′ = pKa + log γ(A) − log γ(HA), with A one charge below HA (SCIENCE.md).
+ *
+ * @param model - activity model
+ * @param pKa - thermodynamic pKa at the temperature
+ * @param chargeOfAcid - charge of the acid form HA of this step
+ * @param ionicStrengthM - ionic strength, mol/L
+ * @param a - Debye–Hückel A at the temperature
+ * @returns pKa′
+ * @example apparentPKa('davies', 7.198, -1, 0.1, 0.5108) // ≈ 6.877 (phosphate step 2 falls with I)
+ */
+export function apparentPKa(model: ActivityModel, pKa: number, chargeOfAcid: number, ionicStrengthM: number, a: number): number {
+  return pKa + log10Gamma(model, chargeOfAcid - 1, ionicStrengthM, a) - log10Gamma(model, chargeOfAcid, ionicStrengthM, a);
+}

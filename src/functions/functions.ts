@@ -10,9 +10,8 @@
  * `=PROTON.PH(A2:B4)`.
  */
 /* eslint-disable @typescript-eslint/no-explicit-any -- `any` is how custom-functions metadata spells a cell of any type */
-import { capacity, idealOsmolarity, log10Gamma, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
-import type { Titrant } from '../chem';
-import { chemistryOf } from '../chem/library';
+import { apparentPKa, capacity, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
+import { titrantFromForm } from '../chem/library';
 import { toActivityModel, toChoice, toNumber, toPurity, toTemperature, toText } from './coerce';
 import { compositionFrom, MAX_AMOUNT_MM } from './composition';
 import { SheetError, invalid } from './errors';
@@ -82,14 +81,7 @@ export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, t
     const target = toNumber('targetPh', targetPh, { min: 0, max: 14, allowed: '0 to 14' });
     const stockM = toNumber('titrantConcentrationM', titrantConcentrationM, { min: Number.MIN_VALUE, max: 20, allowed: 'above 0 up to 20 mol/L' });
     const composition = compositionFrom(s.library, [[formName, mM]], s.temperatureC, s.model);
-    const titrantForm = s.library.findForm(toText('titrant', titrant));
-    if (titrantForm.adds.length > 1) throw invalid(SHEET_MESSAGES.notATitrant('titrant', titrantForm.name));
-    const portion = titrantForm.adds[0];
-    const t: Titrant = {
-      name: titrantForm.name,
-      strongIons: titrantForm.counterIons,
-      ...(portion ? { system: chemistryOf(s.library.findSystem(portion.system)), systemPerMole: portion.moles } : {}),
-    };
+    const t = titrantFromForm(s.library.findForm(toText('titrant', titrant)), s.library);
     const ml = (titrantForPh(composition, t, target).concentrationM * volumeMl) / stockM;
     if (ml > volumeMl) throw new SheetError('na', SHEET_MESSAGES.titrantExceedsVolume(ml, volumeMl));
     return ml;
@@ -172,10 +164,8 @@ export function pka(substance: any, step?: any, temperatureC?: any, ionicStrengt
     const k = toNumber('step', step, { default: 1, min: 1, max: record.steps.length, integer: true, allowed: `whole numbers 1 to ${record.steps.length}` });
     const ionicStrengthM = toNumber('ionicStrengthMm', ionicStrengthMm, { default: 0, min: 0, max: MAX_IONIC_STRENGTH_MM, allowed: `0 to ${MAX_IONIC_STRENGTH_MM} mM` }) / 1000;
     const st = record.steps[k - 1];
-    const a = debyeHuckelA(s.temperatureC);
-    const acidCharge = record.chargeOfMostProtonated - (k - 1);
-    // pK′ = pKa(T) + log γ(A) − log γ(HA) (SCIENCE.md, ionic-strength dependence).
-    return pKaAt(st.pKa, st.deltaHkJ ?? 0, st.deltaCpJ ?? 0, s.temperatureC) + log10Gamma(s.model, acidCharge - 1, ionicStrengthM, a) - log10Gamma(s.model, acidCharge, ionicStrengthM, a);
+    const pKa = pKaAt(st.pKa, st.deltaHkJ ?? 0, st.deltaCpJ ?? 0, s.temperatureC);
+    return apparentPKa(s.model, pKa, record.chargeOfMostProtonated - (k - 1), ionicStrengthM, debyeHuckelA(s.temperatureC));
   });
 }
 

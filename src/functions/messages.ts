@@ -20,8 +20,6 @@ export const SHEET_MESSAGES = {
     `${argument}: ${describe(value)} is not one of the choices; allowed: ${allowed.map((a) => `"${a}"`).join(', ')}.`,
   badPurity: (value: unknown) =>
     `purity is ${describe(value)}; allowed: a fraction above 0 up to 1 (0.995), a percentage above 1 up to 100 (99.5), or text such as "99.5%".`,
-  notATitrant: (argument: string, form: string) =>
-    `${argument}: "${form}" cannot serve as a titrant (it adds more than one acid–base system).`,
   noSuchStep: (argument: string, substance: string, step: unknown, steps: number) =>
     `${argument} is ${describe(step)}, but ${substance} has ${steps} step(s); allowed: whole numbers 1 to ${steps}.`,
   tooManySpecies: (count: number, rows: number) =>

@@ -21,3 +21,4 @@ export {
 } from './lookup';
 export type { CompositionOptions, FormAmount, FormContribution, SubstanceLibrary, SubstanceListing } from './lookup';
 export type { UserForm, UserSubstance } from './userSubstances';
+export { titrantFromForm } from './titrant';

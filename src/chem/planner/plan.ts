@@ -18,7 +18,8 @@ import { AcidBaseSystem, Composition, prepare } from '../composition';
 import { ChemError, MESSAGES, requireNumber } from '../errors';
 import { SOURCES } from '../library/sources';
 import { LibraryForm, SubstanceRecord } from '../library/types';
-import { SubstanceLibrary, chemistryOf, defaultLibrary } from '../library/lookup';
+import { SubstanceLibrary, defaultLibrary } from '../library/lookup';
+import { titrantFromForm } from '../library/titrant';
 import { nameKey } from '../library/names';
 import { idealOsmolarity } from '../osmolarity';
 import { report, speciate, solvePh, solvePrepared } from '../speciation';
@@ -232,19 +233,6 @@ function weighedForm(s: Settled): LibraryForm {
   return requireFormOf('form', plain?.name, s);
 }
 
-/** A titrant from a form: its counter-ions, and its acid–base system if it has one. */
-function titrantOf(form: LibraryForm, library: SubstanceLibrary): Titrant {
-  if (form.adds.length > 1) {
-    throw new ChemError('invalid-input', 'notATitrant', MESSAGES.notATitrant('titrant.form', form.name), 'titrant.form', 'a strong acid or base, or a form of one weak acid or base');
-  }
-  const portion = form.adds[0];
-  return {
-    name: form.name,
-    strongIons: form.counterIons,
-    ...(portion ? { system: chemistryOf(library.findSystem(portion.system)), systemPerMole: portion.moles } : {}),
-  };
-}
-
 /** The starting composition: the weighed forms and salts at the temperature of use. */
 function baseComposition(s: Settled, items: readonly { form: LibraryForm; concentrationM: number }[], saltTargetM: number): Composition {
   const all = [...items, ...s.salts];
@@ -284,7 +272,7 @@ function chooseTitrant(s: Settled, start: Composition): Omit<NonNullable<RouteRe
     const form = s.library.findForm(stock.form);
     const concentrationM = requireNumber('titrant.concentrationM', stock.concentrationM, 1e-6, 30, '0.000001 to 30 mol/L');
     const tolerancePercent = requireNumber('titrant.tolerancePercent', stock.tolerancePercent ?? DEFAULT_STOCK_TOLERANCE_PERCENT, 0, 50, '0 to 50 %');
-    const titrant = titrantOf(form, s.library);
+    const titrant = titrantFromForm(form, s.library, 'titrant.form');
     try {
       const amount = titrantForPh(start, titrant, s.targetPh);
       return { form, titrant, concentrationM: amount.concentrationM, stock: { concentrationM, tolerancePercent } };
