@@ -12,7 +12,9 @@
 /* eslint-disable @typescript-eslint/no-explicit-any -- `any` is how custom-functions metadata spells a cell of any type */
 import { apparentPKa, capacity, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
 import { titrantFromForm } from '../chem/library';
-import { toActivityModel, toChoice, toNumber, toPurity, toTemperature, toText } from './coerce';
+import { isBlank, isBlankRange, toActivityModel, toChoice, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
+import { DEFAULT_PART_VOLUME_FRACTION, RecipeInput, planRecipe } from '../chem/planner';
+import { formatMl } from '../chem/planner/protocol';
 import { compositionFrom, MAX_AMOUNT_MM } from './composition';
 import { SheetError, invalid } from './errors';
 import { memoised } from './memo';
@@ -282,6 +284,152 @@ function padColumn(names: readonly string[], rows: number): string[][] {
   return out;
 }
 
+/** Columns of RECIPE.ROW, in order; a recipe table's header row. */
+export const RECIPE_ROW_HEADER = [
+  'form (g)',
+  'titrant (mL)',
+  'titrant low (mL)',
+  'titrant high (mL)',
+  'meter reads (pH)',
+  'pH at use',
+  'base per 0.1 pH (mM)',
+  'acid per 0.1 pH (mM)',
+  'ionic strength (mM)',
+  'ideal osmolarity (mOsm/L)',
+  'warnings',
+] as const;
+
+/** Rows of the RECIPE sheet: fixed, so every host knows the spill size before computing. */
+export const RECIPE_TABLE_ROWS = 48;
+/** Columns of the RECIPE sheet. */
+export const RECIPE_TABLE_HEADER = ['section', 'item', 'value', 'unit'] as const;
+
+/** The planner input a RECIPE or RECIPE.ROW call describes. */
+function recipeInput(
+  buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form: any, titrant: any, titrantConcentrationM: any,
+  useTemperatureC: any, benchTemperatureC: any, partVolumeFraction: any, salts: any, activityModel: any, twoFormsAllowed: boolean,
+): RecipeInput {
+  const useT = toTemperature('useTemperatureC', useTemperatureC);
+  const formText = isBlank(form) ? undefined : toText('form', form);
+  const pair = formText?.split(/\s+\+\s+/);
+  const twoForms = pair !== undefined && pair.length === 2;
+  if (twoForms && !twoFormsAllowed) throw invalid(SHEET_MESSAGES.oneFormOnly('form', formText!));
+  const saltRows = isBlankRange(salts) ? [] : toRange(salts).filter((row) => !row.every(isBlank));
+  return {
+    buffer: toText('buffer', buffer),
+    targetPh: toNumber('targetPh', targetPh, { min: 0, max: 14, allowed: '0 to 14' }),
+    concentrationMm: toNumber('concentrationMm', concentrationMm, { min: 0.001, max: MAX_AMOUNT_MM, allowed: `0.001 to ${MAX_AMOUNT_MM} mM` }),
+    volumeMl: toNumber('volumeMl', volumeMl, { min: 0.001, max: MAX_VOLUME_ML, allowed: `0.001 to ${MAX_VOLUME_ML} mL` }),
+    useTemperatureC: useT,
+    benchTemperatureC: isBlank(benchTemperatureC) ? useT : toTemperature('benchTemperatureC', benchTemperatureC),
+    partVolumeFraction: toNumber('partVolumeFraction', partVolumeFraction, { default: DEFAULT_PART_VOLUME_FRACTION, min: 0.1, max: 1, allowed: '0.1 to 1' }),
+    activityModel: toActivityModel('activityModel', activityModel),
+    salts: saltRows.map((row, i) => ({
+      form: toText(`salts row ${i + 1}`, row[0]),
+      concentrationMm: toNumber(`salts row ${i + 1} (mM)`, row[1], { min: 0, max: MAX_AMOUNT_MM, allowed: `0 to ${MAX_AMOUNT_MM} mM` }),
+    })),
+    ...(twoForms
+      ? { route: 'two-forms' as const, acidForm: pair![0], baseForm: pair![1] }
+      : {
+          ...(formText === undefined ? {} : { form: formText }),
+          ...(isBlank(titrant)
+            ? {}
+            : { titrant: { form: toText('titrant', titrant), concentrationM: toNumber('titrantConcentrationM', titrantConcentrationM, { default: 1, min: 1e-6, max: 30, allowed: 'above 0 up to 30 mol/L' }) } }),
+        }),
+  };
+}
+
+/**
+ * One row of a recipe table: grams of the form, titrant mL with its band, what the meter must read at the bench, pH at use, capacity, ionic strength, ideal osmolarity and warnings. Spills 1 row × 11 columns.
+ * @customfunction RECIPE.ROW RECIPE.ROW
+ * @helpurl https://localhost:3000/help/functions.html#recipe-row
+ * @param buffer Buffer system (e.g. "HEPES", "tris", "phosphate").
+ * @param targetPh pH wanted at the temperature of use.
+ * @param concentrationMm Buffer concentration in the final solution, mM.
+ * @param volumeMl Final volume, mL.
+ * @param [form] Form weighed (e.g. "HEPES free acid", "tris base"; blank: the plain form).
+ * @param [titrant] Titrant form (e.g. "NaOH", "HCl"; blank: 1 M NaOH or HCl, whichever is needed).
+ * @param [titrantConcentrationM] Titrant stock, mol/L (blank: 1).
+ * @param [useTemperatureC] Temperature of use, °C (blank: 25).
+ * @param [benchTemperatureC] Temperature at which the pH is adjusted, °C (blank: the temperature of use).
+ * @param [partVolumeFraction] Fraction of the final volume in which the pH is adjusted (blank: 0.8).
+ * @param [salts] Two columns: salt form and mM (e.g. "NaCl", 150).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances.
+ * @returns One row of recipe figures.
+ */
+export function recipeRow(
+  buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form?: any, titrant?: any, titrantConcentrationM?: any,
+  useTemperatureC?: any, benchTemperatureC?: any, partVolumeFraction?: any, salts?: any[][], activityModel?: any, userSubstances?: any[][],
+): any[][] {
+  const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, activityModel, userSubstances];
+  return memoised('RECIPE.ROW', args, () => {
+    const input = recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, activityModel, false);
+    const plan = planRecipe(input, libraryFor(userSubstances));
+    const weighed = plan.components.find((c) => c.role === 'buffer');
+    const t = plan.titration;
+    const p = plan.predictions;
+    return [[weighed?.grams ?? 0, t?.volumeMl ?? 0, t?.lowMl ?? 0, t?.highMl ?? 0, plan.meter.pH, p.pHAtUse, p.baseMmPerTenthPh, p.acidMmPerTenthPh, p.ionicStrengthM * 1000, p.idealOsmolarityMosm, plan.warnings.join(' ')]];
+  });
+}
+
+/**
+ * The whole recipe as a sheet: amounts, the meter reading, the titrant band, predictions, the bench steps, warnings and cautions. Spills a fixed 48 rows × 4 columns (section, item, value, unit), padded with blanks. Give "acid form + base form" as the form to weigh two forms instead of titrating.
+ * @customfunction RECIPE RECIPE
+ * @helpurl https://localhost:3000/help/functions.html#recipe
+ * @param buffer Buffer system (e.g. "HEPES", "tris", "phosphate").
+ * @param targetPh pH wanted at the temperature of use.
+ * @param concentrationMm Buffer concentration in the final solution, mM.
+ * @param volumeMl Final volume, mL.
+ * @param [form] Form weighed (e.g. "tris base"), or two forms as "NaH2PO4·H2O + Na2HPO4·7H2O" (blank: the plain form).
+ * @param [titrant] Titrant form (e.g. "NaOH", "HCl"; blank: 1 M NaOH or HCl, whichever is needed).
+ * @param [titrantConcentrationM] Titrant stock, mol/L (blank: 1).
+ * @param [useTemperatureC] Temperature of use, °C (blank: 25).
+ * @param [benchTemperatureC] Temperature at which the pH is adjusted, °C (blank: the temperature of use).
+ * @param [partVolumeFraction] Fraction of the final volume in which the pH is adjusted (blank: 0.8).
+ * @param [salts] Two columns: salt form and mM (e.g. "NaCl", 150).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances.
+ * @returns The recipe, one line per row.
+ */
+export function recipe(
+  buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form?: any, titrant?: any, titrantConcentrationM?: any,
+  useTemperatureC?: any, benchTemperatureC?: any, partVolumeFraction?: any, salts?: any[][], activityModel?: any, userSubstances?: any[][],
+): any[][] {
+  const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, activityModel, userSubstances];
+  return memoised('RECIPE', args, () => {
+    const input = recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, activityModel, true);
+    const plan = planRecipe(input, libraryFor(userSubstances));
+    const p = plan.predictions;
+    const rows: (number | string)[][] = [[...RECIPE_TABLE_HEADER]];
+    rows.push(['recipe', `${plan.buffer}, ${plan.concentrationMm} mM, pH ${plan.targetPh} at ${p.useTemperatureC} °C`, plan.volumeMl, 'mL']);
+    for (const c of plan.components) {
+      if (c.grams !== undefined) rows.push(['amount', `${c.role}: ${c.name}`, c.grams, 'g']);
+      else rows.push(['amount', c.role === 'water' ? 'water, to final volume' : `${c.role}: ${c.name}`, c.millilitres ?? 0, 'mL']);
+    }
+    rows.push(['meter', `reads while adjusting, at ${plan.meter.benchTemperatureC} °C in ${formatMl(plan.meter.partVolumeMl)} mL`, plan.meter.pH, 'pH']);
+    if (plan.titration) {
+      rows.push(['titrant', 'expected, low end', plan.titration.lowMl, 'mL']);
+      rows.push(['titrant', 'expected, high end', plan.titration.highMl, 'mL']);
+      rows.push(['titrant', 'safe first portion', plan.titration.firstPortionMl, 'mL']);
+    }
+    rows.push(['predicted', `pH at ${p.useTemperatureC} °C`, p.pHAtUse, 'pH']);
+    rows.push(['predicted', `pH at ${plan.meter.benchTemperatureC} °C`, p.pHAtBench, 'pH']);
+    rows.push(['predicted', 'ionic strength', p.ionicStrengthM * 1000, 'mM']);
+    rows.push(['predicted', 'ideal osmolarity', p.idealOsmolarityMosm, 'mOsm/L']);
+    rows.push(['predicted', 'strong base per +0.1 pH', p.baseMmPerTenthPh, 'mM']);
+    rows.push(['predicted', 'strong acid per −0.1 pH', p.acidMmPerTenthPh, 'mM']);
+    rows.push(['predicted', 'change with temperature', p.pHPerDegreeC, 'pH per °C']);
+    rows.push(['predicted', 'after tenfold dilution', p.pHAfterTenfoldDilution, 'pH']);
+    plan.steps.forEach((step, i) => rows.push(['step', String(i + 1), step, '']));
+    for (const w of plan.warnings) rows.push(['warning', '', w, '']);
+    for (const c of plan.cautions) rows.push(['caution', '', c, '']);
+    if (rows.length > RECIPE_TABLE_ROWS) throw invalid(SHEET_MESSAGES.recipeTooLong(rows.length, RECIPE_TABLE_ROWS));
+    while (rows.length < RECIPE_TABLE_ROWS) rows.push(['', '', '', '']);
+    return rows;
+  });
+}
+
 /** Size of a spilled result: rows × columns. */
 export interface SpillShape {
   readonly rows: number;
@@ -300,6 +448,10 @@ export function spillShape(id: string, argumentRows: readonly number[]): SpillSh
   switch (id) {
     case 'SPECIES':
       return { rows: SPECIES_TABLE_ROWS, columns: SPECIES_TABLE_HEADER.length };
+    case 'RECIPE':
+      return { rows: RECIPE_TABLE_ROWS, columns: RECIPE_TABLE_HEADER.length };
+    case 'RECIPE.ROW':
+      return { rows: 1, columns: RECIPE_ROW_HEADER.length };
     case 'SUBSTANCES':
       return { rows: listLength('substances', new Array(argumentRows[0] ?? 0)), columns: 1 };
     case 'FORMS':

@@ -32,6 +32,10 @@ export const SHEET_MESSAGES = {
     `${argument}: cannot read "${text}" as a list of numbers; write them as "6.1; 7.2".`,
   titrantExceedsVolume: (titrantMl: number, finalVolumeMl: number) =>
     `The titrant stock is too dilute: it would take ${titrantMl.toPrecision(4)} mL, more than the final volume of ${finalVolumeMl} mL; use a stronger stock.`,
+  oneFormOnly: (argument: string, text: string) =>
+    `${argument}: "${text}" names two forms; a recipe row titrates one form (use RECIPE for two forms).`,
+  recipeTooLong: (rows: number, limit: number) =>
+    `The recipe needs ${rows} rows, more than the ${limit} this table shows; print it with the command line instead.`,
   unexpected: (detail: string) =>
     `Unexpected failure (please report it): ${detail}`,
 } as const;
