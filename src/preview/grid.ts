@@ -1,0 +1,271 @@
+/**
+ * The preview page's worksheet grid: sheet tabs, a formula bar and a table of cells that
+ * shows the engine's values. Users select a cell, type a value or a formula (=PROTON.…) in
+ * the formula bar or straight into the grid, and press Enter. Charts sit over the sheet at
+ * their anchors, as in Excel. Text goes in with textContent only.
+ */
+import type { RawCellContent } from 'hyperformula';
+import { cellAddress, columnLetters, Selection } from '../workbook/port';
+import { drawChart } from './chart';
+import { formatValue } from './format';
+import type { PreviewWorkbook } from './workbook';
+
+const ROW_HEIGHT_PX = 24;
+const ROW_HEADER_PX = 44;
+const CHAR_PX = 7.2;
+const MIN_ROWS = 40;
+const MIN_COLS = 12;
+
+export class Grid {
+  private sheet: string;
+  private row = 0;
+  private col = 0;
+  private readonly nameBox: HTMLElement;
+  private readonly input: HTMLInputElement;
+  private readonly tabs: HTMLElement;
+  private readonly scroller: HTMLElement;
+  private readonly status: HTMLElement;
+  private table: HTMLTableElement | null = null;
+  private renderQueued = false;
+
+  constructor(
+    private readonly book: PreviewWorkbook,
+    root: HTMLElement,
+  ) {
+    this.sheet = book.sheetNames()[0];
+    this.nameBox = root.querySelector('#name-box') as HTMLElement;
+    this.input = root.querySelector('#formula-input') as HTMLInputElement;
+    this.tabs = root.querySelector('#sheet-tabs') as HTMLElement;
+    this.scroller = root.querySelector('#grid-scroll') as HTMLElement;
+    this.status = root.querySelector('#grid-status') as HTMLElement;
+    this.input.addEventListener('keydown', (e) => this.onInputKey(e));
+    this.scroller.addEventListener('keydown', (e) => this.onGridKey(e));
+    this.scroller.addEventListener('click', (e) => {
+      const td = (e.target as HTMLElement).closest('td[data-cell]') as HTMLElement | null;
+      if (td) this.select(Number(td.dataset.row), Number(td.dataset.col));
+    });
+    this.scroller.addEventListener('dblclick', () => this.input.focus());
+    book.onChange(() => this.queueRender());
+    this.render();
+  }
+
+  /** The sheet shown. */
+  activeSheet(): string {
+    return this.sheet;
+  }
+
+  selection(): Selection {
+    return { sheet: this.sheet, range: { row: this.row, col: this.col, rowCount: 1, colCount: 1 } };
+  }
+
+  showSheet(name: string): void {
+    this.sheet = name;
+    this.row = 0;
+    this.col = 0;
+    this.render();
+    this.scroller.scrollTop = 0;
+    this.scroller.scrollLeft = 0;
+  }
+
+  select(row: number, col: number): void {
+    this.row = Math.max(0, row);
+    this.col = Math.max(0, col);
+    this.table?.querySelectorAll('td.selected').forEach((td) => td.classList.remove('selected'));
+    const td = this.cellElement(this.row, this.col);
+    if (!td && this.table) this.render();
+    const current = this.cellElement(this.row, this.col);
+    current?.classList.add('selected');
+    current?.scrollIntoView({ block: 'nearest', inline: 'nearest' });
+    if (current) this.scroller.setAttribute('aria-activedescendant', current.id);
+    this.nameBox.textContent = cellAddress(this.row, this.col);
+    this.input.value = this.book.rawText(this.sheet, this.row, this.col);
+    this.showStatus();
+  }
+
+  private showStatus(): void {
+    const v = this.book.value(this.sheet, this.row, this.col);
+    this.status.textContent = v !== null && typeof v === 'object' ? `${v.error} ${v.message}` : '';
+  }
+
+  private cellElement(row: number, col: number): HTMLElement | null {
+    return this.table?.querySelector(`td[data-row="${row}"][data-col="${col}"]`) ?? null;
+  }
+
+  /** Writes what the user typed: a number, TRUE/FALSE, a formula or text. */
+  commit(text: string): void {
+    let content: RawCellContent = text;
+    const trimmed = text.trim();
+    if (trimmed === '') content = null;
+    else if (!trimmed.startsWith('=') && /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(trimmed)) content = Number(trimmed);
+    try {
+      this.book.setContents(this.sheet, this.row, this.col, [[content]]);
+      this.render();
+    } catch (error) {
+      this.status.textContent = `Not written: ${(error as Error).message}`;
+    }
+  }
+
+  private onInputKey(e: KeyboardEvent): void {
+    if (e.key === 'Enter') {
+      e.preventDefault();
+      this.commit(this.input.value);
+      this.select(this.row + 1, this.col);
+      this.scroller.focus();
+    } else if (e.key === 'Escape') {
+      e.preventDefault();
+      this.input.value = this.book.rawText(this.sheet, this.row, this.col);
+      this.scroller.focus();
+    } else if (e.key === 'Tab' && !e.shiftKey && this.input.value !== this.book.rawText(this.sheet, this.row, this.col)) {
+      e.preventDefault();
+      this.commit(this.input.value);
+      this.select(this.row, this.col + 1);
+      this.scroller.focus();
+    }
+  }
+
+  private onGridKey(e: KeyboardEvent): void {
+    const moves: Record<string, [number, number]> = { ArrowUp: [-1, 0], ArrowDown: [1, 0], ArrowLeft: [0, -1], ArrowRight: [0, 1] };
+    const move = moves[e.key];
+    if (move) {
+      e.preventDefault();
+      this.select(this.row + move[0], this.col + move[1]);
+    } else if (e.key === 'Enter' || e.key === 'F2') {
+      e.preventDefault();
+      this.input.focus();
+      this.input.setSelectionRange(this.input.value.length, this.input.value.length);
+    } else if (e.key === 'Delete' || e.key === 'Backspace') {
+      e.preventDefault();
+      this.commit('');
+      this.select(this.row, this.col);
+    } else if (e.key.length === 1 && !e.ctrlKey && !e.metaKey && !e.altKey) {
+      e.preventDefault();
+      this.input.value = e.key;
+      this.input.focus();
+    }
+  }
+
+  private queueRender(): void {
+    if (this.renderQueued) return;
+    this.renderQueued = true;
+    requestAnimationFrame(() => {
+      this.renderQueued = false;
+      this.render();
+    });
+  }
+
+  private columnPx(col: number): number {
+    return Math.round(this.book.columnWidth(this.sheet, col) * CHAR_PX + 12);
+  }
+
+  render(): void {
+    if (!this.book.hasSheet(this.sheet)) this.sheet = this.book.sheetNames()[0];
+    this.renderTabs();
+    const dims = this.book.dimensions(this.sheet);
+    const charts = this.book.charts(this.sheet);
+    const chartRows = Math.max(0, ...charts.map((c) => c.anchor.row + c.anchor.rowCount));
+    const chartCols = Math.max(0, ...charts.map((c) => c.anchor.col + c.anchor.colCount));
+    const rows = Math.max(MIN_ROWS, dims.rows + 6, chartRows + 2, this.row + 2);
+    const cols = Math.max(MIN_COLS, dims.cols + 2, chartCols + 1, this.col + 2);
+
+    const table = document.createElement('table');
+    table.className = 'grid';
+    const colgroup = document.createElement('colgroup');
+    const headCol = document.createElement('col');
+    headCol.width = String(ROW_HEADER_PX);
+    colgroup.appendChild(headCol);
+    for (let c = 0; c < cols; c++) {
+      const col = document.createElement('col');
+      col.width = String(this.columnPx(c));
+      colgroup.appendChild(col);
+    }
+    table.appendChild(colgroup);
+    const thead = document.createElement('thead');
+    const hr = document.createElement('tr');
+    const corner = document.createElement('th');
+    corner.className = 'corner';
+    hr.appendChild(corner);
+    for (let c = 0; c < cols; c++) {
+      const th = document.createElement('th');
+      th.scope = 'col';
+      th.textContent = columnLetters(c);
+      hr.appendChild(th);
+    }
+    thead.appendChild(hr);
+    table.appendChild(thead);
+    const tbody = document.createElement('tbody');
+    for (let r = 0; r < rows; r++) {
+      const tr = document.createElement('tr');
+      const th = document.createElement('th');
+      th.scope = 'row';
+      th.textContent = String(r + 1);
+      tr.appendChild(th);
+      for (let c = 0; c < cols; c++) {
+        const td = document.createElement('td');
+        const address = cellAddress(r, c);
+        td.id = `cell-${address}`;
+        td.dataset.cell = address;
+        td.dataset.row = String(r);
+        td.dataset.col = String(c);
+        td.setAttribute('role', 'gridcell');
+        if (r < dims.rows && c < dims.cols) {
+          const value = this.book.value(this.sheet, r, c);
+          const meta = this.book.meta(this.sheet, r, c);
+          td.textContent = formatValue(value, meta?.numberFormat);
+          if (meta?.style) td.classList.add(`style-${meta.style}`);
+          if (typeof value === 'number') td.classList.add('num');
+          if (value !== null && typeof value === 'object') {
+            td.classList.add('cell-error');
+            td.title = value.message;
+          }
+          if (this.book.formula(this.sheet, r, c) !== undefined) td.classList.add('has-formula');
+        }
+        if (r === this.row && c === this.col) td.classList.add('selected');
+        tr.appendChild(td);
+      }
+      tbody.appendChild(tr);
+    }
+    table.appendChild(tbody);
+
+    const layer = document.createElement('div');
+    layer.className = 'grid-layer';
+    layer.appendChild(table);
+    for (const spec of charts) {
+      const figure = drawChart(this.book, this.sheet, spec);
+      let left = ROW_HEADER_PX;
+      for (let c = 0; c < spec.anchor.col; c++) left += this.columnPx(c);
+      let width = 0;
+      for (let c = spec.anchor.col; c < spec.anchor.col + spec.anchor.colCount; c++) width += this.columnPx(c);
+      figure.classList.add('chart-floating');
+      figure.style.left = `${left}px`;
+      figure.style.top = `${ROW_HEIGHT_PX * (spec.anchor.row + 1)}px`;
+      figure.style.width = `${width}px`;
+      layer.appendChild(figure);
+    }
+    const keepTop = this.scroller.scrollTop;
+    const keepLeft = this.scroller.scrollLeft;
+    this.scroller.replaceChildren(layer);
+    this.scroller.scrollTop = keepTop;
+    this.scroller.scrollLeft = keepLeft;
+    this.table = table;
+    const current = this.cellElement(this.row, this.col);
+    if (current) this.scroller.setAttribute('aria-activedescendant', current.id);
+    this.nameBox.textContent = cellAddress(this.row, this.col);
+    if (document.activeElement !== this.input) this.input.value = this.book.rawText(this.sheet, this.row, this.col);
+    this.showStatus();
+  }
+
+  private renderTabs(): void {
+    const names = this.book.sheetNames();
+    const buttons = names.map((name) => {
+      const b = document.createElement('button');
+      b.type = 'button';
+      b.setAttribute('role', 'tab');
+      b.setAttribute('aria-selected', String(name === this.sheet));
+      b.className = name === this.sheet ? 'tab active' : 'tab';
+      b.textContent = name;
+      b.addEventListener('click', () => this.showSheet(name));
+      return b;
+    });
+    this.tabs.replaceChildren(...buttons);
+  }
+}

@@ -1,0 +1,351 @@
+/**
+ * What a recipe table sheet holds, as plain data: the settings block, one row per target
+ * (pH × temperature of use × concentration) whose inputs are cells and whose results are
+ * PROTON formulas, the working compositions those formulas read, and the data and specs of
+ * two charts (titration curve; capacity against pH with the usable range). No DOM and no
+ * workbook calls: src/taskpane/writer.ts writes the plan through the workbook port.
+ */
+import { CellBlock, CellWrite, ChartSpec, cellAddress, rangeAddress } from '../workbook/port';
+import type { TableRequest } from './form';
+import * as F from './formulas';
+
+/** pKa uncertainty (pH units) and stock tolerance (%) written as editable defaults; the planner's defaults. */
+export const DEFAULT_PKA_UNCERTAINTY = 0.02;
+export const DEFAULT_STOCK_TOLERANCE_PERCENT = 1;
+/** pH span of the curves either side of the targets, and their step. */
+const CURVE_MARGIN_PH = 1.5;
+const CURVE_STEP_PH = 0.1;
+
+/** Layout: fixed rows and columns, zero-based. */
+export const LAYOUT = {
+  settingsRow: 3,
+  tableHeaderRow: 19,
+  firstDataRow: 20,
+  /** Columns of the table (A…P). */
+  columns: [
+    'Target pH at use',
+    'Use at (°C)',
+    'Buffer (mM)',
+    'Salt (mM)',
+    'Final volume (mL)',
+    'Form to weigh (g)',
+    'Salt to weigh (g)',
+    'Titrant (mL)',
+    'Titrant low (mL)',
+    'Titrant high (mL)',
+    'Meter reads at bench (pH)',
+    'pH at use (check)',
+    'Capacity (mM base per +0.1 pH)',
+    'Ionic strength (mM)',
+    'Ideal osmolarity (mOsm/L)',
+    'Warnings',
+  ],
+  /** First column of the working area to the right of the charts. */
+  workCol: 27,
+  chartCol: 17,
+  chartWidthCols: 9,
+  chartHeightRows: 17,
+} as const;
+
+export const COL = {
+  targetPh: 0,
+  useTemperatureC: 1,
+  concentrationMm: 2,
+  saltMm: 3,
+  volumeMl: 4,
+  formGrams: 5,
+  saltGrams: 6,
+  titrantMl: 7,
+  titrantLowMl: 8,
+  titrantHighMl: 9,
+  meter: 10,
+  check: 11,
+  capacity: 12,
+  ionicStrength: 13,
+  osmolarity: 14,
+  warnings: 15,
+} as const;
+
+/** Settings block: label, then value, in rows from LAYOUT.settingsRow. */
+export const SETTING_ROWS = [
+  'Buffer system',
+  'Form weighed',
+  'Titrant',
+  'Titrant stock (M)',
+  'Salt',
+  'Activity model',
+  'Bench temp. (°C)',
+  'Adjust at (fraction)',
+  'pKa uncertainty (±)',
+  'Stock tolerance (%)',
+  'Your substances',
+  'Built with',
+  'Built on',
+] as const;
+
+export type SettingLabel = (typeof SETTING_ROWS)[number];
+
+/** Column of the settings' values (C: labels may run over A and B). */
+export const SETTING_VALUE_COL = 2;
+
+/** Zero-based row of a setting's value (column C). */
+export function settingRow(label: SettingLabel): number {
+  return LAYOUT.settingsRow + 1 + SETTING_ROWS.indexOf(label);
+}
+
+const settingRef = (label: SettingLabel) => cellAddress(settingRow(label), SETTING_VALUE_COL, true);
+
+/** One row of the table: its inputs. */
+export interface TableRow {
+  readonly targetPh: number;
+  readonly useTemperatureC: number;
+  readonly concentrationMm: number;
+}
+
+/** Every combination, pH fastest, so rows for one temperature and concentration sit together. */
+export function tableRows(request: TableRequest): TableRow[] {
+  const rows: TableRow[] = [];
+  for (const concentrationMm of request.concentrationsMm)
+    for (const useTemperatureC of request.useTemperaturesC) for (const targetPh of request.targetPhs) rows.push({ targetPh, useTemperatureC, concentrationMm });
+  return rows;
+}
+
+/** The sheet's plan: blocks in writing order (the data rows in batches), charts, widths. */
+export interface SheetPlan {
+  readonly baseName: string;
+  readonly head: readonly CellBlock[];
+  /** Data rows, each one CellBlock of one row, written in batches. */
+  readonly rows: readonly CellBlock[];
+  /** Working compositions and chart data, written after the rows. */
+  readonly tail: readonly CellBlock[];
+  readonly charts: readonly ChartSpec[];
+  readonly columnWidths: readonly number[];
+}
+
+const input = (value: number | string, numberFormat?: string): CellWrite => ({ value, style: 'input', ...(numberFormat ? { numberFormat } : {}) });
+const result = (formula: string, numberFormat: string): CellWrite => ({ formula, numberFormat, style: 'result' });
+const label = (value: string, style: CellWrite['style'] = 'label'): CellWrite => ({ value, style });
+
+/** A sheet name from the request, e.g. `HEPES 25 mM pH 7.0–7.6`. */
+export function sheetBaseName(request: TableRequest): string {
+  const ph = request.targetPhs;
+  const phText = ph.length === 1 ? `pH ${ph[0]}` : `pH ${Math.min(...ph)}–${Math.max(...ph)}`;
+  const mM = request.concentrationsMm.length === 1 ? ` ${request.concentrationsMm[0]} mM` : '';
+  return `${request.buffer}${mM} ${phText}`;
+}
+
+/** Working composition of a table row: 3 rows × 4 columns (name, mM final; name, mM at part volume). */
+function compositionBlock(top: number, settings: F.SettingCells, r: F.RowCells): { block: CellBlock; full: string; part: string } {
+  const c = LAYOUT.workCol;
+  const rows: [string, string][] = [
+    [`=${settings.form}`, `=${r.concentrationMm}`],
+    [`=${settings.titrant}`, F.titrantMm(settings, r)],
+    [F.nameOrBlank(settings.salt), F.amountOrBlank(settings.salt, r.saltMm)],
+  ];
+  const cells = rows.map(([name, mM], i) => {
+    const finalRef = cellAddress(top + i, c + 1);
+    return [
+      { formula: name },
+      { formula: mM, numberFormat: '0.000' },
+      { formula: name },
+      { formula: F.atPartVolume(finalRef, r), numberFormat: '0.000' },
+    ] as CellWrite[];
+  });
+  return {
+    block: { row: top, col: c, cells },
+    full: rangeAddress({ row: top, col: c, rowCount: 3, colCount: 2 }),
+    part: rangeAddress({ row: top, col: c + 2, rowCount: 3, colCount: 2 }),
+  };
+}
+
+/** The recipe sheet for a checked request. `builtWith` names the add-in and version for the provenance lines. */
+export function planRecipeSheet(request: TableRequest, options: { builtWith: string; builtOn: string; pKaStep: number }): SheetPlan {
+  const settings: F.SettingCells = {
+    form: settingRef('Form weighed'),
+    titrant: settingRef('Titrant'),
+    titrantStockM: settingRef('Titrant stock (M)'),
+    salt: settingRef('Salt'),
+    activityModel: settingRef('Activity model'),
+    benchTemperatureC: settingRef('Bench temp. (°C)'),
+    pKaUncertainty: settingRef('pKa uncertainty (±)'),
+    stockTolerancePercent: settingRef('Stock tolerance (%)'),
+    userSubstances: request.userSubstances,
+  };
+  const partRef = settingRef('Adjust at (fraction)');
+  const values: Record<SettingLabel, CellWrite> = {
+    'Buffer system': input(request.buffer),
+    'Form weighed': input(request.form),
+    Titrant: input(request.titrant),
+    'Titrant stock (M)': input(request.titrantStockM, '0.000'),
+    Salt: input(request.saltForm),
+    'Activity model': input(request.activityModel),
+    'Bench temp. (°C)': input(request.benchTemperatureC, '0.0'),
+    'Adjust at (fraction)': input(request.partVolumeFraction, '0.00'),
+    'pKa uncertainty (±)': input(DEFAULT_PKA_UNCERTAINTY, '0.000'),
+    'Stock tolerance (%)': input(DEFAULT_STOCK_TOLERANCE_PERCENT, '0.0'),
+    'Your substances': label(request.userSubstances || '(none)'),
+    'Built with': label(options.builtWith),
+    'Built on': label(options.builtOn),
+  };
+  const head: CellBlock[] = [
+    {
+      row: 0,
+      col: 0,
+      cells: [
+        [label(`Recipe table: ${request.buffer}, adjusted with ${request.titrant}`, 'title')],
+        [label('Shaded cells are inputs. Every other number is a live PROTON formula: change an input and its row recomputes.', 'note')],
+      ],
+    },
+    {
+      row: LAYOUT.settingsRow,
+      col: 0,
+      cells: [[label('Settings', 'subtitle')], ...SETTING_ROWS.map((name) => [label(name), null, values[name]])],
+    },
+    { row: LAYOUT.tableHeaderRow, col: 0, cells: [LAYOUT.columns.map((h) => label(h, 'header'))] },
+  ];
+
+  const rowsIn = tableRows(request);
+  const rowCells = (row: number): F.RowCells => ({
+    targetPh: cellAddress(row, COL.targetPh),
+    useTemperatureC: cellAddress(row, COL.useTemperatureC),
+    concentrationMm: cellAddress(row, COL.concentrationMm),
+    saltMm: cellAddress(row, COL.saltMm),
+    volumeMl: cellAddress(row, COL.volumeMl),
+    titrantMl: cellAddress(row, COL.titrantMl),
+    partVolumeFraction: partRef,
+  });
+  const tail: CellBlock[] = [];
+  const workTop = LAYOUT.firstDataRow;
+  tail.push({
+    row: LAYOUT.tableHeaderRow - 1,
+    col: LAYOUT.workCol,
+    cells: [[label('Working compositions: three rows per table row (name, mM; name, mM at part volume). The formulas read these; they follow the inputs.', 'note')]],
+  });
+  const rows: CellBlock[] = rowsIn.map((tr, i) => {
+    const row = LAYOUT.firstDataRow + i;
+    const r = rowCells(row);
+    const comp = compositionBlock(workTop + 3 * i, settings, r);
+    tail.push(comp.block);
+    const check = cellAddress(row, COL.check);
+    const ionic = cellAddress(row, COL.ionicStrength);
+    const cells: CellWrite[] = [
+      input(tr.targetPh, '0.00'),
+      input(tr.useTemperatureC, '0.0'),
+      input(tr.concentrationMm, '0.0'),
+      input(request.saltMm, '0.0'),
+      input(request.volumeMl, '0.0'),
+      result(F.formGrams(settings, r), '0.000'),
+      result(F.saltGrams(settings, r), '0.000'),
+      result(F.titrantMl(settings, r), '0.00'),
+      result(F.titrantLowMl(settings, r), '0.00'),
+      result(F.titrantHighMl(settings, r), '0.00'),
+      result(F.meterReading(settings, comp.part), '0.00'),
+      result(F.phAtUse(settings, r, comp.full), '0.00'),
+      result(F.capacityMm(settings, r, comp.full), '0.00'),
+      result(F.ionicStrengthMm(settings, r, comp.full), '0.0'),
+      result(F.idealOsmolarity(settings, r, comp.full), '0'),
+      { formula: F.warnings(r, { check, ionicStrength: ionic }), style: 'warning' },
+    ];
+    return { row, col: 0, cells: [cells] };
+  });
+
+  // Curves for the first row: pH grid, titrant mL at each pH, capacity of that mixture.
+  const first = rowCells(LAYOUT.firstDataRow);
+  const lo = Math.max(1, Math.min(...request.targetPhs) - CURVE_MARGIN_PH);
+  const hi = Math.min(13, Math.max(...request.targetPhs) + CURVE_MARGIN_PH);
+  const grid: number[] = [];
+  for (let p = Math.round(lo * 10) / 10; p <= hi + 1e-9; p = Math.round((p + CURVE_STEP_PH) * 10) / 10) grid.push(p);
+  const curveCol = LAYOUT.workCol + 5;
+  const curveTop = LAYOUT.firstDataRow;
+  const curveHeader: CellBlock = {
+    row: curveTop - 1,
+    col: curveCol,
+    cells: [[label('pH', 'header'), label('Titrant (mL)', 'header'), label('Capacity (mM/0.1 pH)', 'header')]],
+  };
+  const curveCompCol = curveCol + 4;
+  const curveRows: CellWrite[][] = [];
+  grid.forEach((ph, i) => {
+    const row = curveTop + i;
+    const phRef = cellAddress(row, curveCol);
+    const mlRef = cellAddress(row, curveCol + 1);
+    const compTop = curveTop + 3 * i;
+    const rAtPh: F.RowCells = { ...first, titrantMl: mlRef };
+    tail.push({
+      row: compTop,
+      col: curveCompCol,
+      cells: [
+        [{ formula: `=${settings.form}` }, { formula: `=${first.concentrationMm}`, numberFormat: '0.000' }],
+        [{ formula: `=${settings.titrant}` }, { formula: `=IFERROR(${F.titrantMm(settings, rAtPh).slice(1)},0)`, numberFormat: '0.000' }],
+        [{ formula: F.nameOrBlank(settings.salt) }, { formula: F.amountOrBlank(settings.salt, first.saltMm), numberFormat: '0.000' }],
+      ],
+    });
+    const comp = rangeAddress({ row: compTop, col: curveCompCol, rowCount: 3, colCount: 2 });
+    curveRows.push([
+      { value: ph, numberFormat: '0.0' },
+      { formula: F.curveTitrantMl(settings, first, phRef), numberFormat: '0.00' },
+      { formula: `=IF(ISNA(${mlRef}),NA(),${F.curveCapacity(settings, first, comp).slice(1)})`, numberFormat: '0.00' },
+    ]);
+  });
+  tail.push(curveHeader, { row: curveTop, col: curveCol, cells: curveRows });
+  tail.push({
+    row: curveTop - 2,
+    col: curveCol,
+    cells: [[label('Curves for the first table row (change that row and they follow).', 'note')]],
+  });
+  const gridRange = (col: number) => ({ row: curveTop, col, rowCount: grid.length, colCount: 1 });
+  // Target point: the first row's titrant volume and target pH.
+  const targetTop = curveTop + grid.length + 2;
+  tail.push({
+    row: targetTop - 1,
+    col: curveCol,
+    cells: [
+      [label('Target', 'header'), label('Titrant (mL)', 'header')],
+      [{ formula: `=${first.targetPh}`, numberFormat: '0.00' }, { formula: `=${first.titrantMl}`, numberFormat: '0.00' }],
+    ],
+  });
+  // Usable range: pKa′ ± 1 of the step nearest the target, at the first row's temperature and ionic strength.
+  const bandTop = targetTop + 3;
+  const pKaRef = cellAddress(bandTop, curveCol + 1);
+  const capCol = rangeAddress(gridRange(curveCol + 2));
+  tail.push({
+    row: bandTop - 1,
+    col: curveCol,
+    cells: [
+      [label('Usable range', 'header'), label('pKa′', 'header')],
+      [label('pKa′ ± 1'), { formula: F.pKaPrime(settingRef('Buffer system'), options.pKaStep, first, settings, cellAddress(LAYOUT.firstDataRow, COL.ionicStrength)), numberFormat: '0.00' }],
+      [{ formula: `=${pKaRef}-1`, numberFormat: '0.00' }, { formula: '=0', numberFormat: '0.00' }],
+      [{ formula: `=${pKaRef}-1`, numberFormat: '0.00' }, { formula: `=MAX(${capCol})`, numberFormat: '0.00' }],
+      [{ formula: `=${pKaRef}+1`, numberFormat: '0.00' }, { formula: `=MAX(${capCol})`, numberFormat: '0.00' }],
+      [{ formula: `=${pKaRef}+1`, numberFormat: '0.00' }, { formula: '=0', numberFormat: '0.00' }],
+    ],
+  });
+  const chartTop = LAYOUT.tableHeaderRow;
+  const charts: ChartSpec[] = [
+    {
+      title: `Titration curve, row 1: ${request.form} with ${request.titrant}`,
+      xTitle: `${request.titrant} stock added (mL)`,
+      yTitle: 'pH at use',
+      series: [
+        { name: 'pH against titrant', x: gridRange(curveCol + 1), y: gridRange(curveCol) },
+        { name: 'target', x: { row: targetTop, col: curveCol + 1, rowCount: 1, colCount: 1 }, y: { row: targetTop, col: curveCol, rowCount: 1, colCount: 1 }, markersOnly: true },
+      ],
+      anchor: { row: chartTop, col: LAYOUT.chartCol, rowCount: LAYOUT.chartHeightRows, colCount: LAYOUT.chartWidthCols },
+    },
+    {
+      title: 'Capacity against pH, row 1',
+      xTitle: 'pH at use',
+      yTitle: 'mM base per +0.1 pH',
+      series: [{ name: 'capacity', x: gridRange(curveCol), y: gridRange(curveCol + 2) }],
+      xBand: { x: { row: bandTop + 1, col: curveCol, rowCount: 4, colCount: 1 }, y: { row: bandTop + 1, col: curveCol + 1, rowCount: 4, colCount: 1 }, label: 'usable range (pKa′ ± 1)' },
+      anchor: { row: chartTop + LAYOUT.chartHeightRows + 1, col: LAYOUT.chartCol, rowCount: LAYOUT.chartHeightRows, colCount: LAYOUT.chartWidthCols },
+    },
+  ];
+  return {
+    baseName: sheetBaseName(request),
+    head,
+    rows,
+    tail,
+    charts,
+    columnWidths: [11, 9, 9, 9, 11, 11, 11, 10, 10, 10, 13, 11, 13, 11, 12, 44, 2],
+  };
+}

@@ -1,0 +1,172 @@
+/**
+ * Writes plans through the workbook port: a recipe table (in batches, with progress) and a
+ * values copy with its provenance block. Nothing is written unless the request checked out;
+ * every table goes on a new sheet with a name not yet used.
+ */
+import { findSystem } from '../chem/library';
+import { CellBlock, CellValue, CellWrite, PaneSettings, WorkbookPort, uniqueName } from '../workbook/port';
+import { checkForm, FormInput, FieldErrors, settingsOf, TableRequest } from './form';
+import { protocolBlock } from './protocol';
+import { planRecipeSheet, SETTING_ROWS, SETTING_VALUE_COL, settingRow, tableRows, LAYOUT } from './recipeTable';
+
+/** Table rows written per port call: keeps each Excel batch small. */
+export const ROWS_PER_BATCH = 100;
+
+export type Progress = (done: number, total: number) => void;
+
+export type BuildResult = { readonly ok: true; readonly sheet: string; readonly rows: number } | { readonly ok: false; readonly errors: FieldErrors };
+
+/** Step of the buffer whose pKa lies nearest the first target (1-based); 1 for substances outside the library. */
+export function nearestStep(buffer: string, targetPh: number): number {
+  try {
+    const steps = findSystem(buffer).steps;
+    let best = 0;
+    steps.forEach((s, i) => {
+      if (Math.abs(s.pKa - targetPh) < Math.abs(steps[best].pKa - targetPh)) best = i;
+    });
+    return best + 1;
+  } catch {
+    return 1;
+  }
+}
+
+function stamp(now: Date): string {
+  return now.toISOString().replace('T', ' ').slice(0, 16) + ' UTC';
+}
+
+/**
+ * Checks the form; on success writes a new recipe sheet, saves the settings in the document
+ * and activates the sheet.
+ */
+export async function buildRecipeTable(port: WorkbookPort, form: FormInput, options: { version: string; now?: Date; onProgress?: Progress }): Promise<BuildResult> {
+  const checked = checkForm(form);
+  if (!checked.ok) return checked;
+  const request: TableRequest = checked.request;
+  const now = options.now ?? new Date();
+  const plan = planRecipeSheet(request, {
+    builtWith: `Proton Ledger ${options.version}`,
+    builtOn: stamp(now),
+    pKaStep: nearestStep(request.buffer, request.targetPhs[0]),
+  });
+  const sheet = await port.uniqueSheetName(plan.baseName);
+  await port.addSheet(sheet);
+  for (const block of plan.head) await port.writeTable(sheet, block);
+  const first = tableRows(request)[0];
+  await port.writeTable(sheet, protocolBlock(request, first, 1, stamp(now)));
+  const total = plan.rows.length;
+  options.onProgress?.(0, total);
+  for (let i = 0; i < total; i += ROWS_PER_BATCH) {
+    const batch = plan.rows.slice(i, i + ROWS_PER_BATCH);
+    await port.writeTable(sheet, { row: batch[0].row, col: 0, cells: batch.map((b) => b.cells[0]) });
+    options.onProgress?.(Math.min(total, i + ROWS_PER_BATCH), total);
+  }
+  for (const block of plan.tail) await port.writeTable(sheet, block);
+  await port.setColumnWidths(sheet, plan.columnWidths);
+  for (const chart of plan.charts) await port.addChart(sheet, chart);
+  await port.saveSettings(settingsOf(request));
+  await port.activateSheet(sheet);
+  return { ok: true, sheet, rows: total };
+}
+
+/** What the provenance block of a values copy says. */
+export interface Provenance {
+  readonly version: string;
+  readonly sourceSheet: string;
+  readonly activityModel: string;
+  readonly benchTemperatureC: string;
+  readonly useTemperaturesC: string;
+  readonly constantSources: string;
+  readonly copiedOn: string;
+}
+
+/** Source note for a buffer's constants (from the library's records). */
+export function constantSourcesOf(buffer: string): string {
+  try {
+    const steps = findSystem(buffer).steps;
+    const described = steps.map((s) => `${s.entry} (${s.source}${s.verified ? '' : ', from memory, unchecked'})`);
+    return `${buffer}: ${described.join('; ')}`;
+  } catch {
+    return `${buffer}: your own substance range`;
+  }
+}
+
+/** The provenance block's rows. */
+export function provenanceBlock(p: Provenance): CellWrite[][] {
+  const row = (name: string, value: string): CellWrite[] => [
+    { value: name, style: 'provenance' },
+    { value, style: 'provenance' },
+  ];
+  return [
+    [{ value: `Values copy of "${p.sourceSheet}": numbers, not formulas`, style: 'title' }],
+    row('Add-in', `Proton Ledger ${p.version}`),
+    row('Activity model', p.activityModel),
+    row('Bench temperature (°C)', p.benchTemperatureC),
+    row('Temperatures of use (°C)', p.useTemperaturesC),
+    row('Constants', p.constantSources),
+    row('Copied on', p.copiedOn),
+    [{ value: 'These numbers no longer follow any input. Verify the final pH with a calibrated meter at the working temperature.', style: 'note' }],
+  ];
+}
+
+const PROVENANCE_ROWS = 9;
+
+function cellText(v: CellValue | undefined): string {
+  return v === null || v === undefined ? '' : String(v);
+}
+
+/**
+ * Copies a recipe sheet's values (not formulas) to a new sheet under a provenance block.
+ * The source is the sheet of the current selection, unless `sourceSheet` is given.
+ */
+export async function valuesCopy(port: WorkbookPort, options: { version: string; now?: Date; sourceSheet?: string }): Promise<{ sheet: string; source: string }> {
+  const source = options.sourceSheet ?? (await port.readSelection()).sheet;
+  const used = await port.usedRange(source);
+  if (!used) throw new Error(`"${source}" is empty: select a cell in a recipe table first.`);
+  const values = await port.readValues(source, used);
+  const at = (label: (typeof SETTING_ROWS)[number]) => cellText(values[settingRow(label)]?.[SETTING_VALUE_COL]);
+  const isRecipe = cellText(values[LAYOUT.tableHeaderRow]?.[0]) === LAYOUT.columns[0];
+  const temps = isRecipe
+    ? [...new Set(values.slice(LAYOUT.firstDataRow).map((r) => r[1]).filter((v) => typeof v === 'number'))].join('; ')
+    : '(not a recipe table)';
+  const provenance: Provenance = {
+    version: options.version,
+    sourceSheet: source,
+    activityModel: isRecipe ? at('Activity model') : '(not a recipe table)',
+    benchTemperatureC: isRecipe ? at('Bench temp. (°C)') : '(not a recipe table)',
+    useTemperaturesC: temps,
+    constantSources: isRecipe ? constantSourcesOf(at('Buffer system')) : '(not a recipe table)',
+    copiedOn: stamp(options.now ?? new Date()),
+  };
+  const names = await port.sheetNames();
+  const sheet = uniqueName(`${source} values`, names);
+  await port.addSheet(sheet);
+  await port.writeTable(sheet, { row: 0, col: 0, cells: provenanceBlock(provenance) });
+  const copy: CellBlock = {
+    row: PROVENANCE_ROWS,
+    col: 0,
+    cells: values.map((line, r) =>
+      line.map((v): CellWrite | null => {
+        if (v === null || v === '') return null;
+        const header = isRecipe && r === LAYOUT.tableHeaderRow;
+        return { value: v, ...(header ? { style: 'header' as const } : {}), ...(typeof v === 'number' ? { numberFormat: '0.000' } : {}) };
+      }),
+    ),
+  };
+  for (let i = 0; i < copy.cells.length; i += ROWS_PER_BATCH) {
+    await port.writeTable(sheet, { row: copy.row + i, col: 0, cells: copy.cells.slice(i, i + ROWS_PER_BATCH) });
+  }
+  await port.setColumnWidths(sheet, [24, 11, 9, 9, 11, 11, 11, 10, 10, 10, 13, 11, 13, 11, 12, 44]);
+  await port.activateSheet(sheet);
+  return { sheet, source };
+}
+
+/** Settings merged over defaults, for the form. */
+export function mergedSettings(saved: Partial<PaneSettings>): Partial<PaneSettings> {
+  const out: Partial<Record<keyof PaneSettings, unknown>> = {};
+  if (saved.activityModel && ['davies', 'ideal', 'bates-guggenheim'].includes(saved.activityModel)) out.activityModel = saved.activityModel;
+  if (typeof saved.benchTemperatureC === 'number') out.benchTemperatureC = saved.benchTemperatureC;
+  if (typeof saved.titrant === 'string' && saved.titrant) out.titrant = saved.titrant;
+  if (typeof saved.titrantStockM === 'number') out.titrantStockM = saved.titrantStockM;
+  if (typeof saved.partVolumeFraction === 'number') out.partVolumeFraction = saved.partVolumeFraction;
+  return out as Partial<PaneSettings>;
+}

@@ -1,0 +1,156 @@
+/**
+ * The workbook port: everything the task pane may ask of a workbook. The pane holds no
+ * Office.js and no grid code; it describes what to write (cells, formats, charts) and an
+ * adapter does it — src/workbook/excelAdapter.ts for Excel, src/workbook/previewAdapter.ts
+ * for the browser preview.
+ *
+ * Addresses are zero-based row/column pairs inside one sheet; adapters translate them.
+ */
+
+/** A literal value a cell may hold. */
+export type CellValue = string | number | boolean | null;
+
+/** How a cell looks; adapters map these to their own formats. */
+export type CellStyle = 'title' | 'subtitle' | 'label' | 'header' | 'input' | 'result' | 'note' | 'warning' | 'caution' | 'provenance';
+
+/** One cell to write: a literal value or a formula (text starting with `=`). */
+export interface CellWrite {
+  readonly value?: CellValue;
+  readonly formula?: string;
+  /** Number format in spreadsheet notation, e.g. `0.00`, `0.0 "mL"`. */
+  readonly numberFormat?: string;
+  readonly style?: CellStyle;
+}
+
+/** A rectangle of cells written at (row, col). Rows may be shorter than the widest; missing cells stay empty. */
+export interface CellBlock {
+  readonly row: number;
+  readonly col: number;
+  readonly cells: readonly (readonly (CellWrite | null)[])[];
+}
+
+/** A rectangle by corners, zero-based, inclusive. */
+export interface RangeRef {
+  readonly row: number;
+  readonly col: number;
+  readonly rowCount: number;
+  readonly colCount: number;
+}
+
+/** One plotted series: x and y values in equally long single-column ranges of one sheet. */
+export interface ChartSeries {
+  readonly name: string;
+  readonly x: RangeRef;
+  readonly y: RangeRef;
+  /** Drawn as markers only (a target point), not a line. */
+  readonly markersOnly?: boolean;
+}
+
+/** A native chart: an x–y scatter with lines, placed over the sheet. */
+export interface ChartSpec {
+  readonly title: string;
+  readonly xTitle: string;
+  readonly yTitle: string;
+  readonly series: readonly ChartSeries[];
+  /** Where the chart's top-left corner sits, and its size in cells. */
+  readonly anchor: RangeRef;
+  /**
+   * A band on the x axis (e.g. the usable pH range) from cells: `x` holds low, low, high,
+   * high and `y` 0, top, top, 0, so Excel draws it as an outlined series and the preview
+   * shades from the smallest to the largest x.
+   */
+  readonly xBand?: { readonly x: RangeRef; readonly y: RangeRef; readonly label: string };
+}
+
+/** What the user has selected. */
+export interface Selection {
+  readonly sheet: string;
+  readonly range: RangeRef;
+}
+
+/** Settings the pane keeps in the document (so they travel with the workbook). */
+export interface PaneSettings {
+  readonly activityModel: 'davies' | 'ideal' | 'bates-guggenheim';
+  /** Temperature at which the pH is adjusted on the bench, °C. */
+  readonly benchTemperatureC: number;
+  /** Default titrant form and its stock concentration, mol/L. */
+  readonly titrant: string;
+  readonly titrantStockM: number;
+  /** Fraction of the final volume at which the pH is adjusted. */
+  readonly partVolumeFraction: number;
+}
+
+/** The workbook, as the pane sees it. Every method writes or reads one workbook. */
+export interface WorkbookPort {
+  /** Names of every sheet, in order. */
+  sheetNames(): Promise<string[]>;
+  /** A sheet name not yet used, from `base` (`base`, `base (2)`, … within the length limit). */
+  uniqueSheetName(base: string): Promise<string>;
+  /** Adds an empty sheet; fails if the name exists (never overwrites). */
+  addSheet(name: string): Promise<void>;
+  /** Writes one block of cells to a sheet made by addSheet. */
+  writeTable(sheet: string, block: CellBlock): Promise<void>;
+  /** Sets column widths in characters, from column 0. */
+  setColumnWidths(sheet: string, widths: readonly number[]): Promise<void>;
+  addChart(sheet: string, chart: ChartSpec): Promise<void>;
+  /** Computed values of a range. */
+  readValues(sheet: string, range: RangeRef): Promise<CellValue[][]>;
+  /** The used area of a sheet (from A1), or null if the sheet is empty. */
+  usedRange(sheet: string): Promise<RangeRef | null>;
+  readSelection(): Promise<Selection>;
+  activateSheet(sheet: string): Promise<void>;
+  loadSettings(): Promise<Partial<PaneSettings>>;
+  saveSettings(settings: PaneSettings): Promise<void>;
+}
+
+/** Excel's sheet-name limit (characters). */
+export const MAX_SHEET_NAME_LENGTH = 31;
+/** Characters Excel forbids in sheet names. */
+const FORBIDDEN_SHEET_CHARS = /[\\/?*[\]:]/g;
+
+/**
+ * A sheet name not in `taken` (compared case-insensitively, as Excel does), made from
+ * `base`: forbidden characters dropped, cut to 31 characters, then ` (2)`, ` (3)`, … added.
+ *
+ * @example uniqueName('HEPES pH 7.4', ['HEPES pH 7.4']) // 'HEPES pH 7.4 (2)'
+ */
+export function uniqueName(base: string, taken: readonly string[]): string {
+  const clean = base.replace(FORBIDDEN_SHEET_CHARS, ' ').replace(/\s+/g, ' ').replace(/^'+|'+$/g, '').trim() || 'Sheet';
+  const used = new Set(taken.map((n) => n.toLowerCase()));
+  const first = clean.slice(0, MAX_SHEET_NAME_LENGTH).trim();
+  if (!used.has(first.toLowerCase())) return first;
+  for (let n = 2; ; n++) {
+    const suffix = ` (${n})`;
+    const name = clean.slice(0, MAX_SHEET_NAME_LENGTH - suffix.length).trim() + suffix;
+    if (!used.has(name.toLowerCase())) return name;
+  }
+}
+
+/** Column letters of a zero-based column index (0 → A, 26 → AA). */
+export function columnLetters(col: number): string {
+  let s = '';
+  let n = col + 1;
+  while (n > 0) {
+    const r = (n - 1) % 26;
+    s = String.fromCharCode(65 + r) + s;
+    n = Math.floor((n - 1) / 26);
+  }
+  return s;
+}
+
+/** A1 address of a zero-based cell, e.g. (0, 0) → `A1`; `absolute` adds `$` signs. */
+export function cellAddress(row: number, col: number, absolute = false): string {
+  return absolute ? `$${columnLetters(col)}$${row + 1}` : `${columnLetters(col)}${row + 1}`;
+}
+
+/** A1 address of a range, e.g. `B3:D10`. */
+export function rangeAddress(range: RangeRef): string {
+  const end = cellAddress(range.row + range.rowCount - 1, range.col + range.colCount - 1);
+  const start = cellAddress(range.row, range.col);
+  return start === end ? start : `${start}:${end}`;
+}
+
+/** A sheet name as a formula reference needs it: quoted when it holds anything but letters, digits and underscores. */
+export function quoteSheet(name: string): string {
+  return /^[A-Za-z_][A-Za-z0-9_]*$/.test(name) ? name : `'${name.replace(/'/g, "''")}'`;
+}

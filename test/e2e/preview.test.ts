@@ -1,0 +1,160 @@
+/**
+ * End to end, in a real browser: the preview page built by webpack, served by
+ * scripts/serve.js on a free port, driven by playwright-core in Debian's Chromium (headless).
+ * One browser launch; screenshots go to test-artifacts/ (gitignored).
+ *
+ * Without /usr/bin/chromium the tests are skipped with a message — except under CI=true,
+ * where a missing browser is a failure.
+ */
+import { ChildProcess, execSync, spawn } from 'child_process';
+import { existsSync, mkdirSync, mkdtempSync, rmSync, statSync } from 'fs';
+import { tmpdir } from 'os';
+import { join } from 'path';
+import type { BrowserContext, Page } from 'playwright-core';
+import ExcelJS from 'exceljs';
+
+const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+const ROOT = join(__dirname, '..', '..');
+const ARTIFACTS = join(ROOT, 'test-artifacts');
+const haveBrowser = existsSync(CHROMIUM);
+const inCi = process.env.CI === 'true' || process.env.CI === '1';
+
+if (!haveBrowser && !inCi) {
+  console.warn(`Browser tests skipped: no Chromium at ${CHROMIUM} (install it with: apt-get install -y chromium).`);
+}
+
+const describeBrowser = haveBrowser || inCi ? describe : describe.skip;
+
+/** Builds dist/ unless a build newer than the sources is there (set E2E_REBUILD=1 to force). */
+function ensureBuild(): void {
+  const index = join(ROOT, 'dist', 'index.html');
+  const fresh = existsSync(index) && !process.env.E2E_REBUILD;
+  if (!fresh) execSync('npx webpack --mode production', { cwd: ROOT, stdio: 'inherit' });
+}
+
+describeBrowser('preview workbook in Chromium', () => {
+  let server: ChildProcess;
+  let baseUrl = '';
+  let context: BrowserContext;
+  let page: Page;
+  let profile = '';
+  const pageErrors: string[] = [];
+
+  beforeAll(async () => {
+    if (!haveBrowser) throw new Error(`CI=true and no Chromium at ${CHROMIUM}: the browser tests must run in CI (apt-get install -y chromium).`);
+    ensureBuild();
+    mkdirSync(ARTIFACTS, { recursive: true });
+    server = spawn(process.execPath, [join(ROOT, 'scripts', 'serve.js'), '--port', '0', '--no-open'], { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'] });
+    baseUrl = await new Promise<string>((resolve, reject) => {
+      const timer = setTimeout(() => reject(new Error('server did not start')), 15000);
+      server.stdout!.on('data', (chunk: Buffer) => {
+        const m = /(http:\/\/localhost:\d+\/)/.exec(chunk.toString());
+        if (m) {
+          clearTimeout(timer);
+          resolve(m[1]);
+        }
+      });
+      server.on('exit', (code) => reject(new Error(`server exited with ${code}`)));
+    });
+    const { chromium } = await import('playwright-core');
+    profile = mkdtempSync(join(tmpdir(), 'proton-e2e-'));
+    // A fresh profile directory (playwright passes it to Chromium as --user-data-dir).
+    context = await chromium.launchPersistentContext(profile, {
+      executablePath: CHROMIUM,
+      headless: true,
+      args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+      viewport: { width: 1440, height: 900 },
+      acceptDownloads: true,
+    });
+    page = context.pages()[0] ?? (await context.newPage());
+    page.on('pageerror', (e) => pageErrors.push(`pageerror: ${e.message}`));
+    page.on('console', (m) => {
+      if (m.type() === 'error') pageErrors.push(`console: ${m.text()}`);
+    });
+    await page.goto(baseUrl);
+    await page.waitForSelector('body[data-ready="true"]', { timeout: 20000 });
+  }, 180000);
+
+  afterAll(async () => {
+    await context?.close();
+    server?.kill('SIGTERM');
+    if (profile) rmSync(profile, { recursive: true, force: true });
+  });
+
+  const cell = (address: string) => page.locator(`#grid-scroll td[data-cell="${address}"]`);
+
+  test('the demo sheet computes its PROTON formulas, under the CSP, with no page errors', async () => {
+    await expect(cell('E6').textContent()).resolves.toMatch(/^\d+\.\d\d$/);
+    const ph = Number(await cell('E6').textContent());
+    expect(ph).toBeGreaterThan(7);
+    expect(ph).toBeLessThan(8.5);
+    await page.screenshot({ path: join(ARTIFACTS, 'preview-demo.png') });
+    expect(pageErrors).toEqual([]);
+  });
+
+  test('a PROTON formula typed into the grid shows its value', async () => {
+    await cell('G4').click();
+    await page.fill('#formula-input', '=PROTON.PKA("tris", 1, 25)');
+    await page.press('#formula-input', 'Enter');
+    const text = await cell('G4').textContent();
+    // Tris pKa at 25 °C, I = 0: 8.072 (Goldberg et al. 2002, as in the library); tables give 8.06–8.08.
+    expect(Number(text)).toBeGreaterThan(8.05);
+    expect(Number(text)).toBeLessThan(8.09);
+    await cell('G5').click();
+    await page.fill('#formula-input', '=PROTON.GRAMS("no such salt", 10, 100)');
+    await page.press('#formula-input', 'Enter');
+    await expect(cell('G5').textContent()).resolves.toMatch(/^#(VALUE!|N\/A)$/);
+  });
+
+  test('the pane refuses bad input with a message beside the field and writes nothing', async () => {
+    const before = await page.locator('#sheet-tabs .tab').count();
+    await page.fill('#field-volumeMl', 'a lot');
+    await page.click('#build-table');
+    await expect(page.locator('#error-volumeMl').textContent()).resolves.toMatch(/must be a number/);
+    expect(await page.locator('#field-volumeMl').getAttribute('aria-invalid')).toBe('true');
+    expect(await page.locator('#sheet-tabs .tab').count()).toBe(before);
+    await page.fill('#field-volumeMl', '500');
+  });
+
+  test('the pane builds a recipe table on a new sheet whose cells are computed', async () => {
+    await page.fill('#field-phStart', '7.2');
+    await page.fill('#field-phStop', '7.6');
+    await page.fill('#field-phStep', '0.2');
+    await page.fill('#field-useTemperaturesC', '4; 25');
+    await page.click('#build-table');
+    await page.waitForSelector('#pane-status.status-done', { timeout: 30000 });
+    const tabs = await page.locator('#sheet-tabs .tab').allTextContents();
+    expect(tabs).toHaveLength(2);
+    expect(tabs[1]).toMatch(/^HEPES 25 mM pH 7\.2–7\.6$/);
+    // First data row is sheet row 21: target pH A21, grams F21, titrant H21, meter K21.
+    expect(await cell('A21').textContent()).toBe('7.20');
+    expect(Number(await cell('F21').textContent())).toBeGreaterThan(2);
+    expect(Number(await cell('H21').textContent())).toBeGreaterThan(0);
+    expect(Number(await cell('K21').textContent())).toBeGreaterThan(6.5);
+    expect(await page.locator('figure.chart').count()).toBe(2);
+    await page.screenshot({ path: join(ARTIFACTS, 'preview-recipe-table.png') });
+    await page.locator('#pane-root').screenshot({ path: join(ARTIFACTS, 'pane.png') });
+    await page.locator('figure.chart').first().scrollIntoViewIfNeeded();
+    await page.locator('#grid-scroll').screenshot({ path: join(ARTIFACTS, 'preview-charts.png') });
+    expect(pageErrors).toEqual([]);
+  });
+
+  test('the workbook downloads as .xlsx with formulas and their values', async () => {
+    const [download] = await Promise.all([page.waitForEvent('download'), page.click('#download-xlsx')]);
+    const file = join(ARTIFACTS, 'preview-download.xlsx');
+    await download.saveAs(file);
+    expect(statSync(file).size).toBeGreaterThan(5000);
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.readFile(file);
+    const names = wb.worksheets.map((w) => w.name);
+    expect(names[0]).toBe('North bench prep');
+    const e6 = wb.getWorksheet('North bench prep')!.getCell('E6').value as ExcelJS.CellFormulaValue;
+    expect(e6.formula).toBe('PROTON.PH(A6:B8, 4)');
+    expect(typeof e6.result).toBe('number');
+    const recipe = wb.getWorksheet(names[1])!;
+    const h21 = recipe.getCell('H21').value as ExcelJS.CellFormulaValue;
+    expect(h21.formula).toMatch(/^PROTON\.TITRANT\.ML\(/);
+    expect(Number(h21.result)).toBeCloseTo(Number(await cell('H21').textContent()), 2);
+    expect(recipe.getCell('A21').value).toBe(7.2);
+  });
+});

@@ -1,0 +1,118 @@
+/**
+ * Pane logic end to end without a browser: a recipe table built from typical input into the
+ * preview workbook (HyperFormula with the PROTON functions) must compute; bad input must
+ * write nothing; a values copy carries values and provenance.
+ */
+import { createFormulaEngine } from '../../src/functions/formulaEngine';
+import { PreviewWorkbook } from '../../src/preview/workbook';
+import { checkForm, defaultInput } from '../../src/taskpane/form';
+import { COL, LAYOUT } from '../../src/taskpane/recipeTable';
+import { buildRecipeTable, valuesCopy } from '../../src/taskpane/writer';
+import { PreviewAdapter } from '../../src/workbook/previewAdapter';
+
+function setup() {
+  const book = new PreviewWorkbook(createFormulaEngine({ Notes: [['our own notes']] }));
+  let active = 'Notes';
+  const port = new PreviewAdapter(book, () => ({ sheet: active, range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }), (s) => (active = s));
+  return { book, port, active: () => active };
+}
+
+const NOW = new Date('2026-03-02T09:30:00Z');
+
+describe('recipe table in the preview workbook', () => {
+  test('typical input: HEPES 25 mM with 150 mM NaCl, pH 7.0–7.6 at 4 and 25 °C gives computed rows', async () => {
+    const { book, port, active } = setup();
+    const progress: number[] = [];
+    const result = await buildRecipeTable(port, defaultInput(), { version: '0.1.0', now: NOW, onProgress: (d) => progress.push(d) });
+    expect(result.ok).toBe(true);
+    if (!result.ok) return;
+    expect(result.rows).toBe(8); // 4 pH × 2 temperatures × 1 concentration
+    expect(active()).toBe(result.sheet);
+    expect(book.sheetNames()).toEqual(['Notes', result.sheet]);
+    expect(progress[progress.length - 1]).toBe(8);
+    const row = LAYOUT.firstDataRow;
+    const v = (col: number, r = row) => book.value(result.sheet, r, col);
+    // Grams of HEPES free acid: 25 mM × 1 L × 238.3 g/mol ≈ 5.96 g (molar mass from the formula).
+    expect(v(COL.formGrams)).toBeCloseTo(5.96, 1);
+    expect(typeof v(COL.titrantMl)).toBe('number');
+    expect(v(COL.titrantMl) as number).toBeGreaterThan(0);
+    expect(v(COL.titrantLowMl) as number).toBeLessThan(v(COL.titrantMl) as number);
+    expect(v(COL.titrantHighMl) as number).toBeGreaterThan(v(COL.titrantMl) as number);
+    for (const col of [COL.meter, COL.check, COL.capacity, COL.ionicStrength, COL.osmolarity]) expect(typeof v(col)).toBe('number');
+    // Check column: within a few hundredths of the target (salt is in the check, not in TITRANT.ML).
+    expect(Math.abs((v(COL.check) as number) - 7.0)).toBeLessThan(0.1);
+    expect(v(COL.ionicStrength) as number).toBeGreaterThan(150);
+    expect(book.charts(result.sheet)).toHaveLength(2);
+  });
+
+  test('editing an input recomputes its row (the results are formulas)', async () => {
+    const { book, port } = setup();
+    const result = await buildRecipeTable(port, defaultInput(), { version: '0.1.0', now: NOW });
+    if (!result.ok) throw new Error('not built');
+    const row = LAYOUT.firstDataRow;
+    const before = book.value(result.sheet, row, COL.formGrams) as number;
+    book.setContents(result.sheet, row, COL.concentrationMm, [[50]]);
+    expect(book.value(result.sheet, row, COL.formGrams) as number).toBeCloseTo(before * 2, 6);
+    expect(book.formula(result.sheet, row, COL.formGrams)).toMatch(/^=PROTON\.GRAMS\(/);
+  });
+
+  test('bad input: messages per field and nothing written', async () => {
+    const { book, port } = setup();
+    const result = await buildRecipeTable(port, { ...defaultInput(), phStart: '8', phStop: '7', volumeMl: 'lots', useTemperaturesC: '4; 140' }, { version: '0.1.0' });
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    expect(result.errors.phStop).toMatch(/not be below the first/);
+    expect(result.errors.volumeMl).toMatch(/must be a number/);
+    expect(result.errors.useTemperaturesC).toMatch(/140 is outside from 0 to 100 °C/);
+    expect(book.sheetNames()).toEqual(['Notes']);
+  });
+
+  test('a second table gets a new sheet name, never the first one', async () => {
+    const { book, port } = setup();
+    const a = await buildRecipeTable(port, defaultInput(), { version: '0.1.0', now: NOW });
+    const b = await buildRecipeTable(port, defaultInput(), { version: '0.1.0', now: NOW });
+    if (!a.ok || !b.ok) throw new Error('not built');
+    expect(b.sheet).toBe(`${a.sheet} (2)`);
+    expect(book.sheetNames()).toHaveLength(3);
+  });
+
+  test('values copy: numbers without formulas, under a provenance block', async () => {
+    const { book, port } = setup();
+    const built = await buildRecipeTable(port, defaultInput(), { version: '0.1.0', now: NOW });
+    if (!built.ok) throw new Error('not built');
+    const copy = await valuesCopy(port, { version: '0.1.0', now: NOW, sourceSheet: built.sheet });
+    expect(copy.sheet).toBe(`${built.sheet} values`);
+    const text = (r: number, c: number) => book.value(copy.sheet, r, c);
+    expect(text(1, 1)).toBe('Proton Ledger 0.1.0');
+    expect(text(2, 1)).toBe('davies');
+    expect(text(4, 1)).toBe('4; 25');
+    expect(String(text(5, 1))).toMatch(/HEPES: HEPES \(goldberg2002/);
+    const gramsCopy = book.value(copy.sheet, 9 + LAYOUT.firstDataRow, COL.formGrams);
+    expect(gramsCopy).toBeCloseTo(book.value(built.sheet, LAYOUT.firstDataRow, COL.formGrams) as number, 9);
+    expect(book.formula(copy.sheet, 9 + LAYOUT.firstDataRow, COL.formGrams)).toBeUndefined();
+  });
+});
+
+describe('form checks', () => {
+  test('typed pH list with decimal commas and semicolons', () => {
+    const c = checkForm({ ...defaultInput(), phMode: 'list', phList: '7,2; 7,4; 7.6' });
+    expect(c.ok && c.request.targetPhs).toEqual([7.2, 7.4, 7.6]);
+  });
+  test('start/stop/step series is inclusive and rounded to the step', () => {
+    const c = checkForm({ ...defaultInput(), phStart: '6.8', phStop: '7.4', phStep: '0.1' });
+    expect(c.ok && c.request.targetPhs).toEqual([6.8, 6.9, 7, 7.1, 7.2, 7.3, 7.4]);
+  });
+  test('too many rows is refused with the count', () => {
+    const c = checkForm({ ...defaultInput(), phStart: '1', phStop: '13', phStep: '0.01', useTemperaturesC: '4; 25' });
+    expect(!c.ok && c.errors.phStep).toMatch(/2402 rows/);
+  });
+  test('blank required fields name what to give', () => {
+    const c = checkForm({ ...defaultInput(), buffer: ' ', titrantStockM: '' });
+    expect(!c.ok && c.errors.buffer).toBe('Give a buffer system.');
+    expect(!c.ok && c.errors.titrantStockM).toBe('Give the titrant stock concentration.');
+  });
+  test('a salt concentration without a salt name is refused', () => {
+    const c = checkForm({ ...defaultInput(), saltForm: '', saltMm: '100' });
+    expect(!c.ok && c.errors.saltForm).toMatch(/Name the salt/);
+  });
+});

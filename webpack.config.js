@@ -1,0 +1,120 @@
+/**
+ * Builds the Excel add-in pages and the browser preview into dist/:
+ *   taskpane.html  the task pane; also the shared-runtime page (loads functions.js too)
+ *   functions.html a page that loads only the functions bundle (shared-runtime variant)
+ *   functions.js   worksheet functions registered with CustomFunctions (src/functions/excel.ts)
+ *   functions.json custom-function metadata (copied from src/functions/metadata.json)
+ *   index.html     the preview workbook (grid + formula engine + task pane), no Excel needed
+ *   office.js …    Office.js served from @microsoft/office-js (no network at run time)
+ *   assets/, help/ icons and the worksheet-function help page
+ * HyperFormula (GPL-3.0) is only in the preview bundle, never in the Excel bundles.
+ */
+'use strict';
+const fs = require('fs');
+const path = require('path');
+const HtmlWebpackPlugin = require('html-webpack-plugin');
+const CopyWebpackPlugin = require('copy-webpack-plugin');
+const { helpPage } = require('./scripts/markdownPage');
+
+const root = __dirname;
+const DEV_PORT = 3000;
+const FUNCTIONS_ENTRY = path.join(root, 'src/functions/excel.ts');
+const METADATA = path.join(root, 'src/functions/metadata.json');
+const FUNCTIONS_DOC = path.join(root, 'docs/functions.md');
+const OFFICE_JS = path.join(root, 'node_modules/@microsoft/office-js/dist');
+
+/** Content-Security-Policy of the preview page: only our own scripts, no eval, nothing remote. */
+const PREVIEW_CSP = [
+  "default-src 'self'",
+  "script-src 'self'",
+  "style-src 'self'",
+  "img-src 'self' data: blob:",
+  "connect-src 'self'",
+  "font-src 'self'",
+  "object-src 'none'",
+  "base-uri 'none'",
+  "form-action 'none'",
+].join('; ');
+
+/** Files the build writes that manifest.xml points at (checked by test/manifest.test.ts). */
+const OUTPUTS = ['taskpane.html', 'functions.html', 'functions.js', 'functions.json', 'help/functions.html', 'index.html'];
+
+/** Writes help/functions.html from docs/functions.md (or a short note until that doc exists). */
+class HelpPagePlugin {
+  apply(compiler) {
+    compiler.hooks.thisCompilation.tap('HelpPagePlugin', (compilation) => {
+      compilation.hooks.processAssets.tap({ name: 'HelpPagePlugin', stage: compiler.webpack.Compilation.PROCESS_ASSETS_STAGE_ADDITIONAL }, () => {
+        const { RawSource } = compiler.webpack.sources;
+        const markdown = fs.existsSync(FUNCTIONS_DOC)
+          ? fs.readFileSync(FUNCTIONS_DOC, 'utf8')
+          : '# Proton Ledger worksheet functions\n\nThe function reference is not written yet.';
+        if (fs.existsSync(FUNCTIONS_DOC)) compilation.fileDependencies.add(FUNCTIONS_DOC);
+        compilation.emitAsset('help/functions.html', new RawSource(helpPage('Proton Ledger — worksheet functions', markdown)));
+        compilation.emitAsset('help/help.css', new RawSource(fs.readFileSync(path.join(root, 'src/taskpane/help.css'), 'utf8')));
+      });
+    });
+  }
+}
+
+module.exports = (env, argv) => {
+  const production = argv.mode !== 'development';
+  const hasFunctions = fs.existsSync(FUNCTIONS_ENTRY);
+  const entry = {
+    taskpane: './src/taskpane/taskpane.ts',
+    preview: './src/preview/preview.ts',
+  };
+  if (hasFunctions) entry.functions = './src/functions/excel.ts';
+  else console.warn('[webpack] src/functions/excel.ts not found: building without the functions bundle');
+  const sharedChunks = hasFunctions ? ['functions', 'taskpane'] : ['taskpane'];
+
+  const copies = [
+    { from: 'assets/*.png', to: 'assets/[name][ext]' },
+    // exceljs's prebuilt browser bundle, loaded by the preview only when a download is asked for.
+    { from: 'node_modules/exceljs/dist/exceljs.min.js', to: 'vendor/exceljs.min.js', info: { minimized: true } },
+    { from: 'src/taskpane/pane.css', to: 'pane.css' },
+    { from: 'src/preview/preview.css', to: 'preview.css' },
+    { from: path.join(OFFICE_JS, '*.js').replace(/\\/g, '/'), to: 'office/[name][ext]', globOptions: { ignore: ['**/*.debug.js'] } },
+    // Office.js loads its host- and locale-specific files from folders beside itself.
+    { from: path.join(OFFICE_JS, 'en-us').replace(/\\/g, '/'), to: 'office/en-us', noErrorOnMissing: true },
+  ];
+  if (fs.existsSync(METADATA)) copies.push({ from: 'src/functions/metadata.json', to: 'functions.json' });
+
+  return {
+    mode: production ? 'production' : 'development',
+    // Source maps as files: no eval() in any bundle, so the preview's CSP holds in dev too.
+    devtool: 'source-map',
+    context: root,
+    entry,
+    output: { path: path.join(root, 'dist'), filename: '[name].js', clean: true },
+    resolve: { extensions: ['.ts', '.js', '.json'] },
+    module: {
+      rules: [
+        { test: /\.ts$/, exclude: /node_modules/, use: { loader: 'ts-loader', options: { transpileOnly: true, configFile: 'tsconfig.json' } } },
+      ],
+    },
+    performance: { hints: false },
+    // Not minified: webpack's minimizer took about four minutes over these bundles here
+    // (HyperFormula and the copied Office.js files); served from localhost the size does not matter.
+    optimization: { minimize: false },
+    plugins: [
+      new HtmlWebpackPlugin({ filename: 'taskpane.html', template: './src/taskpane/taskpane.html', chunks: sharedChunks, inject: 'body' }),
+      new HtmlWebpackPlugin({ filename: 'functions.html', template: './src/taskpane/functions.html', chunks: hasFunctions ? ['functions'] : [], inject: 'body' }),
+      new HtmlWebpackPlugin({ filename: 'index.html', template: './src/preview/index.html', chunks: ['preview'], inject: 'body', templateParameters: { csp: PREVIEW_CSP } }),
+      new CopyWebpackPlugin({ patterns: copies }),
+      new HelpPagePlugin(),
+    ],
+    devServer: {
+      port: DEV_PORT,
+      // webpack-dev-server makes and keeps its own self-signed certificate (see docs/excel.md).
+      server: 'https',
+      headers: { 'Access-Control-Allow-Origin': '*' },
+      static: false,
+      hot: false,
+      liveReload: true,
+      client: { overlay: false },
+    },
+  };
+};
+module.exports.OUTPUTS = OUTPUTS;
+module.exports.PREVIEW_CSP = PREVIEW_CSP;
+module.exports.DEV_PORT = DEV_PORT;
