@@ -2,7 +2,7 @@
  * Buffer capacity, and how the pH answers to a load of acid or base, dilution and
  * temperature.
  */
-import { Composition, PreparedComposition, prepare } from './composition';
+import { Composition, PreparedComposition, prepare, systemAt, withConditions } from './composition';
 import { requireNumber } from './errors';
 import { SpeciationResult, speciate, solvePrepared } from './speciation';
 import { netStrongBaseForPh } from './titration';
@@ -69,7 +69,7 @@ export function capacityOfPrepared(p: PreparedComposition, pH: number): Capacity
  * @returns β in mol/L per pH
  */
 export function idealCapacityAt(composition: Composition, pH: number): number {
-  const p = prepare({ ...composition, activityModel: 'ideal' });
+  const p = prepare(withConditions(composition, composition.temperatureC, 'ideal'));
   const h = Math.pow(10, -pH);
   let beta = h + p.kw / h;
   for (let j = 0; j < p.totals.length; j++) {
@@ -115,7 +115,7 @@ export function afterLoad(composition: Composition, load: AcidBaseLoad): Speciat
   const anion = load.acidAnion ?? 'Cl-';
   ions[cation] = (ions[cation] ?? 0) + baseM;
   ions[anion] = (ions[anion] ?? 0) + acidM;
-  return speciate({ ...composition, strongIons: ions });
+  return speciate({ systems: composition.systems, strongIons: ions, temperatureC: composition.temperatureC, activityModel: composition.activityModel });
 }
 
 /** Largest dilution factor accepted. */
@@ -138,9 +138,10 @@ export function scaleComposition(composition: Composition, scale: number): Compo
   const strongIons: Record<string, number> = {};
   for (const [name, c] of Object.entries(composition.strongIons ?? {})) strongIons[name] = c * scale;
   return {
-    ...composition,
-    systems: composition.systems.map((s) => ({ ...s, totalM: s.totalM * scale })),
+    systems: composition.systems.map((s) => systemAt(s, s.totalM * scale)),
     strongIons,
+    temperatureC: composition.temperatureC,
+    activityModel: composition.activityModel,
   };
 }
 
@@ -152,5 +153,5 @@ export function scaleComposition(composition: Composition, scale: number): Compo
  * @param temperatureC - new temperature, °C
  */
 export function atTemperature(composition: Composition, temperatureC: number): SpeciationResult {
-  return speciate({ ...composition, temperatureC });
+  return speciate(withConditions(composition, temperatureC));
 }

@@ -10,7 +10,7 @@
  * finding (SCIENCE.md, "Amount of a titrant for a known target pH").
  */
 import { ionicStrengthFactor } from './activity';
-import { AcidBaseChemistry, Composition, MAX_CONCENTRATION_M, PreparedComposition, prepare, validateChemistry } from './composition';
+import { AcidBaseChemistry, Composition, MAX_CONCENTRATION_M, PreparedComposition, prepare, systemAt, validateChemistry } from './composition';
 import { ChemError, MESSAGES, requireNumber } from './errors';
 import { selfConsistentIonicStrength } from './ionicStrength';
 import { findStrongIon } from './strongIons';
@@ -200,7 +200,7 @@ export function withTitrant(composition: Composition, titrant: Titrant, concentr
     strongIons[existing ?? key] = (strongIons[existing ?? key] ?? 0) + perMole * concentrationM;
   }
   const systems = titrant.system
-    ? [...composition.systems, { ...titrant.system, totalM: (titrant.systemPerMole ?? 1) * concentrationM }]
+    ? [...composition.systems, systemAt(titrant.system, (titrant.systemPerMole ?? 1) * concentrationM)]
     : composition.systems;
-  return { ...composition, systems, strongIons };
+  return { systems, strongIons, temperatureC: composition.temperatureC, activityModel: composition.activityModel };
 }

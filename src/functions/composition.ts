@@ -6,7 +6,7 @@
  * acid–base system (`phosphate`, `HEPES`: the system alone, with no counter-ions), then as
  * a strong ion (`Na+`, `chloride`). Blank rows are ignored.
  */
-import { AcidBaseSystem, ActivityModel, ChemError, Composition, findStrongIon } from '../chem';
+import { AcidBaseSystem, ActivityModel, ChemError, Composition, findStrongIon, systemAt, withConditions } from '../chem';
 import { FormAmount, MAX_FORM_CONCENTRATION_M, SubstanceLibrary, chemistryOf } from '../chem/library';
 import { isBlank, toNumber, toRange, toText } from './coerce';
 import { invalid, withContext } from './errors';
@@ -72,7 +72,7 @@ function buildComposition(library: SubstanceLibrary, range: readonly (readonly u
       else if (ingredient.kind === 'ion') ions[ingredient.ion] = (ions[ingredient.ion] ?? 0) + mM / 1000;
       else {
         const prev = systems.get(ingredient.system.name);
-        systems.set(ingredient.system.name, { ...ingredient.system, totalM: (prev?.totalM ?? 0) + mM / 1000 });
+        systems.set(ingredient.system.name, systemAt(ingredient.system, (prev?.totalM ?? 0) + mM / 1000));
       }
     } catch (error) {
       withContext(error, COMPOSITION_ARGUMENT, index + 1);
@@ -85,7 +85,7 @@ function buildComposition(library: SubstanceLibrary, range: readonly (readonly u
   const merged = [...fromForms.systems];
   for (const sys of systems.values()) {
     const i = merged.findIndex((s) => s.name === sys.name);
-    if (i >= 0) merged[i] = { ...merged[i], totalM: merged[i].totalM + sys.totalM };
+    if (i >= 0) merged[i] = systemAt(merged[i], merged[i].totalM + sys.totalM);
     else merged.push(sys);
   }
   return { systems: merged, strongIons: fromForms.strongIons };
@@ -112,5 +112,5 @@ export function compositionFrom(library: SubstanceLibrary, value: unknown, tempe
     base = buildComposition(library, range);
     cache.set(key, base);
   }
-  return { ...base, temperatureC, activityModel };
+  return withConditions(base, temperatureC, activityModel);
 }

@@ -43,7 +43,17 @@ const calls = new Lru<Outcome>(CALL_CACHE_SIZE);
 
 /** A cache key for arguments (ranges included); blanks and omitted arguments are alike. */
 export function keyOf(id: string, args: readonly unknown[]): string {
-  return id + JSON.stringify(args, (_k, v: unknown) => (v === undefined ? null : v));
+  // Built by hand for the common scalar arguments (JSON.stringify with a replacer cost
+  // more than the chemistry); strings are length-prefixed so no two argument lists collide.
+  let key = id;
+  for (const a of args) {
+    if (a === undefined || a === null) key += '|_';
+    else if (typeof a === 'number') key += `|n${a}`;
+    else if (typeof a === 'string') key += `|s${a.length}:${a}`;
+    else if (typeof a === 'boolean') key += a ? '|t' : '|f';
+    else key += `|j${JSON.stringify(a, (_k, v: unknown) => (v === undefined ? null : v))}`;
+  }
+  return key;
 }
 
 /**

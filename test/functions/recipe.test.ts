@@ -23,7 +23,7 @@ describe('RECIPE.ROW', () => {
   });
 
   it('accepts numbers as text, blank optional arguments and mixed-case names', () => {
-    const [r] = recipeRow('hepes', '7.4', '25', '500', 'hepes FREE acid', null, null, null, null, null, null, null, null);
+    const [r] = recipeRow('hepes', '7.4', '25', '500', 'hepes FREE acid', null, null, null, null, null, undefined, null, undefined);
     expect(Math.abs((r[5] as number) - 7.4)).toBeLessThan(0.001);
   });
 

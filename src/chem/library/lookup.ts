@@ -9,7 +9,7 @@
  * acid and which the base.
  */
 import { ActivityModel } from '../activity';
-import { AcidBaseChemistry, AcidBaseSystem, Composition } from '../composition';
+import { AcidBaseChemistry, AcidBaseSystem, Composition, systemAt } from '../composition';
 import { ChemError, MESSAGES, requireNumber } from '../errors';
 import { findStrongIon } from '../strongIons';
 import { molarMassOf } from './formula';
@@ -247,7 +247,7 @@ class Library implements SubstanceLibrary {
     for (const [ion, c] of Object.entries(options.extraStrongIons ?? {})) {
       addIon(ion, requireNumber(`extraStrongIons.${ion}`, c, 0, MAX_FORM_CONCENTRATION_M, `0 to ${MAX_FORM_CONCENTRATION_M} mol/L`));
     }
-    const systems: AcidBaseSystem[] = [...totals.values()].map((t) => ({ ...t.chemistry, totalM: t.totalM }));
+    const systems: AcidBaseSystem[] = [...totals.values()].map((t) => systemAt(t.chemistry, t.totalM));
     return {
       systems,
       strongIons: ions,

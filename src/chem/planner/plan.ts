@@ -14,7 +14,7 @@
  */
 import { ActivityModel, parseActivityModel } from '../activity';
 import { capacityOfPrepared, scaleComposition } from '../capacity';
-import { AcidBaseSystem, Composition, prepare } from '../composition';
+import { AcidBaseSystem, Composition, prepare, systemAt, withConditions } from '../composition';
 import { ChemError, MESSAGES, requireNumber } from '../errors';
 import { SOURCES } from '../library/sources';
 import { LibraryForm, SubstanceRecord } from '../library/types';
@@ -101,7 +101,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const madeVolumeL = stockVolumeL;
   const finished = base.composition;
 
-  const meterPh = solvePh({ ...scaleComposition(made.composition, 1 / s.partFraction), temperatureC: s.benchT });
+  const meterPh = solvePh(withConditions(scaleComposition(made.composition, 1 / s.partFraction), s.benchT));
   const titration = made.titrant ? titrationPlan(s, made, madeVolumeL) : undefined;
 
   const prepared = prepare(finished);
@@ -112,7 +112,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const predictions = {
     useTemperatureC: s.useT,
     pHAtUse: result.pH,
-    pHAtBench: solvePh({ ...finished, temperatureC: s.benchT }),
+    pHAtBench: solvePh(withConditions(finished, s.benchT)),
     ionicStrengthM: result.ionicStrengthM,
     idealOsmolarityMosm: idealOsmolarity(result) * 1000,
     baseMmPerTenthPh: cap.baseMmPerTenthPh,
@@ -411,7 +411,7 @@ function chargeOf(t: Titrant): number {
 function shiftSystem(c: Composition, name: string, shift: number): Composition {
   return {
     ...c,
-    systems: c.systems.map((sys): AcidBaseSystem => (sys.name === name ? { ...sys, steps: sys.steps.map((st) => ({ ...st, pKa: st.pKa + shift })) } : sys)),
+    systems: c.systems.map((sys): AcidBaseSystem => (sys.name === name ? systemAt({ name: sys.name, chargeOfMostProtonated: sys.chargeOfMostProtonated, steps: sys.steps.map((st) => ({ pKa: st.pKa + shift, deltaHkJ: st.deltaHkJ, deltaCpJ: st.deltaCpJ })) }, sys.totalM) : sys)),
   };
 }
 
@@ -419,7 +419,7 @@ function shiftSystem(c: Composition, name: string, shift: number): Composition {
 function dpHdT(c: Composition, t: number): number {
   const lo = Math.max(0, t - DPH_DT_STEP_C);
   const hi = Math.min(100, t + DPH_DT_STEP_C);
-  return (solvePh({ ...c, temperatureC: hi }) - solvePh({ ...c, temperatureC: lo })) / (hi - lo);
+  return (solvePh(withConditions(c, hi)) - solvePh(withConditions(c, lo))) / (hi - lo);
 }
 
 function purityOf(s: Settled, form: LibraryForm): number {
