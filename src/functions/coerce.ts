@@ -28,6 +28,65 @@ function parseNumber(value: unknown): number | undefined {
   return Number(text);
 }
 
+/**
+ * Units a number typed as text may carry, by the unit in the argument's name (its
+ * suffix: `concentrationMm`, `titrantConcentrationM`, `volumeMl`, `temperatureC`), with the
+ * factor that converts each to the argument's own unit.
+ */
+const UNITS_BY_SUFFIX: readonly (readonly [RegExp, Readonly<Record<string, number>>])[] = [
+  [/(Mm|\(mM\))$/, { mM: 1, M: 1000, 'µM': 0.001, uM: 0.001 }],
+  [/(M|\(M\))$/, { M: 1, mM: 0.001 }],
+  [/(Ml|\(mL\))$/, { mL: 1, L: 1000, 'µL': 0.001, uL: 0.001 }],
+  [/(C|\(°C\))$/, { '°C': 1, C: 1, '° C': 1 }],
+  [/Ph$/, { pH: 1 }],
+];
+
+function unitsFor(argument: string): Readonly<Record<string, number>> | undefined {
+  return UNITS_BY_SUFFIX.find(([suffix]) => suffix.test(argument))?.[1];
+}
+
+/** The factor of a unit as typed (case matters only where it must: M versus mM). */
+function unitFactor(units: Readonly<Record<string, number>> | undefined, typed: string): number | undefined {
+  if (!units) return undefined;
+  if (units[typed] !== undefined) return units[typed];
+  const lower = typed.toLowerCase();
+  const matches = Object.keys(units).filter((u) => u.toLowerCase() === lower);
+  return matches.length === 1 ? units[matches[0]] : undefined;
+}
+
+/**
+ * Reads what a user typed: a number, numeric text ("7.4"), a decimal comma ("7,4"), or a
+ * number with the argument's unit ("50 mM", "0.5 L", "25 °C", "pH 7.4"). Throws a message
+ * naming the argument when the text cannot be read or carries a unit the argument does
+ * not take.
+ */
+function readNumber(argument: string, value: unknown): number {
+  const plain = parseNumber(value);
+  if (plain !== undefined) return plain;
+  if (typeof value !== 'string') throw invalid(SHEET_MESSAGES.notANumber(argument, value));
+  let text = value.trim().replace(/\s+/g, ' ');
+  if (/^ph\s*/i.test(text) && /Ph$/.test(argument)) text = text.replace(/^ph\s*/i, '');
+  const match = /^([+-]?[\d.,]+(?:e[+-]?\d+)?)\s*([^\d\s].*)?$/i.exec(text);
+  if (!match) throw invalid(SHEET_MESSAGES.notANumber(argument, value));
+  let digits = match[1];
+  if (digits.includes(',')) {
+    // One comma and no point is a decimal comma ("7,4"); three digits after it could be a
+    // thousands separator ("1,000"), so that is refused rather than guessed.
+    if (digits.includes('.') || (digits.match(/,/g) ?? []).length > 1 || /,\d{3}$/.test(digits)) {
+      throw invalid(SHEET_MESSAGES.ambiguousNumber(argument, value));
+    }
+    digits = digits.replace(',', '.');
+  }
+  const n = parseNumber(digits);
+  if (n === undefined) throw invalid(SHEET_MESSAGES.notANumber(argument, value));
+  const unit = match[2]?.trim();
+  if (!unit) return n;
+  const units = unitsFor(argument);
+  const factor = unitFactor(units, unit);
+  if (factor === undefined) throw invalid(SHEET_MESSAGES.wrongUnit(argument, unit, units ? Object.keys(units) : []));
+  return n * factor;
+}
+
 /** Limits for a numeric argument. */
 export interface NumberRule {
   /** Used when the argument is blank; without it a blank is an error. */
@@ -53,8 +112,7 @@ export function toNumber(argument: string, value: unknown, rule: NumberRule = {}
     if (rule.default !== undefined) return rule.default;
     throw invalid(SHEET_MESSAGES.blank(argument, rule.allowed ? `a number, ${rule.allowed}` : 'a number'));
   }
-  const n = parseNumber(value);
-  if (n === undefined) throw invalid(SHEET_MESSAGES.notANumber(argument, value));
+  const n = readNumber(argument, value);
   const min = rule.min ?? -Infinity;
   const max = rule.max ?? Infinity;
   const allowed = rule.allowed ?? `${min} to ${max}`;

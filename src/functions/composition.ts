@@ -17,6 +17,9 @@ import { SHEET_MESSAGES } from './messages';
 /** The argument's name in messages. */
 export const COMPOSITION_ARGUMENT = 'composition';
 
+/** Most rows a composition range may have: far more than any buffer has ingredients, few enough to read in well under a millisecond. */
+export const MAX_COMPOSITION_ROWS = 1000;
+
 /** Largest amount accepted in a composition row, mM (the library's per-form limit). */
 export const MAX_AMOUNT_MM = MAX_FORM_CONCENTRATION_M * 1000;
 
@@ -101,6 +104,10 @@ function buildComposition(library: SubstanceLibrary, range: readonly (readonly u
  */
 export function compositionFrom(library: SubstanceLibrary, value: unknown, temperatureC: number, activityModel: ActivityModel): Composition {
   const range = toRange(value);
+  if (range.length > MAX_COMPOSITION_ROWS) {
+    // A whole column passed by mistake: refuse before reading it, whatever is in it.
+    throw invalid(SHEET_MESSAGES.tooManyRows(COMPOSITION_ARGUMENT, range.length, MAX_COMPOSITION_ROWS));
+  }
   if (range.length > 0 && range.every((row) => row.length < 2) && !range.every((row) => row.every(isBlank))) {
     throw invalid(SHEET_MESSAGES.tooFewColumns(COMPOSITION_ARGUMENT, 1, 'two: a name and an amount in mM'));
   }

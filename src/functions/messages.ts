@@ -32,6 +32,12 @@ export const SHEET_MESSAGES = {
     `${argument}: cannot read "${text}" as a list of numbers; write them as "6.1; 7.2".`,
   titrantExceedsVolume: (titrantMl: number, finalVolumeMl: number) =>
     `The titrant stock is too dilute: it would take ${titrantMl.toPrecision(4)} mL, more than the final volume of ${finalVolumeMl} mL; use a stronger stock.`,
+  ambiguousNumber: (argument: string, value: unknown) =>
+    `${argument}: cannot tell how to read ${describe(value)}; write the number with a point as the decimal mark and no thousands separators (e.g. 1000 or 7.4).`,
+  wrongUnit: (argument: string, unit: string, allowed: readonly string[]) =>
+    `${argument}: the unit "${unit}" does not fit; ${allowed.length ? `allowed: ${allowed.join(', ')} (or a plain number)` : 'give a plain number'}.`,
+  tooManyRows: (argument: string, rows: number, limit: number) =>
+    `${argument} has ${rows} rows; allowed: up to ${limit} rows with values.`,
   oneFormOnly: (argument: string, text: string) =>
     `${argument}: "${text}" names two forms; a recipe row titrates one form (use RECIPE for two forms).`,
   recipeTooLong: (rows: number, limit: number) =>
