@@ -29,6 +29,7 @@ export const recipeInputSchema = z
     partVolumeFraction: number.optional(),
     purityPercent: z.record(z.string(), number).optional(),
     activityModel: z.enum(ACTIVITY_MODELS as [ActivityModel, ...ActivityModel[]]).optional(),
+    pKaUncertainty: number.optional(),
     userSubstances: userSubstancesSchema,
   })
   .strict();

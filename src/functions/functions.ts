@@ -13,7 +13,7 @@
 import { apparentPKa, capacity, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
 import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
-import { DEFAULT_PART_VOLUME_FRACTION, RecipeInput, planRecipe } from '../chem/planner';
+import { DEFAULT_PART_VOLUME_FRACTION, DEFAULT_STOCK_TOLERANCE_PERCENT, RecipeInput, planRecipe } from '../chem/planner';
 import { formatMl } from '../chem/planner/protocol';
 import { compositionFrom, MAX_AMOUNT_MM } from './composition';
 import { SheetError, invalid } from './errors';
@@ -71,18 +71,20 @@ export function ph(composition: any[][], temperatureC?: any, activityModel?: any
  * @param titrantConcentrationM Concentration of the titrant stock, mol/L.
  * @param [temperatureC] Temperature at which the pH is adjusted, °C (blank: 25).
  * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [salts] Two columns: other forms in the final solution and their mM (e.g. "NaCl", 150); they shift the pH, so the titrant too.
  * @param [userSubstances] Range of your own substances.
  * @returns Titrant stock to add, mL.
  */
-export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, targetPh: any, titrant: any, titrantConcentrationM: any, temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
-  return memoised('TITRANT.ML', [form, concentrationMm, finalVolumeMl, targetPh, titrant, titrantConcentrationM, temperatureC, activityModel, userSubstances], () => {
+export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, targetPh: any, titrant: any, titrantConcentrationM: any, temperatureC?: any, activityModel?: any, salts?: any[][], userSubstances?: any[][]): number {
+  return memoised('TITRANT.ML', [form, concentrationMm, finalVolumeMl, targetPh, titrant, titrantConcentrationM, temperatureC, activityModel, salts, userSubstances], () => {
     const s = setup(temperatureC, activityModel, userSubstances);
     const formName = toText('form', form);
     const mM = toNumber('concentrationMm', concentrationMm, { min: 0, max: MAX_AMOUNT_MM, allowed: `0 to ${MAX_AMOUNT_MM} mM` });
     const volumeMl = toNumber('finalVolumeMl', finalVolumeMl, { min: Number.MIN_VALUE, max: MAX_VOLUME_ML, allowed: `above 0 up to ${MAX_VOLUME_ML} mL` });
     const target = toNumber('targetPh', targetPh, { min: 0, max: 14, allowed: '0 to 14' });
     const stockM = toNumber('titrantConcentrationM', titrantConcentrationM, { min: Number.MIN_VALUE, max: 20, allowed: 'above 0 up to 20 mol/L' });
-    const composition = compositionFrom(s.library, [[formName, mM]], s.temperatureC, s.model);
+    const others = isBlankRange(salts) ? [] : toRange(salts);
+    const composition = compositionFrom(s.library, [[formName, mM], ...others], s.temperatureC, s.model);
     const t = titrantFromForm(s.library.findForm(toText('titrant', titrant)), s.library);
     const ml = (titrantForPh(composition, t, target).concentrationM * volumeMl) / stockM;
     if (ml > volumeMl) throw new SheetError('na', SHEET_MESSAGES.titrantExceedsVolume(ml, volumeMl));
@@ -307,7 +309,8 @@ export const RECIPE_TABLE_HEADER = ['section', 'item', 'value', 'unit'] as const
 /** The planner input a RECIPE or RECIPE.ROW call describes. */
 function recipeInput(
   buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form: any, titrant: any, titrantConcentrationM: any,
-  useTemperatureC: any, benchTemperatureC: any, partVolumeFraction: any, salts: any, activityModel: any, twoFormsAllowed: boolean,
+  useTemperatureC: any, benchTemperatureC: any, partVolumeFraction: any, salts: any, pKaUncertainty: any, titrantTolerancePercent: any,
+  activityModel: any, twoFormsAllowed: boolean,
 ): RecipeInput {
   const useT = toTemperature('useTemperatureC', useTemperatureC);
   const formText = isBlank(form) ? undefined : toText('form', form);
@@ -315,6 +318,7 @@ function recipeInput(
   const twoForms = pair !== undefined && pair.length === 2;
   if (twoForms && !twoFormsAllowed) throw invalid(SHEET_MESSAGES.oneFormOnly('form', formText!));
   const saltRows = isBlankRange(salts) ? [] : toRange(salts).filter((row) => !row.every(isBlank));
+  const tolerance = toNumber('titrantTolerancePercent', titrantTolerancePercent, { default: DEFAULT_STOCK_TOLERANCE_PERCENT, min: 0, max: 50, allowed: '0 to 50 %' });
   return {
     buffer: toText('buffer', buffer),
     targetPh: toNumber('targetPh', targetPh, { min: 0, max: 14, allowed: '0 to 14' }),
@@ -324,6 +328,7 @@ function recipeInput(
     benchTemperatureC: isBlank(benchTemperatureC) ? useT : toTemperature('benchTemperatureC', benchTemperatureC),
     partVolumeFraction: toNumber('partVolumeFraction', partVolumeFraction, { default: DEFAULT_PART_VOLUME_FRACTION, min: 0.1, max: 1, allowed: '0.1 to 1' }),
     activityModel: toActivityModel('activityModel', activityModel),
+    ...(isBlank(pKaUncertainty) ? {} : { pKaUncertainty: toNumber('pKaUncertainty', pKaUncertainty, { min: 0, max: 1, allowed: '0 to 1 pH unit' }) }),
     salts: saltRows.map((row, i) => ({
       form: toText(`salts row ${i + 1}`, row[0]),
       concentrationMm: toNumber(`salts row ${i + 1} (mM)`, row[1], { min: 0, max: MAX_AMOUNT_MM, allowed: `0 to ${MAX_AMOUNT_MM} mM` }),
@@ -334,7 +339,7 @@ function recipeInput(
           ...(formText === undefined ? {} : { form: formText }),
           ...(isBlank(titrant)
             ? {}
-            : { titrant: { form: toText('titrant', titrant), concentrationM: toNumber('titrantConcentrationM', titrantConcentrationM, { default: 1, min: 1e-6, max: 30, allowed: 'above 0 up to 30 mol/L' }) } }),
+            : { titrant: { form: toText('titrant', titrant), concentrationM: toNumber('titrantConcentrationM', titrantConcentrationM, { default: 1, min: 1e-6, max: 30, allowed: 'above 0 up to 30 mol/L' }), tolerancePercent: tolerance } }),
         }),
   };
 }
@@ -354,17 +359,20 @@ function recipeInput(
  * @param [benchTemperatureC] Temperature at which the pH is adjusted, °C (blank: the temperature of use).
  * @param [partVolumeFraction] Fraction of the final volume in which the pH is adjusted (blank: 0.8).
  * @param [salts] Two columns: salt form and mM (e.g. "NaCl", 150).
+ * @param [pKaUncertainty] pKa uncertainty for the titrant band, pH units (blank: the library's, or 0.02).
+ * @param [titrantTolerancePercent] Tolerance of the titrant stock's concentration, % (blank: 1).
  * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns One row of recipe figures.
  */
 export function recipeRow(
   buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form?: any, titrant?: any, titrantConcentrationM?: any,
-  useTemperatureC?: any, benchTemperatureC?: any, partVolumeFraction?: any, salts?: any[][], activityModel?: any, userSubstances?: any[][],
+  useTemperatureC?: any, benchTemperatureC?: any, partVolumeFraction?: any, salts?: any[][], pKaUncertainty?: any, titrantTolerancePercent?: any,
+  activityModel?: any, userSubstances?: any[][],
 ): any[][] {
-  const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, activityModel, userSubstances];
+  const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, activityModel, userSubstances];
   return memoised('RECIPE.ROW', args, () => {
-    const input = recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, activityModel, false);
+    const input = recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, activityModel, false);
     const plan = planRecipe(input, libraryFor(userSubstances));
     const weighed = plan.components.find((c) => c.role === 'buffer');
     const t = plan.titration;
@@ -388,17 +396,20 @@ export function recipeRow(
  * @param [benchTemperatureC] Temperature at which the pH is adjusted, °C (blank: the temperature of use).
  * @param [partVolumeFraction] Fraction of the final volume in which the pH is adjusted (blank: 0.8).
  * @param [salts] Two columns: salt form and mM (e.g. "NaCl", 150).
+ * @param [pKaUncertainty] pKa uncertainty for the titrant band, pH units (blank: the library's, or 0.02).
+ * @param [titrantTolerancePercent] Tolerance of the titrant stock's concentration, % (blank: 1).
  * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns The recipe, one line per row.
  */
 export function recipe(
   buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form?: any, titrant?: any, titrantConcentrationM?: any,
-  useTemperatureC?: any, benchTemperatureC?: any, partVolumeFraction?: any, salts?: any[][], activityModel?: any, userSubstances?: any[][],
+  useTemperatureC?: any, benchTemperatureC?: any, partVolumeFraction?: any, salts?: any[][], pKaUncertainty?: any, titrantTolerancePercent?: any,
+  activityModel?: any, userSubstances?: any[][],
 ): any[][] {
-  const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, activityModel, userSubstances];
+  const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, activityModel, userSubstances];
   return memoised('RECIPE', args, () => {
-    const input = recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, activityModel, true);
+    const input = recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, activityModel, true);
     const plan = planRecipe(input, libraryFor(userSubstances));
     const p = plan.predictions;
     const rows: (number | string)[][] = [[...RECIPE_TABLE_HEADER]];

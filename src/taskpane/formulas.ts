@@ -46,6 +46,7 @@ export interface RowCells {
 }
 
 export interface SettingCells {
+  readonly buffer: string;
   readonly form: string;
   readonly titrant: string;
   readonly titrantStockM: string;
@@ -58,71 +59,35 @@ export interface SettingCells {
   readonly userSubstances: string;
 }
 
-/** Grams of the weighed form. */
-export const formGrams = (s: SettingCells, r: RowCells) => `=${call('GRAMS', s.form, r.concentrationMm, r.volumeMl, '', s.userSubstances)}`;
-
 /** Grams of the salt, or blank when the sheet names no salt. */
 export const saltGrams = (s: SettingCells, r: RowCells) => `=IF(${s.salt}="","",${call('GRAMS', s.salt, r.saltMm, r.volumeMl, '', s.userSubstances)})`;
 
-function titrantAt(s: SettingCells, r: RowCells, ph: string): string {
-  return call('TITRANT.ML', s.form, r.concentrationMm, r.volumeMl, ph, s.titrant, s.titrantStockM, r.useTemperatureC, s.activityModel, s.userSubstances);
-}
-
-/** Titrant stock to add, mL, for the target pH at the temperature of use. */
-export const titrantMl = (s: SettingCells, r: RowCells) => `=${titrantAt(s, r, r.targetPh)}`;
-
 /**
- * Low and high ends of the titrant band: the volume at target ± the pKa uncertainty (a pKa
- * off by u moves the volume as a target off by u would), widened by the stock's tolerance.
+ * The recipe row: one PROTON.RECIPE.ROW formula whose result spills across
+ * RECIPE_ROW_COLUMNS cells — grams of the form, titrant mL and its band, the meter reading
+ * at the bench, pH at use, capacity both ways, ionic strength, ideal osmolarity, warnings —
+ * all from the recipe planner, salt included.
  */
-export const titrantLowMl = (s: SettingCells, r: RowCells) =>
-  `=MIN(${titrantAt(s, r, `${r.targetPh}-${s.pKaUncertainty}`)},${titrantAt(s, r, `${r.targetPh}+${s.pKaUncertainty}`)})*(1-${s.stockTolerancePercent}/100)`;
-export const titrantHighMl = (s: SettingCells, r: RowCells) =>
-  `=MAX(${titrantAt(s, r, `${r.targetPh}-${s.pKaUncertainty}`)},${titrantAt(s, r, `${r.targetPh}+${s.pKaUncertainty}`)})*(1+${s.stockTolerancePercent}/100)`;
+export const recipeRow = (s: SettingCells, r: RowCells, salts: string) =>
+  `=${call('RECIPE.ROW', s.buffer, r.targetPh, r.concentrationMm, r.volumeMl, s.form, s.titrant, s.titrantStockM, r.useTemperatureC, s.benchTemperatureC, r.partVolumeFraction, salts, s.pKaUncertainty, s.stockTolerancePercent, s.activityModel, s.userSubstances)}`;
+
+/** A salt row for RECIPE.ROW and TITRANT.ML: the salt's name and mM, blank when the sheet names no salt. */
+export const saltName = (s: SettingCells) => `=IF(${s.salt}="","",${s.salt})`;
+export const saltAmount = (s: SettingCells, r: RowCells) => `=IF(${s.salt}="","",${r.saltMm})`;
+
+/** Titrant volume at a pH with the row's salt, mL. */
+function titrantAt(s: SettingCells, r: RowCells, ph: string, salts: string): string {
+  return call('TITRANT.ML', s.form, r.concentrationMm, r.volumeMl, ph, s.titrant, s.titrantStockM, r.useTemperatureC, s.activityModel, salts, s.userSubstances);
+}
 
 /** Titrant amount in the final solution, mM, from its volume (mL × mol/L ÷ mL × 1000). */
 export const titrantMm = (s: SettingCells, r: RowCells) => `=${r.titrantMl}*${s.titrantStockM}/${r.volumeMl}*1000`;
-/** An amount at part volume, mM: everything is in, only water is missing. */
-export const atPartVolume = (mM: string, r: RowCells) => `=IF(${mM}="","",${mM}/${r.partVolumeFraction})`;
 /** A composition row's name cell that turns blank when the name is blank (blank rows are ignored). */
 export const nameOrBlank = (name: string) => `=IF(${name}="","",${name})`;
 export const amountOrBlank = (name: string, mM: string) => `=IF(${name}="","",${mM})`;
 
-/** pH the meter shows at the bench temperature, with the solution at part volume. */
-export const meterReading = (s: SettingCells, partComposition: string) =>
-  `=${call('PH.AT.TEMPERATURE', partComposition, s.benchTemperatureC, s.activityModel, s.userSubstances)}`;
-/** pH of the finished buffer at the temperature of use (salt and titrant included): the check. */
-export const phAtUse = (s: SettingCells, r: RowCells, composition: string) =>
-  `=${call('PH.AT.TEMPERATURE', composition, r.useTemperatureC, s.activityModel, s.userSubstances)}`;
-/** mM of strong base that raises the pH by 0.1. */
-export const capacityMm = (s: SettingCells, r: RowCells, composition: string) =>
-  `=${call('CAPACITY', composition, text('base'), r.useTemperatureC, s.activityModel, s.userSubstances)}`;
-export const ionicStrengthMm = (s: SettingCells, r: RowCells, composition: string) =>
-  `=${call('IONIC.STRENGTH.MM', composition, r.useTemperatureC, s.activityModel, s.userSubstances)}`;
-export const idealOsmolarity = (s: SettingCells, r: RowCells, composition: string) =>
-  `=${call('OSMOLARITY.IDEAL', composition, r.useTemperatureC, s.activityModel, s.userSubstances)}`;
-
-/** pH at which the check may differ from the target before the row says so. */
-export const CHECK_TOLERANCE_PH = 0.02;
-/** Ionic strength above which the Davies model is stretched (SCIENCE.md), mM. */
-export const ACTIVITY_LIMIT_MM = 500;
-/** Temperatures above which the library's constants are extrapolated, °C (fitted range 0–60). */
-export const FITTED_MAX_C = 60;
-
-/** Plain-words warnings for a row, built from its own result cells. */
-export function warnings(r: RowCells, cells: { check: string; ionicStrength: string }): string {
-  const parts = [
-    `IF(ISERROR(${r.titrantMl}),"No titrant volume: see its cell. ","")`,
-    `IF(ISERROR(${r.titrantMl}),"",IF(${r.titrantMl}>0.25*${r.volumeMl},"Titrant over a quarter of the volume: use a stronger stock. ",""))`,
-    `IF(ISERROR(${cells.check}),"",IF(ABS(${cells.check}-${r.targetPh})>${CHECK_TOLERANCE_PH},"Salt and titrant shift the pH to "&ROUND(${cells.check},2)&": finish on the meter. ",""))`,
-    `IF(ISERROR(${cells.ionicStrength}),"",IF(${cells.ionicStrength}>${ACTIVITY_LIMIT_MM},"Ionic strength above 0.5 M: activity model stretched. ",""))`,
-    `IF(${r.useTemperatureC}>${FITTED_MAX_C},"Above ${FITTED_MAX_C} °C: constants extrapolated. ","")`,
-  ];
-  return `=TRIM(${parts.join('&')})`;
-}
-
-/** Titrant volume at a pH, for the curve (the chart's row of the table gives form, amounts and temperature). */
-export const curveTitrantMl = (s: SettingCells, r: RowCells, ph: string) => `=IFERROR(${titrantAt(s, r, ph)},NA())`;
+/** Titrant volume at a pH, for the curve (the chart's row of the table gives form, amounts, salt and temperature). */
+export const curveTitrantMl = (s: SettingCells, r: RowCells, ph: string, salts: string) => `=IFERROR(${titrantAt(s, r, ph, salts)},NA())`;
 /** Capacity at a pH for the capacity curve: the composition of the chart's row at that pH's titrant amount. */
 export const curveCapacity = (s: SettingCells, r: RowCells, composition: string) => `=IFERROR(${call('CAPACITY', composition, text('base'), r.useTemperatureC, s.activityModel, s.userSubstances)},NA())`;
 /** Apparent pKa′ of a step at the row's temperature (for the usable range, pKa′ ± 1). */

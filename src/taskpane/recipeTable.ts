@@ -21,21 +21,22 @@ export const LAYOUT = {
   settingsRow: 3,
   tableHeaderRow: 19,
   firstDataRow: 20,
-  /** Columns of the table (A…P). */
+  /** Columns of the table (A…Q); from "Form to weigh" on, one PROTON.RECIPE.ROW formula fills the row. */
   columns: [
     'Target pH at use',
     'Use at (°C)',
     'Buffer (mM)',
     'Salt (mM)',
     'Final volume (mL)',
-    'Form to weigh (g)',
     'Salt to weigh (g)',
+    'Form to weigh (g)',
     'Titrant (mL)',
     'Titrant low (mL)',
     'Titrant high (mL)',
     'Meter reads at bench (pH)',
     'pH at use (check)',
     'Capacity (mM base per +0.1 pH)',
+    'Capacity (mM acid per −0.1 pH)',
     'Ionic strength (mM)',
     'Ideal osmolarity (mOsm/L)',
     'Warnings',
@@ -53,18 +54,23 @@ export const COL = {
   concentrationMm: 2,
   saltMm: 3,
   volumeMl: 4,
-  formGrams: 5,
-  saltGrams: 6,
+  saltGrams: 5,
+  /** Where the RECIPE.ROW formula sits; the columns after it are its spill. */
+  formGrams: 6,
   titrantMl: 7,
   titrantLowMl: 8,
   titrantHighMl: 9,
   meter: 10,
   check: 11,
   capacity: 12,
-  ionicStrength: 13,
-  osmolarity: 14,
-  warnings: 15,
+  capacityAcid: 13,
+  ionicStrength: 14,
+  osmolarity: 15,
+  warnings: 16,
 } as const;
+
+/** Number formats of the RECIPE.ROW spill, in its column order (form g … warnings). */
+const RECIPE_ROW_FORMATS = ['0.000', '0.00', '0.00', '0.00', '0.00', '0.00', '0.00', '0.00', '0.0', '0', ''] as const;
 
 /** Settings block: label, then value, in rows from LAYOUT.settingsRow. */
 export const SETTING_ROWS = [
@@ -134,33 +140,19 @@ export function sheetBaseName(request: TableRequest): string {
   return `${request.buffer}${mM} ${phText}`;
 }
 
-/** Working composition of a table row: 3 rows × 4 columns (name, mM final; name, mM at part volume). */
-function compositionBlock(top: number, settings: F.SettingCells, r: F.RowCells): { block: CellBlock; full: string; part: string } {
+/** A table row's salt for the formulas: one row × 2 columns (name, mM), blank without a salt. */
+function saltBlock(top: number, settings: F.SettingCells, r: F.RowCells): { block: CellBlock; range: string } {
   const c = LAYOUT.workCol;
-  const rows: [string, string][] = [
-    [`=${settings.form}`, `=${r.concentrationMm}`],
-    [`=${settings.titrant}`, F.titrantMm(settings, r)],
-    [F.nameOrBlank(settings.salt), F.amountOrBlank(settings.salt, r.saltMm)],
-  ];
-  const cells = rows.map(([name, mM], i) => {
-    const finalRef = cellAddress(top + i, c + 1);
-    return [
-      { formula: name },
-      { formula: mM, numberFormat: '0.000' },
-      { formula: name },
-      { formula: F.atPartVolume(finalRef, r), numberFormat: '0.000' },
-    ] as CellWrite[];
-  });
   return {
-    block: { row: top, col: c, cells },
-    full: rangeAddress({ row: top, col: c, rowCount: 3, colCount: 2 }),
-    part: rangeAddress({ row: top, col: c + 2, rowCount: 3, colCount: 2 }),
+    block: { row: top, col: c, cells: [[{ formula: F.saltName(settings) }, { formula: F.saltAmount(settings, r), numberFormat: '0.000' }]] },
+    range: rangeAddress({ row: top, col: c, rowCount: 1, colCount: 2 }),
   };
 }
 
 /** The recipe sheet for a checked request. `builtWith` names the add-in and version for the provenance lines. */
 export function planRecipeSheet(request: TableRequest, options: { builtWith: string; builtOn: string; pKaStep: number }): SheetPlan {
   const settings: F.SettingCells = {
+    buffer: settingRef('Buffer system'),
     form: settingRef('Form weighed'),
     titrant: settingRef('Titrant'),
     titrantStockM: settingRef('Titrant stock (M)'),
@@ -219,38 +211,32 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
   tail.push({
     row: LAYOUT.tableHeaderRow - 1,
     col: LAYOUT.workCol,
-    cells: [[label('Working compositions: three rows per table row (name, mM; name, mM at part volume). The formulas read these; they follow the inputs.', 'note')]],
+    cells: [[label('Salt of each table row (name, mM), as the row formulas read it; it follows the inputs.', 'note')]],
   });
   const rows: CellBlock[] = rowsIn.map((tr, i) => {
     const row = LAYOUT.firstDataRow + i;
     const r = rowCells(row);
-    const comp = compositionBlock(workTop + 3 * i, settings, r);
-    tail.push(comp.block);
-    const check = cellAddress(row, COL.check);
-    const ionic = cellAddress(row, COL.ionicStrength);
+    const salt = saltBlock(workTop + i, settings, r);
+    tail.push(salt.block);
+    // The spill cells stay empty (a value there would block the spill); they carry formats only.
+    const spill: CellWrite[] = RECIPE_ROW_FORMATS.map((numberFormat, k) =>
+      k === 0 ? result(F.recipeRow(settings, r, salt.range), numberFormat) : numberFormat ? { numberFormat, style: 'result' } : { style: 'warning' },
+    );
     const cells: CellWrite[] = [
       input(tr.targetPh, '0.00'),
       input(tr.useTemperatureC, '0.0'),
       input(tr.concentrationMm, '0.0'),
       input(request.saltMm, '0.0'),
       input(request.volumeMl, '0.0'),
-      result(F.formGrams(settings, r), '0.000'),
       result(F.saltGrams(settings, r), '0.000'),
-      result(F.titrantMl(settings, r), '0.00'),
-      result(F.titrantLowMl(settings, r), '0.00'),
-      result(F.titrantHighMl(settings, r), '0.00'),
-      result(F.meterReading(settings, comp.part), '0.00'),
-      result(F.phAtUse(settings, r, comp.full), '0.00'),
-      result(F.capacityMm(settings, r, comp.full), '0.00'),
-      result(F.ionicStrengthMm(settings, r, comp.full), '0.0'),
-      result(F.idealOsmolarity(settings, r, comp.full), '0'),
-      { formula: F.warnings(r, { check, ionicStrength: ionic }), style: 'warning' },
+      ...spill,
     ];
     return { row, col: 0, cells: [cells] };
   });
 
   // Curves for the first row: pH grid, titrant mL at each pH, capacity of that mixture.
   const first = rowCells(LAYOUT.firstDataRow);
+  const firstSalt = rangeAddress({ row: workTop, col: LAYOUT.workCol, rowCount: 1, colCount: 2 });
   const lo = Math.max(1, Math.min(...request.targetPhs) - CURVE_MARGIN_PH);
   const hi = Math.min(13, Math.max(...request.targetPhs) + CURVE_MARGIN_PH);
   const grid: number[] = [];
@@ -282,7 +268,7 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
     const comp = rangeAddress({ row: compTop, col: curveCompCol, rowCount: 3, colCount: 2 });
     curveRows.push([
       { value: ph, numberFormat: '0.0' },
-      { formula: F.curveTitrantMl(settings, first, phRef), numberFormat: '0.00' },
+      { formula: F.curveTitrantMl(settings, first, phRef, firstSalt), numberFormat: '0.00' },
       { formula: `=IF(ISNA(${mlRef}),NA(),${F.curveCapacity(settings, first, comp).slice(1)})`, numberFormat: '0.00' },
     ]);
   });
@@ -346,6 +332,6 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
     rows,
     tail,
     charts,
-    columnWidths: [11, 9, 9, 9, 11, 11, 11, 10, 10, 10, 13, 11, 13, 11, 12, 44, 2],
+    columnWidths: [11, 9, 9, 9, 11, 11, 11, 10, 10, 10, 13, 11, 13, 13, 11, 12, 44, 2],
   };
 }

@@ -3,10 +3,11 @@
  * preview workbook (HyperFormula with the PROTON functions) must compute; bad input must
  * write nothing; a values copy carries values and provenance.
  */
+import { planRecipe } from '../../src/chem/planner';
 import { createFormulaEngine } from '../../src/functions/formulaEngine';
 import { PreviewWorkbook } from '../../src/preview/workbook';
 import { checkForm, defaultInput } from '../../src/taskpane/form';
-import { COL, LAYOUT } from '../../src/taskpane/recipeTable';
+import { COL, LAYOUT, SETTING_VALUE_COL, SettingLabel, settingRow } from '../../src/taskpane/recipeTable';
 import { buildRecipeTable, valuesCopy } from '../../src/taskpane/writer';
 import { PreviewAdapter } from '../../src/workbook/previewAdapter';
 
@@ -39,8 +40,24 @@ describe('recipe table in the preview workbook', () => {
     expect(v(COL.titrantLowMl) as number).toBeLessThan(v(COL.titrantMl) as number);
     expect(v(COL.titrantHighMl) as number).toBeGreaterThan(v(COL.titrantMl) as number);
     for (const col of [COL.meter, COL.check, COL.capacity, COL.ionicStrength, COL.osmolarity]) expect(typeof v(col)).toBe('number');
-    // Check column: within a few hundredths of the target (salt is in the check, not in TITRANT.ML).
-    expect(Math.abs((v(COL.check) as number) - 7.0)).toBeLessThan(0.1);
+    // Check column: the row's recipe (salt included) solves back to its target within 0.001 pH.
+    expect(Math.abs((v(COL.check) as number) - 7.0)).toBeLessThan(0.001);
+    // The table's titrant volume is the planner's, salt included.
+    const setting = (label: SettingLabel) => book.value(result.sheet, settingRow(label), SETTING_VALUE_COL);
+    const plan = planRecipe({
+      buffer: setting('Buffer system') as string,
+      targetPh: 7.0,
+      useTemperatureC: v(COL.useTemperatureC) as number,
+      concentrationMm: v(COL.concentrationMm) as number,
+      volumeMl: v(COL.volumeMl) as number,
+      form: setting('Form weighed') as string,
+      titrant: { form: setting('Titrant') as string, concentrationM: setting('Titrant stock (M)') as number },
+      benchTemperatureC: setting('Bench temp. (°C)') as number,
+      partVolumeFraction: setting('Adjust at (fraction)') as number,
+      salts: [{ form: setting('Salt') as string, concentrationMm: v(COL.saltMm) as number }],
+    });
+    expect(Math.abs((v(COL.titrantMl) as number) - plan.titration!.volumeMl)).toBeLessThan(1e-9);
+    expect(Math.abs((v(COL.meter) as number) - plan.meter.pH)).toBeLessThan(1e-9);
     expect(v(COL.ionicStrength) as number).toBeGreaterThan(150);
     expect(book.charts(result.sheet)).toHaveLength(2);
   });
@@ -53,7 +70,7 @@ describe('recipe table in the preview workbook', () => {
     const before = book.value(result.sheet, row, COL.formGrams) as number;
     book.setContents(result.sheet, row, COL.concentrationMm, [[50]]);
     expect(book.value(result.sheet, row, COL.formGrams) as number).toBeCloseTo(before * 2, 6);
-    expect(book.formula(result.sheet, row, COL.formGrams)).toMatch(/^=PROTON\.GRAMS\(/);
+    expect(book.formula(result.sheet, row, COL.formGrams)).toMatch(/^=PROTON\.RECIPE\.ROW\(/);
   });
 
   test('bad input: messages per field and nothing written', async () => {

@@ -371,7 +371,10 @@ function scaleRoute(r: RouteResult, fold: number): RouteResult {
 function titrationPlan(s: Settled, made: RouteResult, volumeL: number): TitrationPlan {
   const t = made.titrant!;
   const volumeMl = ((t.concentrationM * volumeL) / t.stock.concentrationM) * 1000;
-  const u = Math.max(...s.system.steps.map((step) => step.pKaUncertainty ?? DEFAULT_PKA_UNCERTAINTY));
+  const u =
+    s.input.pKaUncertainty !== undefined
+      ? requireNumber('pKaUncertainty', s.input.pKaUncertainty, 0, 1, '0 to 1 pH unit')
+      : Math.max(...s.system.steps.map((step) => step.pKaUncertainty ?? DEFAULT_PKA_UNCERTAINTY));
   // The amount needed with every pKa of the buffer moved by ±u, to the pH the made solution has.
   const before = t.before;
   const madePh = s.route === 'stock' ? solvePh(made.composition) : s.targetPh;

@@ -74,6 +74,8 @@ export interface RecipeInput {
   readonly purityPercent?: Readonly<Record<string, number>>;
   /** Activity model (default `davies`). */
   readonly activityModel?: ActivityModel;
+  /** pKa uncertainty for the titrant band, pH units (default: the library's, or 0.02 where it gives none). */
+  readonly pKaUncertainty?: number;
 }
 
 /** One thing to measure out. */
