@@ -148,6 +148,20 @@ export class PreviewWorkbook {
     return this.engine.getCellFormula({ sheet: this.sheetId(sheet), row, col });
   }
 
+  /**
+   * The rectangle a formula's result fills (1×1 for a single value): the cells to its right
+   * and below that belong to an array and hold no formula of their own.
+   */
+  spillSize(sheet: string, row: number, col: number): { rows: number; cols: number } {
+    const id = this.sheetId(sheet);
+    const spilled = (r: number, c: number) => this.engine.isCellPartOfArray({ sheet: id, row: r, col: c }) && this.engine.getCellFormula({ sheet: id, row: r, col: c }) === undefined;
+    let cols = 1;
+    while (spilled(row, col + cols)) cols++;
+    let rows = 1;
+    while (spilled(row + rows, col)) rows++;
+    return { rows, cols };
+  }
+
   /** What the formula bar shows: the formula, or the raw value as text. */
   rawText(sheet: string, row: number, col: number): string {
     const f = this.formula(sheet, row, col);

@@ -4,6 +4,7 @@
  * widths. exceljs writes no charts, so the file holds the charts' data but not the charts.
  */
 import type * as ExcelJSTypes from 'exceljs';
+import { cellAddress } from '../workbook/port';
 import type { PreviewWorkbook } from './workbook';
 
 type ExcelJSModule = typeof ExcelJSTypes;
@@ -50,7 +51,11 @@ export async function workbookToXlsx(book: PreviewWorkbook, version: string): Pr
         const cell = ws.getCell(r + 1, c + 1);
         const result = value !== null && typeof value === 'object' ? ({ error: value.error } as ExcelJSTypes.CellErrorValue) : value;
         if (formula !== undefined) {
-          cell.value = { formula: formula.replace(/^=/, ''), result: result ?? undefined } as ExcelJSTypes.CellFormulaValue;
+          // A result that fills several cells is written as an array formula over them, so
+          // Excel recomputes it in place; the other cells keep their cached values.
+          const size = book.spillSize(name, r, c);
+          const ref = size.rows * size.cols > 1 ? `${cellAddress(r, c)}:${cellAddress(r + size.rows - 1, c + size.cols - 1)}` : undefined;
+          cell.value = { formula: formula.replace(/^=/, ''), result: result ?? undefined, ...(ref ? { shareType: 'array', ref } : {}) } as ExcelJSTypes.CellFormulaValue;
         } else {
           cell.value = result as ExcelJSTypes.CellValue;
         }

@@ -7,7 +7,7 @@
  * where a missing browser is a failure.
  */
 import { ChildProcess, execSync, spawn } from 'child_process';
-import { existsSync, mkdirSync, mkdtempSync, rmSync, statSync } from 'fs';
+import { existsSync, mkdirSync, mkdtempSync, readdirSync, rmSync, statSync } from 'fs';
 import { tmpdir } from 'os';
 import { join } from 'path';
 import type { BrowserContext, Page } from 'playwright-core';
@@ -25,10 +25,20 @@ if (!haveBrowser && !inCi) {
 
 const describeBrowser = haveBrowser || inCi ? describe : describe.skip;
 
-/** Builds dist/ unless a build newer than the sources is there (set E2E_REBUILD=1 to force). */
+/** Newest modification time of the files under a folder, ms. */
+function newest(dir: string): number {
+  let t = 0;
+  for (const entry of readdirSync(dir, { withFileTypes: true })) {
+    const path = join(dir, entry.name);
+    t = Math.max(t, entry.isDirectory() ? newest(path) : statSync(path).mtimeMs);
+  }
+  return t;
+}
+
+/** Builds dist/ unless a build newer than every source file is there (set E2E_REBUILD=1 to force). */
 function ensureBuild(): void {
   const index = join(ROOT, 'dist', 'index.html');
-  const fresh = existsSync(index) && !process.env.E2E_REBUILD;
+  const fresh = existsSync(index) && !process.env.E2E_REBUILD && statSync(index).mtimeMs > newest(join(ROOT, 'src'));
   if (!fresh) execSync('npx webpack --mode production', { cwd: ROOT, stdio: 'inherit' });
 }
 
@@ -126,9 +136,10 @@ describeBrowser('preview workbook in Chromium', () => {
     const tabs = await page.locator('#sheet-tabs .tab').allTextContents();
     expect(tabs).toHaveLength(2);
     expect(tabs[1]).toMatch(/^HEPES 25 mM pH 7\.2–7\.6$/);
-    // First data row is sheet row 21: target pH A21, grams F21, titrant H21, meter K21.
+    // First data row is sheet row 21: target pH A21, grams G21, titrant H21, meter K21, pH at use L21.
     expect(await cell('A21').textContent()).toBe('7.20');
-    expect(Number(await cell('F21').textContent())).toBeGreaterThan(2);
+    expect(Number(await cell('G21').textContent())).toBeGreaterThan(2);
+    expect(await cell('L21').textContent()).toBe('7.20');
     expect(Number(await cell('H21').textContent())).toBeGreaterThan(0);
     expect(Number(await cell('K21').textContent())).toBeGreaterThan(6.5);
     expect(await page.locator('figure.chart').count()).toBe(2);
@@ -152,9 +163,12 @@ describeBrowser('preview workbook in Chromium', () => {
     expect(e6.formula).toBe('PROTON.PH(A6:B8, 4)');
     expect(typeof e6.result).toBe('number');
     const recipe = wb.getWorksheet(names[1])!;
-    const h21 = recipe.getCell('H21').value as ExcelJS.CellFormulaValue;
-    expect(h21.formula).toMatch(/^PROTON\.TITRANT\.ML\(/);
-    expect(Number(h21.result)).toBeCloseTo(Number(await cell('H21').textContent()), 2);
+    // G21 holds the row's PROTON.RECIPE.ROW formula, written as an array formula over G21:Q21; H21 (titrant mL) holds its cached value.
+    const g21 = recipe.getCell('G21').value as ExcelJS.CellFormulaValue & { shareType?: string; ref?: string };
+    expect(g21.formula).toMatch(/^PROTON\.RECIPE\.ROW\(/);
+    expect(g21.shareType).toBe('array');
+    expect(g21.ref).toBe('G21:Q21');
+    expect(Number(recipe.getCell('H21').value)).toBeCloseTo(Number(await cell('H21').textContent()), 2);
     expect(recipe.getCell('A21').value).toBe(7.2);
   });
 });
