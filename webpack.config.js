@@ -14,6 +14,7 @@ const fs = require('fs');
 const path = require('path');
 const HtmlWebpackPlugin = require('html-webpack-plugin');
 const CopyWebpackPlugin = require('copy-webpack-plugin');
+const TerserPlugin = require('terser-webpack-plugin');
 const { helpPage } = require('./scripts/markdownPage');
 
 const root = __dirname;
@@ -89,13 +90,17 @@ module.exports = (env, argv) => {
     resolve: { extensions: ['.ts', '.js', '.json'] },
     module: {
       rules: [
-        { test: /\.ts$/, exclude: /node_modules/, use: { loader: 'ts-loader', options: { transpileOnly: true, configFile: 'tsconfig.json' } } },
+        { test: /\.ts$/, exclude: /node_modules/, use: { loader: 'ts-loader', options: { transpileOnly: true, configFile: 'tsconfig.json', compilerOptions: { module: 'es2020' } } } },
       ],
     },
     performance: { hints: false },
-    // Not minified: webpack's minimizer took about four minutes over these bundles here
-    // (HyperFormula and the copied Office.js files); served from localhost the size does not matter.
-    optimization: { minimize: false },
+    // The Excel bundles are minified; the preview bundle (HyperFormula) and the copied
+    // Office.js and exceljs files are not: minifying those took about four minutes here, and
+    // they are served from our own origin, where their size does not matter.
+    optimization: {
+      minimize: production,
+      minimizer: [new TerserPlugin({ exclude: [/^office\//, /^vendor\//, /^preview/], terserOptions: { compress: { passes: 2 } } })],
+    },
     plugins: [
       new HtmlWebpackPlugin({ filename: 'taskpane.html', template: './src/taskpane/taskpane.html', chunks: sharedChunks, inject: 'body' }),
       new HtmlWebpackPlugin({ filename: 'functions.html', template: './src/taskpane/functions.html', chunks: hasFunctions ? ['functions'] : [], inject: 'body' }),

@@ -60,7 +60,7 @@ console.log(`formula engine, change one temperature (100 cells recalculated): ${
 engine.value.destroy();
 
 // Bundle size: the webpack side builds dist/functions.js.
-const bundle = join(__dirname, '../dist/functions.js');
+const bundle = join(process.cwd(), 'dist/functions.js');
 if (existsSync(bundle)) {
   const kb = statSync(bundle).size / 1024;
   console.log(`dist/functions.js: ${kb.toFixed(1)} KB minified, ${(gzipSync(readFileSync(bundle)).length / 1024).toFixed(1)} KB gzipped (target ≤ ${BUNDLE_TARGET_KB} KB: ${kb <= BUNDLE_TARGET_KB ? 'met' : 'NOT met'})`);

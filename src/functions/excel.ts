@@ -2,10 +2,13 @@
  * Excel entry: registers every function of the generated metadata with
  * CustomFunctions.associate. The only module of src/functions that knows Office; the
  * webpack side bundles it as the custom-functions script (metadata.json is served beside
- * it as functions.json). Importing it outside Excel does nothing.
+ * it as functions.json, which Excel reads). It registers from associations.json, the id →
+ * implementation list generated with metadata.json from the same JSDoc, so the bundle does
+ * not carry the metadata a second time. Importing it outside Excel does nothing.
  */
-import { CATALOG, callFunction } from './catalog';
-import { SheetError } from './errors';
+import associations from './associations.json';
+import { SheetError, toSheetError } from './errors';
+import * as implementations from './functions';
 
 /** The parts of the CustomFunctions global this entry uses (a stand-in can be passed in tests). */
 export type CustomFunctionsApi = Pick<typeof CustomFunctions, 'associate' | 'Error' | 'ErrorCode'>;
@@ -23,14 +26,21 @@ export function toExcelError(api: CustomFunctionsApi, error: SheetError): Custom
  * @returns the ids registered
  */
 export function registerExcelFunctions(api: CustomFunctionsApi): string[] {
-  for (const fn of CATALOG) {
-    api.associate(fn.id, (...args: unknown[]) => {
-      const result = callFunction(fn, args);
-      if (result instanceof SheetError) throw toExcelError(api, result);
+  const byName = implementations as unknown as Record<string, (...args: unknown[]) => unknown>;
+  for (const { id, functionName } of associations) {
+    const implementation = byName[functionName];
+    if (!implementation) throw new Error(`Function ${id} in associations.json has no implementation: run npm run metadata.`);
+    api.associate(id, (...args: unknown[]) => {
+      let result: unknown;
+      try {
+        result = implementation(...args);
+      } catch (error) {
+        throw toExcelError(api, toSheetError(error));
+      }
       return result;
     });
   }
-  return CATALOG.map((f) => f.id);
+  return associations.map((a) => a.id);
 }
 
 if (typeof CustomFunctions !== 'undefined') registerExcelFunctions(CustomFunctions);

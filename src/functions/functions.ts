@@ -83,8 +83,10 @@ export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, t
     const volumeMl = toNumber('finalVolumeMl', finalVolumeMl, { min: Number.MIN_VALUE, max: MAX_VOLUME_ML, allowed: `above 0 up to ${MAX_VOLUME_ML} mL` });
     const target = toNumber('targetPh', targetPh, { min: 0, max: 14, allowed: '0 to 14' });
     const stockM = toNumber('titrantConcentrationM', titrantConcentrationM, { min: Number.MIN_VALUE, max: 20, allowed: 'above 0 up to 20 mol/L' });
-    const others = isBlankRange(salts) ? [] : toRange(salts);
-    const composition = compositionFrom(s.library, [[formName, mM], ...others], s.temperatureC, s.model);
+    // Without other components the composition is the form alone: built directly, it skips the range cache.
+    const composition = isBlankRange(salts)
+      ? s.library.compositionFromForms([{ form: formName, concentrationM: mM / 1000 }], { temperatureC: s.temperatureC, activityModel: s.model })
+      : compositionFrom(s.library, [[formName, mM], ...toRange(salts)], s.temperatureC, s.model);
     const t = titrantFromForm(s.library.findForm(toText('titrant', titrant)), s.library);
     const ml = (titrantForPh(composition, t, target).concentrationM * volumeMl) / stockM;
     if (ml > volumeMl) throw new SheetError('na', SHEET_MESSAGES.titrantExceedsVolume(ml, volumeMl));

@@ -39,21 +39,24 @@ type Outcome = { readonly ok: true; readonly value: unknown } | { readonly ok: f
 /** Calls remembered per process: a 100 × 100 what-if table recalculates from memory; a few MB at most. */
 export const CALL_CACHE_SIZE = 10000;
 
-const calls = new Lru<Outcome>(CALL_CACHE_SIZE);
+/**
+ * Remembered calls, as a tree of Maps keyed by each argument in turn: numbers, strings and
+ * booleans are Map keys as they are (turning a number into text for a string key cost more
+ * than a pH solve); a range becomes its JSON text. The whole tree is dropped when it holds
+ * CALL_CACHE_SIZE calls, so a long session cannot grow it without bound.
+ */
+type Node = Map<unknown, Node | Outcome>;
+let root: Node = new Map();
+let remembered = 0;
 
-/** A cache key for arguments (ranges included); blanks and omitted arguments are alike. */
-export function keyOf(id: string, args: readonly unknown[]): string {
-  // Built by hand for the common scalar arguments (JSON.stringify with a replacer cost
-  // more than the chemistry); strings are length-prefixed so no two argument lists collide.
-  let key = id;
-  for (const a of args) {
-    if (a === undefined || a === null) key += '|_';
-    else if (typeof a === 'number') key += `|n${a}`;
-    else if (typeof a === 'string') key += `|s${a.length}:${a}`;
-    else if (typeof a === 'boolean') key += a ? '|t' : '|f';
-    else key += `|j${JSON.stringify(a, (_k, v: unknown) => (v === undefined ? null : v))}`;
-  }
-  return key;
+/** Where "blank" sits in the tree: omitted arguments, null and empty cells are alike. */
+const BLANK = Symbol('blank');
+
+function keyPart(a: unknown): unknown {
+  if (a === undefined || a === null) return BLANK;
+  // A NUL prefix keeps a range's text apart from any text a cell could hold.
+  if (typeof a === 'object') return `\u0000${JSON.stringify(a, (_k, v: unknown) => (v === undefined ? null : v))}`;
+  return a;
 }
 
 /**
@@ -65,21 +68,39 @@ export function keyOf(id: string, args: readonly unknown[]): string {
  * @param compute - the work
  */
 export function memoised<T>(id: string, args: readonly unknown[], compute: () => T): T {
-  const key = keyOf(id, args);
-  let outcome = calls.get(key);
+  let node = root.get(id) as Node | undefined;
+  if (!node) root.set(id, (node = new Map()));
+  // Trailing blanks are dropped, so f(a) and f(a, , ) are one call.
+  let n = args.length;
+  while (n > 0 && keyPart(args[n - 1]) === BLANK) n--;
+  for (let i = 0; i < n; i++) {
+    const part = keyPart(args[i]);
+    let next = node.get(part) as Node | undefined;
+    if (!next) node.set(part, (next = new Map()));
+    node = next;
+  }
+  let outcome = node.get(OUTCOME) as Outcome | undefined;
   if (outcome === undefined) {
     try {
       outcome = { ok: true, value: compute() };
     } catch (error) {
       outcome = { ok: false, error };
     }
-    calls.set(key, outcome);
+    if (remembered >= CALL_CACHE_SIZE) clearCallCache();
+    else {
+      node.set(OUTCOME, outcome);
+      remembered++;
+    }
   }
   if (!outcome.ok) throw outcome.error;
   return outcome.value as T;
 }
 
+/** The key under which a node keeps its call's outcome (no argument can equal it). */
+const OUTCOME = Symbol('outcome');
+
 /** Forgets every remembered call (tests and benchmarks). */
 export function clearCallCache(): void {
-  calls.clear();
+  root = new Map();
+  remembered = 0;
 }
