@@ -168,6 +168,7 @@ const TEMPERATURE_OPTIONAL: NumberRule = { default: 25, min: 0, max: 100, allowe
  * ("Bates Guggenheim" is "bates-guggenheim").
  */
 export function toActivityModel(argument: string, value: unknown): ActivityModel {
+  if (isBlank(value)) return ACTIVITY_MODELS[0];
   const text = toText(argument, value, ACTIVITY_MODELS[0]).toLowerCase().replace(/[\s_–]+/g, '-');
   const found = ACTIVITY_MODELS.find((m) => m === text);
   if (!found) throw invalid(MESSAGES.unknownModel(argument, String(value), ACTIVITY_MODELS.join(', ')));
