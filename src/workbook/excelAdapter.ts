@@ -2,7 +2,7 @@
  * The workbook port over Office.js (Excel). All Office.js the pane needs lives here.
  * Each method is one Excel.run batch: queue the writes, one context.sync().
  */
-import { CellBlock, CellStyle, CellValue, ChartSpec, PaneSettings, RangeRef, Selection, WorkbookPort, rangeAddress, uniqueName } from './port';
+import { CellBlock, CellStyle, CellValue, ChartSpec, PaneSettings, RangeRef, Selection, WorkbookPort, literal, rangeAddress, uniqueName } from './port';
 
 /** Document setting under which the pane keeps its settings (Office.context.document.settings). */
 export const SETTINGS_KEY = 'protonLedger.settings';
@@ -70,7 +70,7 @@ export class ExcelAdapter implements WorkbookPort {
         const full: (string | number | boolean)[] = [];
         for (let c = 0; c < width; c++) {
           const cell = line[c];
-          const content = cell ? (cell.formula ?? cell.value ?? '') : '';
+          const content = cell ? (cell.formula ?? literal(cell.value ?? '')) : '';
           full.push(content === null ? '' : content);
         }
         return full;

@@ -150,6 +150,16 @@ export function rangeAddress(range: RangeRef): string {
   return start === end ? start : `${start}:${end}`;
 }
 
+/**
+ * What to put in a cell for a literal value: text that a spreadsheet would read as a
+ * formula (starting with = + − @, or a tab or carriage return) gets a leading apostrophe,
+ * the spreadsheet's own mark for "this is text", so a name typed into the pane can never
+ * run as a formula. Numbers and booleans pass unchanged; formulas are written separately.
+ */
+export function literal(value: CellValue): CellValue {
+  return typeof value === 'string' && /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
+}
+
 /** A sheet name as a formula reference needs it: quoted when it holds anything but letters, digits and underscores. */
 export function quoteSheet(name: string): string {
   return /^[A-Za-z_][A-Za-z0-9_]*$/.test(name) ? name : `'${name.replace(/'/g, "''")}'`;

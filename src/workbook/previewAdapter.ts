@@ -3,7 +3,7 @@
  * formats and charts). Writes go through the same formulas Excel gets.
  */
 import type { PreviewWorkbook } from '../preview/workbook';
-import { CellBlock, CellValue, ChartSpec, PaneSettings, RangeRef, Selection, WorkbookPort, uniqueName } from './port';
+import { CellBlock, CellValue, ChartSpec, PaneSettings, RangeRef, Selection, WorkbookPort, literal, uniqueName } from './port';
 
 /** The grid's current selection, supplied by the page. */
 export type SelectionSource = () => Selection;
@@ -29,7 +29,7 @@ export class PreviewAdapter implements WorkbookPort {
 
   async writeTable(sheet: string, block: CellBlock): Promise<void> {
     this.book.batch(() => {
-      const contents = block.cells.map((line) => line.map((cell) => (cell ? (cell.formula ?? cell.value ?? null) : null)));
+      const contents = block.cells.map((line) => line.map((cell) => (cell ? (cell.formula ?? literal(cell.value ?? null)) : null)));
       const width = Math.max(0, ...contents.map((l) => l.length));
       const rect = contents.map((l) => [...l, ...Array(width - l.length).fill(null)]);
       if (width > 0) this.book.setContents(sheet, block.row, block.col, rect);
