@@ -6,12 +6,13 @@
  * Without /usr/bin/chromium the tests are skipped with a message — except under CI=true,
  * where a missing browser is a failure.
  */
-import { ChildProcess, execSync, spawn } from 'child_process';
-import { existsSync, mkdirSync, mkdtempSync, readdirSync, rmSync, statSync } from 'fs';
+import { ChildProcess, spawn } from 'child_process';
+import { existsSync, mkdirSync, mkdtempSync, rmSync, statSync } from 'fs';
 import { tmpdir } from 'os';
 import { join } from 'path';
 import type { BrowserContext, Page } from 'playwright-core';
 import ExcelJS from 'exceljs';
+import { ensureBuild } from '../support/build';
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 const ROOT = join(__dirname, '..', '..');
@@ -24,23 +25,6 @@ if (!haveBrowser && !inCi) {
 }
 
 const describeBrowser = haveBrowser || inCi ? describe : describe.skip;
-
-/** Newest modification time of the files under a folder, ms. */
-function newest(dir: string): number {
-  let t = 0;
-  for (const entry of readdirSync(dir, { withFileTypes: true })) {
-    const path = join(dir, entry.name);
-    t = Math.max(t, entry.isDirectory() ? newest(path) : statSync(path).mtimeMs);
-  }
-  return t;
-}
-
-/** Builds dist/ unless a build newer than every source file is there (set E2E_REBUILD=1 to force). */
-function ensureBuild(): void {
-  const index = join(ROOT, 'dist', 'index.html');
-  const fresh = existsSync(index) && !process.env.E2E_REBUILD && statSync(index).mtimeMs > newest(join(ROOT, 'src'));
-  if (!fresh) execSync('npx webpack --mode production', { cwd: ROOT, stdio: 'inherit' });
-}
 
 describeBrowser('preview workbook in Chromium', () => {
   let server: ChildProcess;
