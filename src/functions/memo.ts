@@ -49,6 +49,9 @@ type Node = Map<unknown, Node | Outcome>;
 let root: Node = new Map();
 let remembered = 0;
 
+/** Ranges with more rows than this are computed without being remembered. */
+const UNKEYED_ROWS = 1000;
+
 /** Where "blank" sits in the tree: omitted arguments, null and empty cells are alike. */
 const BLANK = Symbol('blank');
 
@@ -68,6 +71,9 @@ function keyPart(a: unknown): unknown {
  * @param compute - the work
  */
 export function memoised<T>(id: string, args: readonly unknown[], compute: () => T): T {
+  // A range far larger than any argument allows (a whole column passed by mistake) is not
+  // worth a key: turning it into text would take longer than refusing it.
+  if (args.some((a) => Array.isArray(a) && a.length > UNKEYED_ROWS)) return compute();
   let node = root.get(id) as Node | undefined;
   if (!node) root.set(id, (node = new Map()));
   // Trailing blanks are dropped, so f(a) and f(a, , ) are one call.
