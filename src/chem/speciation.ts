@@ -79,13 +79,14 @@ function evaluate(p: PreparedComposition, kp: number[], aH: number, g1: number):
       q2 += zk * zk * t;
       kq2 += k * zk * zk * t;
     }
+    const w = c / sum;
     const nb = s1 / sum;
     const meanQ2 = q2 / sum;
-    f += (c * q) / sum;
-    d += c * (s2 / sum - nb * nb);
+    f += w * q;
+    d += w * s2 - c * nb * nb;
     i2 += c * meanQ2;
     // Weights go as a_H^−k, so d⟨g⟩/d ln a_H = −(⟨k·g⟩ − ⟨k⟩⟨g⟩).
-    di2 -= c * (kq2 / sum - nb * meanQ2);
+    di2 -= w * kq2 - c * nb * meanQ2;
   }
   evF = f;
   evD = d;
