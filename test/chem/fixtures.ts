@@ -16,7 +16,7 @@ export const PHTHALATE: AcidBaseChemistry = {
   ],
 };
 
-/** Phosphoric acid: pKa 2.148, 7.198, 12.35; ΔH° −8.0, 3.6, 16.0 kJ/mol; ΔCp° −141, −230, −242. Goldberg et al. 2002, as checked against a transcription in the substance library. */
+/** Phosphoric acid: pKa 2.148, 7.198, 12.35; ΔH° −8.0, 3.6, 16.0 kJ/mol; ΔCp° −141, −230, −242. Goldberg et al. 2002, as checked against a copy in the substance library. */
 export const PHOSPHATE: AcidBaseChemistry = {
   name: 'phosphate',
   chargeOfMostProtonated: 0,

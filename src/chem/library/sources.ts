@@ -23,7 +23,7 @@ export const SOURCES = {
 export type SourceId = keyof typeof SOURCES;
 
 /**
- * Where the values marked `verified: true` were checked: public transcriptions of the
+ * Where the values marked `verified: true` were checked: public copies of the
  * Goldberg et al. 2002 selected values found with the project's code search (a TypeScript
  * buffer module listing pK, ΔH°, ΔCp° for 29 ionization steps; a source-review note
  * quoting TAPSO and imidazole from the printed tables; a C# ITC-analysis table quoting the
@@ -31,4 +31,4 @@ export type SourceId = keyof typeof SOURCES;
  * carbonate pK values; and a scanned page of the review for ADA).
  */
 export const VERIFICATION_NOTE =
-  'Checked against public transcriptions of Goldberg et al. 2002 found by code search (not against the printed journal itself).';
+  'Checked against public copies of the Goldberg et al. 2002 tables found by code search (not against the printed journal itself).';

@@ -30,7 +30,7 @@ function step(source: SourceId, entry: string, verified: boolean, pKa: number, d
   };
 }
 
-/** Goldberg et al. 2002, checked against a found transcription. */
+/** Goldberg et al. 2002, checked against a found copy of its table. */
 const gv = (entry: string, pKa: number, dH: number, dCp: number, note?: string) => step('goldberg2002', entry, true, pKa, dH, dCp, note);
 /** Goldberg et al. 2002, written from memory (not checked). */
 const gm = (entry: string, pKa: number, dH?: number, dCp?: number, note?: string) =>
@@ -271,7 +271,7 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     }),
   ]),
   system('carbonate', ['carbonic acid', 'bicarbonate', 'hydrogen carbonate', 'CO2', 'H2CO3'], 0, [
-    gm('carbonic acid, H2CO3* (CO2 + H2O) ⇌ HCO3−', 6.351, 9.15, -371, '(memory) Another transcription of the review found by code search gives 6.352 (the Harned & Davis value); ΔH°, ΔCp° not checked.'),
+    gm('carbonic acid, H2CO3* (CO2 + H2O) ⇌ HCO3−', 6.351, 9.15, -371, '(memory) Another copy of the review table found by code search gives 6.352 (the Harned & Davis value); ΔH°, ΔCp° not checked.'),
     gv('carbonic acid, HCO3− ⇌ CO32−', 10.329, 14.7, -249),
   ], [
     form('sodium bicarbonate', ['sodium hydrogen carbonate', 'NaHCO3', 'baking soda'], 'NaHCO3', 84.01, [['carbonate', 1, 1]], { 'Na+': 1 }),

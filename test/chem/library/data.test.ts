@@ -12,7 +12,7 @@ import { STRONG_IONS } from '../../../src/chem/strongIons';
 const MOLAR_MASS_TOLERANCE = 0.01 + 1e-9;
 /** A form's net charge must be zero; 1e-12 covers float sums of fractional counter-ions. */
 const NEUTRALITY_TOLERANCE = 1e-12;
-/** Spot checks compare stored numbers with transcribed ones: they must match exactly as written. */
+/** Spot checks compare stored numbers with the copied ones: they must match exactly as written. */
 const EXACT = 1e-12;
 
 const library = defaultLibrary();
