@@ -6,7 +6,7 @@
 import { ACTIVITY_MODELS, afterDilution, capacity, idealOsmolarity, pKaAt, solvePh, speciate, titrantForPh, HYDROCHLORIC_ACID } from '../../src/chem';
 import { defaultLibrary } from '../../src/chem/library';
 import { capacityOf, forms, grams, ionicStrengthMm, osmolarityIdeal, ph, phAtTemperature, phDiluted, pka, species, spillShape, substances, titrantMl, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
-import { SheetError, toSheetError } from '../../src/functions/errors';
+import { errorOf } from './errorOf';
 import { clearCallCache } from '../../src/functions/memo';
 
 /** Decimal places to which a function equals the direct core call: same core, same arguments; only mM↔M scaling rounds. */
@@ -18,16 +18,6 @@ const lib = defaultLibrary();
 const TRIS_SALINE = [['tris base', 50], ['NaCl', 150]];
 const trisSaline = (temperatureC = 25, activityModel: 'davies' | 'ideal' | 'bates-guggenheim' = 'davies') =>
   lib.compositionFromForms([{ form: 'tris base', concentrationM: 0.05 }, { form: 'NaCl', concentrationM: 0.15 }], { temperatureC, activityModel });
-
-/** Runs a call and returns the spreadsheet error it raises (fails if it raises none). */
-function errorOf(call: () => unknown): SheetError {
-  try {
-    call();
-  } catch (e) {
-    return toSheetError(e);
-  }
-  throw new Error('expected an error');
-}
 
 beforeEach(() => clearCallCache());
 

@@ -5,7 +5,7 @@
 import { solvePh, speciate } from '../../src/chem';
 import { createLibrary } from '../../src/chem/library';
 import { grams, ph, pka, substances, forms } from '../../src/functions/functions';
-import { toSheetError } from '../../src/functions/errors';
+import { errorOf } from './errorOf';
 import { clearCallCache } from '../../src/functions/memo';
 import { spillShape } from '../../src/functions/functions';
 
@@ -21,14 +21,6 @@ const USER = [
   ['Lab diacid', 0, '3.1; 5.9', '1; 2', '0; 0', '', 95.1, '', '', ''],
   ['Lab diacid', 0, '3.1; 5.9', '', '', 'Lab diacid disodium', '', '2 Na+', '', 'C4H4Na2O4'],
 ];
-const errorOf = (call: () => unknown) => {
-  try {
-    call();
-  } catch (e) {
-    return toSheetError(e);
-  }
-  throw new Error('expected an error');
-};
 
 beforeEach(() => clearCallCache());
 
