@@ -184,22 +184,6 @@ export function solvePrepared(p: PreparedComposition, guessPh = 7): EquilibriumS
   return { pH: -x / Math.LN10, ionicStrengthM: ionicStrength, gamma1: g1, mixedKa: kp, evaluations: counter.n, ionicStrengthIterations: outer };
 }
 
-/**
- * The charge balance of a prepared composition at a fixed a(H⁺) and ionic strength:
- * f (mol/L of charge, excess positive) and 2·I of its non-strong species. For callers that
- * know the pH and need the charges (titrant amounts, capacity).
- *
- * @param p - the prepared composition
- * @param aH - hydrogen-ion activity
- * @param ionicStrengthM - ionic strength for the activity coefficients, mol/L
- * @param kp - scratch array of the composition's step count (overwritten)
- */
-export function chargeBalanceAt(p: PreparedComposition, aH: number, ionicStrengthM: number, kp: number[]): { f: number; i2: number } {
-  const g1 = conditionalConstants(p, ionicStrengthM, kp);
-  evaluate(p, kp, aH, g1);
-  return { f: evF, i2: evI2 };
-}
-
 /** One species in a speciation result. */
 export interface SpeciesAmount {
   /** Display name, e.g. `H+`, `Na+`, `phosphate 2−`. */
