@@ -17,11 +17,6 @@ export function fn(name: string): string {
   return `${NAMESPACE}.${name}`;
 }
 
-/** Whether the catalog has a function (for features that wait on one, such as a recipe function). */
-export function hasFunction(name: string): boolean {
-  return KNOWN.has(name);
-}
-
 /** A text literal for a formula: `"HEPES"`, with inner quotes doubled. */
 export function text(value: string): string {
   return `"${value.replace(/"/g, '""')}"`;

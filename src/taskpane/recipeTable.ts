@@ -7,11 +7,10 @@
  */
 import { CellBlock, CellWrite, ChartSpec, cellAddress, rangeAddress } from '../workbook/port';
 import type { TableRequest } from './form';
+import { DEFAULT_PKA_UNCERTAINTY, DEFAULT_STOCK_TOLERANCE_PERCENT } from '../chem/planner';
 import * as F from './formulas';
 
-/** pKa uncertainty (pH units) and stock tolerance (%) written as editable defaults; the planner's defaults. */
-export const DEFAULT_PKA_UNCERTAINTY = 0.02;
-export const DEFAULT_STOCK_TOLERANCE_PERCENT = 1;
+/** pKa uncertainty (pH units) and stock tolerance (%) are written as editable cells, starting from the planner's defaults. */
 /** pH span of the curves either side of the targets, and their step. */
 const CURVE_MARGIN_PH = 1.5;
 const CURVE_STEP_PH = 0.1;
