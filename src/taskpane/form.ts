@@ -80,14 +80,30 @@ export function readNumber(text: string): number | null {
   return Number.isFinite(n) ? n : null;
 }
 
+/**
+ * Reads one number that may carry the field's own unit ("150 mM", "25 °C", "500 mL"): the
+ * unit is dropped when it is the field's; any other unit makes it unreadable, so the field
+ * says what to write instead of guessing a conversion.
+ */
+export function readNumberIn(text: string, unit: string): number | null {
+  const u = unit.trim();
+  let t = text.trim();
+  if (u !== '') {
+    const spellings = u === '°C' ? ['°C', '° C', 'C'] : [u];
+    const found = spellings.find((sp) => t.toLowerCase().endsWith(sp.toLowerCase()) && (sp !== 'C' || /\d\s*C$/i.test(t)));
+    if (found) t = t.slice(0, t.length - found.length);
+  }
+  return readNumber(t);
+}
+
 /** Reads a list such as "6.8; 7.0; 7.2", "6.8 7.0 7.2" or "6.8, 7.0, 7.2". Null if any item is not a number. */
-export function readList(text: string): number[] | null {
+export function readList(text: string, unit = ''): number[] | null {
   const t = text.trim();
   if (t === '') return [];
   const parts = /;/.test(t) ? t.split(';') : /\s/.test(t.replace(/,\s+/g, ',')) ? t.split(/\s+/) : t.split(/,(?!\d)|,\s*|\s+/);
   const out: number[] = [];
   for (const p of parts.map((s) => s.trim()).filter((s) => s !== '')) {
-    const n = readNumber(p);
+    const n = readNumberIn(p, unit);
     if (n === null) return null;
     out.push(n);
   }
@@ -122,14 +138,14 @@ export function checkForm(input: FormInput): Checked {
     return v;
   };
   const number = (field: FieldName, what: string, limits: readonly [number, number], unit: string): number => {
-    const n = readNumber(input[field]);
+    const n = readNumberIn(input[field], unit);
     if (input[field].trim() === '') errors[field] = `Give ${what}.`;
-    else if (n === null) errors[field] = `${capital(what)} must be a number.`;
+    else if (n === null) errors[field] = `${capital(what)} must be a number${unit ? ` in${unit}` : ''}.`;
     else if (!inRange(n, limits)) errors[field] = `${capital(what)} must be ${range(limits[0], limits[1])}${unit}.`;
     return n ?? NaN;
   };
   const list = (field: FieldName, what: string, limits: readonly [number, number], unit: string): number[] => {
-    const values = readList(input[field]);
+    const values = readList(input[field], unit);
     if (values === null) errors[field] = `Write the ${what} as numbers separated by semicolons, e.g. "4; 25".`;
     else if (values.length === 0) errors[field] = `Give at least one ${what.replace(/s$/, '')}.`;
     else {
