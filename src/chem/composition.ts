@@ -5,7 +5,7 @@
 import { ActivityModel, parseActivityModel } from './activity';
 import { ChemError, MESSAGES, requireInteger, requireNumber } from './errors';
 import { findStrongIon } from './strongIons';
-import { lnKaAt, vantHoffTerms } from './vantHoff';
+import { VantHoffTerms, lnKaAt, vantHoffTerms } from './vantHoff';
 import { debyeHuckelA, pKw } from './water';
 
 /** One proton-dissociation step of an acid–base system, constants at 25 °C and I = 0. */
@@ -126,6 +126,19 @@ export function validateChemistry(prefix: string, chem: AcidBaseChemistry, index
 }
 
 /**
+ * Appends a system's per-step constants at a temperature: the thermodynamic Ka of each
+ * step, and 2·z(HA) − 1 (the z² difference between its acid and base). One place for what
+ * the solver and the titrant preparation both need.
+ */
+export function appendStepConstants(chem: AcidBaseChemistry, terms: VantHoffTerms, ka: number[], zSquaredDiff: number[]): void {
+  for (let k = 0; k < chem.steps.length; k++) {
+    const step = chem.steps[k];
+    ka.push(Math.exp(lnKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, terms)));
+    zSquaredDiff.push(2 * (chem.chargeOfMostProtonated - k) - 1);
+  }
+}
+
+/**
  * Validates a composition and computes its constants at the temperature.
  * Throws ChemError (invalid-input) naming the field, value and what is allowed.
  */
@@ -173,11 +186,8 @@ export function prepare(composition: Composition): PreparedComposition {
     stepCount.push(sys.steps.length);
     const zMax = Math.max(Math.abs(sys.chargeOfMostProtonated), Math.abs(sys.chargeOfMostProtonated - sys.steps.length));
     ionicStrengthScale += 0.5 * sys.totalM * zMax * zMax;
-    for (let k = 0; k < sys.steps.length; k++, s++) {
-      const step = sys.steps[k];
-      ka.push(Math.exp(lnKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, terms)));
-      zSquaredDiff.push(2 * (sys.chargeOfMostProtonated - k) - 1);
-    }
+    appendStepConstants(sys, terms, ka, zSquaredDiff);
+    s += sys.steps.length;
   }
 
   let strongCharge = 0;

@@ -10,12 +10,12 @@
  * finding (SCIENCE.md, "Amount of a titrant for a known target pH").
  */
 import { ionicStrengthFactor } from './activity';
-import { AcidBaseChemistry, Composition, MAX_CONCENTRATION_M, PreparedComposition, prepare, systemAt, validateChemistry } from './composition';
+import { AcidBaseChemistry, Composition, MAX_CONCENTRATION_M, PreparedComposition, appendStepConstants, prepare, systemAt, validateChemistry } from './composition';
 import { ChemError, MESSAGES, requireNumber } from './errors';
 import { selfConsistentIonicStrength } from './ionicStrength';
 import { findStrongIon } from './strongIons';
 import { solvePrepared } from './speciation';
-import { pKaAt } from './vantHoff';
+import { vantHoffTerms } from './vantHoff';
 
 /** A titrant: what one mole of it adds to the solution. */
 export interface Titrant {
@@ -74,10 +74,7 @@ function prepareTitrant(titrant: Titrant, temperatureC: number): PreparedTitrant
   const perMole = titrant.systemPerMole === undefined ? 1 : requireNumber('titrant.systemPerMole', titrant.systemPerMole, 0, 10);
   const ka: number[] = [];
   const zd: number[] = [];
-  sys.steps.forEach((step, k) => {
-    ka[k] = Math.pow(10, -pKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, temperatureC));
-    zd[k] = 2 * (sys.chargeOfMostProtonated - k) - 1;
-  });
+  appendStepConstants(sys, vantHoffTerms(temperatureC), ka, zd);
   return { strongCharge, strongHalfZ2, ka, zd, z0: sys.chargeOfMostProtonated, perMole };
 }
 

@@ -121,7 +121,7 @@ export interface SheetPlan {
   readonly head: readonly CellBlock[];
   /** Data rows, each one CellBlock of one row, written in batches. */
   readonly rows: readonly CellBlock[];
-  /** Working compositions and chart data, written after the rows. */
+  /** The rows' salt cells and the charts' data, written after the rows. */
   readonly tail: readonly CellBlock[];
   readonly charts: readonly ChartSpec[];
   readonly columnWidths: readonly number[];
