@@ -8,7 +8,7 @@
  * Output is one JSON object on stdout; on bad input a JSON error on stdout and exit code 2.
  */
 import { readFileSync } from 'fs';
-import { ChemError, speciate } from '../chem';
+import { ChemError, solutionWarnings, speciate } from '../chem';
 import { defaultLibrary } from '../chem/library';
 import { formatRecipe, planRecipe } from '../chem/planner';
 import { compositionInputSchema, describeSchemaError, libraryFor, toComposition } from './compositionInput';
@@ -44,7 +44,10 @@ function readInput(args: string[]): unknown {
 function solveCommand(raw: unknown): unknown {
   const parsed = compositionInputSchema.safeParse(raw);
   if (!parsed.success) throw new CliFailure(describeSchemaError(parsed.error));
-  return speciate(toComposition(parsed.data));
+  const composition = toComposition(parsed.data);
+  const result = speciate(composition);
+  // The solver's own warnings plus the plain-words checks (weak buffering, metal complexes).
+  return { ...result, warnings: solutionWarnings(composition, result) };
 }
 
 function recipeCommand(raw: unknown) {

@@ -10,7 +10,7 @@
  * `=PROTON.PH(A2:B4)`.
  */
 /* eslint-disable @typescript-eslint/no-explicit-any -- `any` is how custom-functions metadata spells a cell of any type */
-import { apparentPKa, capacity, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
+import { apparentPKa, capacity, solutionWarnings, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
 import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
 import { DEFAULT_PART_VOLUME_FRACTION, DEFAULT_STOCK_TOLERANCE_PERCENT, RecipeInput, planRecipe } from '../chem/planner';
@@ -221,6 +221,28 @@ export function ionicStrengthMm(composition: any[][], temperatureC?: any, activi
  */
 export function osmolarityIdeal(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
   return memoised('OSMOLARITY.IDEAL', [composition, temperatureC, activityModel, userSubstances], () => idealOsmolarity(speciate(solution(composition, temperatureC, activityModel, userSubstances))) * 1000);
+}
+
+/**
+ * Warnings about a solution's prediction, as one cell of text: "none", or how many and each in turn. Put it beside a PH cell: single-value results cannot carry their warnings.
+ * @customfunction WARNINGS WARNINGS
+ * @helpurl https://localhost:3000/help/functions.html#warnings
+ * @param composition Two columns: substance or form name, then amount in mM.
+ * @param [temperatureC] Temperature in °C (blank: 25).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances.
+ * @returns "none", or the number of warnings followed by each.
+ */
+export function warnings(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): string {
+  return memoised('WARNINGS', [composition, temperatureC, activityModel, userSubstances], () => {
+    const s = setup(temperatureC, activityModel, userSubstances);
+    const solved = compositionFrom(s.library, composition, s.temperatureC, s.model);
+    const found = solutionWarnings(solved, speciate(solved));
+    const fromMemory = solved.systems.filter((sys) => sys.totalM > 0 && s.library.findSystem(sys.name).steps.some((st) => !st.verified && st.source !== 'userDefined')).map((sys) => sys.name);
+    if (fromMemory.length > 0) found.push(SHEET_MESSAGES.constantsFromMemory(fromMemory));
+    if (found.length === 0) return 'none';
+    return `${found.length} warning${found.length === 1 ? '' : 's'}: ${found.map((w, i) => `(${i + 1}) ${w}`).join(' ')}`;
+  });
 }
 
 /**

@@ -40,6 +40,8 @@ export const DEMO_CELLS: readonly DemoCell[] = [
   { at: 'E9', content: '=PROTON.OSMOLARITY.IDEAL(A6:B8, 4)', numberFormat: '0' },
   { at: 'D10', content: 'HEPES to weigh for 2 L (g)', style: 'label' },
   { at: 'E10', content: '=PROTON.GRAMS("HEPES", B6, 2000)', numberFormat: '0.000' },
+  { at: 'D11', content: 'Warnings at 4 °C', style: 'label' },
+  { at: 'E11', content: '=PROTON.WARNINGS(A6:B8, 4)' },
 
   { at: 'A12', content: 'Media kitchen: 0.2 M sodium phosphate stock (10×), diluted 1:10 for use at 37 °C', style: 'subtitle' },
   { at: 'A13', content: 'Name', style: 'header' },
@@ -58,6 +60,8 @@ export const DEMO_CELLS: readonly DemoCell[] = [
   { at: 'E16', content: '=PROTON.GRAMS(A14, B14, 500)', numberFormat: '0.000' },
   { at: 'D17', content: 'Dibasic for 500 mL (g)', style: 'label' },
   { at: 'E17', content: '=PROTON.GRAMS(A15, B15, 500)', numberFormat: '0.000' },
+  { at: 'D18', content: 'Warnings for the stock', style: 'label' },
+  { at: 'E18', content: '=PROTON.WARNINGS(A14:B15, 25)' },
 
   { at: 'A19', content: 'Gel room: 375 mM tris, adjusted with 6 M HCl to pH 8.8 at 22 °C, 1 L', style: 'subtitle' },
   { at: 'D20', content: 'Quantity', style: 'header' },

@@ -47,6 +47,13 @@ describe('proton-ledger solve with forms by name', () => {
     expect(Math.abs(out.pH - 6.865)).toBeLessThan(0.015);
   });
 
+  it('lists the plain-words warnings with the result: none for a phosphate buffer, metal complexes once MgCl2 joins it', () => {
+    const phosphate = [{ form: 'Na2HPO4', mM: 30 }, { form: 'NaH2PO4·H2O', mM: 20 }];
+    expect(call(['solve', '--json', JSON.stringify({ forms: phosphate })]).out.warnings).toEqual([]);
+    const withMg = call(['solve', '--json', JSON.stringify({ forms: [...phosphate, { form: 'MgCl2·6H2O', mM: 2 }] })]).out;
+    expect(withMg.warnings).toEqual([expect.stringMatching(/^Mg2\+ with phosphate: metal–buffer complexes are not modelled/)]);
+  });
+
   it('refuses an unknown form with did-you-mean', () => {
     const { code, out } = call(['solve', '--json', JSON.stringify({ forms: [{ form: 'tris bas', mM: 25 }] })]);
     expect(code).toBe(2);

@@ -5,7 +5,7 @@
  */
 import { ACTIVITY_MODELS, afterDilution, capacity, idealOsmolarity, pKaAt, solvePh, speciate, titrantForPh, HYDROCHLORIC_ACID } from '../../src/chem';
 import { defaultLibrary } from '../../src/chem/library';
-import { capacityOf, forms, grams, ionicStrengthMm, osmolarityIdeal, ph, phAtTemperature, phDiluted, pka, species, spillShape, substances, titrantMl, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
+import { capacityOf, forms, grams, ionicStrengthMm, osmolarityIdeal, ph, phAtTemperature, phDiluted, pka, species, spillShape, substances, titrantMl, warnings, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
 import { errorOf } from './errorOf';
 import { clearCallCache } from '../../src/functions/memo';
 
@@ -167,6 +167,35 @@ describe('IONIC.STRENGTH.MM and OSMOLARITY.IDEAL', () => {
   test('150 mM NaCl: I = 150 mM and ideal osmolarity 300 mOsm/L (definitions; tolerance 1e-3 for H+ and OH−)', () => {
     expect(Math.abs(ionicStrengthMm([['NaCl', 150]]) - 150)).toBeLessThan(1e-3);
     expect(Math.abs(osmolarityIdeal([['NaCl', 150]]) - 300)).toBeLessThan(1e-3);
+  });
+});
+
+describe('WARNINGS', () => {
+  test('says "none" for a phosphate buffer near its pKa at room temperature', () => {
+    expect(warnings([['Na2HPO4', 30], ['NaH2PO4·H2O', 20]])).toBe('none');
+  });
+  test('counts and numbers the warnings: weak buffering and calcium with citrate', () => {
+    const text = warnings([['trisodium citrate dihydrate', 10], ['CaCl2·2H2O', 2]]);
+    expect(text).toMatch(/^2 warnings: \(1\) pH \d+\.\d\d is more than 1 unit from every pKa′ .* \(2\) Ca2\+ with citrate: metal–buffer complexes are not modelled/);
+  });
+  test('passes on the solver warnings (temperature, ionic strength) that a PH cell cannot show', () => {
+    expect(warnings(TRIS_SALINE.concat([['HCl', 25]]), 80)).toMatch(/^1 warning: \(1\) Temperature 80 °C is above 60 °C/);
+    expect(warnings([['NaCl', 2000], ['sodium acetate trihydrate', 50], ['acetic acid', 50]])).toMatch(/Ionic strength 2\.\d+ M is above 0\.5 M/);
+  });
+  test('names substances whose constants are from memory, but not the user own', () => {
+    const formate = lib.findSystem('formate');
+    expect(formate.steps.some((st) => !st.verified)).toBe(true);
+    expect(warnings([['sodium formate', 20], ['formic acid', 20]])).toMatch(/Constants for formate were written from memory/);
+    const user = [
+      ['name', 'charge of most protonated form', 'pKa list', 'ΔH list kJ/mol', 'ΔCp list J/(K·mol)', 'form name', 'molar mass g/mol', 'counter-ions', 'protons lost', 'formula'],
+      ['Lab amine', 1, '7.85', '40', '', 'Lab amine base', 131.2, '', '', ''],
+      ['lab amine', '', '', '', '', 'Lab amine HCl', 167.6, 'Cl-', '', ''],
+    ];
+    expect(warnings([['Lab amine base', 20], ['Lab amine HCl', 20]], '', '', user)).toBe('none');
+  });
+  test('refuses bad input as the other composition functions do', () => {
+    expect(errorOf(() => warnings([['no such thing', 20]]))).toMatchObject({ kind: 'na' });
+    expect(errorOf(() => warnings(TRIS_SALINE, 150))).toMatchObject({ kind: 'value' });
   });
 });
 

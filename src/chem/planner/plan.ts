@@ -14,6 +14,7 @@
  */
 import { ActivityModel, parseActivityModel } from '../activity';
 import { capacityOfPrepared, scaleComposition } from '../capacity';
+import { BUFFERING_HALF_WIDTH, metalComplexWarning } from '../checks';
 import { AcidBaseSystem, Composition, prepare, systemAt, withConditions } from '../composition';
 import { ChemError, MESSAGES, requireNumber } from '../errors';
 import { SOURCES } from '../library/sources';
@@ -37,8 +38,8 @@ export const DEFAULT_STOCK_TOLERANCE_PERCENT = 1;
 export const DEFAULT_PART_VOLUME_FRACTION = 0.8;
 /** The first titrant portion is this share of the low end of the band, so it cannot overshoot. */
 export const FIRST_PORTION_SHARE = 0.9;
-/** Warn when the target is further than this from every pKa: a step buffers usefully within pKa ± 1 (common practice). */
-export const BUFFERING_HALF_WIDTH = 1;
+/** Warn when the target is further than this from every pKa (the core's rule, re-exported for the planner's users). */
+export { BUFFERING_HALF_WIDTH };
 /** Largest dilution fold for a stock. */
 export const MAX_STOCK_FOLD = 100;
 /** Largest salt concentration the salt-target search tries, mol/L (beyond any buffer recipe). */
@@ -135,6 +136,8 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
       : undefined;
 
   warnings.push(...planWarnings(s, made, madeVolumeL, titration));
+  const metals = metalComplexWarning(finished);
+  if (metals) warnings.push(metals);
   const constants = s.system.steps.map((step) => ({
     pKa25: step.pKa,
     pKaAtUse: pKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, s.useT),

@@ -180,6 +180,13 @@ describe('recipe planner: warnings', () => {
     expect(p.warnings.join(' ')).toMatch(/above its solubility/);
   });
 
+  it('warns that metal–buffer complexes are not modelled when MgCl2 joins a phosphate recipe, not a HEPES one', () => {
+    const phosphate = planRecipe({ buffer: 'phosphate', targetPh: 7.2, concentrationMm: 50, volumeMl: 500, route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'Na2HPO4·7H2O', salts: [{ form: 'MgCl2·6H2O', concentrationMm: 2 }] });
+    expect(phosphate.warnings.join(' ')).toMatch(/Mg2\+ with phosphate: metal–buffer complexes are not modelled/);
+    const hepes = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 20, volumeMl: 100, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'MgCl2·6H2O', concentrationMm: 2 }] });
+    expect(hepes.warnings.join(' ')).not.toMatch(/complexes/);
+  });
+
   it('warns above 60 °C', () => {
     const p = planRecipe({ buffer: 'phosphate', targetPh: 7, useTemperatureC: 70, concentrationMm: 20, volumeMl: 100, route: 'two-forms', acidForm: 'KH2PO4', baseForm: 'K2HPO4' });
     expect(p.warnings.join(' ')).toMatch(/above 60 °C/);

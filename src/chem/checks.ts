@@ -1,0 +1,64 @@
+/**
+ * Plain-words checks on a solved solution, beyond the solver's own warnings (temperature
+ * outside the fitted range, ionic strength beyond the activity model): does anything in it
+ * buffer at the pH it settles to, and does it hold something the model leaves out.
+ *
+ * Pure: no library, no host. Hosts add what only they know (constants from memory, the
+ * user's own substances).
+ */
+import type { Composition } from './composition';
+import type { SpeciationResult } from './speciation';
+
+/** A step buffers usefully within pKa ± 1 (common practice). */
+export const BUFFERING_HALF_WIDTH = 1;
+
+/** Divalent metal ions that bind multiply charged buffer anions (phosphate, citrate, carbonate, EDTA …). */
+const DIVALENT_METALS = ['Mg2+', 'Ca2+'] as const;
+
+/**
+ * A warning when no acid–base step of the solution lies within ±1 of the pH it settles to:
+ * there it buffers weakly, and small loads move the pH far. Undefined when something buffers
+ * or the solution holds no acid–base system.
+ *
+ * @param result - the solved solution; its apparent pKa′ (at its own ionic strength and temperature) are compared
+ */
+export function weakBufferingWarning(result: SpeciationResult): string | undefined {
+  const present = result.systems.filter((s) => s.totalM > 0);
+  if (present.length === 0) return undefined;
+  const near = present.some((s) => s.apparentPKa.some((pk) => Math.abs(pk - result.pH) <= BUFFERING_HALF_WIDTH));
+  if (near) return undefined;
+  const listed = present.map((s) => `${s.name} ${s.apparentPKa.map((pk) => pk.toFixed(2)).join(', ')}`).join('; ');
+  return `pH ${result.pH.toFixed(2)} is more than ${BUFFERING_HALF_WIDTH} unit from every pKa′ in the solution (${listed}): it buffers weakly there, and small additions move the pH far.`;
+}
+
+/**
+ * A warning when Mg²⁺ or Ca²⁺ share the solution with an acid–base system whose anion can
+ * carry a charge of 2− or more: metal–buffer complexes are not modelled, so the pH and the
+ * free amounts are estimates. Undefined otherwise.
+ *
+ * @param composition - the solution as given (strong ions in mol/L)
+ */
+export function metalComplexWarning(composition: Composition): string | undefined {
+  const metals = DIVALENT_METALS.filter((m) => (composition.strongIons?.[m] ?? 0) > 0);
+  if (metals.length === 0) return undefined;
+  const binders = composition.systems.filter((s) => s.totalM > 0 && s.chargeOfMostProtonated - s.steps.length <= -2).map((s) => s.name);
+  if (binders.length === 0) return undefined;
+  const calcium = metals.includes('Ca2+') ? ' Calcium salts of these anions may also precipitate, above all on warming or at high pH.' : '';
+  return `${metals.join(' and ')} with ${binders.join(', ')}: metal–buffer complexes are not modelled, so the pH and the free ion amounts are estimates (binding releases protons, so the real pH is usually lower).${calcium}`;
+}
+
+/**
+ * Every warning about a solved solution: the solver's own, then weak buffering, then metal
+ * complexes.
+ *
+ * @param composition - the solution as given
+ * @param result - its speciation
+ */
+export function solutionWarnings(composition: Composition, result: SpeciationResult): string[] {
+  const warnings = [...result.warnings];
+  const weak = weakBufferingWarning(result);
+  if (weak) warnings.push(weak);
+  const metals = metalComplexWarning(composition);
+  if (metals) warnings.push(metals);
+  return warnings;
+}
