@@ -11,6 +11,9 @@ export type ActivityModel = 'davies' | 'ideal' | 'bates-guggenheim';
 /** Every model name, in the order offered to users; the first is the default. */
 export const ACTIVITY_MODELS: readonly ActivityModel[] = ['davies', 'ideal', 'bates-guggenheim'];
 
+/** How each model is named in sentences (the published methods keep their authors' names). */
+export const ACTIVITY_MODEL_NAMES: Readonly<Record<ActivityModel, string>> = { davies: 'Davies', ideal: 'ideal', 'bates-guggenheim': 'Bates–Guggenheim' };
+
 /** Ionic strength (mol/L) above which Davies and Bates–Guggenheim are extrapolations; a warning is raised past it. Davies 1962, Ion Association, ch. 3: fit for I ≲ 0.1–0.5 M. */
 export const ACTIVITY_MODEL_LIMIT_M = 0.5;
 

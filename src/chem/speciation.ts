@@ -15,7 +15,7 @@
  *
  * References: SCIENCE.md of this project; R. G. Bates, Determination of pH (1973), ch. 3–4.
  */
-import { ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M } from './activity';
+import { ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES } from './activity';
 import { Composition, PreparedComposition, prepare } from './composition';
 import { ChemError, MESSAGES } from './errors';
 import { selfConsistentIonicStrength } from './ionicStrength';
@@ -294,7 +294,7 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
   });
   const warnings = [...p.warnings];
   if (p.model !== 'ideal' && state.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M) {
-    warnings.push(`Ionic strength ${state.ionicStrengthM.toPrecision(3)} M is above ${ACTIVITY_MODEL_LIMIT_M} M, beyond where the ${p.model} activity model is reliable; the pH is an extrapolation.`);
+    warnings.push(`Ionic strength ${state.ionicStrengthM.toPrecision(3)} M is above ${ACTIVITY_MODEL_LIMIT_M} M, beyond where the ${ACTIVITY_MODEL_NAMES[p.model]} activity model is reliable; the pH is an extrapolation.`);
   }
   return {
     pH: state.pH,
