@@ -158,7 +158,7 @@ function csvField(value: unknown): string {
   else if (typeof value === 'number') text = String(value);
   else {
     text = String(value);
-    if (/^[=+\-@\t\r]/.test(text)) text = `'${text}`;
+    if (/^[=+\-@\t\r']/.test(text)) text = `'${text}`;
   }
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }

@@ -3,6 +3,7 @@
  * (src/taskpane/pane.ts renders the form); the checks give a message per field, and nothing
  * is written to the workbook while any field has one.
  */
+import { parseRangeText } from '../workbook/port';
 import type { PaneSettings } from '../workbook/port';
 
 /** Field names, as the DOM's ids use them (`field-<name>`). */
@@ -45,7 +46,7 @@ export interface TableRequest {
   readonly benchTemperatureC: number;
   readonly activityModel: PaneSettings['activityModel'];
   readonly partVolumeFraction: number;
-  /** A workbook range holding the user's own substances (e.g. `'My substances'!A2:F20`), or ''. */
+  /** A workbook range holding the user's own substances (e.g. `'My substances'!A2:J20`), or ''. */
   readonly userSubstances: string;
 }
 
@@ -150,7 +151,7 @@ export function checkForm(input: FormInput): Checked {
     else if (values.length === 0) errors[field] = `Give at least one ${what.replace(/s$/, '')}.`;
     else {
       const bad = values.find((v) => !inRange(v, limits));
-      if (bad !== undefined) errors[field] = `${bad} is outside ${range(limits[0], limits[1])}${unit}.`;
+      if (bad !== undefined) errors[field] = `${bad} is not allowed: each value must be ${range(limits[0], limits[1])}${unit}.`;
     }
     return unique(values ?? []);
   };
@@ -191,8 +192,8 @@ export function checkForm(input: FormInput): Checked {
   const activityModel = input.activityModel as PaneSettings['activityModel'];
   if (!ACTIVITY_MODELS.includes(activityModel)) errors.activityModel = `Choose one of: ${ACTIVITY_MODELS.join(', ')}.`;
   const userSubstances = input.userSubstances.trim();
-  if (userSubstances !== '' && !/^(('[^']+'|[A-Za-z_][\w .]*)!)?\$?[A-Z]{1,3}\$?\d+:\$?[A-Z]{1,3}\$?\d+$/.test(userSubstances)) {
-    errors.userSubstances = "Give a range such as 'My substances'!A2:F20, or leave it blank.";
+  if (userSubstances !== '' && parseRangeText(userSubstances) === null) {
+    errors.userSubstances = "Give a range such as 'My substances'!A2:J20 (quote a sheet name with spaces), or leave it blank.";
   }
 
   const rows = targetPhs.length * useTemperaturesC.length * concentrationsMm.length;

@@ -60,7 +60,7 @@ const GROUPS: readonly { legend: string; fields: readonly FieldSpec[]; id?: stri
         kind: 'select',
         options: [['davies', 'Davies (default)'], ['bates-guggenheim', 'Debye–Hückel, Bates–Guggenheim'], ['ideal', 'Ideal (no activity correction)']],
       },
-      { name: 'userSubstances', label: 'Your substances (range, optional)', hint: "e.g. 'My substances'!A2:F20" },
+      { name: 'userSubstances', label: 'Your substances (range, optional)', hint: "e.g. 'My substances'!A2:J20" },
     ],
   },
 ];

@@ -1,12 +1,13 @@
 /**
  * The bench protocol beside a recipe table: steps, predictions, warnings and cautions for
- * one chosen row. Until the worksheet catalog has a recipe function, the pane calls the
- * core's planner (src/chem/planner) for that row and writes its words as values, marked
- * with the time they were computed; the table's numbers stay live formulas.
- * This is the one module to switch when a PROTON recipe function arrives.
+ * one chosen row. The pane calls the core's planner (src/chem/planner) for that row, with
+ * the same library the table's names were checked against, and writes its words as values
+ * marked with the time they were computed; the table's numbers stay live formulas (a live
+ * protocol is one =PROTON.RECIPE(…) away).
  */
 import { planRecipe, GENERAL_CAUTION } from '../chem/planner';
 import type { RecipePlan } from '../chem/planner';
+import type { SubstanceLibrary } from '../chem/library';
 import type { CellBlock, CellWrite } from '../workbook/port';
 import type { TableRequest } from './form';
 import type { TableRow } from './recipeTable';
@@ -21,7 +22,7 @@ export const PROTOCOL_MAX_ROWS = 15;
 export const VERIFY_LINE = 'Verify the final pH with a calibrated meter at the working temperature; follow your safety data sheets and local rules.';
 
 /** The planner's answer for one row, or the reason it has none. */
-export function planForRow(request: TableRequest, row: TableRow): RecipePlan | Error {
+export function planForRow(request: TableRequest, row: TableRow, library?: SubstanceLibrary): RecipePlan | Error {
   try {
     return planRecipe({
       buffer: request.buffer,
@@ -36,15 +37,15 @@ export function planForRow(request: TableRequest, row: TableRow): RecipePlan | E
       benchTemperatureC: request.benchTemperatureC,
       partVolumeFraction: request.partVolumeFraction,
       activityModel: request.activityModel,
-    });
+    }, library);
   } catch (error) {
     return error instanceof Error ? error : new Error(String(error));
   }
 }
 
 /** The protocol block for the chosen row (1-based as the user counts table rows). */
-export function protocolBlock(request: TableRequest, row: TableRow, rowNumber: number, computedAt: string): CellBlock {
-  const plan = planForRow(request, row);
+export function protocolBlock(request: TableRequest, row: TableRow, rowNumber: number, computedAt: string, library?: SubstanceLibrary): CellBlock {
+  const plan = planForRow(request, row, library);
   const heading: CellWrite = {
     value: `Bench protocol, table row ${rowNumber}: pH ${row.targetPh} at ${row.useTemperatureC} °C, ${row.concentrationMm} mM`,
     style: 'subtitle',

@@ -3,8 +3,11 @@
  * values copy with its provenance block. Nothing is written unless the request checked out;
  * every table goes on a new sheet with a name not yet used.
  */
-import { findSystem } from '../chem/library';
-import { CellBlock, CellValue, CellWrite, PaneSettings, WorkbookPort, uniqueName } from '../workbook/port';
+import { ChemError } from '../chem';
+import { SubstanceLibrary, defaultLibrary, findSystem, titrantFromForm } from '../chem/library';
+import { nameKey } from '../chem/library/names';
+import { libraryFor } from '../functions/userRange';
+import { CellBlock, CellValue, CellWrite, PaneSettings, WorkbookPort, parseRangeText, qualifiedAddress, uniqueName } from '../workbook/port';
 import { checkForm, FormInput, FieldErrors, settingsOf, TableRequest } from './form';
 import { protocolBlock } from './protocol';
 import { planRecipeSheet, SETTING_ROWS, SETTING_VALUE_COL, settingRow, tableRows, LAYOUT } from './recipeTable';
@@ -30,6 +33,82 @@ export function nearestStep(buffer: string, targetPh: number): number {
   }
 }
 
+/** An error's message without the argument name the core puts first ("form: …"): the pane shows it under its own field. */
+function fieldMessage(error: unknown): string {
+  const message = error instanceof Error ? error.message : String(error);
+  return message.replace(/^[\w.[\]]+: /, '');
+}
+
+/**
+ * Checks the names in a request against the library (the user's substances included):
+ * the buffer is an acid–base system, the form weighed contains it, the titrant is a strong
+ * acid or base or one weak one, the salt is on the shelf. A misspelt name gets the
+ * library's nearest names, under its own field, before anything is written.
+ */
+export function checkNames(request: TableRequest, library: SubstanceLibrary): FieldErrors {
+  const errors: FieldErrors = {};
+  let system: ReturnType<SubstanceLibrary['findSystem']> | undefined;
+  try {
+    system = library.findSystem(request.buffer);
+    if (system.kind !== 'acid-base') {
+      errors.buffer = `${system.name} is a strong electrolyte, not a buffer system; give it as the salt.`;
+      system = undefined;
+    }
+  } catch (error) {
+    // A salt's name (NaCl) given as the buffer: say what it is rather than offer look-alikes.
+    let salt = false;
+    try {
+      salt = library.findForm(request.buffer).adds.length === 0;
+    } catch {
+      salt = false;
+    }
+    errors.buffer = salt ? `${request.buffer} is a strong electrolyte, not a buffer system; give it as the salt.` : fieldMessage(error);
+  }
+  try {
+    const form = library.findForm(request.form);
+    if (system && !form.adds.some((a) => nameKey(a.system) === nameKey(system!.name))) {
+      errors.form = `"${form.name}" does not contain ${system.name}; its forms are ${system.forms.map((f) => f.name).join(', ')}.`;
+    }
+  } catch (error) {
+    errors.form = fieldMessage(error);
+  }
+  try {
+    titrantFromForm(library.findForm(request.titrant), library);
+  } catch (error) {
+    errors.titrant = fieldMessage(error);
+  }
+  if (request.saltForm !== '') {
+    try {
+      library.findForm(request.saltForm);
+    } catch (error) {
+      errors.saltForm = fieldMessage(error);
+    }
+  }
+  return errors;
+}
+
+/**
+ * The library a request's names are checked against: the built-in one, or with the user's
+ * substances read from the workbook. A range typed without a sheet is taken on the sheet
+ * that was active (formulas on the new recipe sheet would otherwise point at that sheet's
+ * own cells), and comes back sheet-qualified for the formulas.
+ */
+export async function libraryOfRequest(port: WorkbookPort, request: TableRequest): Promise<{ ok: true; library: SubstanceLibrary; userSubstances: string } | { ok: false; errors: FieldErrors }> {
+  if (request.userSubstances === '') return { ok: true, library: defaultLibrary(), userSubstances: '' };
+  const typed = parseRangeText(request.userSubstances);
+  if (!typed) return { ok: false, errors: { userSubstances: "Give a range such as 'My substances'!A2:J20, or leave it blank." } };
+  const sheets = await port.sheetNames();
+  const wanted = typed.sheet ?? (await port.readSelection()).sheet;
+  const sheet = sheets.find((n) => n.toLowerCase() === wanted.toLowerCase());
+  if (sheet === undefined) return { ok: false, errors: { userSubstances: `There is no sheet named "${wanted}" in this workbook.` } };
+  try {
+    const values = await port.readValues(sheet, typed.range);
+    return { ok: true, library: libraryFor(values), userSubstances: qualifiedAddress(sheet, typed.range) };
+  } catch (error) {
+    return { ok: false, errors: { userSubstances: error instanceof ChemError || error instanceof Error ? error.message : String(error) } };
+  }
+}
+
 function stamp(now: Date): string {
   return now.toISOString().replace('T', ' ').slice(0, 16) + ' UTC';
 }
@@ -41,7 +120,11 @@ function stamp(now: Date): string {
 export async function buildRecipeTable(port: WorkbookPort, form: FormInput, options: { version: string; now?: Date; onProgress?: Progress }): Promise<BuildResult> {
   const checked = checkForm(form);
   if (!checked.ok) return checked;
-  const request: TableRequest = checked.request;
+  const resolved = await libraryOfRequest(port, checked.request);
+  if (!resolved.ok) return resolved;
+  const nameErrors = checkNames(checked.request, resolved.library);
+  if (Object.keys(nameErrors).length > 0) return { ok: false, errors: nameErrors };
+  const request: TableRequest = { ...checked.request, userSubstances: resolved.userSubstances };
   const now = options.now ?? new Date();
   const plan = planRecipeSheet(request, {
     builtWith: `Proton Ledger ${options.version}`,
@@ -52,7 +135,7 @@ export async function buildRecipeTable(port: WorkbookPort, form: FormInput, opti
   await port.addSheet(sheet);
   for (const block of plan.head) await port.writeTable(sheet, block);
   const first = tableRows(request)[0];
-  await port.writeTable(sheet, protocolBlock(request, first, 1, stamp(now)));
+  await port.writeTable(sheet, protocolBlock(request, first, 1, stamp(now), resolved.library));
   const total = plan.rows.length;
   options.onProgress?.(0, total);
   for (let i = 0; i < total; i += ROWS_PER_BATCH) {

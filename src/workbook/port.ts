@@ -150,14 +150,54 @@ export function rangeAddress(range: RangeRef): string {
   return start === end ? start : `${start}:${end}`;
 }
 
+/** Zero-based column of column letters (`A` → 0, `AA` → 26). */
+function columnIndex(letters: string): number {
+  let n = 0;
+  for (const ch of letters) n = n * 26 + (ch.charCodeAt(0) - 64);
+  return n - 1;
+}
+
+/** A range as a user types it: `'My substances'!A2:J20`, `Sheet2!$A$2:$J$20` or `A2:J20`. */
+export interface TypedRange {
+  /** The sheet named, unquoted; undefined when the text names none. */
+  readonly sheet?: string;
+  readonly range: RangeRef;
+}
+
+/**
+ * Reads a typed range reference; null when the text is not one. A quoted sheet name may
+ * hold spaces and doubled apostrophes, as Excel writes them.
+ *
+ * @example parseRangeText("'My substances'!A2:J20") // { sheet: 'My substances', range: { row: 1, col: 0, rowCount: 19, colCount: 10 } }
+ */
+export function parseRangeText(text: string): TypedRange | null {
+  const m = /^(?:'((?:[^']|'')+)'!|([A-Za-z_][\w.]*)!)?\$?([A-Z]{1,3})\$?(\d+)(?::\$?([A-Z]{1,3})\$?(\d+))?$/.exec(text.trim());
+  if (!m) return null;
+  const sheet = m[1] !== undefined ? m[1].replace(/''/g, "'") : m[2];
+  const c1 = columnIndex(m[3]);
+  const r1 = Number(m[4]) - 1;
+  const c2 = m[5] !== undefined ? columnIndex(m[5]) : c1;
+  const r2 = m[6] !== undefined ? Number(m[6]) - 1 : r1;
+  if (r1 < 0 || r2 < 0) return null;
+  const range = { row: Math.min(r1, r2), col: Math.min(c1, c2), rowCount: Math.abs(r2 - r1) + 1, colCount: Math.abs(c2 - c1) + 1 };
+  return sheet === undefined ? { range } : { sheet, range };
+}
+
+/** A sheet-qualified reference for formulas: `'My substances'!A2:J20` (the sheet always quoted). */
+export function qualifiedAddress(sheet: string, range: RangeRef): string {
+  return `'${sheet.replace(/'/g, "''")}'!${rangeAddress(range)}`;
+}
+
 /**
  * What to put in a cell for a literal value: text that a spreadsheet would read as a
  * formula (starting with = + − @, or a tab or carriage return) gets a leading apostrophe,
  * the spreadsheet's own mark for "this is text", so a name typed into the pane can never
- * run as a formula. Numbers and booleans pass unchanged; formulas are written separately.
+ * run as a formula. Text that itself starts with an apostrophe (a quoted sheet name) gets
+ * one more, or the spreadsheet would swallow its own. Numbers and booleans pass unchanged;
+ * formulas are written separately.
  */
 export function literal(value: CellValue): CellValue {
-  return typeof value === 'string' && /^[=+\-@\t\r]/.test(value) ? `'${value}` : value;
+  return typeof value === 'string' && /^[=+\-@\t\r']/.test(value) ? `'${value}` : value;
 }
 
 /** A sheet name as a formula reference needs it: quoted when it holds anything but letters, digits and underscores. */

@@ -73,6 +73,47 @@ describe('recipe table in the preview workbook', () => {
     expect(book.formula(result.sheet, row, COL.formGrams)).toMatch(/^=PROTON\.RECIPE\.ROW\(/);
   });
 
+  test('misspelt or mismatched names: the library nearest names under each field, and nothing written', async () => {
+    const { book, port } = setup();
+    const result = await buildRecipeTable(port, { ...defaultInput(), buffer: 'HEPSE', titrant: 'NaOHH', saltForm: 'sodium chlorid' }, { version: '0.1.0' });
+    expect(result.ok).toBe(false);
+    if (result.ok) return;
+    expect(result.errors.buffer).toMatch(/^"HEPSE" is not in the substance library; did you mean .*"HEPES"/);
+    expect(result.errors.titrant).toMatch(/^"NaOHH" is not in the substance library; did you mean .*"NaOH"/);
+    expect(result.errors.saltForm).toMatch(/did you mean .*"sodium chloride"/);
+    expect(book.sheetNames()).toEqual(['Notes']);
+
+    const mismatched = await buildRecipeTable(port, { ...defaultInput(), buffer: 'tris', form: 'HEPES free acid' }, { version: '0.1.0' });
+    expect(mismatched.ok).toBe(false);
+    if (!mismatched.ok) expect(mismatched.errors.form).toMatch(/^"HEPES free acid" does not contain tris; its forms are .*tris base/);
+    const strong = await buildRecipeTable(port, { ...defaultInput(), buffer: 'NaCl' }, { version: '0.1.0' });
+    expect(strong.ok).toBe(false);
+    if (!strong.ok) expect(strong.errors.buffer).toMatch(/strong electrolyte, not a buffer system/);
+    expect(book.sheetNames()).toEqual(['Notes']);
+  });
+
+  test('your substances: read from the workbook, a range without a sheet taken on the active sheet and written sheet-qualified', async () => {
+    const header = ['name', 'charge of most protonated form', 'pKa list', 'ΔH list kJ/mol', 'ΔCp list J/(K·mol)', 'form name', 'molar mass g/mol', 'counter-ions', 'protons lost', 'formula'];
+    const book = new PreviewWorkbook(createFormulaEngine({
+      'Lab substances': [header, ['Lab amine', 1, '7.85', '40', '', 'Lab amine base', 131.2, '', '', ''], ['lab amine', '', '', '', '', 'Lab amine HCl', 167.6, 'Cl-', '', '']],
+    }));
+    let active = 'Lab substances';
+    const port = new PreviewAdapter(book, () => ({ sheet: active, range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }), (s) => (active = s));
+    const input = { ...defaultInput(), buffer: 'Lab amine', form: 'Lab amine base', titrant: 'HCl', phMode: 'list' as const, phList: '7.6', useTemperaturesC: '25', userSubstances: 'A1:J3' };
+    const result = await buildRecipeTable(port, input, { version: '0.1.0', now: NOW });
+    expect(result.ok).toBe(true);
+    if (!result.ok) return;
+    expect(book.value(result.sheet, settingRow('Your substances'), SETTING_VALUE_COL)).toBe("'Lab substances'!A1:J3");
+    expect(book.formula(result.sheet, LAYOUT.firstDataRow, COL.formGrams)).toContain("'Lab substances'!A1:J3");
+    // 25 mM of a 131.2 g/mol base in 1 L: 3.28 g; the row's check solves back to its target.
+    expect(book.value(result.sheet, LAYOUT.firstDataRow, COL.formGrams) as number).toBeCloseTo(3.28, 2);
+    expect(Math.abs((book.value(result.sheet, LAYOUT.firstDataRow, COL.check) as number) - 7.6)).toBeLessThan(0.001);
+
+    const missing = await buildRecipeTable(port, { ...input, userSubstances: "'No such sheet'!A1:J3" }, { version: '0.1.0' });
+    expect(missing.ok).toBe(false);
+    if (!missing.ok) expect(missing.errors.userSubstances).toBe('There is no sheet named "No such sheet" in this workbook.');
+  });
+
   test('bad input: messages per field and nothing written', async () => {
     const { book, port } = setup();
     const result = await buildRecipeTable(port, { ...defaultInput(), phStart: '8', phStop: '7', volumeMl: 'lots', useTemperaturesC: '4; 140' }, { version: '0.1.0' });
@@ -80,7 +121,7 @@ describe('recipe table in the preview workbook', () => {
     if (result.ok) return;
     expect(result.errors.phStop).toMatch(/not be below the first/);
     expect(result.errors.volumeMl).toMatch(/must be a number/);
-    expect(result.errors.useTemperaturesC).toMatch(/140 is outside from 0 to 100 °C/);
+    expect(result.errors.useTemperaturesC).toMatch(/140 is not allowed: each value must be from 0 to 100 °C/);
     expect(book.sheetNames()).toEqual(['Notes']);
   });
 

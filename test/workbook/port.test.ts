@@ -4,7 +4,7 @@ import { literal } from '../../src/workbook/port';
 import { PreviewAdapter } from '../../src/workbook/previewAdapter';
 
 describe('text from user input is written as text, never as a formula', () => {
-  it.each(['=HYPERLINK("http://example.invalid","x")', '+1+1', '-2+3', '@SUM(A1)', '\t=1'])('%p gets the text mark', (text) => {
+  it.each(['=HYPERLINK("http://example.invalid","x")', '+1+1', '-2+3', '@SUM(A1)', '\t=1', "'My substances'!A2:J20"])('%p gets the text mark', (text) => {
     expect(literal(text)).toBe(`'${text}`);
   });
 
