@@ -1,6 +1,6 @@
 import { createFormulaEngine } from '../../src/functions/formulaEngine';
 import { PreviewWorkbook } from '../../src/preview/workbook';
-import { literal } from '../../src/workbook/port';
+import { literal, parseRangeText, qualifiedAddress } from '../../src/workbook/port';
 import { PreviewAdapter } from '../../src/workbook/previewAdapter';
 
 describe('text from user input is written as text, never as a formula', () => {
@@ -23,5 +23,25 @@ describe('text from user input is written as text, never as a formula', () => {
     expect(book.formula('Sheet1', 0, 0)).toBeUndefined();
     expect(book.value('Sheet1', 0, 1)).toBe('@SUM(1)');
     expect(book.value('Sheet1', 0, 2)).toBe(2);
+  });
+});
+
+describe('typed range references', () => {
+  it.each([
+    ["'My substances'!A2:J20", { sheet: 'My substances', range: { row: 1, col: 0, rowCount: 19, colCount: 10 } }],
+    ['Sheet2!$A$2:$J$20', { sheet: 'Sheet2', range: { row: 1, col: 0, rowCount: 19, colCount: 10 } }],
+    ['B3:D10', { range: { row: 2, col: 1, rowCount: 8, colCount: 3 } }],
+    ["'Bob''s bench'!AA1", { sheet: "Bob's bench", range: { row: 0, col: 26, rowCount: 1, colCount: 1 } }],
+    ['D10:B3', { range: { row: 2, col: 1, rowCount: 8, colCount: 3 } }],
+  ])('%p reads as sheet and corners', (text, expected) => {
+    expect(parseRangeText(text)).toEqual(expected);
+  });
+
+  it.each(['', 'My substances!A2:J20', 'A0:B2', '=A1:B2', 'A1:B2:C3', 'HEPES'])('%p is not a range', (text) => {
+    expect(parseRangeText(text)).toBeNull();
+  });
+
+  it('writes a sheet-qualified address back, quoting the sheet and doubling its apostrophes', () => {
+    expect(qualifiedAddress("Bob's bench", { row: 1, col: 0, rowCount: 19, colCount: 10 })).toBe("'Bob''s bench'!A2:J20");
   });
 });
