@@ -119,7 +119,8 @@ export function formatRecipe(plan: RecipePlan): string {
   lines.push('');
   lines.push('Predicted');
   lines.push(`  meter while adjusting   pH ${formatPh(plan.meter.pH)} at ${plan.meter.benchTemperatureC} °C in ${formatMl(plan.meter.partVolumeMl)} mL`);
-  lines.push(`  pH at use               ${formatPh(p.pHAtUse)} at ${p.useTemperatureC} °C; ${formatPh(p.pHAtBench)} at ${plan.meter.benchTemperatureC} °C`);
+  const atBench = plan.meter.benchTemperatureC === p.useTemperatureC ? '' : `; ${formatPh(p.pHAtBench)} at ${plan.meter.benchTemperatureC} °C (finished buffer at the bench)`;
+  lines.push(`  pH at use               ${formatPh(p.pHAtUse)} at ${p.useTemperatureC} °C${atBench}`);
   lines.push(`  ionic strength          ${(p.ionicStrengthM * 1000).toFixed(1)} mM`);
   lines.push(`  ideal osmolarity        ${p.idealOsmolarityMosm.toFixed(0)} mOsm/L`);
   lines.push(`  capacity                ${p.baseMmPerTenthPh.toFixed(2)} mM base or ${p.acidMmPerTenthPh.toFixed(2)} mM acid per 0.1 pH`);
