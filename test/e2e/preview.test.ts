@@ -108,6 +108,13 @@ describeBrowser('preview workbook in Chromium', () => {
     expect(await page.locator('#field-volumeMl').getAttribute('aria-invalid')).toBe('true');
     expect(await page.locator('#sheet-tabs .tab').count()).toBe(before);
     await page.fill('#field-volumeMl', '500');
+    // A misspelt buffer: the library's nearest names under the field, still nothing written.
+    const buffer = await page.inputValue('#field-buffer');
+    await page.fill('#field-buffer', 'HEPSE');
+    await page.click('#build-table');
+    await expect(page.locator('#error-buffer').textContent()).resolves.toMatch(/"HEPSE" is not in the substance library; did you mean .*"HEPES"/);
+    expect(await page.locator('#sheet-tabs .tab').count()).toBe(before);
+    await page.fill('#field-buffer', buffer);
   });
 
   test('the pane builds a recipe table on a new sheet whose cells are computed', async () => {
