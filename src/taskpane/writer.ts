@@ -45,7 +45,7 @@ function fieldMessage(error: unknown): string {
  * acid or base or one weak one, the salt is on the shelf. A misspelt name gets the
  * library's nearest names, under its own field, before anything is written.
  */
-export function checkNames(request: TableRequest, library: SubstanceLibrary): FieldErrors {
+function checkNames(request: TableRequest, library: SubstanceLibrary): FieldErrors {
   const errors: FieldErrors = {};
   let system: ReturnType<SubstanceLibrary['findSystem']> | undefined;
   try {
@@ -93,7 +93,7 @@ export function checkNames(request: TableRequest, library: SubstanceLibrary): Fi
  * that was active (formulas on the new recipe sheet would otherwise point at that sheet's
  * own cells), and comes back sheet-qualified for the formulas.
  */
-export async function libraryOfRequest(port: WorkbookPort, request: TableRequest): Promise<{ ok: true; library: SubstanceLibrary; userSubstances: string } | { ok: false; errors: FieldErrors }> {
+async function libraryOfRequest(port: WorkbookPort, request: TableRequest): Promise<{ ok: true; library: SubstanceLibrary; userSubstances: string } | { ok: false; errors: FieldErrors }> {
   if (request.userSubstances === '') return { ok: true, library: defaultLibrary(), userSubstances: '' };
   const typed = parseRangeText(request.userSubstances);
   if (!typed) return { ok: false, errors: { userSubstances: "Give a range such as 'My substances'!A2:J20, or leave it blank." } };
