@@ -7,6 +7,8 @@
  *   index.html     the preview workbook (grid + formula engine + task pane), no Excel needed
  *   office.js …    Office.js served from @microsoft/office-js (no network at run time)
  *   assets/, help/ icons and the worksheet-function help page
+ *   manifest.xml   only with ADDIN_ORIGIN set: the manifest rewritten for that origin
+ *                  (functions.json's help URLs likewise; see scripts/deployOrigin.js)
  * HyperFormula (GPL-3.0) is only in the preview bundle, never in the Excel bundles.
  */
 'use strict';
@@ -16,6 +18,7 @@ const HtmlWebpackPlugin = require('html-webpack-plugin');
 const CopyWebpackPlugin = require('copy-webpack-plugin');
 const TerserPlugin = require('terser-webpack-plugin');
 const { helpPage } = require('./scripts/markdownPage');
+const { checkOrigin, withOrigin } = require('./scripts/deployOrigin');
 
 const root = __dirname;
 const DEV_PORT = 3000;
@@ -78,7 +81,11 @@ module.exports = (env, argv) => {
     // Office.js loads its host- and locale-specific files from folders beside itself.
     { from: path.join(OFFICE_JS, 'en-us').replace(/\\/g, '/'), to: 'office/en-us', noErrorOnMissing: true },
   ];
-  if (fs.existsSync(METADATA)) copies.push({ from: 'src/functions/metadata.json', to: 'functions.json' });
+  // A deployment build (ADDIN_ORIGIN set) rewrites the development origin in what it serves.
+  const origin = process.env.ADDIN_ORIGIN ? checkOrigin(process.env.ADDIN_ORIGIN) : undefined;
+  const rewrite = origin ? { transform: (content) => withOrigin(content.toString(), origin) } : {};
+  if (fs.existsSync(METADATA)) copies.push({ from: 'src/functions/metadata.json', to: 'functions.json', ...rewrite });
+  if (origin) copies.push({ from: 'manifest.xml', to: 'manifest.xml', ...rewrite });
 
   return {
     mode: production ? 'production' : 'development',
