@@ -28,7 +28,7 @@ import { findStrongIon } from '../strongIons';
 import { MAX_TARGET_PH, MIN_TARGET_PH, Titrant, titrantForPh, withTitrant } from '../titration';
 import { pKaAt } from '../vantHoff';
 import { RecipeComponent, RecipeInput, RecipePlan, RecipeRoute, TitrationPlan } from './types';
-import { cautionsFor, protocolSteps } from './protocol';
+import { cautionsFor, protocolSteps, volumeText } from './protocol';
 
 /** pKa uncertainty used where the library gives none: published tables scatter by about ±0.01–0.02 (common practice, e.g. tris 8.06–8.08). */
 export const DEFAULT_PKA_UNCERTAINTY = 0.02;
@@ -40,6 +40,8 @@ export const DEFAULT_PART_VOLUME_FRACTION = 0.8;
 export const FIRST_PORTION_SHARE = 0.9;
 /** Warn when the target is further than this from every pKa (the core's rule, re-exported for the planner's users). */
 export { BUFFERING_HALF_WIDTH };
+/** Below this total titrant volume (mL) the pH cannot be approached in portions: about two drops (one drop ≈ 0.05 mL, common practice). */
+export const SMALLEST_TITRANT_ML = 0.1;
 /** Largest dilution fold for a stock. */
 export const MAX_STOCK_FOLD = 100;
 /** Largest salt concentration the salt-target search tries, mol/L (beyond any buffer recipe). */
@@ -470,6 +472,10 @@ function planWarnings(s: Settled, made: RouteResult, volumeL: number, titration:
     const totalMl = volumeL * 1000;
     if (titration.volumeMl > 0.5 * totalMl) {
       w.push(`The titrant (${titration.volumeMl.toFixed(1)} mL) is more than half the final volume (${totalMl.toFixed(0)} mL): use a more concentrated stock.`);
+    }
+    if (titration.volumeMl < SMALLEST_TITRANT_ML) {
+      const fold = Math.pow(10, Math.ceil(Math.log10(SMALLEST_TITRANT_ML / titration.volumeMl)));
+      w.push(`The whole titrant is only ${(titration.volumeMl * 1000).toPrecision(3)} µL: too little to add in portions that approach the target; dilute the stock ${fold}× (${(titration.stockM / fold).toPrecision(3)} M) to add about ${volumeText(titration.volumeMl * fold)}.`);
     }
     if (titration.highMl > totalMl * s.partFraction) {
       w.push(`The titrant may not fit: up to ${titration.highMl.toFixed(1)} mL is expected, more than the ${(totalMl * s.partFraction).toFixed(0)} mL part volume; use a more concentrated stock.`);

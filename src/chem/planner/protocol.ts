@@ -52,6 +52,28 @@ export function formatMl(ml: number): string {
   return ml.toFixed(2);
 }
 
+/**
+ * A volume with its unit, as a pipette or cylinder is read: below 1 mL in µL to three
+ * significant figures (`10.8 µL`, `250 µL`), otherwise as formatMl in mL.
+ *
+ * @example volumeText(0.0108) // '10.8 µL'
+ */
+export function volumeText(ml: number): string {
+  if (ml > 0 && ml < 1) {
+    const ul = ml * 1000;
+    return `${ul >= 100 ? ul.toFixed(0) : ul.toPrecision(3)} µL`;
+  }
+  return `${formatMl(ml)} mL`;
+}
+
+/** An expected range of volumes, in one unit: `5.98–6.35 mL`, `10.5–11.2 µL`. */
+function volumeRange(lowMl: number, highMl: number): string {
+  const high = volumeText(highMl);
+  const unit = high.endsWith('µL') ? ' µL' : ' mL';
+  const low = volumeText(lowMl);
+  return low.endsWith(unit) ? `${low.slice(0, -unit.length)}–${high}` : `${low}–${high}`;
+}
+
 /** pH to two decimals: what a bench meter shows. */
 export function formatPh(pH: number): string {
   return pH.toFixed(2);
@@ -80,7 +102,7 @@ export function protocolSteps(plan: RecipePlan): string[] {
   steps.push(`Bring the solution to ${m.benchTemperatureC} °C and calibrate the pH meter at that temperature.`);
   if (t) {
     steps.push(
-      `Add about ${formatMl(t.firstPortionMl)} mL of ${t.stockM} M ${t.titrant} (a safe first portion; expect ${formatMl(t.lowMl)}–${formatMl(t.highMl)} mL in all, about ${formatMl(t.volumeMl)} mL), mix, then add more in small portions until the meter reads ${formatPh(m.pH)} at ${m.benchTemperatureC} °C.`,
+      `Add about ${volumeText(t.firstPortionMl)} of ${t.stockM} M ${t.titrant} (a safe first portion; expect ${volumeRange(t.lowMl, t.highMl)} in all, about ${volumeText(t.volumeMl)}), mix, then add more in small portions until the meter reads ${formatPh(m.pH)} at ${m.benchTemperatureC} °C.`,
     );
   } else {
     steps.push(`Mix until dissolved; the meter should read ${formatPh(m.pH)} at ${m.benchTemperatureC} °C. If it is off by more than 0.05, adjust with small portions of the acid or base form, or of dilute strong acid or base.`);
@@ -110,7 +132,7 @@ export function formatRecipe(plan: RecipePlan): string {
   lines.push('');
   lines.push('Amounts');
   for (const c of plan.components) {
-    const amount = c.grams !== undefined ? `${formatGrams(c.grams)} g` : `${c.role === 'water' ? 'to ' : ''}${formatMl(c.millilitres ?? 0)} mL`;
+    const amount = c.grams !== undefined ? `${formatGrams(c.grams)} g` : c.role === 'water' ? `to ${formatMl(c.millilitres ?? 0)} mL` : volumeText(c.millilitres ?? 0);
     lines.push(`  ${c.role.padEnd(9)} ${amount.padStart(10)}  ${c.name}${c.concentrationMm !== undefined ? ` (${c.concentrationMm.toPrecision(4)} mM)` : ''}`);
   }
   lines.push('');

@@ -1,6 +1,7 @@
 import { ChemError, Composition, scaleComposition, solvePh, speciate } from '../../../src/chem';
 import { createLibrary, defaultLibrary, findForm } from '../../../src/chem/library';
 import { RecipeInput, RecipePlan, formatRecipe, planRecipe } from '../../../src/chem/planner';
+import { volumeText } from '../../../src/chem/planner/protocol';
 
 /** The brief's bar for round trips: the recipe's own numbers solve back to the target within 0.001 pH. */
 const ROUND_TRIP_PH = 0.001;
@@ -175,6 +176,17 @@ describe('recipe planner: warnings', () => {
     expect(p.warnings.join(' ')).toMatch(/may not fit/);
   });
 
+  it('warns when the whole titrant is too small to add in portions, and gives the volumes in µL', () => {
+    const p = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 10, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 10 } });
+    expect(p.titration!.volumeMl).toBeLessThan(0.1);
+    const warning = p.warnings.find((w) => w.startsWith('The whole titrant'));
+    expect(warning).toMatch(/^The whole titrant is only 1\d\.\d µL: .* dilute the stock 10× \(1\.00 M\) to add about 1\d\d µL\.$/);
+    expect(p.steps.join(' ')).toMatch(/expect 1\d\.\d–1\d\.\d µL in all, about 1\d\.\d µL/);
+    // With the 1 M stock it advises, the warning is gone.
+    const diluted = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 10, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } });
+    expect(diluted.warnings.some((w) => w.startsWith('The whole titrant'))).toBe(false);
+  });
+
   it('warns when a solid is above its solubility in the part volume', () => {
     const p = planRecipe({ buffer: 'tris', targetPh: 8.0, concentrationMm: 50, volumeMl: 1000, route: 'stock', stock: { fold: 100 }, form: 'tris base', titrant: { form: 'HCl', concentrationM: 12 } });
     expect(p.warnings.join(' ')).toMatch(/above its solubility/);
@@ -231,5 +243,18 @@ describe('recipe planner: bad input names the field and what is allowed', () => 
   it('the speciation of a plan is consistent with speciate()', () => {
     const p = planRecipe(good);
     expect(speciate(p.composition).ionicStrengthM).toBeCloseTo(p.predictions.ionicStrengthM, 12);
+  });
+});
+
+describe('volumes as a pipette or cylinder is read', () => {
+  it.each([
+    [0.0108, '10.8 µL'],
+    [0.25, '250 µL'],
+    [0.0009, '0.900 µL'],
+    [1, '1.00 mL'],
+    [47.74, '47.7 mL'],
+    [250, '250 mL'],
+  ])('%p mL reads %p', (ml, text) => {
+    expect(volumeText(ml)).toBe(text);
   });
 });
