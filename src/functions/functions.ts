@@ -14,7 +14,7 @@ import { apparentPKa, capacity, solutionWarnings, idealOsmolarity, debyeHuckelA,
 import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
 import { DEFAULT_PART_VOLUME_FRACTION, DEFAULT_STOCK_TOLERANCE_PERCENT, RecipeInput, planRecipe } from '../chem/planner';
-import { formatMl } from '../chem/planner/protocol';
+import { volumeText } from '../chem/planner/protocol';
 import { compositionFrom, MAX_AMOUNT_MM } from './composition';
 import { SheetError, invalid } from './errors';
 import { memoised } from './memo';
@@ -442,7 +442,7 @@ export function recipe(
       if (c.grams !== undefined) rows.push(['amount', `${c.role}: ${c.name}`, c.grams, 'g']);
       else rows.push(['amount', c.role === 'water' ? 'water, to final volume' : `${c.role}: ${c.name}`, c.millilitres ?? 0, 'mL']);
     }
-    rows.push(['meter', `reads while adjusting, at ${plan.meter.benchTemperatureC} °C in ${formatMl(plan.meter.partVolumeMl)} mL`, plan.meter.pH, 'pH']);
+    rows.push(['meter', `reads while adjusting, at ${plan.meter.benchTemperatureC} °C in ${volumeText(plan.meter.partVolumeMl)}`, plan.meter.pH, 'pH']);
     if (plan.titration) {
       rows.push(['titrant', 'expected, low end', plan.titration.lowMl, 'mL']);
       rows.push(['titrant', 'expected, high end', plan.titration.highMl, 'mL']);

@@ -28,7 +28,7 @@ import { findStrongIon } from '../strongIons';
 import { MAX_TARGET_PH, MIN_TARGET_PH, Titrant, titrantForPh, withTitrant } from '../titration';
 import { pKaAt } from '../vantHoff';
 import { RecipeComponent, RecipeInput, RecipePlan, RecipeRoute, TitrationPlan } from './types';
-import { cautionsFor, protocolSteps, volumeText } from './protocol';
+import { SMALLEST_GOOD_WEIGHING_G, cautionsFor, protocolSteps, volumeText } from './protocol';
 
 /** pKa uncertainty used where the library gives none: published tables scatter by about ±0.01–0.02 (common practice, e.g. tris 8.06–8.08). */
 export const DEFAULT_PKA_UNCERTAINTY = 0.02;
@@ -482,6 +482,10 @@ function planWarnings(s: Settled, made: RouteResult, volumeL: number, titration:
     }
   }
   for (const item of made.weighed) {
+    const grams = item.concentrationM * volumeL * item.form.molarMass;
+    if (grams > 0 && grams < SMALLEST_GOOD_WEIGHING_G) {
+      w.push(`${(grams * 1000).toPrecision(3)} mg of ${item.form.name} is too little to weigh well on an analytical balance (about ${SMALLEST_GOOD_WEIGHING_G * 1000} mg at least): make a larger volume or a concentrated stock and take a part of it.`);
+    }
     const sol = item.form.solubility;
     if (!sol) continue;
     const gPerL = (item.concentrationM * item.form.molarMass) / s.partFraction;

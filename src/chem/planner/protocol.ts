@@ -53,8 +53,9 @@ export function formatMl(ml: number): string {
 }
 
 /**
- * A volume with its unit, as a pipette or cylinder is read: below 1 mL in µL to three
- * significant figures (`10.8 µL`, `250 µL`), otherwise as formatMl in mL.
+ * A volume with its unit, as a pipette, cylinder or tank is read: below 1 mL in µL to three
+ * significant figures (`10.8 µL`, `250 µL`), from 10 L in litres (`200 L`, `12.5 L`),
+ * otherwise as formatMl in mL.
  *
  * @example volumeText(0.0108) // '10.8 µL'
  */
@@ -63,8 +64,18 @@ export function volumeText(ml: number): string {
     const ul = ml * 1000;
     return `${ul >= 100 ? ul.toFixed(0) : ul.toPrecision(3)} µL`;
   }
+  if (ml >= 10_000) {
+    const l = ml / 1000;
+    return `${l >= 100 ? l.toFixed(0) : l.toPrecision(3)} L`;
+  }
   return `${formatMl(ml)} mL`;
 }
+
+/** Largest volume usually made up in a volumetric flask, mL (common practice: flasks stop at 2–5 L). */
+const LARGEST_FLASK_ML = 2000;
+
+/** Below this mass a weighing is poor on an analytical balance, g (common practice: about 10 mg at 0.1 mg readability). */
+export const SMALLEST_GOOD_WEIGHING_G = 0.01;
 
 /** An expected range of volumes, in one unit: `5.98–6.35 mL`, `10.5–11.2 µL`. */
 function volumeRange(lowMl: number, highMl: number): string {
@@ -98,7 +109,7 @@ export function protocolSteps(plan: RecipePlan): string[] {
   const steps: string[] = [];
   steps.push(`Weigh ${weighed.map(weighLine).join('; and ')}.`);
   const dissolveMl = Math.max(0, m.partVolumeMl - (t?.volumeMl ?? 0));
-  steps.push(`Dissolve in about ${formatMl(dissolveMl)} mL of water, leaving room for the pH adjustment in about ${formatMl(m.partVolumeMl)} mL (${Math.round(m.partVolumeFraction * 100)} % of the ${formatMl(finalMl)} mL).`);
+  steps.push(`Dissolve in about ${volumeText(dissolveMl)} of water, leaving room for the pH adjustment in about ${volumeText(m.partVolumeMl)} (${Math.round(m.partVolumeFraction * 100)} % of the ${volumeText(finalMl)}).`);
   steps.push(`Bring the solution to ${m.benchTemperatureC} °C and calibrate the pH meter at that temperature.`);
   if (t) {
     steps.push(
@@ -107,10 +118,11 @@ export function protocolSteps(plan: RecipePlan): string[] {
   } else {
     steps.push(`Mix until dissolved; the meter should read ${formatPh(m.pH)} at ${m.benchTemperatureC} °C. If it is off by more than 0.05, adjust with small portions of the acid or base form, or of dilute strong acid or base.`);
   }
-  steps.push(`Transfer to a ${formatMl(finalMl)} mL volumetric flask or graduated vessel, rinse in, and bring to ${formatMl(finalMl)} mL with water at ${m.benchTemperatureC} °C.`);
+  const vessel = finalMl <= LARGEST_FLASK_ML ? `a ${volumeText(finalMl)} volumetric flask or graduated vessel` : 'a graduated vessel or tank';
+  steps.push(`Transfer to ${vessel}, rinse in, and bring to ${volumeText(finalMl)} with water at ${m.benchTemperatureC} °C.`);
   if (plan.stock) {
     steps.push(`Mix well. The stock reads about pH ${formatPh(plan.stock.stockPhAtUse)} at ${plan.predictions.useTemperatureC} °C; that is expected, not an error.`);
-    steps.push(`For ${formatMl(plan.volumeMl)} mL of working buffer, mix ${formatMl(plan.stock.stockPerBatchMl)} mL of stock with ${formatMl(plan.stock.waterPerBatchMl)} mL of water.`);
+    steps.push(`For ${volumeText(plan.volumeMl)} of working buffer, mix ${volumeText(plan.stock.stockPerBatchMl)} of stock with ${volumeText(plan.stock.waterPerBatchMl)} of water.`);
   } else {
     steps.push('Mix well.');
   }
@@ -127,12 +139,12 @@ export function protocolSteps(plan: RecipePlan): string[] {
 export function formatRecipe(plan: RecipePlan): string {
   const p = plan.predictions;
   const lines: string[] = [];
-  lines.push(`${plan.buffer} buffer, ${plan.concentrationMm} mM, pH ${plan.targetPh} at ${p.useTemperatureC} °C, ${formatMl(plan.volumeMl)} mL (${plan.route})`);
-  if (plan.stock) lines.push(`Made as ${formatMl(plan.stock.stockVolumeMl)} mL of ${plan.stock.fold}× stock (${(plan.concentrationMm * plan.stock.fold).toPrecision(4)} mM), diluted for use`);
+  lines.push(`${plan.buffer} buffer, ${plan.concentrationMm} mM, pH ${plan.targetPh} at ${p.useTemperatureC} °C, ${volumeText(plan.volumeMl)} (${plan.route})`);
+  if (plan.stock) lines.push(`Made as ${volumeText(plan.stock.stockVolumeMl)} of ${plan.stock.fold}× stock (${(plan.concentrationMm * plan.stock.fold).toPrecision(4)} mM), diluted for use`);
   lines.push('');
   lines.push('Amounts');
   for (const c of plan.components) {
-    const amount = c.grams !== undefined ? `${formatGrams(c.grams)} g` : c.role === 'water' ? `to ${formatMl(c.millilitres ?? 0)} mL` : volumeText(c.millilitres ?? 0);
+    const amount = c.grams !== undefined ? `${formatGrams(c.grams)} g` : c.role === 'water' ? `to ${volumeText(c.millilitres ?? 0)}` : volumeText(c.millilitres ?? 0);
     lines.push(`  ${c.role.padEnd(9)} ${amount.padStart(10)}  ${c.name}${c.concentrationMm !== undefined ? ` (${c.concentrationMm.toPrecision(4)} mM)` : ''}`);
   }
   lines.push('');
@@ -140,7 +152,7 @@ export function formatRecipe(plan: RecipePlan): string {
   plan.steps.forEach((s, i) => lines.push(`  ${i + 1}. ${s}`));
   lines.push('');
   lines.push('Predicted');
-  lines.push(`  meter while adjusting   pH ${formatPh(plan.meter.pH)} at ${plan.meter.benchTemperatureC} °C in ${formatMl(plan.meter.partVolumeMl)} mL`);
+  lines.push(`  meter while adjusting   pH ${formatPh(plan.meter.pH)} at ${plan.meter.benchTemperatureC} °C in ${volumeText(plan.meter.partVolumeMl)}`);
   const atBench = plan.meter.benchTemperatureC === p.useTemperatureC ? '' : `; ${formatPh(p.pHAtBench)} at ${plan.meter.benchTemperatureC} °C (finished buffer at the bench)`;
   lines.push(`  pH at use               ${formatPh(p.pHAtUse)} at ${p.useTemperatureC} °C${atBench}`);
   lines.push(`  ionic strength          ${(p.ionicStrengthM * 1000).toFixed(1)} mM`);

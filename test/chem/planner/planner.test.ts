@@ -187,6 +187,19 @@ describe('recipe planner: warnings', () => {
     expect(diluted.warnings.some((w) => w.startsWith('The whole titrant'))).toBe(false);
   });
 
+  it('warns when a weighing is below about 10 mg, and not at 25 mM in 1 L', () => {
+    const tiny = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 1, volumeMl: 10, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 0.01 } });
+    expect(tiny.warnings).toContainEqual(expect.stringMatching(/^2\.38 mg of HEPES free acid is too little to weigh well on an analytical balance/));
+    const usual = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 1000, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } });
+    expect(usual.warnings.some((w) => w.includes('too little to weigh'))).toBe(false);
+  });
+
+  it('speaks of litres and a tank for a 200 L batch', () => {
+    const p = planRecipe({ buffer: 'tris', targetPh: 8.0, concentrationMm: 50, volumeMl: 200000, form: 'tris base', titrant: { form: 'HCl', concentrationM: 6 } });
+    expect(p.steps.join(' ')).toMatch(/about 160 L \(80 % of the 200 L\)/);
+    expect(p.steps.join(' ')).toMatch(/Transfer to a graduated vessel or tank, rinse in, and bring to 200 L/);
+  });
+
   it('warns when a solid is above its solubility in the part volume', () => {
     const p = planRecipe({ buffer: 'tris', targetPh: 8.0, concentrationMm: 50, volumeMl: 1000, route: 'stock', stock: { fold: 100 }, form: 'tris base', titrant: { form: 'HCl', concentrationM: 12 } });
     expect(p.warnings.join(' ')).toMatch(/above its solubility/);
@@ -254,6 +267,8 @@ describe('volumes as a pipette or cylinder is read', () => {
     [1, '1.00 mL'],
     [47.74, '47.7 mL'],
     [250, '250 mL'],
+    [12500, '12.5 L'],
+    [200000, '200 L'],
   ])('%p mL reads %p', (ml, text) => {
     expect(volumeText(ml)).toBe(text);
   });
