@@ -1,7 +1,8 @@
 /**
  * The demo workbook the preview opens with: the North bench protein lab's prep sheet, our
- * own scenario — a HEPES saline wash buffer for the cold room, a phosphate stock for the
- * media kitchen and a tris buffer for gels — written with PROTON formulas users can edit.
+ * own scenario — a HEPES saline wash buffer for the cold room (with its whole recipe spilled
+ * beside it), a phosphate stock for the media kitchen and a tris buffer for gels — written
+ * with PROTON formulas users can edit.
  */
 import type { CellStyle } from '../workbook/port';
 
@@ -40,6 +41,8 @@ export const DEMO_CELLS: readonly DemoCell[] = [
   { at: 'E9', content: '=PROTON.OSMOLARITY.IDEAL(A6:B8, 4)', numberFormat: '0' },
   { at: 'D10', content: 'HEPES to weigh for 2 L (g)', style: 'label' },
   { at: 'E10', content: '=PROTON.GRAMS("HEPES", B6, 2000)', numberFormat: '0.000' },
+  { at: 'G4', content: 'The whole recipe, live: 2 L of the wash buffer at pH 7.70 at 4 °C, adjusted at 22 °C', style: 'subtitle' },
+  { at: 'G5', content: '=PROTON.RECIPE("HEPES", 7.7, B6, 2000, "HEPES", "NaOH", 1, 4, 22, 0.8, A8:B8)' },
   { at: 'D11', content: 'Warnings at 4 °C', style: 'label' },
   { at: 'E11', content: '=PROTON.WARNINGS(A6:B8, 4)' },
 
@@ -82,7 +85,9 @@ export const DEMO_CELLS: readonly DemoCell[] = [
   { at: 'E23', content: '=PROTON.PKA("tris", 1, 22)', numberFormat: '0.000' },
   { at: 'D24', content: 'Same pKa′ in the 4 °C cold room', style: 'label' },
   { at: 'E24', content: '=PROTON.PKA("tris", 1, 4)', numberFormat: '0.000' },
-  { at: 'A26', content: 'Caution: 6 M HCl is corrosive; add it slowly with stirring, eye protection on. Verify the final pH with a calibrated meter at the working temperature; follow your safety data sheets and local rules.', style: 'caution' },
+  { at: 'A26', content: 'Caution: 6 M HCl is corrosive; add it slowly with stirring, eye protection on.', style: 'caution' },
+  { at: 'A27', content: 'Verify the final pH with a calibrated meter at the working temperature;', style: 'caution' },
+  { at: 'A28', content: 'follow your safety data sheets and local rules.', style: 'caution' },
 ];
 
-export const DEMO_COLUMN_WIDTHS = [34, 10, 2, 30, 12];
+export const DEMO_COLUMN_WIDTHS = [40, 10, 2, 30, 12, 2, 10, 40, 12, 10];

@@ -12,6 +12,8 @@ import type { PreviewWorkbook } from './workbook';
 
 const ROW_HEIGHT_PX = 24;
 const ROW_HEADER_PX = 44;
+/** Left and right padding of a cell (preview.css: 5 px each side). */
+const CELL_PADDING_PX = 10;
 const CHAR_PX = 7.2;
 const MIN_ROWS = 40;
 const MIN_COLS = 12;
@@ -210,7 +212,23 @@ export class Grid {
         if (r < dims.rows && c < dims.cols) {
           const value = this.book.value(this.sheet, r, c);
           const meta = this.book.meta(this.sheet, r, c);
-          td.textContent = formatValue(value, meta?.numberFormat);
+          const text = formatValue(value, meta?.numberFormat);
+          if (typeof value === 'string' && text !== '' && meta?.style !== 'header') {
+            // Text runs over empty cells to its right and stops at the first one holding a value, as in Excel.
+            let px = this.columnPx(c) - CELL_PADDING_PX;
+            for (let k = c + 1; k < cols; k++) {
+              const next = k < dims.cols ? this.book.value(this.sheet, r, k) : null;
+              if (next !== null && next !== '') break;
+              px += this.columnPx(k);
+            }
+            const span = document.createElement('span');
+            span.className = 'cell-text';
+            span.style.width = `${Math.max(0, px)}px`;
+            span.textContent = text;
+            td.appendChild(span);
+          } else {
+            td.textContent = text;
+          }
           if (meta?.style) td.classList.add(`style-${meta.style}`);
           if (typeof value === 'number') td.classList.add('num');
           if (value !== null && typeof value === 'object') {
