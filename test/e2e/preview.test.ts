@@ -82,22 +82,29 @@ describeBrowser('preview workbook in Chromium', () => {
     const ph = Number(await cell('E6').textContent());
     expect(ph).toBeGreaterThan(7);
     expect(ph).toBeLessThan(8.5);
+    // The whole recipe spills beside it: HEPES free acid for 2 L at 20 mM, 238.3 g/mol → 9.53 g.
+    await expect(cell('G6').textContent()).resolves.toBe('recipe');
+    expect(Number(await cell('I7').textContent())).toBeCloseTo(9.53, 2);
+    // Text runs over empty cells and stops at the first holding a value (the spill's G27), as in Excel.
+    const caution = await page.locator('#cell-A27 span.cell-text').boundingBox();
+    const stop = await cell('G27').boundingBox();
+    expect(caution!.x + caution!.width).toBeLessThanOrEqual(stop!.x);
     await page.screenshot({ path: join(ARTIFACTS, 'preview-demo.png') });
     expect(pageErrors).toEqual([]);
   });
 
   test('a PROTON formula typed into the grid shows its value', async () => {
-    await cell('G4').click();
+    await cell('A30').click();
     await page.fill('#formula-input', '=PROTON.PKA("tris", 1, 25)');
     await page.press('#formula-input', 'Enter');
-    const text = await cell('G4').textContent();
+    const text = await cell('A30').textContent();
     // Tris pKa at 25 °C, I = 0: 8.072 (Goldberg et al. 2002, as in the library); tables give 8.06–8.08.
     expect(Number(text)).toBeGreaterThan(8.05);
     expect(Number(text)).toBeLessThan(8.09);
-    await cell('G5').click();
+    await cell('A31').click();
     await page.fill('#formula-input', '=PROTON.GRAMS("no such salt", 10, 100)');
     await page.press('#formula-input', 'Enter');
-    await expect(cell('G5').textContent()).resolves.toMatch(/^#(VALUE!|N\/A)$/);
+    await expect(cell('A31').textContent()).resolves.toMatch(/^#(VALUE!|N\/A)$/);
   });
 
   test('the pane refuses bad input with a message beside the field and writes nothing', async () => {
