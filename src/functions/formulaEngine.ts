@@ -117,14 +117,16 @@ const SAVED_NAMES = new Map(CATALOG.map((fn) => [`${NAMESPACE}_${fn.id.replace(/
 
 /**
  * A formula as Excel saves it, made ready for the engine: Excel writes custom functions
- * as `_xldudf_PROTON_TITRANT_ML(` (dots become underscores; sometimes with a `[1]!`
- * prefix) and newer built-ins as `_xlfn.NAME(`.
+ * as `_xldudf_PROTON_TITRANT_ML(` (dots become underscores), sometimes behind an external
+ * reference that another add-in's registration left (`[1]!`, `Other.xla!`, `'Other add-in.xlam'!`;
+ * reported in OfficeDev/office-js issues 2568 and 3872, not seen in a workbook of ours), and
+ * newer built-ins as `_xlfn.NAME(`.
  *
  * @param formula - formula text, with or without the leading "="
  * @returns the formula with PROTON functions named as typed (`PROTON.TITRANT.ML(`)
  */
 export function toEngineFormula(formula: string): string {
   return formula
-    .replace(/(?:\[\d+\]!)?_xldudf_([A-Za-z0-9_]+)(?=\s*\()/g, (whole, name: string) => SAVED_NAMES.get(name.toUpperCase()) ?? whole)
+    .replace(/(?:\[\d+\]!|'[^']+'!|[A-Za-z0-9_.]+!)?_xldudf_([A-Za-z0-9_]+)(?=\s*\()/g, (whole, name: string) => SAVED_NAMES.get(name.toUpperCase()) ?? whole)
     .replace(/_xl(?:fn|ws)\./gi, '');
 }

@@ -75,6 +75,9 @@ describe('formula engine', () => {
   test('formulas as Excel saves them (_xldudf_PROTON_…, _xlfn.) are translated', () => {
     expect(toEngineFormula('_xldudf_PROTON_TITRANT_ML(A1,50,1000,7.4,"HCl",1)+_xlfn.XLOOKUP(1,A:A,B:B)')).toBe('PROTON.TITRANT.ML(A1,50,1000,7.4,"HCl",1)+XLOOKUP(1,A:A,B:B)');
     expect(toEngineFormula('[1]!_xldudf_PROTON_IONIC_STRENGTH_MM(A1:B3)')).toBe('PROTON.IONIC.STRENGTH.MM(A1:B3)');
+    // Prefixes another add-in's registration can leave, as reported in OfficeDev/office-js issues 2568 and 3872.
+    expect(toEngineFormula('Other.xla!_xldudf_PROTON_PH(A1:B3)+1')).toBe('PROTON.PH(A1:B3)+1');
+    expect(toEngineFormula("'Lab tools.xlam'!_xldudf_PROTON_WARNINGS(A1:B3)")).toBe('PROTON.WARNINGS(A1:B3)');
     expect(toEngineFormula('_xldudf_OTHER_ADDIN_FN(1)')).toBe('_xldudf_OTHER_ADDIN_FN(1)');
   });
 
