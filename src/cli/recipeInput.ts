@@ -28,6 +28,7 @@ export const recipeInputSchema = z
     benchTemperatureC: number.optional(),
     partVolumeFraction: number.optional(),
     purityPercent: z.record(z.string(), number).optional(),
+    formPurityPercent: number.optional(),
     activityModel: z.enum(ACTIVITY_MODELS as [ActivityModel, ...ActivityModel[]]).optional(),
     pKaUncertainty: number.optional(),
     userSubstances: userSubstancesSchema,

@@ -334,7 +334,7 @@ export const RECIPE_TABLE_HEADER = ['section', 'item', 'value', 'unit'] as const
 function recipeInput(
   buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form: any, titrant: any, titrantConcentrationM: any,
   useTemperatureC: any, benchTemperatureC: any, partVolumeFraction: any, salts: any, pKaUncertainty: any, titrantTolerancePercent: any,
-  activityModel: any, twoFormsAllowed: boolean,
+  purity: any, activityModel: any, twoFormsAllowed: boolean,
 ): RecipeInput {
   const useT = toTemperature('useTemperatureC', useTemperatureC);
   const formText = isBlank(form) ? undefined : toText('form', form);
@@ -352,6 +352,7 @@ function recipeInput(
     benchTemperatureC: isBlank(benchTemperatureC) ? useT : toTemperature('benchTemperatureC', benchTemperatureC),
     partVolumeFraction: toNumber('partVolumeFraction', partVolumeFraction, { default: DEFAULT_PART_VOLUME_FRACTION, min: 0.1, max: 1, allowed: '0.1 to 1' }),
     activityModel: toActivityModel('activityModel', activityModel),
+    ...(isBlank(purity) ? {} : { formPurityPercent: toPurity(purity) * 100 }),
     ...(isBlank(pKaUncertainty) ? {} : { pKaUncertainty: toNumber('pKaUncertainty', pKaUncertainty, { min: 0, max: 1, allowed: '0 to 1 pH unit' }) }),
     salts: saltRows.map((row, i) => ({
       form: toText(`salts row ${i + 1}`, row[0]),
@@ -385,6 +386,7 @@ function recipeInput(
  * @param [salts] Two columns: salt form and mM (e.g. "NaCl", 150).
  * @param [pKaUncertainty] pKa uncertainty for the titrant band, pH units (blank: the library's, or 0.02).
  * @param [titrantTolerancePercent] Tolerance of the titrant stock's concentration, % (blank: 1).
+ * @param [purity] Purity (assay) of the form weighed, from its label or certificate: 0.995, 99.5 or "99.5%" (blank: pure).
  * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns One row of recipe figures.
@@ -392,11 +394,11 @@ function recipeInput(
 export function recipeRow(
   buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form?: any, titrant?: any, titrantConcentrationM?: any,
   useTemperatureC?: any, benchTemperatureC?: any, partVolumeFraction?: any, salts?: any[][], pKaUncertainty?: any, titrantTolerancePercent?: any,
-  activityModel?: any, userSubstances?: any[][],
+  purity?: any, activityModel?: any, userSubstances?: any[][],
 ): any[][] {
-  const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, activityModel, userSubstances];
+  const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, userSubstances];
   return memoised('RECIPE.ROW', args, () => {
-    const input = recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, activityModel, false);
+    const input = recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, false);
     const plan = planRecipe(input, libraryFor(userSubstances));
     const weighed = plan.components.find((c) => c.role === 'buffer');
     const t = plan.titration;
@@ -422,6 +424,7 @@ export function recipeRow(
  * @param [salts] Two columns: salt form and mM (e.g. "NaCl", 150).
  * @param [pKaUncertainty] pKa uncertainty for the titrant band, pH units (blank: the library's, or 0.02).
  * @param [titrantTolerancePercent] Tolerance of the titrant stock's concentration, % (blank: 1).
+ * @param [purity] Purity (assay) of the form weighed, of each for two forms: 0.995, 99.5 or "99.5%" (blank: pure).
  * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns The recipe, one line per row.
@@ -429,11 +432,11 @@ export function recipeRow(
 export function recipe(
   buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form?: any, titrant?: any, titrantConcentrationM?: any,
   useTemperatureC?: any, benchTemperatureC?: any, partVolumeFraction?: any, salts?: any[][], pKaUncertainty?: any, titrantTolerancePercent?: any,
-  activityModel?: any, userSubstances?: any[][],
+  purity?: any, activityModel?: any, userSubstances?: any[][],
 ): any[][] {
-  const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, activityModel, userSubstances];
+  const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, userSubstances];
   return memoised('RECIPE', args, () => {
-    const input = recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, activityModel, true);
+    const input = recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, true);
     const plan = planRecipe(input, libraryFor(userSubstances));
     const p = plan.predictions;
     const rows: (number | string)[][] = [[...RECIPE_TABLE_HEADER]];

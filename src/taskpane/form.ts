@@ -10,6 +10,7 @@ import type { PaneSettings } from '../workbook/port';
 export type FieldName =
   | 'buffer'
   | 'form'
+  | 'purityPercent'
   | 'titrant'
   | 'titrantStockM'
   | 'phMode'
@@ -34,6 +35,8 @@ export type FormInput = Readonly<Record<FieldName, string>>;
 export interface TableRequest {
   readonly buffer: string;
   readonly form: string;
+  /** Purity (assay) of the form weighed, % (100 when the field is blank). */
+  readonly purityPercent: number;
   readonly titrant: string;
   readonly titrantStockM: number;
   readonly targetPhs: readonly number[];
@@ -69,6 +72,7 @@ export const LIMITS = {
   volumeMl: [0.001, 1e6],
   titrantStockM: [0.001, 20],
   partVolumeFraction: [0.1, 1],
+  purityPercent: [1, 100],
 } as const;
 
 /** Reads one number; accepts a decimal comma ("7,4") as many lab notebooks write it. */
@@ -158,6 +162,7 @@ export function checkForm(input: FormInput): Checked {
 
   const buffer = need('buffer', 'a buffer system');
   const form = need('form', 'the form you weigh');
+  const purityPercent = input.purityPercent.trim() === '' ? 100 : number('purityPercent', 'the purity of the form', LIMITS.purityPercent, ' %');
   const titrant = need('titrant', 'a titrant');
   const titrantStockM = number('titrantStockM', 'the titrant stock concentration', LIMITS.titrantStockM, ' M');
 
@@ -206,6 +211,7 @@ export function checkForm(input: FormInput): Checked {
     request: {
       buffer,
       form,
+      purityPercent,
       titrant,
       titrantStockM,
       targetPhs,
@@ -235,6 +241,7 @@ export function defaultInput(settings: Partial<PaneSettings> = {}): FormInput {
   return {
     buffer: 'HEPES',
     form: 'HEPES',
+    purityPercent: '',
     titrant: settings.titrant ?? 'NaOH',
     titrantStockM: String(settings.titrantStockM ?? 1),
     phMode: 'range',

@@ -43,6 +43,8 @@ export interface RowCells {
 export interface SettingCells {
   readonly buffer: string;
   readonly form: string;
+  /** Purity of the form weighed, %. */
+  readonly purityPercent: string;
   readonly titrant: string;
   readonly titrantStockM: string;
   readonly salt: string;
@@ -64,7 +66,7 @@ export const saltGrams = (s: SettingCells, r: RowCells) => `=IF(${s.salt}="","",
  * all from the recipe planner, salt included.
  */
 export const recipeRow = (s: SettingCells, r: RowCells, salts: string) =>
-  `=${call('RECIPE.ROW', s.buffer, r.targetPh, r.concentrationMm, r.volumeMl, s.form, s.titrant, s.titrantStockM, r.useTemperatureC, s.benchTemperatureC, r.partVolumeFraction, salts, s.pKaUncertainty, s.stockTolerancePercent, s.activityModel, s.userSubstances)}`;
+  `=${call('RECIPE.ROW', s.buffer, r.targetPh, r.concentrationMm, r.volumeMl, s.form, s.titrant, s.titrantStockM, r.useTemperatureC, s.benchTemperatureC, r.partVolumeFraction, salts, s.pKaUncertainty, s.stockTolerancePercent, s.purityPercent, s.activityModel, s.userSubstances)}`;
 
 /** A salt row for RECIPE.ROW and TITRANT.ML: the salt's name and mM, blank when the sheet names no salt. */
 export const saltName = (s: SettingCells) => `=IF(${s.salt}="","",${s.salt})`;

@@ -24,6 +24,7 @@ const GROUPS: readonly { legend: string; fields: readonly FieldSpec[]; id?: stri
     fields: [
       { name: 'buffer', label: 'Buffer system', hint: 'As on the bottle: HEPES, tris, phosphate…', list: 'list-substances' },
       { name: 'form', label: 'Form you weigh', hint: 'e.g. HEPES, tris base, sodium phosphate monobasic', list: 'list-forms' },
+      { name: 'purityPercent', label: 'Purity of that form (%)', hint: 'From its label or certificate; blank: 100', inputMode: 'decimal' },
       { name: 'titrant', label: 'Titrant', list: 'list-titrants' },
       { name: 'titrantStockM', label: 'Titrant stock (M)', inputMode: 'decimal' },
     ],

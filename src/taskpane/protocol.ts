@@ -32,6 +32,7 @@ export function planForRow(request: TableRequest, row: TableRow, library?: Subst
       volumeMl: request.volumeMl,
       route: 'titrate',
       form: request.form,
+      formPurityPercent: request.purityPercent,
       titrant: { form: request.titrant, concentrationM: request.titrantStockM },
       salts: request.saltForm && request.saltMm > 0 ? [{ form: request.saltForm, concentrationMm: request.saltMm }] : [],
       benchTemperatureC: request.benchTemperatureC,

@@ -75,6 +75,7 @@ const RECIPE_ROW_FORMATS = ['0.000', '0.00', '0.00', '0.00', '0.00', '0.00', '0.
 export const SETTING_ROWS = [
   'Buffer system',
   'Form weighed',
+  'Form purity (%)',
   'Titrant',
   'Titrant stock (M)',
   'Salt',
@@ -153,6 +154,7 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
   const settings: F.SettingCells = {
     buffer: settingRef('Buffer system'),
     form: settingRef('Form weighed'),
+    purityPercent: settingRef('Form purity (%)'),
     titrant: settingRef('Titrant'),
     titrantStockM: settingRef('Titrant stock (M)'),
     salt: settingRef('Salt'),
@@ -166,6 +168,7 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
   const values: Record<SettingLabel, CellWrite> = {
     'Buffer system': input(request.buffer),
     'Form weighed': input(request.form),
+    'Form purity (%)': input(request.purityPercent, '0.0'),
     Titrant: input(request.titrant),
     'Titrant stock (M)': input(request.titrantStockM, '0.000'),
     Salt: input(request.saltForm),

@@ -78,6 +78,13 @@ describe('proton-ledger recipe and substances', () => {
     expect(out.titration.titrant).toBe('hydrochloric acid');
   });
 
+  it('takes the purity of the form weighed', () => {
+    const pure = call(['recipe', '--json', JSON.stringify(recipe)]).out;
+    const assayed = call(['recipe', '--json', JSON.stringify({ ...recipe, formPurityPercent: 99 })]).out;
+    const grams = (plan: { components: { role: string; grams?: number }[] }) => plan.components.find((c) => c.role === 'buffer')!.grams!;
+    expect(Math.abs(grams(assayed) - grams(pure) / 0.99)).toBeLessThan(1e-9);
+  });
+
   it('prints the plan as text with --text', () => {
     const { code, out } = call(['recipe', '--text', '--json', JSON.stringify(recipe)]);
     expect(code).toBe(0);

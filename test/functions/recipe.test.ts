@@ -32,6 +32,18 @@ describe('RECIPE.ROW', () => {
     expect(r[10]).toMatch(/buffer weakly/);
   });
 
+  it('weighs more of a form that is less than pure: the same grams for 0.98, 98 and "98%", pure grams ÷ 0.98', () => {
+    const pure = recipeRow('MES', 6.1, 20, 1000, 'MES free acid', 'NaOH', 1)[0];
+    for (const purity of [0.98, 98, '98%']) {
+      const [r] = recipeRow('MES', 6.1, 20, 1000, 'MES free acid', 'NaOH', 1, '', '', '', undefined, '', '', purity);
+      expect(Math.abs((r[0] as number) - (pure[0] as number) / 0.98)).toBeLessThan(1e-9);
+      // The chemistry is the same: only the mass weighed changes.
+      expect(r[1]).toBe(pure[1]);
+      expect(r[4]).toBe(pure[4]);
+    }
+    expect(() => recipeRow('MES', 6.1, 20, 1000, 'MES free acid', 'NaOH', 1, '', '', '', undefined, '', '', 150)).toThrow(/purity is 150/);
+  });
+
   it('names the argument on bad input', () => {
     expect(() => recipeRow('HEPES', 15, 25, 500)).toThrow(/targetPh/);
     expect(() => recipeRow('HEPES', 7.4, 25, 500, 'NaH2PO4 + Na2HPO4')).toThrow(SheetError);
@@ -57,6 +69,14 @@ describe('RECIPE', () => {
     const amounts = rows.filter((r) => r[0] === 'amount' && r[3] === 'g');
     expect(amounts).toHaveLength(2);
     expect(rows.some((r) => r[0] === 'titrant')).toBe(false);
+  });
+
+  it('applies one purity to both forms of a pair and says so in the weighing step', () => {
+    const pure = recipe('phosphate', 7.0, 100, 1000, 'NaH2PO4·H2O + Na2HPO4·7H2O').filter((r) => r[0] === 'amount' && r[3] === 'g');
+    const rows = recipe('phosphate', 7.0, 100, 1000, 'NaH2PO4·H2O + Na2HPO4·7H2O', '', '', '', '', '', undefined, '', '', '99%');
+    const amounts = rows.filter((r) => r[0] === 'amount' && r[3] === 'g');
+    amounts.forEach((a, i) => expect(Math.abs((a[2] as number) - (pure[i][2] as number) / 0.99)).toBeLessThan(1e-9));
+    expect(rows.find((r) => r[0] === 'step' && r[1] === '1')![2]).toMatch(/99 % pure.*99 % pure/);
   });
 
   it('has a spill shape every host can know from the arguments', () => {

@@ -73,6 +73,25 @@ describe('recipe table in the preview workbook', () => {
     expect(book.formula(result.sheet, row, COL.formGrams)).toMatch(/^=PROTON\.RECIPE\.ROW\(/);
   });
 
+  test('purity of the form: kept in the settings and used by every row; out of range refused under its field', async () => {
+    const { book, port } = setup();
+    const pure = await buildRecipeTable(port, defaultInput(), { version: '0.1.0', now: NOW });
+    const assayed = await buildRecipeTable(port, { ...defaultInput(), purityPercent: '99.5 %' }, { version: '0.1.0', now: NOW });
+    if (!pure.ok || !assayed.ok) throw new Error('not built');
+    expect(book.value(assayed.sheet, settingRow('Form purity (%)'), SETTING_VALUE_COL)).toBe(99.5);
+    expect(book.value(pure.sheet, settingRow('Form purity (%)'), SETTING_VALUE_COL)).toBe(100);
+    const row = LAYOUT.firstDataRow;
+    const g = (sheet: string) => book.value(sheet, row, COL.formGrams) as number;
+    expect(Math.abs(g(assayed.sheet) - g(pure.sheet) / 0.995)).toBeLessThan(1e-9);
+    // Editing the purity cell recomputes the grams (it is an input of the live formulas).
+    book.setContents(assayed.sheet, settingRow('Form purity (%)'), SETTING_VALUE_COL, [[98]]);
+    expect(Math.abs(g(assayed.sheet) - g(pure.sheet) / 0.98)).toBeLessThan(1e-9);
+
+    const bad = await buildRecipeTable(port, { ...defaultInput(), purityPercent: '120' }, { version: '0.1.0' });
+    expect(bad.ok).toBe(false);
+    if (!bad.ok) expect(bad.errors.purityPercent).toMatch(/purity of the form must be from 1 to 100 %/i);
+  });
+
   test('misspelt or mismatched names: the library nearest names under each field, and nothing written', async () => {
     const { book, port } = setup();
     const result = await buildRecipeTable(port, { ...defaultInput(), buffer: 'HEPSE', titrant: 'NaOHH', saltForm: 'sodium chlorid' }, { version: '0.1.0' });

@@ -430,19 +430,21 @@ function dpHdT(c: Composition, t: number): number {
   return (solvePh(withConditions(c, hi)) - solvePh(withConditions(c, lo))) / (hi - lo);
 }
 
-function purityOf(s: Settled, form: LibraryForm): number {
+function purityOf(s: Settled, form: LibraryForm, role: RecipeComponent['role']): number {
   const table = s.input.purityPercent ?? {};
   for (const [name, value] of Object.entries(table)) {
     if (nameKey(name) === nameKey(form.name) || form.aliases.some((a) => nameKey(a) === nameKey(name))) {
       return requireNumber(`purityPercent.${name}`, value, 1, 100, '1 to 100 %');
     }
   }
+  const ownForm = role === 'buffer' || role === 'acid form' || role === 'base form';
+  if (ownForm && s.input.formPurityPercent !== undefined) return requireNumber('formPurityPercent', s.input.formPurityPercent, 1, 100, '1 to 100 %');
   return 100;
 }
 
 function componentsOf(s: Settled, made: RouteResult, volumeL: number, titration: TitrationPlan | undefined): RecipeComponent[] {
   const out: RecipeComponent[] = made.weighed.map((w) => {
-    const purity = purityOf(s, w.form);
+    const purity = purityOf(s, w.form, w.role);
     return {
       role: w.role,
       name: w.form.name,

@@ -72,6 +72,8 @@ export interface RecipeInput {
   readonly partVolumeFraction?: number;
   /** Purity of solids, % by form name (default 100). */
   readonly purityPercent?: Readonly<Record<string, number>>;
+  /** Purity of the buffer's own form(s) weighed, whichever the route picks, % (default 100); a name in purityPercent wins. */
+  readonly formPurityPercent?: number;
   /** Activity model (default `davies`). */
   readonly activityModel?: ActivityModel;
   /** pKa uncertainty for the titrant band, pH units (default: the library's, or 0.02 where it gives none). */

@@ -234,6 +234,7 @@ describe('recipe planner: bad input names the field and what is allowed', () => 
     ['two-forms without forms', { route: 'two-forms' }, /name the forms of HEPES/, 'invalid-input'],
     ['a stock fold of 0.5', { route: 'stock', stock: { fold: 0.5 } }, /stock\.fold is 0.5/, 'invalid-input'],
     ['a purity of 0 %', { purityPercent: { 'HEPES free acid': 0 } }, /purityPercent\.HEPES free acid is 0/, 'invalid-input'],
+    ['a form purity of 120 %', { formPurityPercent: 120 }, /formPurityPercent is 120; allowed: 1 to 100 %/, 'invalid-input'],
     ['a salt target already passed', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 10 } }, /already gives/, 'infeasible-target'],
     ['a salt target with both goals', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 300, ionicStrengthM: 0.1 } }, /either ionicStrengthM or idealOsmolarityMosm/, 'invalid-input'],
   ];
@@ -256,6 +257,25 @@ describe('recipe planner: bad input names the field and what is allowed', () => 
   it('the speciation of a plan is consistent with speciate()', () => {
     const p = planRecipe(good);
     expect(speciate(p.composition).ionicStrengthM).toBeCloseTo(p.predictions.ionicStrengthM, 12);
+  });
+});
+
+describe('purity of the form weighed', () => {
+  const base: RecipeInput = { buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 1000, titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'NaCl', concentrationMm: 150 }] };
+  const grams = (p: RecipePlan, role: string) => p.components.find((c) => c.role === role)!.grams!;
+
+  it('scales the buffer form the route picks, not the salt, and leaves the chemistry alone', () => {
+    const pure = planRecipe(base);
+    const assayed = planRecipe({ ...base, formPurityPercent: 98 });
+    expect(Math.abs(grams(assayed, 'buffer') - grams(pure, 'buffer') / 0.98)).toBeLessThan(1e-9);
+    expect(grams(assayed, 'salt')).toBe(grams(pure, 'salt'));
+    expect(assayed.titration!.volumeMl).toBe(pure.titration!.volumeMl);
+    expect(assayed.steps[0]).toMatch(/98 % pure/);
+  });
+
+  it('lets a purity given by form name win over the form purity', () => {
+    const named = planRecipe({ ...base, form: 'HEPES free acid', formPurityPercent: 98, purityPercent: { 'HEPES free acid': 99.5 } });
+    expect(named.components.find((c) => c.role === 'buffer')!.purityPercent).toBe(99.5);
   });
 });
 
