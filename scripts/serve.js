@@ -3,7 +3,8 @@
  * Serves dist/ over plain http on localhost (the preview workbook at /), prints the address,
  * and opens a browser only where one is plainly available. Never fails for want of one.
  *   node scripts/serve.js [--port N] [--no-open]     (PORT env works too; 0 = any free port)
- * Writes its process id to dist/.server.pid so `npm run stop` can end it.
+ * Writes its process id to .preview-server.pid (beside package.json, outside dist/, which
+ * every build empties) so `npm run stop` can end it.
  */
 'use strict';
 const fs = require('fs');
@@ -13,6 +14,7 @@ const { spawn } = require('child_process');
 const { PREVIEW_CSP } = require('../webpack.config.js');
 
 const root = path.join(__dirname, '..', 'dist');
+const pidFile = path.join(__dirname, '..', '.preview-server.pid');
 const args = process.argv.slice(2);
 const portArg = args.indexOf('--port');
 const wanted = Number(portArg >= 0 ? args[portArg + 1] : (process.env.PORT ?? 3100));
@@ -82,13 +84,13 @@ server.on('error', (err) => {
 server.on('listening', () => {
   const { port } = server.address();
   const address = `http://localhost:${port}/`;
-  fs.writeFileSync(path.join(root, '.server.pid'), String(process.pid));
+  fs.writeFileSync(pidFile, String(process.pid));
   console.log(`Proton Ledger preview workbook: ${address}`);
   console.log('Press Ctrl+C to stop (or `npm run stop` from another terminal).');
   tryOpen(address);
 });
 const shutdown = () => {
-  try { fs.unlinkSync(path.join(root, '.server.pid')); } catch { /* already gone */ }
+  try { fs.unlinkSync(pidFile); } catch { /* already gone */ }
   server.close(() => process.exit(0));
   setTimeout(() => process.exit(0), 500).unref();
 };
