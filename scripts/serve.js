@@ -2,9 +2,10 @@
 /**
  * Serves dist/ over plain http on localhost (the preview workbook at /), prints the address,
  * and opens a browser only where one is plainly available. Never fails for want of one.
- *   node scripts/serve.js [--port N] [--no-open]     (PORT env works too; 0 = any free port)
+ *   node scripts/serve.js [--port N] [--no-open] [--no-pid-file]   (PORT env works too; 0 = any free port)
  * Writes its process id to .preview-server.pid (beside package.json, outside dist/, which
- * every build empties) so `npm run stop` can end it.
+ * every build empties) so `npm run stop` can end it; the browser tests pass --no-pid-file so
+ * they never take over the record of a server someone started by hand.
  */
 'use strict';
 const fs = require('fs');
@@ -19,6 +20,7 @@ const args = process.argv.slice(2);
 const portArg = args.indexOf('--port');
 const wanted = Number(portArg >= 0 ? args[portArg + 1] : (process.env.PORT ?? 3100));
 const open = !args.includes('--no-open') && !process.env.CI;
+const keepPid = !args.includes('--no-pid-file');
 
 const TYPES = {
   '.html': 'text/html; charset=utf-8', '.js': 'text/javascript; charset=utf-8', '.css': 'text/css; charset=utf-8',
@@ -84,13 +86,15 @@ server.on('error', (err) => {
 server.on('listening', () => {
   const { port } = server.address();
   const address = `http://localhost:${port}/`;
-  fs.writeFileSync(pidFile, String(process.pid));
+  if (keepPid) fs.writeFileSync(pidFile, String(process.pid));
   console.log(`Proton Ledger preview workbook: ${address}`);
   console.log('Press Ctrl+C to stop (or `npm run stop` from another terminal).');
   tryOpen(address);
 });
 const shutdown = () => {
-  try { fs.unlinkSync(pidFile); } catch { /* already gone */ }
+  if (keepPid) {
+    try { fs.unlinkSync(pidFile); } catch { /* already gone */ }
+  }
   server.close(() => process.exit(0));
   setTimeout(() => process.exit(0), 500).unref();
 };

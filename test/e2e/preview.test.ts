@@ -38,7 +38,7 @@ describeBrowser('preview workbook in Chromium', () => {
     if (!haveBrowser) throw new Error(`CI=true and no Chromium at ${CHROMIUM}: the browser tests must run in CI (apt-get install -y chromium).`);
     ensureBuild();
     mkdirSync(ARTIFACTS, { recursive: true });
-    server = spawn(process.execPath, [join(ROOT, 'scripts', 'serve.js'), '--port', '0', '--no-open'], { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'] });
+    server = spawn(process.execPath, [join(ROOT, 'scripts', 'serve.js'), '--port', '0', '--no-open', '--no-pid-file'], { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'] });
     baseUrl = await new Promise<string>((resolve, reject) => {
       const timer = setTimeout(() => reject(new Error('server did not start')), 15000);
       server.stdout!.on('data', (chunk: Buffer) => {
