@@ -196,6 +196,8 @@ describe('WARNINGS', () => {
   test('refuses bad input as the other composition functions do', () => {
     expect(errorOf(() => warnings([['no such thing', 20]]))).toMatchObject({ kind: 'na' });
     expect(errorOf(() => warnings(TRIS_SALINE, 150))).toMatchObject({ kind: 'value' });
+    const huge = Array.from({ length: 100000 }, () => ['NaCl', 1]);
+    expect(errorOf(() => warnings(huge)).message).toMatch(/composition has 100000 rows; allowed: up to 1000/);
   });
 });
 
