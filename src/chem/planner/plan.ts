@@ -484,7 +484,7 @@ function planWarnings(s: Settled, made: RouteResult, volumeL: number, titration:
     }
   }
   for (const item of made.weighed) {
-    const grams = item.concentrationM * volumeL * item.form.molarMass;
+    const grams = (item.concentrationM * volumeL * item.form.molarMass) / (purityOf(s, item.form, item.role) / 100);
     if (grams > 0 && grams < SMALLEST_GOOD_WEIGHING_G) {
       w.push(`${(grams * 1000).toPrecision(3)} mg of ${item.form.name} is too little to weigh well on an analytical balance (about ${SMALLEST_GOOD_WEIGHING_G * 1000} mg at least): make a larger volume or a concentrated stock and take a part of it.`);
     }
