@@ -17,6 +17,7 @@ import { extname } from 'path';
 import ExcelJS from 'exceljs';
 import { DetailedCellError, HyperFormula } from 'hyperformula';
 import { createFormulaEngine, toEngineFormula } from '../functions/formulaEngine';
+import { literal } from '../workbook/port';
 
 const USAGE = 'Usage: proton-ledger calc <input.xlsx|input.csv> -o <output.xlsx|output.csv> [--sheet NAME]';
 
@@ -156,10 +157,7 @@ function csvField(value: unknown): string {
   else if (value instanceof DetailedCellError) text = value.value;
   else if (typeof value === 'boolean') text = value ? 'TRUE' : 'FALSE';
   else if (typeof value === 'number') text = String(value);
-  else {
-    text = String(value);
-    if (/^[=+\-@\t\r']/.test(text)) text = `'${text}`;
-  }
+  else text = literal(String(value)) as string;
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 

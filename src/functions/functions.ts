@@ -13,7 +13,7 @@
 import { apparentPKa, capacity, solutionWarnings, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
 import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
-import { DEFAULT_PART_VOLUME_FRACTION, DEFAULT_STOCK_TOLERANCE_PERCENT, RecipeInput, planRecipe } from '../chem/planner';
+import { DEFAULT_PART_VOLUME_FRACTION, DEFAULT_STOCK_TOLERANCE_PERCENT, RecipeInput, RecipePlan, planRecipe } from '../chem/planner';
 import { volumeText } from '../chem/planner/protocol';
 import { compositionFrom, MAX_AMOUNT_MM } from './composition';
 import { SheetError, invalid } from './errors';
@@ -330,6 +330,18 @@ export const RECIPE_TABLE_ROWS = 48;
 /** Columns of the RECIPE sheet. */
 export const RECIPE_TABLE_HEADER = ['section', 'item', 'value', 'unit'] as const;
 
+/**
+ * The plan a RECIPE or RECIPE.ROW call asks for, from its arguments in the order both
+ * declare them (one list, so the two functions cannot drift apart).
+ */
+function recipePlan(args: readonly any[], twoFormsAllowed: boolean): RecipePlan {
+  const [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, userSubstances] = args;
+  return planRecipe(
+    recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, twoFormsAllowed),
+    libraryFor(userSubstances),
+  );
+}
+
 /** The planner input a RECIPE or RECIPE.ROW call describes. */
 function recipeInput(
   buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form: any, titrant: any, titrantConcentrationM: any,
@@ -398,8 +410,7 @@ export function recipeRow(
 ): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, userSubstances];
   return memoised('RECIPE.ROW', args, () => {
-    const input = recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, false);
-    const plan = planRecipe(input, libraryFor(userSubstances));
+    const plan = recipePlan(args, false);
     const weighed = plan.components.find((c) => c.role === 'buffer');
     const t = plan.titration;
     const p = plan.predictions;
@@ -436,8 +447,7 @@ export function recipe(
 ): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, userSubstances];
   return memoised('RECIPE', args, () => {
-    const input = recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, true);
-    const plan = planRecipe(input, libraryFor(userSubstances));
+    const plan = recipePlan(args, true);
     const p = plan.predictions;
     const rows: (number | string)[][] = [[...RECIPE_TABLE_HEADER]];
     rows.push(['recipe', `${plan.buffer}, ${plan.concentrationMm} mM, pH ${plan.targetPh} at ${p.useTemperatureC} °C`, plan.volumeMl, 'mL']);
