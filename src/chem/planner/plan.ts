@@ -28,7 +28,7 @@ import { findStrongIon } from '../strongIons';
 import { MAX_TARGET_PH, MIN_TARGET_PH, Titrant, titrantForPh, withTitrant } from '../titration';
 import { pKaAt } from '../vantHoff';
 import { RecipeComponent, RecipeInput, RecipePlan, RecipeRoute, TitrationPlan } from './types';
-import { SMALLEST_GOOD_WEIGHING_G, cautionsFor, protocolSteps, volumeText } from './protocol';
+import { cautionsFor, protocolSteps, volumeText } from './protocol';
 
 /** pKa uncertainty used where the library gives none: published tables scatter by about ±0.01–0.02 (common practice, e.g. tris 8.06–8.08). */
 export const DEFAULT_PKA_UNCERTAINTY = 0.02;
@@ -42,6 +42,8 @@ export const FIRST_PORTION_SHARE = 0.9;
 export { BUFFERING_HALF_WIDTH };
 /** Below this total titrant volume (mL) the pH cannot be approached in portions: about two drops (one drop ≈ 0.05 mL, common practice). */
 export const SMALLEST_TITRANT_ML = 0.1;
+/** Below this mass a weighing is poor on an analytical balance, g (common practice: about 10 mg at 0.1 mg readability). */
+export const SMALLEST_GOOD_WEIGHING_G = 0.01;
 /** Largest dilution fold for a stock. */
 export const MAX_STOCK_FOLD = 100;
 /** Largest salt concentration the salt-target search tries, mol/L (beyond any buffer recipe). */
@@ -137,7 +139,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
         }
       : undefined;
 
-  warnings.push(...planWarnings(s, made, madeVolumeL, titration));
+  warnings.push(...planWarnings(s, made, components, madeVolumeL, titration));
   const metals = metalComplexWarning(finished);
   if (metals) warnings.push(metals);
   const constants = s.system.steps.map((step) => ({
@@ -463,7 +465,7 @@ function componentsOf(s: Settled, made: RouteResult, volumeL: number, titration:
   return out;
 }
 
-function planWarnings(s: Settled, made: RouteResult, volumeL: number, titration: TitrationPlan | undefined): string[] {
+function planWarnings(s: Settled, made: RouteResult, components: readonly RecipeComponent[], volumeL: number, titration: TitrationPlan | undefined): string[] {
   const w: string[] = [];
   const near = s.system.steps.some((st) => Math.abs(pKaAt(st.pKa, st.deltaHkJ ?? 0, st.deltaCpJ ?? 0, s.useT) - s.targetPh) <= BUFFERING_HALF_WIDTH);
   if (!near) {
@@ -483,17 +485,18 @@ function planWarnings(s: Settled, made: RouteResult, volumeL: number, titration:
       w.push(`The titrant may not fit: up to ${titration.highMl.toFixed(1)} mL is expected, more than the ${(totalMl * s.partFraction).toFixed(0)} mL part volume; use a more concentrated stock.`);
     }
   }
-  for (const item of made.weighed) {
-    const grams = (item.concentrationM * volumeL * item.form.molarMass) / (purityOf(s, item.form, item.role) / 100);
+  made.weighed.forEach((item, i) => {
+    // componentsOf lists the weighed forms first, in this order, with the grams printed (purity applied).
+    const grams = components[i].grams ?? 0;
     if (grams > 0 && grams < SMALLEST_GOOD_WEIGHING_G) {
       w.push(`${(grams * 1000).toPrecision(3)} mg of ${item.form.name} is too little to weigh well on an analytical balance (about ${SMALLEST_GOOD_WEIGHING_G * 1000} mg at least): make a larger volume or a concentrated stock and take a part of it.`);
     }
     const sol = item.form.solubility;
-    if (!sol) continue;
+    if (!sol) return;
     const gPerL = (item.concentrationM * item.form.molarMass) / s.partFraction;
     if (gPerL > sol.gramsPerLitre) {
       w.push(`${item.form.name} at ${gPerL.toFixed(0)} g/L in the part volume is above its solubility (about ${sol.gramsPerLitre} g/L at ${sol.temperatureC} °C).`);
     }
-  }
+  });
   return w;
 }

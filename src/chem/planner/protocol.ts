@@ -74,9 +74,6 @@ export function volumeText(ml: number): string {
 /** Largest volume usually made up in a volumetric flask, mL (common practice: flasks stop at 2–5 L). */
 const LARGEST_FLASK_ML = 2000;
 
-/** Below this mass a weighing is poor on an analytical balance, g (common practice: about 10 mg at 0.1 mg readability). */
-export const SMALLEST_GOOD_WEIGHING_G = 0.01;
-
 /** An expected range of volumes, in one unit: `5.98–6.35 mL`, `10.5–11.2 µL`. */
 function volumeRange(lowMl: number, highMl: number): string {
   const high = volumeText(highMl);
