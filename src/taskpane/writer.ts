@@ -5,7 +5,7 @@
  */
 import { ChemError } from '../chem';
 import { SubstanceLibrary, defaultLibrary, findSystem, titrantFromForm } from '../chem/library';
-import { nameKey } from '../chem/library/names';
+import { bufferSystemOf, formContains } from '../chem/planner';
 import { libraryFor } from '../functions/userRange';
 import { CellBlock, CellValue, CellWrite, PaneSettings, WorkbookPort, parseRangeText, qualifiedAddress, uniqueName } from '../workbook/port';
 import { checkForm, FormInput, FieldErrors, settingsOf, TableRequest } from './form';
@@ -49,24 +49,14 @@ function checkNames(request: TableRequest, library: SubstanceLibrary): FieldErro
   const errors: FieldErrors = {};
   let system: ReturnType<SubstanceLibrary['findSystem']> | undefined;
   try {
-    system = library.findSystem(request.buffer);
-    if (system.kind !== 'acid-base') {
-      errors.buffer = `${system.name} is a strong electrolyte, not a buffer system; give it as the salt.`;
-      system = undefined;
-    }
+    system = bufferSystemOf(library, request.buffer);
   } catch (error) {
-    // A salt's name (NaCl) given as the buffer: say what it is rather than offer look-alikes.
-    let salt = false;
-    try {
-      salt = library.findForm(request.buffer).adds.length === 0;
-    } catch {
-      salt = false;
-    }
-    errors.buffer = salt ? `${request.buffer} is a strong electrolyte, not a buffer system; give it as the salt.` : fieldMessage(error);
+    // The planner's own check: a strong electrolyte (NaCl) named as the buffer is told so rather than offered look-alikes.
+    errors.buffer = error instanceof ChemError && error.code === 'outOfRange' ? `${request.buffer} is a strong electrolyte, not a buffer system; give it as the salt.` : fieldMessage(error);
   }
   try {
     const form = library.findForm(request.form);
-    if (system && !form.adds.some((a) => nameKey(a.system) === nameKey(system!.name))) {
+    if (system && !formContains(form, system)) {
       errors.form = `"${form.name}" does not contain ${system.name}; its forms are ${system.forms.map((f) => f.name).join(', ')}.`;
     }
   } catch (error) {
@@ -105,7 +95,7 @@ async function libraryOfRequest(port: WorkbookPort, request: TableRequest): Prom
     const values = await port.readValues(sheet, typed.range);
     return { ok: true, library: libraryFor(values), userSubstances: qualifiedAddress(sheet, typed.range) };
   } catch (error) {
-    return { ok: false, errors: { userSubstances: error instanceof ChemError || error instanceof Error ? error.message : String(error) } };
+    return { ok: false, errors: { userSubstances: error instanceof Error ? error.message : String(error) } };
   }
 }
 

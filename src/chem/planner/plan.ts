@@ -173,24 +173,47 @@ function dedupe(xs: readonly string[]): string[] {
   return [...new Set(xs)];
 }
 
+/**
+ * The acid–base system a recipe buffers with, by the name given. Throws ChemError: the
+ * library's unknownSubstance (with the nearest names), or outOfRange (code `outOfRange`)
+ * when the name is a strong electrolyte such as NaCl or HCl.
+ *
+ * @param library - the substance library (the user's substances included)
+ * @param name - the buffer as typed
+ */
+export function bufferSystemOf(library: SubstanceLibrary, name: unknown): SubstanceRecord {
+  let system: SubstanceRecord;
+  try {
+    system = library.findSystem(name as string);
+  } catch (e) {
+    // A strong electrolyte named as the buffer (NaCl, HCl, or a form of one such as CaCl2·2H2O,
+    // which adds no acid–base system) gets a message that says so.
+    const key = typeof name === 'string' ? nameKey(name) : '';
+    const strong = library.records().some((r) => r.kind === 'strong' && [r.name, ...r.aliases].some((n) => nameKey(n) === key)) || addsNoSystem(library, name);
+    if (!strong) throw e;
+    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('buffer', name, 'an acid–base buffer system (this is a strong electrolyte: add it as a salt)'), 'buffer', 'an acid–base buffer system');
+  }
+  if (system.kind !== 'acid-base') {
+    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('buffer', name, 'an acid–base buffer system'), 'buffer', 'an acid–base buffer system');
+  }
+  return system;
+}
+
+/** True when the name is a form on the shelf that adds no acid–base system (a salt such as CaCl2·2H2O). */
+function addsNoSystem(library: SubstanceLibrary, name: unknown): boolean {
+  try {
+    return library.findForm(name as string).adds.length === 0;
+  } catch {
+    return false;
+  }
+}
+
 /** Validates the input and fills defaults. */
 function settle(input: RecipeInput, library: SubstanceLibrary): Settled {
   if (input === null || typeof input !== 'object') {
     throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('recipe', 'a recipe input object'), 'recipe', 'an object');
   }
-  let system: SubstanceRecord;
-  try {
-    system = library.findSystem(input.buffer);
-  } catch (e) {
-    // A strong electrolyte (NaCl, HCl) named as the buffer gets a message that says so.
-    const key = typeof input.buffer === 'string' ? nameKey(input.buffer) : '';
-    const strong = library.records().find((r) => r.kind === 'strong' && [r.name, ...r.aliases].some((n) => nameKey(n) === key));
-    if (!strong) throw e;
-    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('buffer', input.buffer, 'an acid–base buffer system (this is a strong electrolyte: add it as a salt)'), 'buffer', 'an acid–base buffer system');
-  }
-  if (system.kind !== 'acid-base') {
-    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('buffer', input.buffer, 'an acid–base buffer system'), 'buffer', 'an acid–base buffer system');
-  }
+  const system = bufferSystemOf(library, input.buffer);
   const route = input.route ?? 'titrate';
   if (!ROUTES.includes(route)) {
     throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('route', route, ROUTES.join(', ')), 'route', ROUTES.join(', '));
@@ -222,12 +245,17 @@ function systemMolesIn(form: LibraryForm, system: SubstanceRecord): number {
   return form.adds.filter((a) => nameKey(a.system) === key).reduce((sum, a) => sum + a.moles, 0);
 }
 
+/** True when weighing the form adds the buffer system (tris base and tris HCl both hold tris). */
+export function formContains(form: LibraryForm, system: SubstanceRecord): boolean {
+  return systemMolesIn(form, system) > 0;
+}
+
 function requireFormOf(field: string, name: string | undefined, s: Settled): LibraryForm {
   if (name === undefined || name === '') {
     throw new ChemError('invalid-input', 'formsOfSystem', MESSAGES.formsOfSystem(field, s.system.name, s.system.forms.map((f) => f.name)), field, s.system.forms.map((f) => f.name).join(', '));
   }
   const form = s.library.findForm(name);
-  if (systemMolesIn(form, s.system) === 0) {
+  if (!formContains(form, s.system)) {
     throw new ChemError('invalid-input', 'formNotOfSystem', MESSAGES.formNotOfSystem(field, form.name, s.system.name), field, s.system.forms.map((f) => f.name).join(', '));
   }
   return form;

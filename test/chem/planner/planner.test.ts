@@ -223,6 +223,7 @@ describe('recipe planner: bad input names the field and what is allowed', () => 
   const cases: [string, Partial<RecipeInput> | Record<string, unknown>, RegExp, string][] = [
     ['an unknown buffer with a near miss', { buffer: 'HEPPES' }, /did you mean/i, 'invalid-input'],
     ['a strong electrolyte as buffer', { buffer: 'sodium chloride' }, /strong electrolyte: add it as a salt/, 'invalid-input'],
+    ['a strong electrolyte form (a hydrate) as buffer', { buffer: 'CaCl2·2H2O' }, /strong electrolyte: add it as a salt/, 'invalid-input'],
     ['a form of another system', { form: 'tris base' }, /does not contain HEPES/, 'invalid-input'],
     ['a pH of 15', { targetPh: 15 }, /targetPh is 15; allowed: 0 to 14/, 'invalid-input'],
     ['a negative volume', { volumeMl: -5 }, /volumeMl is -5/, 'invalid-input'],
