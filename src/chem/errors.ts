@@ -50,6 +50,28 @@ export const MESSAGES = {
     `pH ${targetPh} cannot be reached by mixing these two forms: they span pH ${lowPh.toFixed(2)} to ${highPh.toFixed(2)} at this concentration and temperature.`,
   notATitrant: (field: string, form: string) =>
     `${field}: "${form}" cannot serve as a titrant (it adds more than one acid–base system).`,
+  notANumber: (field: string, value: unknown) =>
+    `${field} must be a number (typed, or as text such as "7.4", "7,4" or "50 mM"); got ${describe(value)}.`,
+  ambiguousNumber: (field: string, value: unknown) =>
+    `${field}: cannot tell how to read ${describe(value)}; write the number with one decimal mark and no thousands separators (e.g. 1000, 7.4 or 7,4).`,
+  wrongUnit: (field: string, unit: string, allowed: readonly string[]) =>
+    `${field}: the unit "${unit}" does not fit; ${allowed.length ? `allowed: ${allowed.join(', ')} (or a plain number)` : 'give a plain number'}.`,
+  ambiguousUnit: (field: string, unit: string, allowed: readonly string[]) =>
+    `${field}: the unit "${unit}" is ambiguous (mM is millimolar, M is molar: case matters); write one of ${allowed.join(', ')}.`,
+  listTooLong: (field: string, limit: number) =>
+    `${field} lists too many items; allowed: up to ${limit}, separated by ";".`,
+  unknownField: (field: string, suggestions: readonly string[], allowed: string) =>
+    suggestions.length > 0
+      ? `"${field}" is not an option; did you mean ${suggestions.map((s) => `"${s}"`).join(', ')}?`
+      : `"${field}" is not an option; allowed: ${allowed}.`,
+  badSaltItem: (field: string, item: string, allowed: string) =>
+    `${field}: cannot read "${item}" as a salt and its amount; allowed: ${allowed}.`,
+  givenTwice: (field: string) =>
+    `${field} is given twice; give it once.`,
+  notText: (field: string, value: unknown) =>
+    `${field} must be text (a name); got ${describe(value)}.`,
+  unknownChoice: (field: string, value: unknown, allowed: readonly string[]) =>
+    `${field}: ${describe(value)} is not one of the choices; allowed: ${allowed.map((a) => `"${a}"`).join(', ')}.`,
   saltTargetUnreachable: (what: string, target: number, reached: number) =>
     `The ${what} target ${target} cannot be met: without any added salt the buffer already gives ${reached}.`,
 } as const;

@@ -62,9 +62,11 @@ export interface SubstanceListing {
 /** A substance library: the built-in table plus any user substances. */
 export interface SubstanceLibrary {
   /** The acid–base system by name or alias (a form's name finds its system too). */
-  findSystem(name: string): SubstanceRecord;
+  /** The acid–base system (or strong electrolyte) by name; `field` names the input in errors (default `substance`). */
+  findSystem(name: string, field?: string): SubstanceRecord;
   /** A form by name or alias, with its computed molar mass. */
-  findForm(name: string): LibraryForm;
+  /** A form on the shelf by name; `field` names the input in errors (default `form`). */
+  findForm(name: string, field?: string): LibraryForm;
   /** Every substance, in table order (library first, then the user's). */
   list(): readonly SubstanceListing[];
   /** Every substance record. */
@@ -176,7 +178,7 @@ class Library implements SubstanceLibrary {
     throw new ChemError('invalid-input', 'unknownSubstance', MESSAGES.unknownSubstance(field, name, suggestions), field, suggestions.join(', '));
   }
 
-  findSystem(name: string): SubstanceRecord {
+  findSystem(name: string, field = 'substance'): SubstanceRecord {
     const key = typeof name === 'string' ? nameKey(name) : '';
     const direct = this.systems.get(key);
     if (direct) return direct;
@@ -185,13 +187,13 @@ class Library implements SubstanceLibrary {
       const sys = this.systems.get(nameKey(viaForm.adds[0].system));
       if (sys) return sys;
     }
-    return this.notFound('substance', name, this.systemNames);
+    return this.notFound(field, name, this.systemNames);
   }
 
-  findForm(name: string): LibraryForm {
+  findForm(name: string, field = 'form'): LibraryForm {
     const found = typeof name === 'string' ? this.forms.get(nameKey(name)) : undefined;
     if (found) return found;
-    return this.notFound('form', name, this.formNames);
+    return this.notFound(field, name, this.formNames);
   }
 
   list(): readonly SubstanceListing[] {

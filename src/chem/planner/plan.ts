@@ -12,11 +12,12 @@
  * A salt target is met by bisection on the salt concentration (ionic strength and ideal
  * osmolarity rise with salt), re-solving the titrant at each step.
  */
-import { ActivityModel, parseActivityModel } from '../activity';
+import { ActivityModel } from '../activity';
+import { readChoiceField, readNumberField, readPurityField, readSaltsField, readTextField, requireNumberField } from '../input';
 import { capacityOfPrepared, scaleComposition } from '../capacity';
 import { BUFFERING_HALF_WIDTH, metalComplexWarning } from '../checks';
 import { AcidBaseSystem, Composition, prepare, systemAt, withConditions } from '../composition';
-import { ChemError, MESSAGES, requireNumber } from '../errors';
+import { ChemError, MESSAGES } from '../errors';
 import { SOURCES } from '../library/sources';
 import { LibraryForm, SubstanceRecord } from '../library/types';
 import { SubstanceLibrary, defaultLibrary } from '../library/lookup';
@@ -25,7 +26,7 @@ import { nameKey } from '../library/names';
 import { idealOsmolarity } from '../osmolarity';
 import { report, speciate, solvePh, solvePrepared } from '../speciation';
 import { findStrongIon } from '../strongIons';
-import { MAX_TARGET_PH, MIN_TARGET_PH, Titrant, titrantForPh, withTitrant } from '../titration';
+import { Titrant, titrantForPh, withTitrant } from '../titration';
 import { pKaAt } from '../vantHoff';
 import { RecipeComponent, RecipeInput, RecipePlan, RecipeRoute, TitrationPlan } from './types';
 import { cautionsFor, protocolSteps, volumeText } from './protocol';
@@ -44,16 +45,14 @@ export { BUFFERING_HALF_WIDTH };
 export const SMALLEST_TITRANT_ML = 0.1;
 /** Below this mass a weighing is poor on an analytical balance, g (common practice: about 10 mg at 0.1 mg readability). */
 export const SMALLEST_GOOD_WEIGHING_G = 0.01;
-/** Largest dilution fold for a stock. */
-export const MAX_STOCK_FOLD = 100;
+/** Largest dilution fold for a stock (declared with the other input limits). */
+export { MAX_STOCK_FOLD } from '../input';
 /** Largest salt concentration the salt-target search tries, mol/L (beyond any buffer recipe). */
 const MAX_SALT_TARGET_M = 5;
 /** Bisection steps for a salt target: 60 halvings of 5 M reach 4e-18 M. */
 const SALT_TARGET_STEPS = 60;
 /** Step for dpH/dT by central difference, °C. */
 const DPH_DT_STEP_C = 0.5;
-
-const ROUTES: readonly RecipeRoute[] = ['titrate', 'two-forms', 'stock'];
 
 /** The numbers a route fixes: the finished buffer and how it was put together. */
 interface RouteResult {
@@ -84,6 +83,13 @@ interface Settled {
   readonly partFraction: number;
   readonly model: ActivityModel;
   readonly salts: readonly { form: LibraryForm; concentrationM: number }[];
+  readonly titrant?: { readonly form: string; readonly concentrationM: number; readonly tolerancePercent: number };
+  readonly stock?: { readonly fold: number; readonly volumeMl?: number };
+  /** The salt added to a target: its form, and the goal (mol/L of ionic strength, or osmol/L). */
+  readonly saltTarget?: { readonly form: LibraryForm; readonly byIonicStrength: boolean; readonly goal: number };
+  readonly pKaUncertainty?: number;
+  readonly formPurityPercent?: number;
+  readonly purityPercent: readonly { readonly key: string; readonly percent: number }[];
 }
 
 /**
@@ -98,8 +104,8 @@ interface Settled {
 export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defaultLibrary()): RecipePlan {
   const s = settle(input, library);
   const base = solveWithSaltTarget(s);
-  const fold = s.route === 'stock' ? requireNumber('stock.fold', input.stock?.fold, 1, MAX_STOCK_FOLD, `1 to ${MAX_STOCK_FOLD}`) : 1;
-  const stockVolumeL = s.route === 'stock' ? requireNumber('stock.volumeMl', input.stock?.volumeMl ?? input.volumeMl, 0.001, 1e6, '0.001 to 1,000,000 mL') / 1000 : s.volumeL;
+  const fold = s.stock?.fold ?? 1;
+  const stockVolumeL = s.stock ? (s.stock.volumeMl ?? s.volumeL * 1000) / 1000 : s.volumeL;
 
   // What is physically made on the bench: the finished buffer, or the stock (fold × it).
   const made = fold === 1 ? base : scaleRoute(base, fold);
@@ -184,7 +190,7 @@ function dedupe(xs: readonly string[]): string[] {
 export function bufferSystemOf(library: SubstanceLibrary, name: unknown): SubstanceRecord {
   let system: SubstanceRecord;
   try {
-    system = library.findSystem(name as string);
+    system = library.findSystem(name as string, 'buffer');
   } catch (e) {
     // A strong electrolyte named as the buffer (NaCl, HCl, or a form of one such as CaCl2·2H2O,
     // which adds no acid–base system) gets a message that says so.
@@ -208,35 +214,63 @@ function addsNoSystem(library: SubstanceLibrary, name: unknown): boolean {
   }
 }
 
-/** Validates the input and fills defaults. */
+/** Validates the input and fills defaults: every field read by its one declaration (src/chem/input). */
 function settle(input: RecipeInput, library: SubstanceLibrary): Settled {
   if (input === null || typeof input !== 'object') {
     throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('recipe', 'a recipe input object'), 'recipe', 'an object');
   }
-  const system = bufferSystemOf(library, input.buffer);
-  const route = input.route ?? 'titrate';
-  if (!ROUTES.includes(route)) {
-    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('route', route, ROUTES.join(', ')), 'route', ROUTES.join(', '));
-  }
-  const useT = requireNumber('useTemperatureC', input.useTemperatureC ?? 25, 0, 100, '0 to 100 °C');
-  const salts = (input.salts ?? []).map((salt, i) => ({
-    form: library.findForm(salt?.form),
-    concentrationM: requireNumber(`salts[${i}].concentrationMm`, salt?.concentrationMm, 0, 5000, '0 to 5000 mM') / 1000,
+  const system = bufferSystemOf(library, readTextField('buffer', input.buffer));
+  const route = readChoiceField('route', input.route) as RecipeRoute;
+  const useT = requireNumberField('useTemperatureC', input.useTemperatureC);
+  const salts = readSaltsField(input.salts).map((salt, i) => ({
+    form: library.findForm(salt.form, typeof input.salts === 'string' ? 'salts' : `salts[${i}].form`),
+    concentrationM: salt.concentrationMm / 1000,
   }));
+  const titrant = input.titrant === undefined ? undefined : settleTitrant(input.titrant);
+  const stock = route === 'stock' ? { fold: requireNumberField('stock.fold', input.stock?.fold), volumeMl: readNumberField('stock.volumeMl', input.stock?.volumeMl) } : undefined;
   return {
     input,
     library,
     system,
     route,
-    targetPh: requireNumber('targetPh', input.targetPh, MIN_TARGET_PH, MAX_TARGET_PH, `${MIN_TARGET_PH} to ${MAX_TARGET_PH}`),
+    targetPh: requireNumberField('targetPh', input.targetPh),
     useT,
-    benchT: requireNumber('benchTemperatureC', input.benchTemperatureC ?? useT, 0, 100, '0 to 100 °C'),
-    concentrationM: requireNumber('concentrationMm', input.concentrationMm, 0.001, 5000, '0.001 to 5000 mM') / 1000,
-    volumeL: requireNumber('volumeMl', input.volumeMl, 0.001, 1e6, '0.001 to 1,000,000 mL') / 1000,
-    partFraction: requireNumber('partVolumeFraction', input.partVolumeFraction ?? DEFAULT_PART_VOLUME_FRACTION, 0.1, 1, '0.1 to 1'),
-    model: parseActivityModel('activityModel', input.activityModel),
+    benchT: readNumberField('benchTemperatureC', input.benchTemperatureC) ?? useT,
+    concentrationM: requireNumberField('concentrationMm', input.concentrationMm) / 1000,
+    volumeL: requireNumberField('volumeMl', input.volumeMl) / 1000,
+    partFraction: requireNumberField('partVolumeFraction', input.partVolumeFraction),
+    model: readChoiceField('activityModel', input.activityModel) as ActivityModel,
     salts,
+    ...(titrant ? { titrant } : {}),
+    ...(stock ? { stock } : {}),
+    saltTarget: settleSaltTarget(input.saltTarget, library),
+    pKaUncertainty: readNumberField('pKaUncertainty', input.pKaUncertainty),
+    formPurityPercent: readPurityField('formPurityPercent', input.formPurityPercent),
+    purityPercent: Object.entries(input.purityPercent ?? {}).map(([name, value]) => ({ key: nameKey(name), percent: readPurityField('formPurityPercent', value, `purityPercent.${name}`) ?? 100 })),
   };
+}
+
+function settleTitrant(t: NonNullable<RecipeInput['titrant']>): NonNullable<Settled['titrant']> {
+  const form = readTextField('titrant.form', t?.form);
+  if (form === undefined) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('titrant.form', 'a titrant form'), 'titrant.form', 'a name');
+  return {
+    form,
+    concentrationM: requireNumberField('titrant.concentrationM', t.concentrationM),
+    tolerancePercent: requireNumberField('titrant.tolerancePercent', t.tolerancePercent),
+  };
+}
+
+function settleSaltTarget(t: RecipeInput['saltTarget'], library: SubstanceLibrary): Settled['saltTarget'] {
+  if (t === undefined) return undefined;
+  const name = readTextField('saltTarget.form', t?.form);
+  if (name === undefined) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('saltTarget.form', 'a salt form'), 'saltTarget.form', 'a name');
+  const form = library.findForm(name, 'saltTarget.form');
+  const ionic = readNumberField('saltTarget.ionicStrengthM', t.ionicStrengthM);
+  const osm = readNumberField('saltTarget.idealOsmolarityMosm', t.idealOsmolarityMosm);
+  if ((ionic === undefined) === (osm === undefined)) {
+    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('saltTarget', 'either ionicStrengthM or idealOsmolarityMosm'), 'saltTarget', 'ionicStrengthM or idealOsmolarityMosm');
+  }
+  return ionic !== undefined ? { form, byIonicStrength: true, goal: ionic } : { form, byIonicStrength: false, goal: osm! / 1000 };
 }
 
 /** Moles of the buffer system one mole of a form adds (0 if none). */
@@ -263,7 +297,8 @@ function requireFormOf(field: string, name: string | undefined, s: Settled): Lib
 
 /** The form weighed on the titrate and stock routes: the one named, or the system's first form without counter-ions. */
 function weighedForm(s: Settled): LibraryForm {
-  if (s.input.form !== undefined) return requireFormOf('form', s.input.form, s);
+  const named = readTextField('form', s.input.form);
+  if (named !== undefined) return requireFormOf('form', named, s);
   const plain = s.system.forms.find((f) => Object.keys(f.counterIons).length === 0 && f.adds.length === 1);
   return requireFormOf('form', plain?.name, s);
 }
@@ -271,7 +306,7 @@ function weighedForm(s: Settled): LibraryForm {
 /** The starting composition: the weighed forms and salts at the temperature of use. */
 function baseComposition(s: Settled, items: readonly { form: LibraryForm; concentrationM: number }[], saltTargetM: number): Composition {
   const all = [...items, ...s.salts];
-  if (saltTargetM > 0 && s.input.saltTarget) all.push({ form: s.library.findForm(s.input.saltTarget.form), concentrationM: saltTargetM });
+  if (saltTargetM > 0 && s.saltTarget) all.push({ form: s.saltTarget.form, concentrationM: saltTargetM });
   return s.library.compositionFromForms(
     all.map((i) => ({ form: i.form, concentrationM: i.concentrationM })),
     { temperatureC: s.useT, activityModel: s.model },
@@ -280,7 +315,7 @@ function baseComposition(s: Settled, items: readonly { form: LibraryForm; concen
 
 function saltComponents(s: Settled, saltTargetM: number): RouteResult['weighed'] {
   const salts: { role: RecipeComponent['role']; form: LibraryForm; concentrationM: number }[] = s.salts.map((x) => ({ role: 'salt', ...x }));
-  if (saltTargetM > 0 && s.input.saltTarget) salts.push({ role: 'salt', form: s.library.findForm(s.input.saltTarget.form), concentrationM: saltTargetM });
+  if (saltTargetM > 0 && s.saltTarget) salts.push({ role: 'salt', form: s.saltTarget.form, concentrationM: saltTargetM });
   return salts;
 }
 
@@ -300,13 +335,15 @@ function titrateRoute(s: Settled, saltTargetM: number): RouteResult {
 
 /** The titrant named, or 1 M NaOH / 1 M HCl, whichever reaches the target. */
 function chooseTitrant(s: Settled, start: Composition): Omit<NonNullable<RouteResult['titrant']>, 'before'> {
-  const given = s.input.titrant;
-  const candidates = given ? [given] : [{ form: 'sodium hydroxide', concentrationM: 1 }, { form: 'hydrochloric acid', concentrationM: 1 }];
+  const candidates = s.titrant
+    ? [s.titrant]
+    : [
+        { form: 'sodium hydroxide', concentrationM: 1, tolerancePercent: DEFAULT_STOCK_TOLERANCE_PERCENT },
+        { form: 'hydrochloric acid', concentrationM: 1, tolerancePercent: DEFAULT_STOCK_TOLERANCE_PERCENT },
+      ];
   let firstError: unknown;
-  for (const stock of candidates) {
-    const form = s.library.findForm(stock.form);
-    const concentrationM = requireNumber('titrant.concentrationM', stock.concentrationM, 1e-6, 30, '0.000001 to 30 mol/L');
-    const tolerancePercent = requireNumber('titrant.tolerancePercent', stock.tolerancePercent ?? DEFAULT_STOCK_TOLERANCE_PERCENT, 0, 50, '0 to 50 %');
+  for (const { concentrationM, tolerancePercent, ...stock } of candidates) {
+    const form = s.library.findForm(stock.form, 'titrant.form');
     const titrant = titrantFromForm(form, s.library, 'titrant.form');
     try {
       const amount = titrantForPh(start, titrant, s.targetPh);
@@ -320,8 +357,8 @@ function chooseTitrant(s: Settled, start: Composition): Omit<NonNullable<RouteRe
 
 /** Route 2: two forms of the same system in the proportion that gives the target. */
 function twoFormsRoute(s: Settled, saltTargetM: number): RouteResult {
-  const acid = requireFormOf('acidForm', s.input.acidForm, s);
-  const base = requireFormOf('baseForm', s.input.baseForm, s);
+  const acid = requireFormOf('acidForm', readTextField('acidForm', s.input.acidForm), s);
+  const base = requireFormOf('baseForm', readTextField('baseForm', s.input.baseForm), s);
   const mA = systemMolesIn(acid, s.system);
   const mB = systemMolesIn(base, s.system);
   // Start from all-acid-form; swapping one mole of base form in for mB/mA moles of acid
@@ -362,16 +399,9 @@ function routeResult(s: Settled, saltTargetM: number): RouteResult {
 
 /** Solves the route, adding the salt-target salt by bisection when one is asked for. */
 function solveWithSaltTarget(s: Settled): RouteResult {
-  const target = s.input.saltTarget;
+  const target = s.saltTarget;
   if (!target) return routeResult(s, 0);
-  s.library.findForm(target.form);
-  const byIonicStrength = target.ionicStrengthM !== undefined;
-  if (byIonicStrength === (target.idealOsmolarityMosm !== undefined)) {
-    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('saltTarget', 'either ionicStrengthM or idealOsmolarityMosm'), 'saltTarget', 'ionicStrengthM or idealOsmolarityMosm');
-  }
-  const goal = byIonicStrength
-    ? requireNumber('saltTarget.ionicStrengthM', target.ionicStrengthM, 0, 5, '0 to 5 mol/L')
-    : requireNumber('saltTarget.idealOsmolarityMosm', target.idealOsmolarityMosm, 0, 10000, '0 to 10,000 mOsm/L') / 1000;
+  const { byIonicStrength, goal } = target;
   const measure = (r: RouteResult) => {
     const sp = speciate(r.composition);
     return byIonicStrength ? sp.ionicStrengthM : idealOsmolarity(sp);
@@ -407,8 +437,8 @@ function titrationPlan(s: Settled, made: RouteResult, volumeL: number): Titratio
   const t = made.titrant!;
   const volumeMl = ((t.concentrationM * volumeL) / t.stock.concentrationM) * 1000;
   const u =
-    s.input.pKaUncertainty !== undefined
-      ? requireNumber('pKaUncertainty', s.input.pKaUncertainty, 0, 1, '0 to 1 pH unit')
+    s.pKaUncertainty !== undefined
+      ? s.pKaUncertainty
       : Math.max(...s.system.steps.map((step) => step.pKaUncertainty ?? DEFAULT_PKA_UNCERTAINTY));
   // The amount needed with every pKa of the buffer moved by ±u, to the pH the made solution has.
   const before = t.before;
@@ -461,14 +491,11 @@ function dpHdT(c: Composition, t: number): number {
 }
 
 function purityOf(s: Settled, form: LibraryForm, role: RecipeComponent['role']): number {
-  const table = s.input.purityPercent ?? {};
-  for (const [name, value] of Object.entries(table)) {
-    if (nameKey(name) === nameKey(form.name) || form.aliases.some((a) => nameKey(a) === nameKey(name))) {
-      return requireNumber(`purityPercent.${name}`, value, 1, 100, '1 to 100 %');
-    }
-  }
+  const keys = [form.name, ...form.aliases].map(nameKey);
+  const named = s.purityPercent.find((p) => keys.includes(p.key));
+  if (named) return named.percent;
   const ownForm = role === 'buffer' || role === 'acid form' || role === 'base form';
-  if (ownForm && s.input.formPurityPercent !== undefined) return requireNumber('formPurityPercent', s.input.formPurityPercent, 1, 100, '1 to 100 %');
+  if (ownForm && s.formPurityPercent !== undefined) return s.formPurityPercent;
   return 100;
 }
 

@@ -4,6 +4,13 @@
 import type { ActivityModel } from '../activity';
 import type { Composition } from '../composition';
 
+/**
+ * A number given by a user: a number in the field's own unit (the unit in its name), or text
+ * with a unit of the same kind ("50 mM", "0,5 L", "4 °C"), read by the one input reader
+ * (src/chem/input; docs/input.md).
+ */
+export type Amount = number | string;
+
 /** How the buffer is made. */
 export type RecipeRoute =
   /** One form weighed, titrated to the meter reading with a stock of titrant. */
@@ -18,24 +25,24 @@ export interface TitrantStock {
   /** Form name, e.g. `NaOH`, `HCl`, `acetic acid`. */
   readonly form: string;
   /** Concentration of the stock, mol/L. */
-  readonly concentrationM: number;
+  readonly concentrationM: Amount;
   /** Relative tolerance of the stock's concentration, % (default 1: common practice for volumetric stocks). */
-  readonly tolerancePercent?: number;
+  readonly tolerancePercent?: Amount;
 }
 
 /** A salt (or any further form) at a fixed concentration in the final buffer. */
 export interface SaltAmount {
   readonly form: string;
-  readonly concentrationMm: number;
+  readonly concentrationMm: Amount;
 }
 
 /** Add a salt until the final buffer reaches an ionic strength or an ideal osmolarity. */
 export interface SaltTarget {
   readonly form: string;
   /** Target ionic strength, mol/L. Give this or `idealOsmolarityMosm`. */
-  readonly ionicStrengthM?: number;
+  readonly ionicStrengthM?: Amount;
   /** Target ideal osmolarity, mOsm/L. */
-  readonly idealOsmolarityMosm?: number;
+  readonly idealOsmolarityMosm?: Amount;
 }
 
 /** Everything the planner needs. Units are in the names. */
@@ -43,15 +50,15 @@ export interface RecipeInput {
   /** The buffer system, by substance or form name (`HEPES`, `phosphate`, `tris`). */
   readonly buffer: string;
   /** Target pH at the temperature of use. */
-  readonly targetPh: number;
+  readonly targetPh: Amount;
   /** Temperature at which the buffer will be used, °C (default 25). */
-  readonly useTemperatureC?: number;
+  readonly useTemperatureC?: Amount;
   /** Total concentration of the buffer system in the final buffer, mM. */
-  readonly concentrationMm: number;
+  readonly concentrationMm: Amount;
   /** Final volume, mL (of the working buffer; for the stock route, of diluted buffer). */
-  readonly volumeMl: number;
+  readonly volumeMl: Amount;
   /** How it is made (default `titrate`). */
-  readonly route?: RecipeRoute;
+  readonly route?: RecipeRoute | string;
   /** Route titrate/stock: the form weighed (default: the first form of the system without counter-ions). */
   readonly form?: string;
   /** Route titrate/stock: the titrant stock (default: 1 M NaOH or 1 M HCl, whichever moves the pH the right way). */
@@ -61,23 +68,23 @@ export interface RecipeInput {
   /** Route two-forms: the more basic form weighed. */
   readonly baseForm?: string;
   /** Route stock: how many times concentrated the stock is, and how much of it to make (mL; default: as much as `volumeMl`). */
-  readonly stock?: { readonly fold: number; readonly volumeMl?: number };
-  /** Further salts at fixed concentrations. */
-  readonly salts?: readonly SaltAmount[];
+  readonly stock?: { readonly fold: Amount; readonly volumeMl?: Amount };
+  /** Further salts at fixed concentrations: a list, or text such as "NaCl 150 mM; KCl 2.7 mM". */
+  readonly salts?: readonly SaltAmount[] | string;
   /** A salt added to reach an ionic strength or ideal osmolarity. */
   readonly saltTarget?: SaltTarget;
   /** Temperature at which the pH is adjusted on the bench, °C (default: the temperature of use). */
-  readonly benchTemperatureC?: number;
+  readonly benchTemperatureC?: Amount;
   /** Fraction of the final volume at which the pH is adjusted (default 0.8). */
-  readonly partVolumeFraction?: number;
+  readonly partVolumeFraction?: Amount;
   /** Purity of solids, % by form name (default 100). */
-  readonly purityPercent?: Readonly<Record<string, number>>;
+  readonly purityPercent?: Readonly<Record<string, Amount>>;
   /** Purity of the buffer's own form(s) weighed, whichever the route picks, % (default 100); a name in purityPercent wins. */
-  readonly formPurityPercent?: number;
+  readonly formPurityPercent?: Amount;
   /** Activity model (default `davies`). */
-  readonly activityModel?: ActivityModel;
+  readonly activityModel?: ActivityModel | string;
   /** pKa uncertainty for the titrant band, pH units (default: the library's, or 0.02 where it gives none). */
-  readonly pKaUncertainty?: number;
+  readonly pKaUncertainty?: Amount;
 }
 
 /** One thing to measure out. */
