@@ -50,8 +50,8 @@ export const MESSAGES = {
     `pH ${targetPh} cannot be reached by mixing these two forms: they span pH ${lowPh.toFixed(2)} to ${highPh.toFixed(2)} at this concentration and temperature.`,
   notATitrant: (field: string, form: string) =>
     `${field}: "${form}" cannot serve as a titrant (it adds more than one acid–base system).`,
-  notANumber: (field: string, value: unknown) =>
-    `${field} must be a number (typed, or as text such as "7.4", "7,4" or "50 mM"); got ${describe(value)}.`,
+  notANumber: (field: string, value: unknown, example: string) =>
+    `${field} must be a number (typed, or as text such as ${example}); got ${describe(value)}.`,
   ambiguousNumber: (field: string, value: unknown) =>
     `${field}: cannot tell how to read ${describe(value)}; write the number with one decimal mark and no thousands separators (e.g. 1000, 7.4 or 7,4).`,
   wrongUnit: (field: string, unit: string, allowed: readonly string[]) =>

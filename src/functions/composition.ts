@@ -8,7 +8,7 @@
  */
 import { AcidBaseSystem, ActivityModel, ChemError, Composition, findStrongIon, systemAt, withConditions } from '../chem';
 import { FormAmount, MAX_FORM_CONCENTRATION_M, SubstanceLibrary, chemistryOf } from '../chem/library';
-import { isBlank, toNumber, toRange, toText } from './coerce';
+import { isBlank, toField, toRange, toText } from './coerce';
 import { invalid, withContext } from './errors';
 import { Lru } from './memo';
 import { MESSAGES } from '../chem';
@@ -69,7 +69,7 @@ function buildComposition(library: SubstanceLibrary, range: readonly (readonly u
     if (isBlank(name) && isBlank(amount)) return;
     try {
       const text = toText('name', name);
-      const mM = toNumber('amount (mM)', amount, { min: 0, max: MAX_AMOUNT_MM, allowed: `0 to ${MAX_AMOUNT_MM} mM` });
+      const mM = toField('amountMm', amount, 'amount (mM)');
       const ingredient = resolveName(library, text);
       if (ingredient.kind === 'form') forms.push({ form: ingredient.name, concentrationM: mM / 1000 });
       else if (ingredient.kind === 'ion') ions[ingredient.ion] = (ions[ingredient.ion] ?? 0) + mM / 1000;
@@ -82,7 +82,7 @@ function buildComposition(library: SubstanceLibrary, range: readonly (readonly u
     }
   });
   if (forms.length === 0 && systems.size === 0 && Object.keys(ions).length === 0) {
-    throw invalid(SHEET_MESSAGES.emptyRange(COMPOSITION_ARGUMENT, 'rows of a name and an amount in mM'));
+    throw invalid('emptyRange', COMPOSITION_ARGUMENT, SHEET_MESSAGES.emptyRange(COMPOSITION_ARGUMENT, 'rows of a name and an amount in mM'));
   }
   const fromForms = library.compositionFromForms(forms, { extraStrongIons: ions });
   const merged = [...fromForms.systems];
@@ -106,10 +106,10 @@ export function compositionFrom(library: SubstanceLibrary, value: unknown, tempe
   const range = toRange(value);
   if (range.length > MAX_COMPOSITION_ROWS) {
     // A whole column passed by mistake: refuse before reading it, whatever is in it.
-    throw invalid(SHEET_MESSAGES.tooManyRows(COMPOSITION_ARGUMENT, range.length, MAX_COMPOSITION_ROWS));
+    throw invalid('tooManyRows', COMPOSITION_ARGUMENT, SHEET_MESSAGES.tooManyRows(COMPOSITION_ARGUMENT, range.length, MAX_COMPOSITION_ROWS));
   }
   if (range.length > 0 && range.every((row) => row.length < 2) && !range.every((row) => row.every(isBlank))) {
-    throw invalid(SHEET_MESSAGES.tooFewColumns(COMPOSITION_ARGUMENT, 1, 'two: a name and an amount in mM'));
+    throw invalid('tooFewColumns', COMPOSITION_ARGUMENT, SHEET_MESSAGES.tooFewColumns(COMPOSITION_ARGUMENT, 1, 'two: a name and an amount in mM'));
   }
   let cache = compositionCache.get(library);
   if (!cache) compositionCache.set(library, (cache = new Lru<Composition>(256)));

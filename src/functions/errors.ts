@@ -16,20 +16,36 @@ import { SHEET_MESSAGES } from './messages';
 /** The two error kinds that carry a message in Excel. */
 export type SheetErrorKind = 'value' | 'na';
 
-/** A failure to show in a cell: its kind and a message for the user. */
+/** A failure to show in a cell: its kind, a message for the user, and where it came from. */
 export class SheetError extends Error {
   readonly kind: SheetErrorKind;
+  /** Stable code of the message (a key of the core's MESSAGES or of SHEET_MESSAGES). */
+  readonly code: string;
+  /** The argument or option at fault, as the user wrote it, when there is one. */
+  readonly field?: string;
+  /** What the field would accept, in words. */
+  readonly allowed?: string;
 
-  constructor(kind: SheetErrorKind, message: string) {
+  constructor(kind: SheetErrorKind, message: string, code = 'unexpected', field?: string, allowed?: string) {
     super(message);
     this.name = 'SheetError';
     this.kind = kind;
+    this.code = code;
+    this.field = field;
+    this.allowed = allowed;
   }
 }
 
-/** Shorthand for an invalid-argument error (#VALUE!). */
-export function invalid(message: string): SheetError {
-  return new SheetError('value', message);
+/**
+ * An invalid-argument error (#VALUE!).
+ *
+ * @param code - the message's code in its catalogue
+ * @param field - the argument at fault
+ * @param message - the message, from the catalogue
+ * @param allowed - what the argument accepts, in words
+ */
+export function invalid(code: string, field: string | undefined, message: string, allowed?: string): SheetError {
+  return new SheetError('value', message, code, field, allowed);
 }
 
 /**
@@ -42,10 +58,10 @@ export function toSheetError(error: unknown): SheetError {
   if (error instanceof SheetError) return error;
   if (error instanceof ChemError) {
     const notFound = error.code === 'unknownSubstance';
-    return new SheetError(error.kind === 'invalid-input' && !notFound ? 'value' : 'na', error.message);
+    return new SheetError(error.kind === 'invalid-input' && !notFound ? 'value' : 'na', error.message, error.code, error.field, error.allowed);
   }
   const detail = error instanceof Error ? error.message : String(error);
-  return new SheetError('value', SHEET_MESSAGES.unexpected(detail));
+  return new SheetError('value', SHEET_MESSAGES.unexpected(detail), 'unexpected');
 }
 
 /**
@@ -58,6 +74,6 @@ export function toSheetError(error: unknown): SheetError {
 export function withContext(error: unknown, argument: string, row: number): never {
   const message = (detail: string) => SHEET_MESSAGES.rowContext(argument, row, detail);
   if (error instanceof ChemError) throw new ChemError(error.kind, error.code, message(error.message), error.field, error.allowed);
-  if (error instanceof SheetError) throw new SheetError(error.kind, message(error.message));
+  if (error instanceof SheetError) throw new SheetError(error.kind, message(error.message), error.code, error.field, error.allowed);
   throw error;
 }

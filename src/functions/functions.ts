@@ -10,12 +10,13 @@
  * `=PROTON.PH(A2:B4)`.
  */
 /* eslint-disable @typescript-eslint/no-explicit-any -- `any` is how custom-functions metadata spells a cell of any type */
-import { apparentPKa, capacity, solutionWarnings, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
+import { ChemError, MESSAGES, apparentPKa, capacity, solutionWarnings, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
 import { titrantFromForm } from '../chem/library';
-import { isBlank, isBlankRange, toActivityModel, toChoice, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
-import { DEFAULT_PART_VOLUME_FRACTION, DEFAULT_STOCK_TOLERANCE_PERCENT, RecipeInput, RecipePlan, planRecipe } from '../chem/planner';
+import { isBlank, isBlankRange, toActivityModel, toChoice, toField, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
+import { recipeOptions } from './recipeOptions';
+import { RecipeInput, RecipePlan, planRecipe } from '../chem/planner';
 import { volumeText } from '../chem/planner/protocol';
-import { compositionFrom, MAX_AMOUNT_MM } from './composition';
+import { compositionFrom, MAX_COMPOSITION_ROWS } from './composition';
 import { SheetError, invalid } from './errors';
 import { memoised } from './memo';
 import { SHEET_MESSAGES } from './messages';
@@ -25,8 +26,6 @@ import { libraryFor, userRowCount } from './userRange';
 export const SPECIES_TABLE_ROWS = 30;
 /** Columns of the SPECIES table. */
 export const SPECIES_TABLE_HEADER = ['species', 'mM', 'activity (mM)', 'charge'] as const;
-/** Largest volume accepted, mL (a 1000 L tank; a guard against unit slips). */
-const MAX_VOLUME_ML = 1e6;
 /** Largest dilution factor accepted (the core's limit). */
 const MAX_DILUTION = 1e6;
 /** Largest ionic strength accepted for an apparent pKa, mM (the core's concentration limit). */
@@ -79,17 +78,17 @@ export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, t
   return memoised('TITRANT.ML', [form, concentrationMm, finalVolumeMl, targetPh, titrant, titrantConcentrationM, temperatureC, activityModel, salts, userSubstances], () => {
     const s = setup(temperatureC, activityModel, userSubstances);
     const formName = toText('form', form);
-    const mM = toNumber('concentrationMm', concentrationMm, { min: 0, max: MAX_AMOUNT_MM, allowed: `0 to ${MAX_AMOUNT_MM} mM` });
-    const volumeMl = toNumber('finalVolumeMl', finalVolumeMl, { min: Number.MIN_VALUE, max: MAX_VOLUME_ML, allowed: `above 0 up to ${MAX_VOLUME_ML} mL` });
-    const target = toNumber('targetPh', targetPh, { min: 0, max: 14, allowed: '0 to 14' });
-    const stockM = toNumber('titrantConcentrationM', titrantConcentrationM, { min: Number.MIN_VALUE, max: 20, allowed: 'above 0 up to 20 mol/L' });
+    const mM = toField('concentrationMm', concentrationMm);
+    const volumeMl = toField('finalVolumeMl', finalVolumeMl);
+    const target = toField('targetPh', targetPh);
+    const stockM = toField('titrantConcentrationM', titrantConcentrationM);
     // Without other components the composition is the form alone: built directly, it skips the range cache.
     const composition = isBlankRange(salts)
       ? s.library.compositionFromForms([{ form: formName, concentrationM: mM / 1000 }], { temperatureC: s.temperatureC, activityModel: s.model })
       : compositionFrom(s.library, [[formName, mM], ...toRange(salts)], s.temperatureC, s.model);
     const t = titrantFromForm(s.library.findForm(toText('titrant', titrant)), s.library);
     const ml = (titrantForPh(composition, t, target).concentrationM * volumeMl) / stockM;
-    if (ml > volumeMl) throw new SheetError('na', SHEET_MESSAGES.titrantExceedsVolume(ml, volumeMl));
+    if (ml > volumeMl) throw new SheetError('na', SHEET_MESSAGES.titrantExceedsVolume(ml, volumeMl), 'titrantExceedsVolume', 'titrantConcentrationM', 'a stronger stock');
     return ml;
   });
 }
@@ -166,7 +165,7 @@ export function pka(substance: any, step?: any, temperatureC?: any, ionicStrengt
   return memoised('PKA', [substance, step, temperatureC, ionicStrengthMm, activityModel, userSubstances], () => {
     const s = setup(temperatureC, activityModel, userSubstances);
     const record = s.library.findSystem(toText('substance', substance));
-    if (record.steps.length === 0) throw invalid(SHEET_MESSAGES.noSuchStep('step', record.name, 1, 0));
+    if (record.steps.length === 0) throw invalid('noSuchStep', 'step', SHEET_MESSAGES.noSuchStep('step', record.name, 1, 0));
     const k = toNumber('step', step, { default: 1, min: 1, max: record.steps.length, integer: true, allowed: `whole numbers 1 to ${record.steps.length}` });
     const ionicStrengthM = toNumber('ionicStrengthMm', ionicStrengthMm, { default: 0, min: 0, max: MAX_IONIC_STRENGTH_MM, allowed: `0 to ${MAX_IONIC_STRENGTH_MM} mM` }) / 1000;
     const st = record.steps[k - 1];
@@ -189,8 +188,8 @@ export function pka(substance: any, step?: any, temperatureC?: any, ionicStrengt
 export function grams(form: any, concentrationMm: any, volumeMl: any, purity?: any, userSubstances?: any[][]): number {
   return memoised('GRAMS', [form, concentrationMm, volumeMl, purity, userSubstances], () => {
     const found = libraryFor(userSubstances).findForm(toText('form', form));
-    const mM = toNumber('concentrationMm', concentrationMm, { min: 0, max: MAX_AMOUNT_MM, allowed: `0 to ${MAX_AMOUNT_MM} mM` });
-    const ml = toNumber('volumeMl', volumeMl, { min: 0, max: MAX_VOLUME_ML, allowed: `0 to ${MAX_VOLUME_ML} mL` });
+    const mM = toField('amountMm', concentrationMm, 'concentrationMm');
+    const ml = toField('volumeMl', volumeMl);
     return ((mM / 1000) * (ml / 1000) * found.molarMass) / toPurity(purity);
   });
 }
@@ -258,7 +257,7 @@ export function warnings(composition: any[][], temperatureC?: any, activityModel
 export function species(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): any[][] {
   return memoised('SPECIES', [composition, temperatureC, activityModel, userSubstances], () => {
     const result = speciate(solution(composition, temperatureC, activityModel, userSubstances));
-    if (result.species.length > SPECIES_TABLE_ROWS - 1) throw invalid(SHEET_MESSAGES.tooManySpecies(result.species.length, SPECIES_TABLE_ROWS - 1));
+    if (result.species.length > SPECIES_TABLE_ROWS - 1) throw invalid('tooManySpecies', 'composition', SHEET_MESSAGES.tooManySpecies(result.species.length, SPECIES_TABLE_ROWS - 1));
     const rows: (string | number)[][] = [[...SPECIES_TABLE_HEADER]];
     for (const sp of result.species) rows.push([sp.name, sp.concentrationM * 1000, sp.activity * 1000, sp.charge]);
     while (rows.length < SPECIES_TABLE_ROWS) rows.push(['', '', '', '']);
@@ -335,50 +334,47 @@ export const RECIPE_TABLE_HEADER = ['section', 'item', 'value', 'unit'] as const
  * declare them (one list, so the two functions cannot drift apart).
  */
 function recipePlan(args: readonly any[], twoFormsAllowed: boolean): RecipePlan {
-  const [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, userSubstances] = args;
-  return planRecipe(
-    recipeInput(buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, twoFormsAllowed),
-    libraryFor(userSubstances),
-  );
+  const [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances] = args;
+  return planRecipe(recipeInput(buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, twoFormsAllowed), libraryFor(userSubstances));
 }
 
-/** The planner input a RECIPE or RECIPE.ROW call describes. */
-function recipeInput(
-  buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form: any, titrant: any, titrantConcentrationM: any,
-  useTemperatureC: any, benchTemperatureC: any, partVolumeFraction: any, salts: any, pKaUncertainty: any, titrantTolerancePercent: any,
-  purity: any, activityModel: any, twoFormsAllowed: boolean,
-): RecipeInput {
-  const useT = toTemperature('useTemperatureC', useTemperatureC);
-  const formText = isBlank(form) ? undefined : toText('form', form);
-  const pair = formText?.split(/\s+\+\s+/);
-  const twoForms = pair !== undefined && pair.length === 2;
-  if (twoForms && !twoFormsAllowed) throw invalid(SHEET_MESSAGES.oneFormOnly('form', formText!));
+/**
+ * The planner input a RECIPE or RECIPE.ROW call describes: four required arguments, the
+ * temperature of use and a salts range (the two things a recipe table varies by row), and
+ * an options range for everything else. Every value is read by its field's one declaration
+ * (src/chem/input), here and in the planner alike.
+ */
+function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC: any, salts: any, options: any, twoFormsAllowed: boolean): RecipeInput {
+  const { input: chosen, written } = recipeOptions(options);
+  if (!isBlank(useTemperatureC) && written.has('useTemperatureC')) throw new ChemError('invalid-input', 'givenTwice', MESSAGES.givenTwice('useTemperatureC'), 'useTemperatureC', 'the argument or the option, once');
   const saltRows = isBlankRange(salts) ? [] : toRange(salts).filter((row) => !row.every(isBlank));
-  const tolerance = toNumber('titrantTolerancePercent', titrantTolerancePercent, { default: DEFAULT_STOCK_TOLERANCE_PERCENT, min: 0, max: 50, allowed: '0 to 50 %' });
-  return {
+  if (saltRows.length > 0 && written.has('salts')) throw new ChemError('invalid-input', 'givenTwice', MESSAGES.givenTwice('salts'), 'salts', 'the argument or the option, once');
+  if (saltRows.length > MAX_COMPOSITION_ROWS) throw invalid('tooManyRows', 'salts', SHEET_MESSAGES.tooManyRows('salts', saltRows.length, MAX_COMPOSITION_ROWS), `up to ${MAX_COMPOSITION_ROWS} rows`);
+  const input: RecipeInput = {
+    ...chosen,
     buffer: toText('buffer', buffer),
-    targetPh: toNumber('targetPh', targetPh, { min: 0, max: 14, allowed: '0 to 14' }),
-    concentrationMm: toNumber('concentrationMm', concentrationMm, { min: 0.001, max: MAX_AMOUNT_MM, allowed: `0.001 to ${MAX_AMOUNT_MM} mM` }),
-    volumeMl: toNumber('volumeMl', volumeMl, { min: 0.001, max: MAX_VOLUME_ML, allowed: `0.001 to ${MAX_VOLUME_ML} mL` }),
-    useTemperatureC: useT,
-    benchTemperatureC: isBlank(benchTemperatureC) ? useT : toTemperature('benchTemperatureC', benchTemperatureC),
-    partVolumeFraction: toNumber('partVolumeFraction', partVolumeFraction, { default: DEFAULT_PART_VOLUME_FRACTION, min: 0.1, max: 1, allowed: '0.1 to 1' }),
-    activityModel: toActivityModel('activityModel', activityModel),
-    ...(isBlank(purity) ? {} : { formPurityPercent: toPurity(purity) * 100 }),
-    ...(isBlank(pKaUncertainty) ? {} : { pKaUncertainty: toNumber('pKaUncertainty', pKaUncertainty, { min: 0, max: 1, allowed: '0 to 1 pH unit' }) }),
-    salts: saltRows.map((row, i) => ({
-      form: toText(`salts row ${i + 1}`, row[0]),
-      concentrationMm: toNumber(`salts row ${i + 1} (mM)`, row[1], { min: 0, max: MAX_AMOUNT_MM, allowed: `0 to ${MAX_AMOUNT_MM} mM` }),
-    })),
-    ...(twoForms
-      ? { route: 'two-forms' as const, acidForm: pair![0], baseForm: pair![1] }
+    targetPh: toField('targetPh', targetPh),
+    concentrationMm: toField('concentrationMm', concentrationMm),
+    volumeMl: toField('volumeMl', volumeMl),
+    ...(isBlank(useTemperatureC) ? {} : { useTemperatureC: toField('useTemperatureC', useTemperatureC) }),
+    ...(saltRows.length === 0
+      ? {}
       : {
-          ...(formText === undefined ? {} : { form: formText }),
-          ...(isBlank(titrant)
-            ? {}
-            : { titrant: { form: toText('titrant', titrant), concentrationM: toNumber('titrantConcentrationM', titrantConcentrationM, { default: 1, min: 1e-6, max: 30, allowed: 'above 0 up to 30 mol/L' }), tolerancePercent: tolerance } }),
+          salts: saltRows.map((row, i) => {
+            if (row.length < 2) throw invalid('tooFewColumns', 'salts', SHEET_MESSAGES.tooFewColumns('salts', row.length, 'two: a salt form and its mM'), 'two columns');
+            return { form: toText(`salts row ${i + 1}`, row[0]), concentrationMm: toField('saltMm', row[1], `salts row ${i + 1} (mM)`) };
+          }),
         }),
   };
+  // "acid form + base form" as the form weighed is the two-forms route (RECIPE only).
+  const pair = typeof input.form === 'string' ? input.form.split(/\s+\+\s+/) : undefined;
+  if (pair && pair.length === 2 && (input.route === undefined || input.route === 'two-forms')) {
+    if (!twoFormsAllowed) throw invalid('oneFormOnly', written.get('form') ?? 'form', SHEET_MESSAGES.oneFormOnly(written.get('form') ?? 'form', input.form as string));
+    const { form: _form, ...rest } = input;
+    return { ...rest, route: 'two-forms', acidForm: pair[0], baseForm: pair[1] };
+  }
+  if (!twoFormsAllowed && input.route === 'two-forms') throw invalid('oneFormOnly', written.get('route') ?? 'route', SHEET_MESSAGES.oneFormOnly(written.get('route') ?? 'route', 'two-forms'));
+  return input;
 }
 
 /**
@@ -389,26 +385,14 @@ function recipeInput(
  * @param targetPh pH wanted at the temperature of use.
  * @param concentrationMm Buffer concentration in the final solution, mM.
  * @param volumeMl Final volume, mL.
- * @param [form] Form weighed (e.g. "HEPES free acid", "tris base"; blank: the plain form).
- * @param [titrant] Titrant form (e.g. "NaOH", "HCl"; blank: 1 M NaOH or HCl, whichever is needed).
- * @param [titrantConcentrationM] Titrant stock, mol/L (blank: 1).
  * @param [useTemperatureC] Temperature of use, °C (blank: 25).
- * @param [benchTemperatureC] Temperature at which the pH is adjusted, °C (blank: the temperature of use).
- * @param [partVolumeFraction] Fraction of the final volume in which the pH is adjusted (blank: 0.8).
  * @param [salts] Two columns: salt form and mM (e.g. "NaCl", 150).
- * @param [pKaUncertainty] pKa uncertainty for the titrant band, pH units (blank: the library's, or 0.02).
- * @param [titrantTolerancePercent] Tolerance of the titrant stock's concentration, % (blank: 1).
- * @param [purity] Purity (assay) of the form weighed, from its label or certificate: 0.995, 99.5 or "99.5%" (blank: pure).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [options] Two columns: option name and value (e.g. "titrant", "NaOH"; "titrant.concentrationM", 5); the names are listed on the help page.
  * @param [userSubstances] Range of your own substances.
  * @returns One row of recipe figures.
  */
-export function recipeRow(
-  buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form?: any, titrant?: any, titrantConcentrationM?: any,
-  useTemperatureC?: any, benchTemperatureC?: any, partVolumeFraction?: any, salts?: any[][], pKaUncertainty?: any, titrantTolerancePercent?: any,
-  purity?: any, activityModel?: any, userSubstances?: any[][],
-): any[][] {
-  const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, userSubstances];
+export function recipeRow(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC?: any, salts?: any[][], options?: any[][], userSubstances?: any[][]): any[][] {
+  const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('RECIPE.ROW', args, () => {
     const plan = recipePlan(args, false);
     const weighed = plan.components.find((c) => c.role === 'buffer');
@@ -419,33 +403,21 @@ export function recipeRow(
 }
 
 /**
- * The whole recipe as a sheet: amounts, the meter reading, the titrant band, predictions, the bench steps, warnings and cautions. Spills a fixed 48 rows × 4 columns (section, item, value, unit), padded with blanks. Give "acid form + base form" as the form to weigh two forms instead of titrating.
+ * The whole recipe as a sheet: amounts, the meter reading, the titrant band, predictions, the bench steps, warnings and cautions. Spills 4 columns (section, item, value, unit). Give "acid form + base form" as the form option to weigh two forms instead of titrating.
  * @customfunction RECIPE RECIPE
  * @helpurl https://localhost:3000/help/functions.html#recipe
  * @param buffer Buffer system (e.g. "HEPES", "tris", "phosphate").
  * @param targetPh pH wanted at the temperature of use.
  * @param concentrationMm Buffer concentration in the final solution, mM.
  * @param volumeMl Final volume, mL.
- * @param [form] Form weighed (e.g. "tris base"), or two forms as "NaH2PO4·H2O + Na2HPO4·7H2O" (blank: the plain form).
- * @param [titrant] Titrant form (e.g. "NaOH", "HCl"; blank: 1 M NaOH or HCl, whichever is needed).
- * @param [titrantConcentrationM] Titrant stock, mol/L (blank: 1).
  * @param [useTemperatureC] Temperature of use, °C (blank: 25).
- * @param [benchTemperatureC] Temperature at which the pH is adjusted, °C (blank: the temperature of use).
- * @param [partVolumeFraction] Fraction of the final volume in which the pH is adjusted (blank: 0.8).
  * @param [salts] Two columns: salt form and mM (e.g. "NaCl", 150).
- * @param [pKaUncertainty] pKa uncertainty for the titrant band, pH units (blank: the library's, or 0.02).
- * @param [titrantTolerancePercent] Tolerance of the titrant stock's concentration, % (blank: 1).
- * @param [purity] Purity (assay) of the form weighed, of each for two forms: 0.995, 99.5 or "99.5%" (blank: pure).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [options] Two columns: option name and value (e.g. "form", "HEPES free acid"; "benchTemperatureC", 22); the names are listed on the help page.
  * @param [userSubstances] Range of your own substances.
  * @returns The recipe, one line per row.
  */
-export function recipe(
-  buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, form?: any, titrant?: any, titrantConcentrationM?: any,
-  useTemperatureC?: any, benchTemperatureC?: any, partVolumeFraction?: any, salts?: any[][], pKaUncertainty?: any, titrantTolerancePercent?: any,
-  purity?: any, activityModel?: any, userSubstances?: any[][],
-): any[][] {
-  const args = [buffer, targetPh, concentrationMm, volumeMl, form, titrant, titrantConcentrationM, useTemperatureC, benchTemperatureC, partVolumeFraction, salts, pKaUncertainty, titrantTolerancePercent, purity, activityModel, userSubstances];
+export function recipe(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC?: any, salts?: any[][], options?: any[][], userSubstances?: any[][]): any[][] {
+  const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('RECIPE', args, () => {
     const plan = recipePlan(args, true);
     const p = plan.predictions;
@@ -472,7 +444,7 @@ export function recipe(
     plan.steps.forEach((step, i) => rows.push(['step', String(i + 1), step, '']));
     for (const w of plan.warnings) rows.push(['warning', '', w, '']);
     for (const c of plan.cautions) rows.push(['caution', '', c, '']);
-    if (rows.length > RECIPE_TABLE_ROWS) throw invalid(SHEET_MESSAGES.recipeTooLong(rows.length, RECIPE_TABLE_ROWS));
+    if (rows.length > RECIPE_TABLE_ROWS) throw invalid('recipeTooLong', undefined, SHEET_MESSAGES.recipeTooLong(rows.length, RECIPE_TABLE_ROWS));
     while (rows.length < RECIPE_TABLE_ROWS) rows.push(['', '', '', '']);
     return rows;
   });

@@ -4,8 +4,6 @@
  * value is needed, a row of the user-substance table). Every host-level message lives here.
  */
 export const SHEET_MESSAGES = {
-  notANumber: (argument: string, value: unknown) =>
-    `${argument} must be a number (typed or as text such as "7.4"); got ${describe(value)}.`,
   blank: (argument: string, what: string) =>
     `${argument} is blank; give ${what}.`,
   notText: (argument: string, value: unknown) =>
@@ -18,8 +16,6 @@ export const SHEET_MESSAGES = {
     `${argument}, row ${row}: ${detail}`,
   unknownChoice: (argument: string, value: unknown, allowed: readonly string[]) =>
     `${argument}: ${describe(value)} is not one of the choices; allowed: ${allowed.map((a) => `"${a}"`).join(', ')}.`,
-  badPurity: (value: unknown) =>
-    `purity is ${describe(value)}; allowed: a fraction above 0 up to 1 (0.995), a percentage above 1 up to 100 (99.5), or text such as "99.5%".`,
   noSuchStep: (argument: string, substance: string, step: unknown, steps: number) =>
     `${argument} is ${describe(step)}, but ${substance} has ${steps} step(s); allowed: whole numbers 1 to ${steps}.`,
   tooManySpecies: (count: number, rows: number) =>
@@ -28,14 +24,8 @@ export const SHEET_MESSAGES = {
     `"${name}" is given twice with different ${column}; give the substance's columns once (later rows of the same substance may leave them blank).`,
   badCounterIons: (text: string) =>
     `cannot read the counter-ions "${text}"; write them as "Na+", "2 Na+" or "K+; Cl-".`,
-  badList: (argument: string, text: string) =>
-    `${argument}: cannot read "${text}" as a list of numbers; write them as "6.1; 7.2".`,
   titrantExceedsVolume: (titrantMl: number, finalVolumeMl: number) =>
     `The titrant stock is too dilute: it would take ${titrantMl.toPrecision(4)} mL, more than the final volume of ${finalVolumeMl} mL; use a stronger stock.`,
-  ambiguousNumber: (argument: string, value: unknown) =>
-    `${argument}: cannot tell how to read ${describe(value)}; write the number with a point as the decimal mark and no thousands separators (e.g. 1000 or 7.4).`,
-  wrongUnit: (argument: string, unit: string, allowed: readonly string[]) =>
-    `${argument}: the unit "${unit}" does not fit; ${allowed.length ? `allowed: ${allowed.join(', ')} (or a plain number)` : 'give a plain number'}.`,
   tooManyRows: (argument: string, rows: number, limit: number) =>
     `${argument} has ${rows} rows; allowed: up to ${limit} rows with values.`,
   oneFormOnly: (argument: string, text: string) =>

@@ -48,7 +48,7 @@ function parseCounterIons(text: string): Record<string, number> {
   const ions: Record<string, number> = {};
   for (const part of text.split(/[;,]/).map((p) => p.trim()).filter((p) => p !== '')) {
     const m = /^(\d+(?:\.\d+)?)?\s*([A-Za-z][A-Za-z0-9]*\s*[+\-−]*)\s*(\d+(?:\.\d+)?)?$/.exec(part);
-    if (!m || (m[1] && m[3])) throw invalid(SHEET_MESSAGES.badCounterIons(text));
+    if (!m || (m[1] && m[3])) throw invalid('badCounterIons', 'counter-ions', SHEET_MESSAGES.badCounterIons(text));
     const ion = findStrongIon('counter-ions', m[2].trim()).name;
     ions[ion] = (ions[ion] ?? 0) + Number(m[1] ?? m[3] ?? 1);
   }
@@ -84,12 +84,12 @@ function parseRows(range: readonly (readonly unknown[])[]): Parsed {
       let substance: UserSubstance;
       if (known === undefined || !isBlank(chargeCell) || pKa.length > 0) {
         const charge = toNumber('charge of most protonated form', chargeCell, { min: -6, max: 6, integer: true, allowed: 'whole numbers -6 to 6' });
-        if (pKa.length === 0) throw invalid(SHEET_MESSAGES.blank('pKa list', 'the pKa values, e.g. "6.1; 7.2"'));
+        if (pKa.length === 0) throw invalid('blank', 'pKa list', SHEET_MESSAGES.blank('pKa list', 'the pKa values, e.g. "6.1; 7.2"'));
         substance = { name, chargeOfMostProtonated: charge, pKa, ...(dH.length ? { deltaHkJ: dH } : {}), ...(dCp.length ? { deltaCpJ: dCp } : {}), forms: [] };
         if (known !== undefined) {
           const first = substances[known];
-          if (first.chargeOfMostProtonated !== charge || !sameList(first.pKa, pKa)) throw invalid(SHEET_MESSAGES.userSubstanceConflict(name, 'charge or pKa values'));
-          if ((dH.length && !sameList(first.deltaHkJ, dH)) || (dCp.length && !sameList(first.deltaCpJ, dCp))) throw invalid(SHEET_MESSAGES.userSubstanceConflict(name, 'ΔH or ΔCp values'));
+          if (first.chargeOfMostProtonated !== charge || !sameList(first.pKa, pKa)) throw invalid('userSubstanceConflict', 'userSubstances', SHEET_MESSAGES.userSubstanceConflict(name, 'charge or pKa values'));
+          if ((dH.length && !sameList(first.deltaHkJ, dH)) || (dCp.length && !sameList(first.deltaCpJ, dCp))) throw invalid('userSubstanceConflict', 'userSubstances', SHEET_MESSAGES.userSubstanceConflict(name, 'ΔH or ΔCp values'));
           substance = first;
         }
       } else {

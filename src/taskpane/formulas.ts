@@ -54,6 +54,8 @@ export interface SettingCells {
   readonly stockTolerancePercent: string;
   /** A range reference to the user's substances, or '' for none. */
   readonly userSubstances: string;
+  /** The settings that are recipe options, as a two-column range (label, value). */
+  readonly options: string;
 }
 
 /** Grams of the salt, or blank when the sheet names no salt. */
@@ -66,7 +68,7 @@ export const saltGrams = (s: SettingCells, r: RowCells) => `=IF(${s.salt}="","",
  * all from the recipe planner, salt included.
  */
 export const recipeRow = (s: SettingCells, r: RowCells, salts: string) =>
-  `=${call('RECIPE.ROW', s.buffer, r.targetPh, r.concentrationMm, r.volumeMl, s.form, s.titrant, s.titrantStockM, r.useTemperatureC, s.benchTemperatureC, r.partVolumeFraction, salts, s.pKaUncertainty, s.stockTolerancePercent, s.purityPercent, s.activityModel, s.userSubstances)}`;
+  `=${call('RECIPE.ROW', s.buffer, r.targetPh, r.concentrationMm, r.volumeMl, r.useTemperatureC, salts, s.options, s.userSubstances)}`;
 
 /** A salt row for RECIPE.ROW and TITRANT.ML: the salt's name and mM, blank when the sheet names no salt. */
 export const saltName = (s: SettingCells) => `=IF(${s.salt}="","",${s.salt})`;

@@ -71,19 +71,24 @@ export const COL = {
 /** Number formats of the RECIPE.ROW spill, in its column order (form g … warnings). */
 const RECIPE_ROW_FORMATS = ['0.000', '0.00', '0.00', '0.00', '0.00', '0.00', '0.00', '0.00', '0.0', '0', ''] as const;
 
-/** Settings block: label, then value, in rows from LAYOUT.settingsRow. */
+/**
+ * Settings block: label, then value, in rows from LAYOUT.settingsRow. The rows from "Form
+ * weighed" to "pKa uncertainty (±)" are the recipe options every row formula reads as its
+ * options range: their labels are the options' declared labels (src/chem/input), so the
+ * block reads as a two-column range of option names and values.
+ */
 export const SETTING_ROWS = [
   'Buffer system',
   'Form weighed',
   'Form purity (%)',
   'Titrant',
   'Titrant stock (M)',
-  'Salt',
+  'Stock tolerance (%)',
   'Activity model',
   'Bench temp. (°C)',
   'Adjust at (fraction)',
   'pKa uncertainty (±)',
-  'Stock tolerance (%)',
+  'Salt',
   'Your substances',
   'Built with',
   'Built on',
@@ -91,10 +96,13 @@ export const SETTING_ROWS = [
 
 export type SettingLabel = (typeof SETTING_ROWS)[number];
 
-/** Column of the settings' values (C: labels may run over A and B). */
-export const SETTING_VALUE_COL = 2;
+/** The settings that are recipe options, first to last (a contiguous run of SETTING_ROWS). */
+export const OPTION_SETTINGS: readonly SettingLabel[] = SETTING_ROWS.slice(SETTING_ROWS.indexOf('Form weighed'), SETTING_ROWS.indexOf('pKa uncertainty (±)') + 1);
 
-/** Zero-based row of a setting's value (column C). */
+/** Column of the settings' values (B, beside their labels in A: the options range is A:B). */
+export const SETTING_VALUE_COL = 1;
+
+/** Zero-based row of a setting's value. */
 export function settingRow(label: SettingLabel): number {
   return LAYOUT.settingsRow + 1 + SETTING_ROWS.indexOf(label);
 }
@@ -163,6 +171,7 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
     pKaUncertainty: settingRef('pKa uncertainty (±)'),
     stockTolerancePercent: settingRef('Stock tolerance (%)'),
     userSubstances: request.userSubstances,
+    options: `${cellAddress(settingRow(OPTION_SETTINGS[0]), 0, true)}:${cellAddress(settingRow(OPTION_SETTINGS[OPTION_SETTINGS.length - 1]), SETTING_VALUE_COL, true)}`,
   };
   const partRef = settingRef('Adjust at (fraction)');
   const values: Record<SettingLabel, CellWrite> = {
@@ -193,7 +202,7 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
     {
       row: LAYOUT.settingsRow,
       col: 0,
-      cells: [[label('Settings', 'subtitle')], ...SETTING_ROWS.map((name) => [label(name), null, values[name]])],
+      cells: [[label('Settings', 'subtitle')], ...SETTING_ROWS.map((name) => [label(name), values[name]])],
     },
     { row: LAYOUT.tableHeaderRow, col: 0, cells: [LAYOUT.columns.map((h) => label(h, 'header'))] },
   ];
@@ -334,6 +343,6 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
     rows,
     tail,
     charts,
-    columnWidths: [11, 9, 9, 9, 11, 11, 11, 10, 10, 10, 13, 11, 13, 13, 11, 12, 44, 2],
+    columnWidths: [19, 12, 9, 9, 11, 11, 11, 10, 10, 10, 13, 11, 13, 13, 11, 12, 44, 2],
   };
 }

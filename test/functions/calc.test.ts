@@ -45,7 +45,7 @@ describe('calc command', () => {
     const { code, out } = await run(['calc', input, '-o', output]);
     expect(code).toBe(0);
     expect(out.formulas).toBe(6);
-    expect(out.errors).toEqual([{ cell: 'Prep!C5', value: '#VALUE!', message: 'temperatureC must be a number (typed or as text such as "7.4"); got "hot".' }]);
+    expect(out.errors).toEqual([{ cell: 'Prep!C5', value: '#VALUE!', message: 'temperatureC must be a number (typed, or as text such as "25" or "4 °C"); got "hot".' }]);
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.readFile(output);
     const ws = wb.getWorksheet('Prep')!;

@@ -1,13 +1,14 @@
 import { planRecipe } from '../../src/chem/planner';
 import { RECIPE_ROW_HEADER, RECIPE_TABLE_ROWS, recipe, recipeRow, spillShape } from '../../src/functions/functions';
 import { createFormulaEngine } from '../../src/functions/formulaEngine';
-import { SheetError } from '../../src/functions/errors';
+import { errorOf } from './errorOf';
 
 /** The sheet functions call the planner; their numbers are the planner's, unrounded. */
 const SAME = 1e-12;
 
 describe('RECIPE.ROW', () => {
-  const row = () => recipeRow('HEPES', 7.4, 25, 500, 'HEPES free acid', 'NaOH', 1, 4, 22, 0.8, [['NaCl', 150]]);
+  const options = [['form', 'HEPES free acid'], ['titrant', 'NaOH'], ['titrant.concentrationM', 1], ['benchTemperatureC', 22], ['partVolumeFraction', 0.8]];
+  const row = () => recipeRow('HEPES', 7.4, 25, 500, 4, [['NaCl', 150]], options);
 
   it('gives the planner\'s grams, titrant band, meter reading and predictions in the header\'s order', () => {
     const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, useTemperatureC: 4, benchTemperatureC: 22, partVolumeFraction: 0.8, salts: [{ form: 'NaCl', concentrationMm: 150 }] });
@@ -23,37 +24,52 @@ describe('RECIPE.ROW', () => {
   });
 
   it('accepts numbers as text, blank optional arguments and mixed-case names', () => {
-    const [r] = recipeRow('hepes', '7.4', '25', '500', 'hepes FREE acid', null, null, null, null, null, undefined, null, undefined);
+    const [r] = recipeRow('hepes', '7,4', '25 mM', '0.5 L', null, undefined, [['Form weighed', 'hepes FREE acid'], ['', '']], undefined);
     expect(Math.abs((r[5] as number) - 7.4)).toBeLessThan(0.001);
   });
 
   it('carries warnings as text', () => {
-    const [r] = recipeRow('HEPES', 9.3, 25, 500, 'HEPES free acid', 'NaOH', 1);
+    const [r] = recipeRow('HEPES', 9.3, 25, 500, '', undefined, [['form', 'HEPES free acid'], ['titrant', 'NaOH']]);
     expect(r[10]).toMatch(/buffer weakly/);
   });
 
   it('weighs more of a form that is less than pure: the same grams for 0.98, 98 and "98%", pure grams ÷ 0.98', () => {
-    const pure = recipeRow('MES', 6.1, 20, 1000, 'MES free acid', 'NaOH', 1)[0];
+    const mes = [['form', 'MES free acid'], ['titrant', 'NaOH']];
+    const pure = recipeRow('MES', 6.1, 20, 1000, '', undefined, mes)[0];
     for (const purity of [0.98, 98, '98%']) {
-      const [r] = recipeRow('MES', 6.1, 20, 1000, 'MES free acid', 'NaOH', 1, '', '', '', undefined, '', '', purity);
+      const [r] = recipeRow('MES', 6.1, 20, 1000, '', undefined, [...mes, ['formPurityPercent', purity]]);
       expect(Math.abs((r[0] as number) - (pure[0] as number) / 0.98)).toBeLessThan(1e-9);
       // The chemistry is the same: only the mass weighed changes.
       expect(r[1]).toBe(pure[1]);
       expect(r[4]).toBe(pure[4]);
     }
-    expect(() => recipeRow('MES', 6.1, 20, 1000, 'MES free acid', 'NaOH', 1, '', '', '', undefined, '', '', 150)).toThrow(/purity is 150/);
+    expect(errorOf(() => recipeRow('MES', 6.1, 20, 1000, '', undefined, [...mes, ['Form purity (%)', 150]]))).toMatchObject({ code: 'outOfRange', field: 'Form purity (%)' });
   });
 
   it('names the argument on bad input', () => {
-    expect(() => recipeRow('HEPES', 15, 25, 500)).toThrow(/targetPh/);
-    expect(() => recipeRow('HEPES', 7.4, 25, 500, 'NaH2PO4 + Na2HPO4')).toThrow(SheetError);
-    expect(() => recipeRow('HEPES', 7.4, 25, 500, 'HEPES free acid', 'NaOH', 1, 25, 25, 0.8, [['NaCl', 'lots']])).toThrow(/salts row 1 \(mM\)/);
+    expect(errorOf(() => recipeRow('HEPES', 15, 25, 500))).toMatchObject({ kind: 'value', code: 'outOfRange', field: 'targetPh' });
+    expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['form', 'NaH2PO4 + Na2HPO4']]))).toMatchObject({ kind: 'value', code: 'oneFormOnly', field: 'form' });
+    expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, 25, [['NaCl', 'lots']]))).toMatchObject({ kind: 'value', code: 'notANumber', field: 'salts row 1 (mM)' });
+    expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['titrant.concentrationM', 25]]))).toMatchObject({ kind: 'value', code: 'outOfRange', field: 'titrant.concentrationM' });
+  });
+
+  it('reads an options range: names or labels, blank rows skipped, an unknown name gets "did you mean", a repeat is refused', () => {
+    const byName = recipeRow('HEPES', 7.4, 25, 500, 4, undefined, [['form', 'HEPES free acid'], ['benchTemperatureC', '22 °C']]);
+    const byLabel = recipeRow('HEPES', 7.4, 25, 500, 4, undefined, [['Form weighed', 'HEPES free acid'], ['', ''], ['Bench temp. (°C)', 22]]);
+    expect(byLabel).toEqual(byName);
+    const unknown = errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['benchTemperatureF', 70]]));
+    expect(unknown).toMatchObject({ kind: 'value', code: 'unknownField', field: 'benchTemperatureF' });
+    expect(unknown.message).toContain('benchTemperatureC');
+    expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['form', 'HEPES free acid'], ['Form weighed', 'HEPES free acid']]))).toMatchObject({ code: 'givenTwice', field: 'Form weighed' });
+    expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, 4, undefined, [['useTemperatureC', 4]]))).toMatchObject({ code: 'givenTwice', field: 'useTemperatureC' });
+    expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['targetPh', 7]]))).toMatchObject({ code: 'givenTwice', field: 'targetPh' });
+    expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['form']]))).toMatchObject({ code: 'tooFewColumns', field: 'options' });
   });
 });
 
 describe('RECIPE', () => {
   it('spills a fixed 48 × 4 sheet with amounts, meter reading, steps and cautions', () => {
-    const rows = recipe('tris', 8.0, 50, 1000, 'tris base', 'HCl', 6, 4, 25);
+    const rows = recipe('tris', 8.0, 50, 1000, 4, undefined, [['form', 'tris base'], ['titrant', 'HCl'], ['titrant.concentrationM', 6], ['benchTemperatureC', 25]]);
     expect(rows).toHaveLength(RECIPE_TABLE_ROWS);
     expect(rows.every((r) => r.length === 4)).toBe(true);
     const sections = rows.map((r) => r[0]);
@@ -65,15 +81,16 @@ describe('RECIPE', () => {
   });
 
   it('weighs two forms when given "acid form + base form"', () => {
-    const rows = recipe('phosphate', 7.0, 100, 1000, 'NaH2PO4·H2O + Na2HPO4·7H2O');
+    const rows = recipe('phosphate', 7.0, 100, 1000, '', undefined, [['form', 'NaH2PO4·H2O + Na2HPO4·7H2O']]);
     const amounts = rows.filter((r) => r[0] === 'amount' && r[3] === 'g');
     expect(amounts).toHaveLength(2);
     expect(rows.some((r) => r[0] === 'titrant')).toBe(false);
   });
 
   it('applies one purity to both forms of a pair and says so in the weighing step', () => {
-    const pure = recipe('phosphate', 7.0, 100, 1000, 'NaH2PO4·H2O + Na2HPO4·7H2O').filter((r) => r[0] === 'amount' && r[3] === 'g');
-    const rows = recipe('phosphate', 7.0, 100, 1000, 'NaH2PO4·H2O + Na2HPO4·7H2O', '', '', '', '', '', undefined, '', '', '99%');
+    const pair = [['form', 'NaH2PO4·H2O + Na2HPO4·7H2O']];
+    const pure = recipe('phosphate', 7.0, 100, 1000, '', undefined, pair).filter((r) => r[0] === 'amount' && r[3] === 'g');
+    const rows = recipe('phosphate', 7.0, 100, 1000, '', undefined, [...pair, ['formPurityPercent', '99%']]);
     const amounts = rows.filter((r) => r[0] === 'amount' && r[3] === 'g');
     amounts.forEach((a, i) => expect(Math.abs((a[2] as number) - (pure[i][2] as number) / 0.99)).toBeLessThan(1e-9));
     expect(rows.find((r) => r[0] === 'step' && r[1] === '1')![2]).toMatch(/99 % pure.*99 % pure/);
@@ -87,16 +104,22 @@ describe('RECIPE', () => {
 
 describe('recipe functions through the formula engine', () => {
   it('RECIPE.ROW spills across a row and its pH at use solves back to the target', () => {
-    const hf = createFormulaEngine({ Sheet1: [['NaCl', 150], ['=PROTON.RECIPE.ROW("HEPES", 7.4, 25, 500, "HEPES free acid", "NaOH", 1, 4, 22, 0.8, A1:B1)']] });
-    const phAtUse = hf.getCellValue({ sheet: 0, row: 1, col: 5 }) as number;
+    const hf = createFormulaEngine({
+      Sheet1: [
+        ['NaCl', 150, null, 'form', 'HEPES free acid'],
+        [null, null, null, 'benchTemperatureC', 22],
+        ['=PROTON.RECIPE.ROW("HEPES", 7.4, 25, 500, 4, A1:B1, D1:E2)'],
+      ],
+    });
+    const phAtUse = hf.getCellValue({ sheet: 0, row: 2, col: 5 }) as number;
     expect(Math.abs(phAtUse - 7.4)).toBeLessThan(0.001);
-    expect(typeof hf.getCellValue({ sheet: 0, row: 1, col: 4 })).toBe('number');
+    expect(typeof hf.getCellValue({ sheet: 0, row: 2, col: 4 })).toBe('number');
   });
 
   it('RECIPE spills 48 rows', () => {
-    const hf = createFormulaEngine({ Sheet1: [['=PROTON.RECIPE("MES", 6.0, 20, 250, "MES free acid", "NaOH", 1)']] });
-    expect(hf.getCellValue({ sheet: 0, row: 0, col: 0 })).toBe('section');
-    expect(hf.getCellValue({ sheet: 0, row: 47, col: 0 })).toBe('');
-    expect(hf.getCellValue({ sheet: 0, row: 2, col: 1 })).toMatch(/buffer: MES free acid/);
+    const hf = createFormulaEngine({ Sheet1: [['form', 'MES free acid', null, '=PROTON.RECIPE("MES", 6.0, 20, 250, , , A1:B2)'], ['titrant', 'NaOH']] });
+    expect(hf.getCellValue({ sheet: 0, row: 0, col: 3 })).toBe('section');
+    expect(hf.getCellValue({ sheet: 0, row: 47, col: 3 })).toBe('');
+    expect(hf.getCellValue({ sheet: 0, row: 2, col: 4 })).toMatch(/buffer: MES free acid/);
   });
 });

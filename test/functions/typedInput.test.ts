@@ -1,5 +1,6 @@
 import { grams, ph, titrantMl } from '../../src/functions/functions';
 import { MAX_COMPOSITION_ROWS } from '../../src/functions/composition';
+import { errorOf } from './errorOf';
 
 /** Arithmetic on typed numbers is exact to rounding; 1e-9 relative allows the unit factors. */
 const SAME = 1e-9;
@@ -9,7 +10,7 @@ describe('numbers as people type them', () => {
 
   it.each([
     ['150 mM and 1 L', '150 mM', '1 L'],
-    ['150mm and 1000 ml (case-free where unambiguous)', '150mm', '1000 ml'],
+    ['150mM and 1000 ml (volume units case-free: no other unit reads the same)', '150mM', '1000 ml'],
     ['0,15 M (decimal comma) and 1000 mL', '0,15 M', '1000 mL'],
     ['150000 µM and 1000 mL', '150000 µM', '1000 mL'],
   ])('%s give the same grams as plain numbers', (_label, concentration, volume) => {
@@ -27,14 +28,17 @@ describe('numbers as people type them', () => {
   });
 
   it.each([
-    ['a unit that does not fit', () => grams('NaCl', '150 kg', 1000), /concentrationMm: the unit "kg" does not fit; allowed: mM, M, µM, uM/],
-    ['a thousands separator', () => grams('NaCl', '1,000', 1000), /cannot tell how to read "1,000"/],
-    ['two commas', () => grams('NaCl', '1,5,0', 1000), /cannot tell how to read/],
-    ['words', () => grams('NaCl', 'lots', 1000), /concentrationMm must be a number/],
-    ['NaN as text', () => grams('NaCl', 'NaN', 1000), /must be a number/],
-    ['Infinity', () => grams('NaCl', Infinity, 1000), /must be a number/],
-  ])('refuses %s, naming the argument', (_label, call, message) => {
-    expect(call).toThrow(message);
+    ['a unit that does not fit', () => grams('NaCl', '150 kg', 1000), 'wrongUnit', 'concentrationMm'],
+    ['"m" for a concentration (mM or M? refused, never guessed)', () => grams('NaCl', '5 m', 100), 'ambiguousUnit', 'concentrationMm'],
+    ['"mm" for a concentration', () => grams('NaCl', '150mm', 1000), 'ambiguousUnit', 'concentrationMm'],
+    ['a thousands separator', () => grams('NaCl', '1,000', 1000), 'ambiguousNumber', 'concentrationMm'],
+    ['two commas', () => grams('NaCl', '1,5,0', 1000), 'ambiguousNumber', 'concentrationMm'],
+    ['words', () => grams('NaCl', 'lots', 1000), 'notANumber', 'concentrationMm'],
+    ['NaN as text', () => grams('NaCl', 'NaN', 1000), 'notANumber', 'concentrationMm'],
+    ['Infinity', () => grams('NaCl', Infinity, 1000), 'notFinite', 'concentrationMm'],
+    ['a volume of 0 mL', () => grams('NaCl', 150, 0), 'outOfRange', 'volumeMl'],
+  ])('refuses %s, naming the argument', (_label, call, code, field) => {
+    expect(errorOf(call)).toMatchObject({ kind: 'value', code, field });
   });
 
   it(`refuses a composition range of 100,000 rows (more than ${MAX_COMPOSITION_ROWS}) with a message, quickly`, () => {

@@ -193,3 +193,11 @@ describe('form checks', () => {
     expect(!c.ok && c.errors.saltForm).toMatch(/Name the salt/);
   });
 });
+
+describe('the settings block is the row formulas’ options range', () => {
+  it('every option setting’s label is a declared recipe option (src/chem/input), so RECIPE.ROW reads the block as it stands', () => {
+    const { recipeFieldOf } = jest.requireActual('../../src/chem/input') as typeof import('../../src/chem/input');
+    const { OPTION_SETTINGS } = jest.requireActual('../../src/taskpane/recipeTable') as typeof import('../../src/taskpane/recipeTable');
+    for (const label of OPTION_SETTINGS) expect(recipeFieldOf(label).label).toBe(label);
+  });
+});

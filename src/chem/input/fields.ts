@@ -10,6 +10,7 @@
 import { ACTIVITY_MODELS } from '../activity';
 import { ChemError, MESSAGES } from '../errors';
 import { MAX_TARGET_PH, MIN_TARGET_PH } from '../titration';
+import { MAX_FORM_CONCENTRATION_M } from '../library/lookup';
 import { closestNames } from '../library/names';
 import { BASE_UNIT, Dimension, readQuantity, splitList, unitsOf } from './quantity';
 
@@ -127,7 +128,7 @@ export const FIELDS: readonly Field[] = [
   },
   { kind: 'choice', scope: 'recipe', name: 'activityModel', label: 'Activity model', choices: ACTIVITY_MODELS, default: ACTIVITY_MODELS[0], description: 'Activity model for the equilibrium solver.', example: 'davies' },
   {
-    kind: 'number', scope: 'recipe', name: 'pKaUncertainty', label: 'pKa uncertainty (±)', dimension: 'pH', unit: 'pH', min: 0, max: 1, defaultText: 'the library’s, or 0.02',
+    kind: 'number', scope: 'recipe', name: 'pKaUncertainty', label: 'pKa uncertainty (±)', dimension: 'fraction', unit: '', min: 0, max: 1, defaultText: 'the library’s, or 0.02',
     description: 'pKa uncertainty used for the titrant band.', example: '0.02',
   },
   // Worksheet arguments that are not recipe options.
@@ -141,8 +142,12 @@ export const FIELDS: readonly Field[] = [
     description: 'Concentration of the titrant stock.', example: '1 M',
   },
   {
-    kind: 'number', scope: 'argument', name: 'amountMm', required: true, label: 'Amount (mM)', dimension: 'concentration', unit: 'mM', min: 0, max: MAX_RECIPE_CONCENTRATION_MM,
-    description: 'Concentration of a form in the solution.', example: '20 mM',
+    kind: 'number', scope: 'argument', name: 'amountMm', required: true, label: 'Amount (mM)', dimension: 'concentration', unit: 'mM', min: 0, max: MAX_FORM_CONCENTRATION_M * 1000,
+    description: 'Concentration of a form in a composition (a solution described by its parts, stocks included).', example: '20 mM',
+  },
+  {
+    kind: 'number', scope: 'argument', name: 'saltMm', required: true, label: 'Salt (mM)', dimension: 'concentration', unit: 'mM', min: 0, max: MAX_RECIPE_CONCENTRATION_MM,
+    description: 'Concentration of a salt in a recipe’s final solution.', example: '150 mM',
   },
   { kind: 'number', scope: 'argument', name: 'dilutionFactor', required: true, label: 'Dilution (×)', dimension: 'count', unit: '×', min: 1, max: 1e6, description: 'Final volume over starting volume.', example: '10' },
   { kind: 'purity', scope: 'argument', name: 'purity', label: 'Purity', min: 1, max: 100, description: 'Purity (assay) of the form weighed.', example: '99.5%' },
@@ -302,8 +307,7 @@ function readSaltItem(asWritten: string, item: string): SaltEntry {
   if (words.length <= amountWords) throw fail();
   const amount = words.slice(words.length - amountWords).join(' ');
   if (!/^[+-]?[\d.,]/.test(amount)) throw fail();
-  const mM = readQuantity(asWritten, amount, 'concentration', 'mM');
-  if (mM < 0 || mM > MAX_RECIPE_CONCENTRATION_MM) throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(asWritten, mM, `0 to ${MAX_RECIPE_CONCENTRATION_MM} mM`), asWritten, `0 to ${MAX_RECIPE_CONCENTRATION_MM} mM`);
+  const mM = requireNumberField('saltMm', amount, asWritten);
   return { form: words.slice(0, words.length - amountWords).join(' '), concentrationMm: mM };
 }
 
@@ -320,10 +324,7 @@ export function readSaltsField(value: unknown, asWritten = 'salts'): SaltEntry[]
     const e = (entry ?? {}) as { form?: unknown; concentrationMm?: unknown };
     const form = readTextField('form', e.form, `${at}.form`);
     if (form === undefined) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${at}.form`, 'a form name'), `${at}.form`, 'a name');
-    const mM = readQuantity(`${at}.concentrationMm`, e.concentrationMm ?? '', 'concentration', 'mM');
-    if (mM < 0 || mM > MAX_RECIPE_CONCENTRATION_MM) {
-      throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(`${at}.concentrationMm`, mM, `0 to ${MAX_RECIPE_CONCENTRATION_MM} mM`), `${at}.concentrationMm`, `0 to ${MAX_RECIPE_CONCENTRATION_MM} mM`);
-    }
+    const mM = requireNumberField('saltMm', e.concentrationMm, `${at}.concentrationMm`);
     return { form, concentrationMm: mM };
   });
 }

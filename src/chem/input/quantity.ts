@@ -67,9 +67,38 @@ export const BASE_UNIT: Readonly<Record<Dimension, string>> = {
   count: '×',
 };
 
-/** The units a dimension accepts, for messages and help. */
+/** The units a dimension accepts (every spelling). */
 export function unitsOf(dimension: Dimension): readonly string[] {
   return Object.keys(UNITS[dimension]);
+}
+
+/** The spellings shown in messages and help, main ones only. */
+const SHOWN_UNITS: Readonly<Record<Dimension, readonly string[]>> = {
+  pH: ['pH'],
+  temperature: ['°C'],
+  concentration: ['M', 'mM', 'µM'],
+  volume: ['L', 'mL', 'µL'],
+  fraction: [],
+  percent: ['%'],
+  osmolarity: ['mOsm/L', 'Osm/L'],
+  count: ['×'],
+};
+
+/** An example of a typed number of each dimension, for messages. */
+const EXAMPLE: Readonly<Record<Dimension, string>> = {
+  pH: '"7.4" or "7,4"',
+  temperature: '"25" or "4 °C"',
+  concentration: '"50 mM" or "0,5 M"',
+  volume: '"500 mL" or "0.5 L"',
+  fraction: '"0.8" or "0,8"',
+  percent: '"99.5" or "99.5%"',
+  osmolarity: '"300 mOsm/L"',
+  count: '"10"',
+};
+
+/** The units shown for a dimension in messages and help. */
+export function shownUnits(dimension: Dimension): readonly string[] {
+  return SHOWN_UNITS[dimension];
 }
 
 /**
@@ -167,18 +196,18 @@ export function readQuantity(field: string, value: unknown, dimension: Dimension
     if (!Number.isFinite(value)) throw new ChemError('invalid-input', 'notFinite', MESSAGES.notFinite(field, value), field, `a number in ${unit || 'plain numbers'}`);
     return value;
   }
-  if (typeof value !== 'string') throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value), field, `a number in ${unit || 'plain numbers'}`);
-  if (value.length > MAX_NUMBER_TEXT) throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, `${value.slice(0, 20)}…`), field, `a number in ${unit || 'plain numbers'}`);
+  if (typeof value !== 'string') throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value, EXAMPLE[dimension]), field, `a number in ${unit || 'plain numbers'}`);
+  if (value.length > MAX_NUMBER_TEXT) throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, `${value.slice(0, 20)}…`, EXAMPLE[dimension]), field, `a number in ${unit || 'plain numbers'}`);
   let text = value.trim();
   if (dimension === 'pH' && /^ph(?![a-z])/i.test(text)) text = text.slice(2).trimStart();
   const scanned = scanNumber(field, value, text);
-  if (!scanned) throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value), field, `a number in ${unit || 'plain numbers'}`);
+  if (!scanned) throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value, EXAMPLE[dimension]), field, `a number in ${unit || 'plain numbers'}`);
   const rest = text.slice(scanned.end).trim().replace(/\s+/g, ' ');
   if (rest === '') return scanned.value;
   // "7.0 7.2" is two numbers, not a number and a unit.
-  if (/^[\d.,+-]/.test(rest)) throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value), field, `one number in ${unit || 'plain numbers'}`);
+  if (/^[\d.,+-]/.test(rest)) throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value, EXAMPLE[dimension]), field, `one number in ${unit || 'plain numbers'}`);
   const factor = unitFactor(dimension, rest);
-  const allowed = unitsOf(dimension);
+  const allowed = shownUnits(dimension);
   if (factor === 'ambiguous') {
     throw new ChemError('invalid-input', 'ambiguousUnit', MESSAGES.ambiguousUnit(field, rest, allowed), field, allowed.join(', '));
   }
@@ -220,6 +249,6 @@ export function splitList(field: string, text: string): string[] {
 export function readQuantityList(field: string, value: unknown, dimension: Dimension, unit: string = BASE_UNIT[dimension]): number[] {
   if (value === undefined || value === null) return [];
   if (typeof value === 'number') return [readQuantity(field, value, dimension, unit)];
-  if (typeof value !== 'string') throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value), field, `numbers separated by ";"`);
+  if (typeof value !== 'string') throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value, EXAMPLE[dimension]), field, `numbers separated by ";"`);
   return splitList(field, value).map((item) => readQuantity(field, item, dimension, unit));
 }

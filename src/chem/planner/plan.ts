@@ -83,7 +83,8 @@ interface Settled {
   readonly partFraction: number;
   readonly model: ActivityModel;
   readonly salts: readonly { form: LibraryForm; concentrationM: number }[];
-  readonly titrant?: { readonly form: string; readonly concentrationM: number; readonly tolerancePercent: number };
+  /** The titrant stock given; without a form, NaOH or HCl (whichever is needed) at that concentration. */
+  readonly titrant?: { readonly form?: string; readonly concentrationM: number; readonly tolerancePercent: number };
   readonly stock?: { readonly fold: number; readonly volumeMl?: number };
   /** The salt added to a target: its form, and the goal (mol/L of ionic strength, or osmol/L). */
   readonly saltTarget?: { readonly form: LibraryForm; readonly byIonicStrength: boolean; readonly goal: number };
@@ -252,11 +253,10 @@ function settle(input: RecipeInput, library: SubstanceLibrary): Settled {
 
 function settleTitrant(t: NonNullable<RecipeInput['titrant']>): NonNullable<Settled['titrant']> {
   const form = readTextField('titrant.form', t?.form);
-  if (form === undefined) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('titrant.form', 'a titrant form'), 'titrant.form', 'a name');
   return {
-    form,
-    concentrationM: requireNumberField('titrant.concentrationM', t.concentrationM),
-    tolerancePercent: requireNumberField('titrant.tolerancePercent', t.tolerancePercent),
+    ...(form === undefined ? {} : { form }),
+    concentrationM: requireNumberField('titrant.concentrationM', t?.concentrationM),
+    tolerancePercent: requireNumberField('titrant.tolerancePercent', t?.tolerancePercent),
   };
 }
 
@@ -335,11 +335,13 @@ function titrateRoute(s: Settled, saltTargetM: number): RouteResult {
 
 /** The titrant named, or 1 M NaOH / 1 M HCl, whichever reaches the target. */
 function chooseTitrant(s: Settled, start: Composition): Omit<NonNullable<RouteResult['titrant']>, 'before'> {
-  const candidates = s.titrant
-    ? [s.titrant]
+  const stockM = s.titrant?.concentrationM ?? 1;
+  const tolerance = s.titrant?.tolerancePercent ?? DEFAULT_STOCK_TOLERANCE_PERCENT;
+  const candidates = s.titrant?.form
+    ? [{ form: s.titrant.form, concentrationM: stockM, tolerancePercent: tolerance }]
     : [
-        { form: 'sodium hydroxide', concentrationM: 1, tolerancePercent: DEFAULT_STOCK_TOLERANCE_PERCENT },
-        { form: 'hydrochloric acid', concentrationM: 1, tolerancePercent: DEFAULT_STOCK_TOLERANCE_PERCENT },
+        { form: 'sodium hydroxide', concentrationM: stockM, tolerancePercent: tolerance },
+        { form: 'hydrochloric acid', concentrationM: stockM, tolerancePercent: tolerance },
       ];
   let firstError: unknown;
   for (const { concentrationM, tolerancePercent, ...stock } of candidates) {
