@@ -14,7 +14,7 @@ import { formatRecipe, planRecipe } from '../chem/planner';
 import { compositionInputSchema, describeSchemaError, libraryFor, toComposition } from './compositionInput';
 import { runCalc } from './calc';
 import { DEMO_COMPOSITION } from './demo';
-import { recipeInputSchema, toRecipeInput } from './recipeInput';
+import { toRecipeInput } from './recipeInput';
 
 const USAGE = `Usage:
   proton-ledger solve [--json '<composition JSON>'] [--pretty]   read a composition (stdin if no --json), print the equilibrium
@@ -51,9 +51,7 @@ function solveCommand(raw: unknown): unknown {
 }
 
 function recipeCommand(raw: unknown) {
-  const parsed = recipeInputSchema.safeParse(raw);
-  if (!parsed.success) throw new CliFailure(describeSchemaError(parsed.error));
-  const { recipe, userSubstances } = toRecipeInput(parsed.data);
+  const { recipe, userSubstances } = toRecipeInput(raw);
   return planRecipe(recipe, libraryFor(userSubstances));
 }
 
@@ -100,7 +98,7 @@ export function run(args: string[], write: (text: string) => void): number {
     }
   } catch (e) {
     if (e instanceof ChemError) {
-      print({ error: { kind: e.kind, message: e.message, field: e.field, allowed: e.allowed } });
+      print({ error: { kind: e.kind, code: e.code, message: e.message, field: e.field, allowed: e.allowed } });
     } else if (e instanceof CliFailure) {
       print({ error: { kind: e.kind, message: e.message, field: e.field } });
     } else {

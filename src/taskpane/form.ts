@@ -3,6 +3,8 @@
  * (src/taskpane/pane.ts renders the form); the checks give a message per field, and nothing
  * is written to the workbook while any field has one.
  */
+import { ACTIVITY_MODELS, ChemError } from '../chem';
+import { readChoiceField, readNumberListField, readPurityField, readQuantity, requireNumberField } from '../chem/input';
 import { parseRangeText } from '../workbook/port';
 import type { PaneSettings } from '../workbook/port';
 
@@ -55,65 +57,13 @@ export interface TableRequest {
 
 export type FieldErrors = Partial<Record<FieldName, string>>;
 
-export type Checked = { readonly ok: true; readonly request: TableRequest } | { readonly ok: false; readonly errors: FieldErrors };
+/** A failed check: a message per field, and the code of each error the input reader raised (as the functions and the command line raise them). */
+export type Checked = { readonly ok: true; readonly request: TableRequest } | { readonly ok: false; readonly errors: FieldErrors; readonly codes: Partial<Record<FieldName, string>> };
 
 /** Most rows one table may have (every target pH × temperature × concentration). */
 export const MAX_TABLE_ROWS = 2000;
 /** Most pH values a start/stop/step series may produce before the row limit is checked. */
 const MAX_SERIES = 2000;
-export const ACTIVITY_MODELS: readonly PaneSettings['activityModel'][] = ['davies', 'ideal', 'bates-guggenheim'];
-
-/** Limits for the numbers the pane accepts; the worksheet functions check the chemistry. */
-export const LIMITS = {
-  ph: [0, 14],
-  temperatureC: [0, 100],
-  concentrationMm: [0.001, 5000],
-  saltMm: [0, 5000],
-  volumeMl: [0.001, 1e6],
-  titrantStockM: [0.001, 20],
-  partVolumeFraction: [0.1, 1],
-  purityPercent: [1, 100],
-} as const;
-
-/** Reads one number; accepts a decimal comma ("7,4") as many lab notebooks write it. */
-export function readNumber(text: string): number | null {
-  const t = text.trim().replace(/\s+/g, '');
-  if (t === '') return null;
-  const normal = /^[-+]?\d+,\d+$/.test(t) ? t.replace(',', '.') : t;
-  if (!/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(normal)) return null;
-  const n = Number(normal);
-  return Number.isFinite(n) ? n : null;
-}
-
-/**
- * Reads one number that may carry the field's own unit ("150 mM", "25 °C", "500 mL"): the
- * unit is dropped when it is the field's; any other unit makes it unreadable, so the field
- * says what to write instead of guessing a conversion.
- */
-export function readNumberIn(text: string, unit: string): number | null {
-  const u = unit.trim();
-  let t = text.trim();
-  if (u !== '') {
-    const spellings = u === '°C' ? ['°C', '° C', 'C'] : [u];
-    const found = spellings.find((sp) => t.toLowerCase().endsWith(sp.toLowerCase()) && (sp !== 'C' || /\d\s*C$/i.test(t)));
-    if (found) t = t.slice(0, t.length - found.length);
-  }
-  return readNumber(t);
-}
-
-/** Reads a list such as "6.8; 7.0; 7.2", "6.8 7.0 7.2" or "6.8, 7.0, 7.2". Null if any item is not a number. */
-export function readList(text: string, unit = ''): number[] | null {
-  const t = text.trim();
-  if (t === '') return [];
-  const parts = /;/.test(t) ? t.split(';') : /\s/.test(t.replace(/,\s+/g, ',')) ? t.split(/\s+/) : t.split(/,(?!\d)|,\s*|\s+/);
-  const out: number[] = [];
-  for (const p of parts.map((s) => s.trim()).filter((s) => s !== '')) {
-    const n = readNumberIn(p, unit);
-    if (n === null) return null;
-    out.push(n);
-  }
-  return out;
-}
 
 /** pH values from start to stop (inclusive) by step, rounded to the step's decimals. */
 export function phSeries(start: number, stop: number, step: number): number[] {
@@ -124,11 +74,6 @@ export function phSeries(start: number, stop: number, step: number): number[] {
   return out;
 }
 
-const range = (lo: number, hi: number) => `from ${lo} to ${hi}`;
-
-function inRange(value: number, [lo, hi]: readonly [number, number]): boolean {
-  return value >= lo && value <= hi;
-}
 
 /**
  * Checks the form. Each message names the field's meaning and what is allowed.
@@ -137,42 +82,66 @@ function inRange(value: number, [lo, hi]: readonly [number, number]): boolean {
  */
 export function checkForm(input: FormInput): Checked {
   const errors: FieldErrors = {};
+  const codes: Partial<Record<FieldName, string>> = {};
+  // The message of a failed read comes from the core's catalogue, naming the field as the pane labels it.
+  const fail = (field: FieldName, error: unknown) => {
+    if (!(error instanceof ChemError)) throw error;
+    errors[field] = error.message;
+    codes[field] = error.code;
+  };
   const need = (field: FieldName, what: string): string => {
     const v = input[field].trim();
     if (v === '') errors[field] = `Give ${what}.`;
     return v;
   };
-  const number = (field: FieldName, what: string, limits: readonly [number, number], unit: string): number => {
-    const n = readNumberIn(input[field], unit);
-    if (input[field].trim() === '') errors[field] = `Give ${what}.`;
-    else if (n === null) errors[field] = `${capital(what)} must be a number${unit ? ` in${unit}` : ''}.`;
-    else if (!inRange(n, limits)) errors[field] = `${capital(what)} must be ${range(limits[0], limits[1])}${unit}.`;
-    return n ?? NaN;
-  };
-  const list = (field: FieldName, what: string, limits: readonly [number, number], unit: string): number[] => {
-    const values = readList(input[field], unit);
-    if (values === null) errors[field] = `Write the ${what} as numbers separated by semicolons, e.g. "4; 25".`;
-    else if (values.length === 0) errors[field] = `Give at least one ${what.replace(/s$/, '')}.`;
-    else {
-      const bad = values.find((v) => !inRange(v, limits));
-      if (bad !== undefined) errors[field] = `${bad} is not allowed: each value must be ${range(limits[0], limits[1])}${unit}.`;
+  // Every number is read and checked by its declared field (src/chem/input), as the worksheet
+  // functions and the command line read it; messages name the field by its label here.
+  const number = (field: FieldName, declared: string, what: string, label: string = field): number => {
+    if (input[field].trim() === '') {
+      errors[field] = `Give ${what}.`;
+      return NaN;
     }
-    return unique(values ?? []);
+    try {
+      return requireNumberField(declared, input[field], label);
+    } catch (e) {
+      fail(field, e);
+      return NaN;
+    }
+  };
+  const list = (field: FieldName, declared: string, what: string, label: string): number[] => {
+    try {
+      const values = readNumberListField(declared, input[field], label);
+      if (values.length === 0) errors[field] = `Give at least one ${what}.`;
+      return unique(values);
+    } catch (e) {
+      fail(field, e);
+      return [];
+    }
   };
 
   const buffer = need('buffer', 'a buffer system');
   const form = need('form', 'the form you weigh');
-  const purityPercent = input.purityPercent.trim() === '' ? 100 : number('purityPercent', 'the purity of the form', LIMITS.purityPercent, ' %');
+  let purityPercent = 100;
+  try {
+    purityPercent = readPurityField('formPurityPercent', input.purityPercent, 'Form purity (%)') ?? 100;
+  } catch (e) {
+    fail('purityPercent', e);
+  }
   const titrant = need('titrant', 'a titrant');
-  const titrantStockM = number('titrantStockM', 'the titrant stock concentration', LIMITS.titrantStockM, ' M');
+  const titrantStockM = number('titrantStockM', 'titrant.concentrationM', 'the titrant stock concentration', 'Titrant stock (M)');
 
   let targetPhs: number[] = [];
   if (input.phMode === 'list') {
-    targetPhs = list('phList', 'target pH values', LIMITS.ph, '');
+    targetPhs = list('phList', 'targetPh', 'target pH', 'target pH');
   } else {
-    const start = number('phStart', 'the first pH', LIMITS.ph, '');
-    const stop = number('phStop', 'the last pH', LIMITS.ph, '');
-    const step = readNumber(input.phStep);
+    const start = number('phStart', 'targetPh', 'the first pH', 'first pH');
+    const stop = number('phStop', 'targetPh', 'the last pH', 'last pH');
+    let step: number | null = null;
+    try {
+      step = readQuantity('pH step', input.phStep, 'pH');
+    } catch {
+      step = null;
+    }
     if (input.phStep.trim() === '') errors.phStep = 'Give a pH step, e.g. 0.1.';
     else if (step === null || step <= 0) errors.phStep = 'The pH step must be a number above 0.';
     else if (step > 14) errors.phStep = 'The pH step must be at most 14.';
@@ -183,19 +152,23 @@ export function checkForm(input: FormInput): Checked {
     }
   }
 
-  const useTemperaturesC = list('useTemperaturesC', 'temperatures of use', LIMITS.temperatureC, ' °C');
-  const concentrationsMm = list('concentrationsMm', 'buffer concentrations', LIMITS.concentrationMm, ' mM');
+  const useTemperaturesC = list('useTemperaturesC', 'useTemperatureC', 'temperature of use', 'temperature of use');
+  const concentrationsMm = list('concentrationsMm', 'concentrationMm', 'buffer concentration', 'buffer concentration');
   const saltForm = input.saltForm.trim();
   let saltMm = 0;
   if (saltForm !== '' || input.saltMm.trim() !== '') {
-    saltMm = number('saltMm', 'the salt concentration', LIMITS.saltMm, ' mM');
+    saltMm = number('saltMm', 'saltMm', 'the salt concentration', 'salt concentration');
     if (saltForm === '' && saltMm > 0) errors.saltForm = 'Name the salt, or clear its concentration.';
   }
-  const volumeMl = number('volumeMl', 'the final volume', LIMITS.volumeMl, ' mL');
-  const benchTemperatureC = number('benchTemperatureC', 'the bench temperature', LIMITS.temperatureC, ' °C');
-  const partVolumeFraction = number('partVolumeFraction', 'the part volume for adjusting', LIMITS.partVolumeFraction, '');
-  const activityModel = input.activityModel as PaneSettings['activityModel'];
-  if (!ACTIVITY_MODELS.includes(activityModel)) errors.activityModel = `Choose one of: ${ACTIVITY_MODELS.join(', ')}.`;
+  const volumeMl = number('volumeMl', 'volumeMl', 'the final volume', 'final volume');
+  const benchTemperatureC = number('benchTemperatureC', 'benchTemperatureC', 'the bench temperature', 'bench temperature');
+  const partVolumeFraction = number('partVolumeFraction', 'partVolumeFraction', 'the part volume for adjusting', 'part volume for adjusting');
+  let activityModel = ACTIVITY_MODELS[0];
+  try {
+    activityModel = readChoiceField('activityModel', input.activityModel, 'activity model') as PaneSettings['activityModel'];
+  } catch (e) {
+    fail('activityModel', e);
+  }
   const userSubstances = input.userSubstances.trim();
   if (userSubstances !== '' && parseRangeText(userSubstances) === null) {
     errors.userSubstances = "Give a range such as 'My substances'!A2:J20 (quote a sheet name with spaces), or leave it blank.";
@@ -205,7 +178,7 @@ export function checkForm(input: FormInput): Checked {
   if (Object.keys(errors).length === 0 && rows > MAX_TABLE_ROWS) {
     errors[input.phMode === 'list' ? 'phList' : 'phStep'] = `That makes ${rows} rows (pH × temperatures × concentrations); at most ${MAX_TABLE_ROWS}.`;
   }
-  if (Object.keys(errors).length > 0) return { ok: false, errors };
+  if (Object.keys(errors).length > 0) return { ok: false, errors, codes };
   return {
     ok: true,
     request: {
@@ -232,9 +205,6 @@ function unique(values: readonly number[]): number[] {
   return values.filter((v, i) => values.indexOf(v) === i);
 }
 
-function capital(s: string): string {
-  return s.charAt(0).toUpperCase() + s.slice(1);
-}
 
 /** Defaults of a fresh form, with the document's settings laid over them. */
 export function defaultInput(settings: Partial<PaneSettings> = {}): FormInput {

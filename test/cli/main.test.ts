@@ -95,7 +95,8 @@ describe('proton-ledger recipe and substances', () => {
   it('refuses a misspelt field', () => {
     const { code, out } = call(['recipe', '--json', JSON.stringify({ ...recipe, volumeML: 5 })]);
     expect(code).toBe(2);
-    expect(out.error.message).toMatch(/Unrecognized key/);
+    expect(out.error).toMatchObject({ code: 'unknownField', field: 'volumeML' });
+    expect(out.error.message).toMatch(/did you mean "volumeMl"/);
   });
 
   it('lists the library as a table and as JSON', () => {

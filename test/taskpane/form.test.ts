@@ -1,31 +1,25 @@
-import { checkForm, defaultInput, readList, readNumber, readNumberIn } from '../../src/taskpane/form';
+import { checkForm, defaultInput } from '../../src/taskpane/form';
 
-describe('pane form: numbers as people type them', () => {
-  it('reads decimal commas and the field\'s own unit', () => {
-    expect(readNumber('7,4')).toBe(7.4);
-    expect(readNumberIn('150 mM', ' mM')).toBe(150);
-    expect(readNumberIn('25 °C', ' °C')).toBe(25);
-    expect(readNumberIn('25C', ' °C')).toBe(25);
-    expect(readNumberIn('500mL', ' mL')).toBe(500);
-    expect(readList('4 °C; 25 °C', ' °C')).toEqual([4, 25]);
-  });
-
-  it('refuses another unit rather than guess a conversion', () => {
-    expect(readNumberIn('0.15 M', ' mM')).toBeNull();
-    expect(readNumberIn('1 L', ' mL')).toBeNull();
-  });
-
+describe('pane form: numbers as people type them (the one input reader)', () => {
   it('accepts a form typed with units and decimal commas', () => {
-    const checked = checkForm({ ...defaultInput(), saltMm: '150 mM', volumeMl: '500 mL', benchTemperatureC: '21,5 °C', useTemperaturesC: '4 °C; 25 °C' });
+    const checked = checkForm({ ...defaultInput(), saltMm: '150 mM', volumeMl: '0,5 L', benchTemperatureC: '21,5 °C', useTemperaturesC: '4 °C; 25 °C', concentrationsMm: '0,025 M' });
     expect(checked.ok).toBe(true);
+    if (!checked.ok) return;
+    expect(checked.request.volumeMl).toBe(500);
+    expect(checked.request.concentrationsMm).toEqual([25]);
+    expect(checked.request.benchTemperatureC).toBe(21.5);
   });
 
-  it('says which unit to use when a field gets another', () => {
-    const checked = checkForm({ ...defaultInput(), volumeMl: '0.5 L', saltMm: 'NaN', benchTemperatureC: '-20' });
+  it('reads "7,4" in a pH list as one pH, as the functions do', () => {
+    const checked = checkForm({ ...defaultInput(), phMode: 'list', phList: '7,4' });
+    expect(checked.ok && checked.request.targetPhs).toEqual([7.4]);
+  });
+
+  it('names the field and gives the reader’s code when a field gets another unit, no number or a value out of range', () => {
+    const checked = checkForm({ ...defaultInput(), volumeMl: '5 mM', saltMm: 'NaN', benchTemperatureC: '-20', titrantStockM: '25' });
     expect(checked.ok).toBe(false);
     if (checked.ok) return;
-    expect(checked.errors.volumeMl).toMatch(/must be a number in mL/);
-    expect(checked.errors.saltMm).toMatch(/must be a number in mM/);
-    expect(checked.errors.benchTemperatureC).toMatch(/must be from/);
+    expect(checked.codes).toEqual({ volumeMl: 'wrongUnit', saltMm: 'notANumber', benchTemperatureC: 'outOfRange', titrantStockM: 'outOfRange' });
+    expect(checked.errors.volumeMl).toMatch(/final volume: the unit "mM" does not fit/);
   });
 });

@@ -89,7 +89,7 @@ describe('recipe table in the preview workbook', () => {
 
     const bad = await buildRecipeTable(port, { ...defaultInput(), purityPercent: '120' }, { version: '0.1.0' });
     expect(bad.ok).toBe(false);
-    if (!bad.ok) expect(bad.errors.purityPercent).toMatch(/purity of the form must be from 1 to 100 %/i);
+    if (!bad.ok) expect(bad.errors.purityPercent).toMatch(/Form purity \(%\) is 120; allowed: 1 to 100 %/);
   });
 
   test('misspelt or mismatched names: the library nearest names under each field, and nothing written', async () => {
@@ -140,7 +140,7 @@ describe('recipe table in the preview workbook', () => {
     if (result.ok) return;
     expect(result.errors.phStop).toMatch(/not be below the first/);
     expect(result.errors.volumeMl).toMatch(/must be a number/);
-    expect(result.errors.useTemperaturesC).toMatch(/140 is not allowed: each value must be from 0 to 100 °C/);
+    expect(result.errors.useTemperaturesC).toMatch(/temperature of use is 140; allowed: 0 to 100 °C/);
     expect(book.sheetNames()).toEqual(['Notes']);
   });
 

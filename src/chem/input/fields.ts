@@ -12,7 +12,7 @@ import { ChemError, MESSAGES } from '../errors';
 import { MAX_TARGET_PH, MIN_TARGET_PH } from '../titration';
 import { MAX_FORM_CONCENTRATION_M } from '../library/lookup';
 import { closestNames } from '../library/names';
-import { BASE_UNIT, Dimension, readQuantity, splitList, unitsOf } from './quantity';
+import { BASE_UNIT, Dimension, readQuantity, readQuantityList, splitList, unitsOf } from './quantity';
 
 interface FieldBase {
   /** Path in the command line's JSON, and the name in an options range. */
@@ -237,6 +237,18 @@ export function requireNumberField(name: string, value: unknown, asWritten: stri
     throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(asWritten, `a number, ${allowedOf(f)}`), asWritten, allowedOf(f));
   }
   return n;
+}
+
+/**
+ * A list of values for one number field ("4; 25", "4 °C; 25 °C", "7,2; 7,4"), each read and
+ * checked as the field; blank is an empty list.
+ */
+export function readNumberListField(name: string, value: unknown, asWritten: string = name): number[] {
+  const f = numberField(name);
+  return readQuantityList(asWritten, value, f.dimension, f.unit || BASE_UNIT[f.dimension]).map((n) => {
+    if (n < f.min || n > f.max || (f.minExclusive && n === f.min)) throw rangeError(f, asWritten, n);
+    return n;
+  });
 }
 
 /**
