@@ -22,6 +22,7 @@ import { LibraryForm, SubstanceRecord } from '../library/types';
 import { SubstanceLibrary, defaultLibrary } from '../library/lookup';
 import { titrantFromForm } from '../library/titrant';
 import { nameKey } from '../library/names';
+import { conductivityAt, conductivityOf } from '../conductivity';
 import { idealOsmolarity } from '../osmolarity';
 import { report, speciate, solvePh, solvePrepared } from '../speciation';
 import { findStrongIon } from '../strongIons';
@@ -114,6 +115,8 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const result = report(prepared, state, finished);
   const cap = capacityOfPrepared(prepared, state.pH);
   const warnings = [...result.warnings];
+  const conductivity = conductivityOf(result);
+  warnings.push(...conductivity.warnings);
   const predictions = {
     useTemperatureC: s.useT,
     pHAtUse: result.pH,
@@ -125,6 +128,8 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
     betaMPerPh: cap.betaMPerPh,
     pHPerDegreeC: dpHdT(finished, s.useT),
     pHAfterTenfoldDilution: solvePh(scaleComposition(finished, 0.1)),
+    conductivityMsPerCm: conductivity.conductivityMsPerCm,
+    conductivity25MsPerCm: s.useT === 25 ? conductivity.conductivityMsPerCm : conductivityAt(finished, 25).conductivityMsPerCm,
   };
 
   const components = componentsOf(s, made, madeVolumeL, titration);
@@ -136,6 +141,8 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
           stockPhAtUse: solvePh(made.composition),
           stockPerBatchMl: (s.volumeL * 1000) / fold,
           waterPerBatchMl: s.volumeL * 1000 * (1 - 1 / fold),
+          stockConductivityMsPerCm: conductivityAt(made.composition).conductivityMsPerCm,
+          stockConductivity25MsPerCm: conductivityAt(made.composition, 25).conductivityMsPerCm,
         }
       : undefined;
 

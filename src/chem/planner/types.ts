@@ -142,6 +142,10 @@ export interface RecipePredictions {
   readonly pHPerDegreeC: number;
   /** pH after a tenfold dilution with water, at the temperature of use. */
   readonly pHAfterTenfoldDilution: number;
+  /** Conductivity of the finished buffer at the temperature of use, mS/cm (uncompensated, as a meter reads it there). */
+  readonly conductivityMsPerCm: number;
+  /** Conductivity of the finished buffer at 25 °C, mS/cm. */
+  readonly conductivity25MsPerCm: number;
 }
 
 /** The stock route's extra numbers. */
@@ -154,6 +158,9 @@ export interface StockPlan {
   /** Stock and water for one batch of working buffer, mL. */
   readonly stockPerBatchMl: number;
   readonly waterPerBatchMl: number;
+  /** Conductivity of the undiluted stock at the temperature of use and at 25 °C, mS/cm (the working dilution's are in the predictions). */
+  readonly stockConductivityMsPerCm: number;
+  readonly stockConductivity25MsPerCm: number;
 }
 
 /** The planner's answer. */

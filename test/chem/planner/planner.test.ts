@@ -1,4 +1,4 @@
-import { ChemError, Composition, scaleComposition, solvePh, speciate } from '../../../src/chem';
+import { ChemError, Composition, conductivityAt, scaleComposition, solvePh, speciate } from '../../../src/chem';
 import { createLibrary, defaultLibrary, findForm } from '../../../src/chem/library';
 import { RecipeInput, RecipePlan, formatRecipe, planRecipe } from '../../../src/chem/planner';
 import { volumeText } from '../../../src/chem/planner/protocol';
@@ -292,5 +292,24 @@ describe('volumes as a pipette or cylinder is read', () => {
     [200000, '200 L'],
   ])('%p mL reads %p', (ml, text) => {
     expect(volumeText(ml)).toBe(text);
+  });
+});
+
+describe('conductivity predictions', () => {
+  it('gives κ of the finished buffer at the temperature of use and at 25 °C, the same as the core for the same composition', () => {
+    const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, useTemperatureC: 4, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'NaCl', concentrationMm: 150 }] });
+    expect(plan.predictions.conductivityMsPerCm).toBeCloseTo(conductivityAt(plan.composition).conductivityMsPerCm, 12);
+    expect(plan.predictions.conductivity25MsPerCm).toBeCloseTo(conductivityAt(plan.composition, 25).conductivityMsPerCm, 12);
+    // A cold buffer reads lower than at 25 °C: ions move about 2 % per °C slower.
+    expect(plan.predictions.conductivityMsPerCm).toBeLessThan(0.7 * plan.predictions.conductivity25MsPerCm);
+    expect(formatRecipe(plan)).toMatch(/conductivity\s+\d+(\.\d+)? mS\/cm at 4 °C; \d+(\.\d+)? mS\/cm at 25 °C/);
+  });
+
+  it('gives the stock its own κ: above the working dilution, below fold × it (ions slow down as the stock crowds them)', () => {
+    const plan = planRecipe({ buffer: 'phosphate', targetPh: 7.4, concentrationMm: 50, volumeMl: 1000, route: 'stock', stock: { fold: 10 }, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 5 } });
+    const working = plan.predictions.conductivityMsPerCm;
+    expect(plan.stock!.stockConductivityMsPerCm).toBeGreaterThan(working);
+    expect(plan.stock!.stockConductivityMsPerCm).toBeLessThan(10 * working);
+    expect(plan.stock!.stockConductivity25MsPerCm).toBeCloseTo(plan.stock!.stockConductivityMsPerCm, 12);
   });
 });
