@@ -52,6 +52,8 @@ export const MESSAGES = {
     `${field}: "${form}" cannot serve as a titrant (it adds more than one acid–base system).`,
   saltTargetUnreachable: (what: string, target: number, reached: number) =>
     `The ${what} target ${target} cannot be met: without any added salt the buffer already gives ${reached}.`,
+  saltTargetBeyondSalt: (what: string, target: number, reached: number, salt: string, maxSaltM: number) =>
+    `The ${what} target ${target} cannot be met: even ${maxSaltM} M of ${salt} gives only ${reached}.`,
 } as const;
 
 export type MessageCode = keyof typeof MESSAGES;

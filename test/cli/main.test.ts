@@ -82,6 +82,13 @@ describe('proton-ledger solve with forms by name', () => {
 describe('proton-ledger recipe and substances', () => {
   const recipe = { buffer: 'tris', targetPh: 7.5, concentrationMm: 20, volumeMl: 1000, titrant: { form: 'HCl', concentrationM: 1 } };
 
+  it('accepts a salt target by conductivity and prints the predicted conductivity', () => {
+    const { code, out } = call(['recipe', '--json', JSON.stringify({ ...recipe, saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, conductivityTemperatureC: 20 } })]);
+    expect(code).toBe(0);
+    expect(conductivityAt(out.composition, 20).conductivityMsPerCm).toBeCloseTo(15, 6);
+    expect(out.predictions.conductivity25MsPerCm).toBeGreaterThan(15);
+  });
+
   it('prints the plan as JSON', () => {
     const { code, out } = call(['recipe', '--json', JSON.stringify(recipe)]);
     expect(code).toBe(0);

@@ -9,8 +9,8 @@
  * bench temperature with every concentration raised by 1/(part-volume fraction), because
  * at adjustment everything weighed and titrated sits in that smaller volume. A stock is
  * the finished buffer times its fold, so its dilution lands on target by construction.
- * A salt target is met by bisection on the salt concentration (ionic strength and ideal
- * osmolarity rise with salt), re-solving the titrant at each step.
+ * A salt target is met by bisection on the salt concentration (ionic strength, ideal
+ * osmolarity and conductivity rise with salt), re-solving the titrant at each step.
  */
 import { ActivityModel, parseActivityModel } from '../activity';
 import { capacityOfPrepared, scaleComposition } from '../capacity';
@@ -22,7 +22,7 @@ import { LibraryForm, SubstanceRecord } from '../library/types';
 import { SubstanceLibrary, defaultLibrary } from '../library/lookup';
 import { titrantFromForm } from '../library/titrant';
 import { nameKey } from '../library/names';
-import { conductivityAt, conductivityOf } from '../conductivity';
+import { CONDUCTIVITY_MAX_C, CONDUCTIVITY_MIN_C, conductivityAt, conductivityOf } from '../conductivity';
 import { idealOsmolarity } from '../osmolarity';
 import { report, speciate, solvePh, solvePrepared } from '../speciation';
 import { findStrongIon } from '../strongIons';
@@ -372,6 +372,7 @@ function solveWithSaltTarget(s: Settled): RouteResult {
   const target = s.input.saltTarget;
   if (!target) return routeResult(s, 0);
   s.library.findForm(target.form);
+  if (target.conductivityMsPerCm !== undefined) return solveWithConductivityTarget(s, target);
   const byIonicStrength = target.ionicStrengthM !== undefined;
   if (byIonicStrength === (target.idealOsmolarityMosm !== undefined)) {
     throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('saltTarget', 'either ionicStrengthM or idealOsmolarityMosm'), 'saltTarget', 'ionicStrengthM or idealOsmolarityMosm');
@@ -395,6 +396,41 @@ function solveWithSaltTarget(s: Settled): RouteResult {
   for (let i = 0; i < SALT_TARGET_STEPS && hi - lo > 1e-12 * hi; i++) {
     const mid = 0.5 * (lo + hi);
     if (measure(routeResult(s, mid)) < goal) lo = mid;
+    else hi = mid;
+  }
+  return routeResult(s, 0.5 * (lo + hi));
+}
+
+/**
+ * Adds the salt-target salt until the finished buffer's conductivity, read at the stated
+ * temperature, reaches the target. Conductivity rises with every added mole of a salt that
+ * dissociates (each ion adds c·λ, and λ falls with I far more slowly than c rises), so the
+ * bisection keeps the other salt targets' rules: a target the buffer already passes without
+ * salt, or one that the largest salt amount tried cannot reach, is infeasible, never a success.
+ */
+function solveWithConductivityTarget(s: Settled, target: NonNullable<RecipeInput['saltTarget']>): RouteResult {
+  if (target.ionicStrengthM !== undefined || target.idealOsmolarityMosm !== undefined) {
+    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('saltTarget', 'one goal only: ionicStrengthM, idealOsmolarityMosm or conductivityMsPerCm'), 'saltTarget', 'one of ionicStrengthM, idealOsmolarityMosm, conductivityMsPerCm');
+  }
+  const goal = requireNumber('saltTarget.conductivityMsPerCm', target.conductivityMsPerCm, 0, 1000, '0 to 1000 mS/cm');
+  const readAtC = requireNumber('saltTarget.conductivityTemperatureC', target.conductivityTemperatureC ?? s.useT, CONDUCTIVITY_MIN_C, CONDUCTIVITY_MAX_C, `${CONDUCTIVITY_MIN_C} to ${CONDUCTIVITY_MAX_C} °C`);
+  const what = `conductivity (mS/cm at ${readAtC} °C)`;
+  const measure = (saltM: number) => conductivityAt(routeResult(s, saltM).composition, readAtC).conductivityMsPerCm;
+  const shown = (k: number) => Number(k.toPrecision(4));
+  const reached = measure(0);
+  if (reached > goal) {
+    throw new ChemError('infeasible-target', 'saltTargetUnreachable', MESSAGES.saltTargetUnreachable(what, goal, shown(reached)), 'saltTarget', `a target above ${shown(reached)}`);
+  }
+  const most = measure(MAX_SALT_TARGET_M);
+  if (most < goal) {
+    const salt = s.library.findForm(target.form).name;
+    throw new ChemError('infeasible-target', 'saltTargetBeyondSalt', MESSAGES.saltTargetBeyondSalt(what, goal, shown(most), salt, MAX_SALT_TARGET_M), 'saltTarget', `a target up to ${shown(most)}`);
+  }
+  let lo = 0;
+  let hi = MAX_SALT_TARGET_M;
+  for (let i = 0; i < SALT_TARGET_STEPS && hi - lo > 1e-12 * hi; i++) {
+    const mid = 0.5 * (lo + hi);
+    if (measure(mid) < goal) lo = mid;
     else hi = mid;
   }
   return routeResult(s, 0.5 * (lo + hi));

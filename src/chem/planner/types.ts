@@ -36,6 +36,10 @@ export interface SaltTarget {
   readonly ionicStrengthM?: number;
   /** Target ideal osmolarity, mOsm/L. */
   readonly idealOsmolarityMosm?: number;
+  /** Target conductivity, mS/cm (instead of the two above), read at `conductivityTemperatureC`. */
+  readonly conductivityMsPerCm?: number;
+  /** Temperature at which the conductivity target is read, °C, 0–60 (default: the temperature of use). */
+  readonly conductivityTemperatureC?: number;
 }
 
 /** Everything the planner needs. Units are in the names. */

@@ -238,6 +238,10 @@ describe('recipe planner: bad input names the field and what is allowed', () => 
     ['a form purity of 120 %', { formPurityPercent: 120 }, /formPurityPercent is 120; allowed: 1 to 100 %/, 'invalid-input'],
     ['a salt target already passed', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 10 } }, /already gives/, 'infeasible-target'],
     ['a salt target with both goals', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 300, ionicStrengthM: 0.1 } }, /either ionicStrengthM or idealOsmolarityMosm/, 'invalid-input'],
+    ['a conductivity target already passed', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 0.1 } }, /conductivity \(mS\/cm at 25 °C\) target 0.1 cannot be met: without any added salt the buffer already gives/, 'infeasible-target'],
+    ['a conductivity target beyond the most salt tried', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 900 } }, /target 900 cannot be met: even 5 M of sodium chloride gives only/, 'infeasible-target'],
+    ['a conductivity target beside another goal', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, ionicStrengthM: 0.1 } }, /one goal only/, 'invalid-input'],
+    ['a conductivity target read at 80 °C', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, conductivityTemperatureC: 80 } }, /saltTarget\.conductivityTemperatureC is 80; allowed: 0 to 60 °C/, 'invalid-input'],
   ];
   it.each(cases)('given %s', (_label, change, message, kind) => {
     let caught: unknown;
@@ -311,5 +315,22 @@ describe('conductivity predictions', () => {
     expect(plan.stock!.stockConductivityMsPerCm).toBeGreaterThan(working);
     expect(plan.stock!.stockConductivityMsPerCm).toBeLessThan(10 * working);
     expect(plan.stock!.stockConductivity25MsPerCm).toBeCloseTo(plan.stock!.stockConductivityMsPerCm, 12);
+  });
+});
+
+describe('salt target by conductivity', () => {
+  it('adds NaCl until the finished buffer reads 15.0 mS/cm at 20 °C (used at 25 °C), and the plan\'s own composition reads it back', () => {
+    const plan = planRecipe({ buffer: 'tris', targetPh: 7.5, concentrationMm: 20, volumeMl: 1000, form: 'tris base', titrant: { form: 'HCl', concentrationM: 1 }, saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, conductivityTemperatureC: 20 } });
+    expect(conductivityAt(plan.composition, 20).conductivityMsPerCm).toBeCloseTo(15, 6);
+    const salt = plan.components.find((c) => c.role === 'salt');
+    // About 150 mM NaCl makes 15 mS/cm at 20 °C (κ ≈ 16 mS/cm for 1 % NaCl, CRC Handbook): the amount is of that order.
+    expect(salt!.concentrationMm).toBeGreaterThan(100);
+    expect(salt!.concentrationMm).toBeLessThan(200);
+    expect(Math.abs(plan.predictions.pHAtUse - 7.5)).toBeLessThan(ROUND_TRIP_PH);
+  });
+
+  it('reads the target at the temperature of use when no temperature is given', () => {
+    const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, useTemperatureC: 4, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, saltTarget: { form: 'KCl', conductivityMsPerCm: 10 } });
+    expect(plan.predictions.conductivityMsPerCm).toBeCloseTo(10, 6);
   });
 });
