@@ -29,6 +29,10 @@
  * References:
  * - P. Vanýsek, "Ionic conductivity and diffusion at infinite dilution", CRC Handbook of
  *   Chemistry and Physics (cations read in a copy of the 87th ed. table; anions from memory).
+ * - Lange's Handbook of Chemistry, 15th ed., Table 8.32 (read in a public transcription):
+ *   the anions, and a second copy of most cations.
+ * - P. H. Barry, J. Neurosci. Methods 51 (1994) 107, ion mobility table relative to K⁺ (read
+ *   in a public transcription): buffer ions.
  * - R. B. McCleskey, D. K. Nordstrom, J. N. Ryan, J. W. Ball, Geochim. Cosmochim. Acta 77
  *   (2012) 369, Table 1 (read in two public transcriptions that agree for every ion used
  *   here, except where an entry says one copy).
@@ -77,6 +81,9 @@ interface IonEntry {
 }
 
 const CRC = 'Vanýsek, CRC Handbook, Ionic conductivity and diffusion at infinite dilution';
+const LANGE = "Lange's Handbook of Chemistry, 15th ed., Table 8.32 (limiting equivalent conductances, 25 °C)";
+const HIROKAWA = 'Hirokawa et al. isotachophoresis tables, limiting mobility';
+const BARRY = 'Barry, JPCalc ion mobility table (J. Neurosci. Methods 51 (1994) 107), relative to K⁺';
 const poly = (a: number, b: number, c: number): Polynomial => ({ a, b, c });
 
 /**
@@ -87,10 +94,10 @@ const poly = (a: number, b: number, c: number): Polynomial => ({ a, b, c });
 const STRONG_ION_LAMBDA: Readonly<Record<string, IonEntry>> = {
   /** H⁺ 349.65. CRC (read in a copy); shape: McCleskey 2012 Table 1 (one copy). */
   'H+': { lambda25: 349.65, shape: poly(0.01414, 5.355, 224.2), source: `${CRC} (read); temperature: McCleskey et al. 2012 Table 1 (one copy)` },
-  /** OH⁻ 198. CRC (memory); PHREEQC's D = 5.27e-9 m²/s gives 197.9. Shape: McCleskey 2012 (one copy). */
-  'OH-': { lambda25: 198, shape: poly(0.003396, 2.925, 121.3), source: `${CRC} (memory; PHREEQC database D gives 197.9); temperature: McCleskey et al. 2012 Table 1 (one copy)` },
-  /** Na⁺ 50.08. CRC (memory); PHREEQC's D = 1.33e-9 gives 49.9. Shape: McCleskey 2012 (two copies). */
-  'Na+': { lambda25: 50.08, shape: poly(0.003763, 0.877, 26.23), source: `${CRC} (memory; PHREEQC database D gives 49.9); temperature: McCleskey et al. 2012 Table 1` },
+  /** OH⁻ 198. Lange 8.32 (read) and CRC (memory) agree; PHREEQC's D = 5.27e-9 m²/s gives 197.9. Shape: McCleskey 2012 (one copy). */
+  'OH-': { lambda25: 198, shape: poly(0.003396, 2.925, 121.3), source: `${LANGE} (read; CRC agrees, PHREEQC database D gives 197.9); temperature: McCleskey et al. 2012 Table 1 (one copy)` },
+  /** Na⁺ 50.08. CRC (memory); Lange 8.32 gives 50.11 (read); PHREEQC's D = 1.33e-9 gives 49.9. Shape: McCleskey 2012 (two copies). */
+  'Na+': { lambda25: 50.08, shape: poly(0.003763, 0.877, 26.23), source: `${CRC} (memory; Lange 50.11, PHREEQC database D gives 49.9); temperature: McCleskey et al. 2012 Table 1` },
   /** K⁺ 73.48. CRC (read in a copy). Shape: McCleskey 2012 (two copies). */
   'K+': { lambda25: 73.48, shape: poly(0.003046, 1.261, 40.7), source: `${CRC} (read); temperature: McCleskey et al. 2012 Table 1` },
   /** Li⁺ 38.66. CRC (read). Shape: McCleskey 2012 (one copy). */
@@ -101,16 +108,16 @@ const STRONG_ION_LAMBDA: Readonly<Record<string, IonEntry>> = {
   'Mg2+': { lambda25: 106.0, shape: poly(0.01068, 1.695, 57.16), source: `${CRC} (read, ½Mg²⁺ 53.0); temperature: McCleskey et al. 2012 Table 1` },
   /** Ca²⁺ 2 × 59.47. CRC (read). Shape: McCleskey 2012 (two copies). */
   'Ca2+': { lambda25: 118.94, shape: poly(0.009645, 1.984, 62.28), source: `${CRC} (read, ½Ca²⁺ 59.47); temperature: McCleskey et al. 2012 Table 1` },
-  /** Cl⁻ 76.31. CRC (memory); PHREEQC's D = 2.03e-9 gives 76.2; Hirokawa's mobility 7.91e-8 gives 76.3. Shape: McCleskey 2012 (two copies). */
-  'Cl-': { lambda25: 76.31, shape: poly(0.003817, 1.337, 40.99), source: `${CRC} (memory; PHREEQC D gives 76.2, Hirokawa mobility 76.3); temperature: McCleskey et al. 2012 Table 1` },
-  /** Br⁻ 78.1. CRC (memory). Shape: McCleskey 2012 (one copy). */
-  'Br-': { lambda25: 78.1, shape: poly(0.000709, 1.477, 40.91), source: `${CRC} (memory); temperature: McCleskey et al. 2012 Table 1 (one copy)` },
-  /** I⁻ 76.8. CRC (memory). */
-  'I-': { lambda25: 76.8, source: `${CRC} (memory)` },
-  /** NO₃⁻ 71.42. CRC (memory); PHREEQC's D = 1.9e-9 gives 71.4. Shape: McCleskey 2012 (two copies). */
-  'NO3-': { lambda25: 71.42, shape: poly(0.001925, 1.214, 39.9), source: `${CRC} (memory; PHREEQC D gives 71.4); temperature: McCleskey et al. 2012 Table 1` },
-  /** ClO₄⁻ 67.3. CRC (memory). */
-  'ClO4-': { lambda25: 67.3, source: `${CRC} (memory)` },
+  /** Cl⁻ 76.31. Lange 8.32 (read) and CRC (memory) agree; PHREEQC's D = 2.03e-9 gives 76.2; Hirokawa's mobility 7.91e-8 gives 76.3. Shape: McCleskey 2012 (two copies). */
+  'Cl-': { lambda25: 76.31, shape: poly(0.003817, 1.337, 40.99), source: `${LANGE} (read; CRC agrees, PHREEQC D gives 76.2, Hirokawa mobility 76.3); temperature: McCleskey et al. 2012 Table 1` },
+  /** Br⁻ 78.1. Lange 8.32 (read) and CRC (memory) agree. Shape: McCleskey 2012 (one copy). */
+  'Br-': { lambda25: 78.1, shape: poly(0.000709, 1.477, 40.91), source: `${LANGE} (read; CRC agrees); temperature: McCleskey et al. 2012 Table 1 (one copy)` },
+  /** I⁻ 76.9. Lange 8.32 (read); CRC gives 76.8 (memory). */
+  'I-': { lambda25: 76.9, source: `${LANGE} (read; CRC 76.8)` },
+  /** NO₃⁻ 71.42. Lange 8.32 (read) and CRC (memory) agree; PHREEQC's D = 1.9e-9 gives 71.4. Shape: McCleskey 2012 (two copies). */
+  'NO3-': { lambda25: 71.42, shape: poly(0.001925, 1.214, 39.9), source: `${LANGE} (read; CRC agrees, PHREEQC D gives 71.4); temperature: McCleskey et al. 2012 Table 1` },
+  /** ClO₄⁻ 67.3. Lange 8.32 (read) and CRC (memory) agree. */
+  'ClO4-': { lambda25: 67.3, source: `${LANGE} (read; CRC agrees)` },
 };
 
 /**
@@ -118,38 +125,52 @@ const STRONG_ION_LAMBDA: Readonly<Record<string, IonEntry>> = {
  * the substance library). Per mole of ion.
  */
 const SYSTEM_ION_LAMBDA: Readonly<Record<string, IonEntry>> = {
-  /** H₂PO₄⁻ 36. CRC (memory; a public transcription of the same table gives 36.0); PHREEQC's D = 0.846e-9 gives 31.8. */
-  'phosphate|-1': { lambda25: 36, source: `${CRC} (memory and one copy; PHREEQC D gives 31.8)` },
-  /** HPO₄²⁻ 2 × 57. CRC (memory); PHREEQC's D = 0.69e-9 gives 2 × 51.8. */
-  'phosphate|-2': { lambda25: 114, source: `${CRC} (memory, ½HPO₄²⁻ 57; PHREEQC D gives 2 × 51.8)` },
-  /** PO₄³⁻ 3 × 69.0. CRC (memory); PHREEQC's D = 0.612e-9 gives 3 × 68.9. */
-  'phosphate|-3': { lambda25: 207, source: `${CRC} (memory, ⅓PO₄³⁻ 69.0; PHREEQC D gives 3 × 68.9)` },
-  /** HCO₃⁻ 44.5. CRC (memory); PHREEQC's D = 1.18e-9 gives 44.3. */
-  'carbonate|-1': { lambda25: 44.5, source: `${CRC} (memory; PHREEQC D gives 44.3)` },
-  /** CO₃²⁻ 2 × 69.3. CRC (memory); PHREEQC's D = 0.955e-9 gives 2 × 71.7. */
-  'carbonate|-2': { lambda25: 138.6, source: `${CRC} (memory, ½CO₃²⁻ 69.3; PHREEQC D gives 2 × 71.7)` },
-  /** HSO₄⁻ 52. CRC (memory); PHREEQC's D = 1.33e-9 gives 49.9. */
-  'sulfate|-1': { lambda25: 52, source: `${CRC} (memory; PHREEQC D gives 49.9)` },
-  /** SO₄²⁻ 2 × 80.0. CRC (memory); PHREEQC's D = 1.07e-9 gives 2 × 80.4. Shape: McCleskey 2012 (two copies). */
-  'sulfate|-2': { lambda25: 160, source: `${CRC} (memory, ½SO₄²⁻ 80.0; PHREEQC D gives 2 × 80.4); temperature: McCleskey et al. 2012 Table 1` },
+  /** H₂PO₄⁻ 33. Lange 8.32 (read); CRC gives 36 (memory, and one public copy), PHREEQC's D = 0.846e-9 gives 31.8: the handbooks disagree, the diffusion value sides with Lange. */
+  'phosphate|-1': { lambda25: 33, source: `${LANGE} (read, 33; CRC gives 36, PHREEQC D gives 31.8)` },
+  /** HPO₄²⁻ 2 × 57. CRC (memory); PHREEQC's D = 0.69e-9 gives 2 × 51.8. Lange's copy lists 33, which no other source supports. */
+  'phosphate|-2': { lambda25: 114, source: `${CRC} (memory, ½HPO₄²⁻ 57; PHREEQC D gives 2 × 51.8; Lange's 33 not used)` },
+  /** PO₄³⁻ 3 × 69. Lange 8.32 (read) and CRC (memory) agree; PHREEQC's D = 0.612e-9 gives 3 × 68.9. */
+  'phosphate|-3': { lambda25: 207, source: `${LANGE} (read, ⅓PO₄³⁻ 69; CRC and PHREEQC agree)` },
+  /** HCO₃⁻ 44.5. Lange 8.32 (read) and CRC (memory) agree; PHREEQC's D = 1.18e-9 gives 44.3. */
+  'carbonate|-1': { lambda25: 44.5, source: `${LANGE} (read; CRC agrees, PHREEQC D gives 44.3)` },
+  /** CO₃²⁻ 2 × 69.3. Lange 8.32 (read) and CRC (memory) agree; PHREEQC's D = 0.955e-9 gives 2 × 71.7. */
+  'carbonate|-2': { lambda25: 138.6, source: `${LANGE} (read, ½CO₃²⁻ 69.3; CRC agrees, PHREEQC D gives 2 × 71.7)` },
+  /** HSO₄⁻ 50. Lange 8.32 (read); CRC gives 52 (memory); PHREEQC's D = 1.33e-9 gives 49.9. */
+  'sulfate|-1': { lambda25: 50, source: `${LANGE} (read; CRC 52, PHREEQC D gives 49.9)` },
+  /** SO₄²⁻ 2 × 80.0. Lange 8.32 (read) and CRC agree; PHREEQC's D = 1.07e-9 gives 2 × 80.4. Shape: McCleskey 2012 (two copies). */
+  'sulfate|-2': { lambda25: 160, shape: poly(0.01037, 2.838, 82.37), source: `${LANGE} (read, ½SO₄²⁻ 80.0; PHREEQC D gives 2 × 80.4); temperature: McCleskey et al. 2012 Table 1` },
   /** NH₄⁺ 73.5. CRC (read); Hirokawa mobility 7.62e-8 gives 73.5. Shape: McCleskey 2012 (two copies). */
-  'ammonia|1': { lambda25: 73.5, source: `${CRC} (read; Hirokawa mobility gives 73.5); temperature: McCleskey et al. 2012 Table 1` },
-  /** Acetate 40.9. CRC (memory); Hirokawa mobility 4.24e-8 gives 40.9. */
-  'acetate|-1': { lambda25: 40.9, source: `${CRC} (memory; Hirokawa mobility 4.24e-8 m²/(V s) gives 40.9)` },
-  /** Formate 54.6. CRC (memory). */
-  'formate|-1': { lambda25: 54.6, source: `${CRC} (memory)` },
-  /** Citrate³⁻ 3 × 70.2. CRC (memory). */
-  'citrate|-3': { lambda25: 210.6, source: `${CRC} (memory, ⅓citrate³⁻ 70.2)` },
-  /** Oxalate²⁻ 2 × 74.11. CRC (memory). */
-  'oxalate|-2': { lambda25: 148.2, source: `${CRC} (memory, ½C₂O₄²⁻ 74.11)` },
-  /** Succinate²⁻ 2 × 58.8. CRC (memory). */
-  'succinate|-2': { lambda25: 117.6, source: `${CRC} (memory, ½succinate²⁻ 58.8)` },
-  /** Tris-H⁺: Hirokawa mobility 2.95e-8 m²/(V s) (two public copies) → 28.5. */
-  'tris|1': { lambda25: 2.95e-8 * MOBILITY_TO_LAMBDA, source: 'Hirokawa et al. isotachophoresis tables, mobility 2.95e-8 m²/(V s) (two public copies)' },
-  /** HEPES⁻: Hirokawa mobility 2.35e-8 m²/(V s) (two public copies) → 22.7. */
-  'HEPES|-1': { lambda25: 2.35e-8 * MOBILITY_TO_LAMBDA, source: 'Hirokawa et al. isotachophoresis tables, mobility 2.35e-8 m²/(V s) (two public copies)' },
-  /** MOPS⁻: Hirokawa mobility 2.69e-8 m²/(V s) (two public copies) → 26.0. */
-  'MOPS|-1': { lambda25: 2.69e-8 * MOBILITY_TO_LAMBDA, source: 'Hirokawa et al. isotachophoresis tables, mobility 2.69e-8 m²/(V s) (two public copies)' },
+  'ammonia|1': { lambda25: 73.5, shape: poly(0.003341, 1.285, 39.04), source: `${CRC} (read; Hirokawa mobility gives 73.5); temperature: McCleskey et al. 2012 Table 1` },
+  /** Acetate 40.9. CRC (memory); Lange 8.32 gives 41 (read); Hirokawa mobility 4.24e-8 gives 40.9. */
+  'acetate|-1': { lambda25: 40.9, source: `${CRC} (memory; Lange 41, Hirokawa mobility 4.24e-8 m²/(V s) gives 40.9)` },
+  /** Formate 54.6. Lange 8.32 (read) and CRC (memory) agree. */
+  'formate|-1': { lambda25: 54.6, source: `${LANGE} (read; CRC agrees)` },
+  /** Lactate 38.8. Lange 8.32 (read). */
+  'lactate|-1': { lambda25: 38.8, source: `${LANGE} (read)` },
+  /** Dihydrogen citrate 30. Lange 8.32 (read). */
+  'citrate|-1': { lambda25: 30, source: `${LANGE} (read)` },
+  /** Citrate³⁻ 3 × 70.2. Lange 8.32 (read) and CRC (memory) agree. */
+  'citrate|-3': { lambda25: 210.6, source: `${LANGE} (read, ⅓citrate³⁻ 70.2; CRC agrees)` },
+  /** Hydrogen oxalate 40.2. Lange 8.32 (read). */
+  'oxalate|-1': { lambda25: 40.2, source: `${LANGE} (read)` },
+  /** Oxalate²⁻ 2 × 74.11. Lange 8.32 (read) and CRC (memory) agree. */
+  'oxalate|-2': { lambda25: 148.22, source: `${LANGE} (read, ½C₂O₄²⁻ 74.11; CRC agrees)` },
+  /** Succinate²⁻ 2 × 58.8. Lange 8.32 (read) and CRC (memory) agree. */
+  'succinate|-2': { lambda25: 117.6, source: `${LANGE} (read, ½succinate²⁻ 58.8; CRC agrees)` },
+  /** Malate²⁻ 2 × 58.8. Lange 8.32 (read). */
+  'malate|-2': { lambda25: 117.6, source: `${LANGE} (read, ½malate²⁻ 58.8)` },
+  /** Tartrate²⁻ 2 × 59.6. Lange 8.32 (read). */
+  'tartrate|-2': { lambda25: 119.2, source: `${LANGE} (read, ½tartrate²⁻ 59.6)` },
+  /** o-Phthalate²⁻ 2 × 52.3. Lange 8.32 (read). */
+  'phthalate|-2': { lambda25: 104.6, source: `${LANGE} (read, ½o-phthalate²⁻ 52.3)` },
+  /** Tris-H⁺ 28.5: Hirokawa mobility 2.95e-8 m²/(V s) (two public copies); Barry's table gives 0.40 × K⁺ = 29.4. */
+  'tris|1': { lambda25: 2.95e-8 * MOBILITY_TO_LAMBDA, source: `${HIROKAWA}, 2.95e-8 m²/(V s) (two copies); ${BARRY} 0.40 × K⁺ = 29.4` },
+  /** HEPES⁻ 22.7: Hirokawa mobility 2.35e-8 m²/(V s) (two public copies); Barry's table gives 0.30 × K⁺ = 22.1. */
+  'HEPES|-1': { lambda25: 2.35e-8 * MOBILITY_TO_LAMBDA, source: `${HIROKAWA}, 2.35e-8 m²/(V s) (two copies); ${BARRY} 0.30 × K⁺ = 22.1` },
+  /** MOPS⁻ 26.0: Hirokawa mobility 2.69e-8 m²/(V s) (two public copies); Barry's table gives 0.35 × K⁺ = 25.7. */
+  'MOPS|-1': { lambda25: 2.69e-8 * MOBILITY_TO_LAMBDA, source: `${HIROKAWA}, 2.69e-8 m²/(V s) (two copies); ${BARRY} 0.35 × K⁺ = 25.7` },
+  /** MES⁻ 27.2: Barry's table, 0.37 × K⁺ (one copy). */
+  'MES|-1': { lambda25: 0.37 * 73.5, source: `${BARRY} 0.37 × K⁺ (73.5) (one copy)` },
 };
 
 /** An ion whose λ° was estimated, not read from a table. */
