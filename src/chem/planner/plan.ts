@@ -133,19 +133,21 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   };
 
   const components = componentsOf(s, made, madeVolumeL, titration);
+  const stockKappa = s.route === 'stock' ? conductivityAt(made.composition) : undefined;
   const stock =
-    s.route === 'stock'
+    stockKappa
       ? {
           fold,
           stockVolumeMl: madeVolumeL * 1000,
           stockPhAtUse: solvePh(made.composition),
           stockPerBatchMl: (s.volumeL * 1000) / fold,
           waterPerBatchMl: s.volumeL * 1000 * (1 - 1 / fold),
-          stockConductivityMsPerCm: conductivityAt(made.composition).conductivityMsPerCm,
+          stockConductivityMsPerCm: stockKappa.conductivityMsPerCm,
           stockConductivity25MsPerCm: conductivityAt(made.composition, 25).conductivityMsPerCm,
         }
       : undefined;
 
+  if (stockKappa) warnings.push(...stockKappa.warnings.map((w) => `The stock: ${w}`));
   warnings.push(...planWarnings(s, made, components, madeVolumeL, titration));
   const metals = metalComplexWarning(finished);
   if (metals) warnings.push(metals);

@@ -334,3 +334,10 @@ describe('salt target by conductivity', () => {
     expect(plan.predictions.conductivityMsPerCm).toBeCloseTo(10, 6);
   });
 });
+
+describe('conductivity of a concentrated stock', () => {
+  it('warns that a stock beyond 1 M ionic strength is an extrapolation of the conductivity model', () => {
+    const plan = planRecipe({ buffer: 'phosphate', targetPh: 7.4, concentrationMm: 50, volumeMl: 1000, route: 'stock', stock: { fold: 10 }, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 5 }, salts: [{ form: 'NaCl', concentrationMm: 150 }] });
+    expect(plan.warnings.join(' ')).toMatch(/The stock: Ionic strength .* beyond where the conductivity model was checked/);
+  });
+});
