@@ -393,6 +393,13 @@ function solveWithSaltTarget(s: Settled): RouteResult {
     const shown = byIonicStrength ? Number(reached.toPrecision(4)) : Number((reached * 1000).toPrecision(4));
     throw new ChemError('infeasible-target', 'saltTargetUnreachable', MESSAGES.saltTargetUnreachable(what, byIonicStrength ? goal : goal * 1000, shown), 'saltTarget', `a target above ${shown}`);
   }
+  // A salt that adds little or no charge (a zwitterion, a neutral solute) may never reach the goal: say so rather than return 5 M.
+  const most = measure(routeResult(s, MAX_SALT_TARGET_M));
+  if (most < goal) {
+    const what = byIonicStrength ? 'ionic strength (mol/L)' : 'ideal osmolarity (mOsm/L)';
+    const shown = byIonicStrength ? Number(most.toPrecision(4)) : Number((most * 1000).toPrecision(4));
+    throw new ChemError('infeasible-target', 'saltTargetBeyondSalt', MESSAGES.saltTargetBeyondSalt(what, byIonicStrength ? goal : goal * 1000, shown, s.library.findForm(target.form).name, MAX_SALT_TARGET_M), 'saltTarget', `a target up to ${shown}`);
+  }
   let lo = 0;
   let hi = MAX_SALT_TARGET_M;
   for (let i = 0; i < SALT_TARGET_STEPS && hi - lo > 1e-12 * hi; i++) {

@@ -240,6 +240,7 @@ describe('recipe planner: bad input names the field and what is allowed', () => 
     ['a salt target with both goals', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 300, ionicStrengthM: 0.1 } }, /either ionicStrengthM or idealOsmolarityMosm/, 'invalid-input'],
     ['a conductivity target already passed', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 0.1 } }, /conductivity \(mS\/cm at 25 °C\) target 0.1 cannot be met: without any added salt the buffer already gives/, 'infeasible-target'],
     ['a conductivity target beyond the most salt tried', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 900 } }, /target 900 cannot be met: even 5 M of sodium chloride gives only/, 'infeasible-target'],
+    ['an ionic-strength target a zwitterion cannot reach', { targetPh: 6.0, saltTarget: { form: 'glycine', ionicStrengthM: 0.15 } }, /ionic strength \(mol\/L\) target 0.15 cannot be met: even 5 M of glycine gives only/, 'infeasible-target'],
     ['a conductivity target beside another goal', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, ionicStrengthM: 0.1 } }, /one goal only/, 'invalid-input'],
     ['a conductivity target read at 80 °C', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, conductivityTemperatureC: 80 } }, /saltTarget\.conductivityTemperatureC is 80; allowed: 0 to 60 °C/, 'invalid-input'],
   ];
