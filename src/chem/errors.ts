@@ -74,6 +74,8 @@ export const MESSAGES = {
     `${field}: ${describe(value)} is not one of the choices; allowed: ${allowed.map((a) => `"${a}"`).join(', ')}.`,
   saltTargetUnreachable: (what: string, target: number, reached: number) =>
     `The ${what} target ${target} cannot be met: without any added salt the buffer already gives ${reached}.`,
+  saltTargetBeyondSalt: (what: string, target: number, reached: number, salt: string, maxSaltM: number) =>
+    `The ${what} target ${target} cannot be met: even ${maxSaltM} M of ${salt} gives only ${reached}.`,
 } as const;
 
 export type MessageCode = keyof typeof MESSAGES;

@@ -17,5 +17,7 @@ export type { Titrant, TitrantAmount } from './titration';
 export { afterDilution, afterLoad, atTemperature, capacity, capacityOfPrepared, idealCapacityAt, scaleComposition } from './capacity';
 export type { AcidBaseLoad, Capacity } from './capacity';
 export { idealOsmolarity } from './osmolarity';
+export { CONDUCTIVITY_MAX_C, CONDUCTIVITY_MIN_C, conductivityAt, conductivityOf, onsagerCoefficients, waterViscosity } from './conductivity';
+export type { ConductivityEstimate, ConductivityResult, IonConductivity } from './conductivity';
 export { pKaAt } from './vantHoff';
 export { debyeHuckelA, pKw, waterDensity, waterPermittivity } from './water';

@@ -8,7 +8,7 @@
  * Output is one JSON object on stdout; on bad input a JSON error on stdout and exit code 2.
  */
 import { readFileSync } from 'fs';
-import { ChemError, solutionWarnings, speciate } from '../chem';
+import { ChemError, conductivityAt, conductivityOf, solutionWarnings, speciate } from '../chem';
 import { defaultLibrary } from '../chem/library';
 import { formatRecipe, planRecipe } from '../chem/planner';
 import { compositionInputSchema, describeSchemaError, libraryFor, toComposition } from './compositionInput';
@@ -46,8 +46,15 @@ function solveCommand(raw: unknown): unknown {
   if (!parsed.success) throw new CliFailure(describeSchemaError(parsed.error));
   const composition = toComposition(parsed.data);
   const result = speciate(composition);
-  // The solver's own warnings plus the plain-words checks (weak buffering, metal complexes).
-  return { ...result, warnings: solutionWarnings(composition, result) };
+  const kappa = conductivityOf(result);
+  const conductivity = {
+    temperatureC: result.temperatureC,
+    msPerCm: kappa.conductivityMsPerCm,
+    at25MsPerCm: result.temperatureC === 25 ? kappa.conductivityMsPerCm : conductivityAt(composition, 25).conductivityMsPerCm,
+    estimates: kappa.estimates,
+  };
+  // The solver's own warnings plus the plain-words checks (weak buffering, metal complexes) and the conductivity model's.
+  return { ...result, conductivity, warnings: [...solutionWarnings(composition, result), ...kappa.warnings] };
 }
 
 function recipeCommand(raw: unknown) {

@@ -10,7 +10,7 @@
  * `=PROTON.PH(A2:B4)`.
  */
 /* eslint-disable @typescript-eslint/no-explicit-any -- `any` is how custom-functions metadata spells a cell of any type */
-import { ChemError, MESSAGES, apparentPKa, capacity, solutionWarnings, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
+import { ChemError, MESSAGES, apparentPKa, capacity, conductivityAt, solutionWarnings, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
 import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toField, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
 import { recipeOptions } from './recipeOptions';
@@ -221,6 +221,25 @@ export function ionicStrengthMm(composition: any[][], temperatureC?: any, activi
 export function osmolarityIdeal(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
   return memoised('OSMOLARITY.IDEAL', [composition, temperatureC, activityModel, userSubstances], () => idealOsmolarity(speciate(solution(composition, temperatureC, activityModel, userSubstances))) * 1000);
 }
+
+/**
+ * Conductivity of a solution, in mS/cm at the temperature given: what an uncompensated conductivity meter reads there (a meter compensating to 25 °C reads the value at 25). Ions with no published limiting conductivity get a stated default (see the help page).
+ * @customfunction CONDUCTIVITY CONDUCTIVITY
+ * @helpurl https://localhost:3000/help/functions.html#conductivity
+ * @param composition Two columns: substance or form name, then amount in mM.
+ * @param [temperatureC] Temperature of the reading in °C, 0 to 60 (blank: 25).
+ * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim" (for the speciation; the conductivity model is the same).
+ * @param [userSubstances] Range of your own substances.
+ * @returns Conductivity, mS/cm.
+ */
+export function conductivity(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
+  return memoised('CONDUCTIVITY', [composition, temperatureC, activityModel, userSubstances], () => {
+    // The conductivity model covers 0–60 °C, a narrower range than the pH functions.
+    const t = toField('conductivityTemperatureC', temperatureC, 'temperatureC');
+    return conductivityAt(solution(composition, t, activityModel, userSubstances)).conductivityMsPerCm;
+  });
+}
+
 
 /**
  * Warnings about a solution's prediction, as one cell of text: "none", or how many and each in turn. Put it beside a PH cell: single-value results cannot carry their warnings.
@@ -437,6 +456,8 @@ export function recipe(buffer: any, targetPh: any, concentrationMm: any, volumeM
     rows.push(['predicted', `pH at ${plan.meter.benchTemperatureC} °C`, p.pHAtBench, 'pH']);
     rows.push(['predicted', 'ionic strength', p.ionicStrengthM * 1000, 'mM']);
     rows.push(['predicted', 'ideal osmolarity', p.idealOsmolarityMosm, 'mOsm/L']);
+    rows.push(['predicted', `conductivity at ${p.useTemperatureC} °C`, p.conductivityMsPerCm, 'mS/cm']);
+    if (p.useTemperatureC !== 25) rows.push(['predicted', 'conductivity at 25 °C', p.conductivity25MsPerCm, 'mS/cm']);
     rows.push(['predicted', 'strong base per +0.1 pH', p.baseMmPerTenthPh, 'mM']);
     rows.push(['predicted', 'strong acid per −0.1 pH', p.acidMmPerTenthPh, 'mM']);
     rows.push(['predicted', 'change with temperature', p.pHPerDegreeC, 'pH per °C']);

@@ -1,3 +1,4 @@
+import { conductivityAt } from '../../src/chem';
 import { run } from '../../src/cli/main';
 
 function call(args: string[]): { code: number; out: any } {
@@ -13,6 +14,16 @@ describe('proton-ledger solve', () => {
     // Half-neutralised with the ideal model: pH = pKa within 0.001 (Henderson–Hasselbalch at 50 mM).
     expect(Math.abs(out.pH - 6.27)).toBeLessThan(0.001);
     expect(out.species.map((s: { name: string }) => s.name)).toEqual(['H+', 'OH-', 'Na+', 'MES 0', 'MES 1−']);
+  });
+
+  it('adds the conductivity at the composition\'s temperature and at 25 °C, as the core computes it', () => {
+    const composition = { systems: [], strongIonsMm: { 'K+': 10, 'Cl-': 10 }, temperatureC: 20 };
+    const { code, out } = call(['solve', '--json', JSON.stringify(composition)]);
+    expect(code).toBe(0);
+    expect(out.conductivity.temperatureC).toBe(20);
+    expect(out.conductivity.msPerCm).toBeCloseTo(conductivityAt({ systems: [], strongIons: { 'K+': 0.01, 'Cl-': 0.01 }, temperatureC: 20 }).conductivityMsPerCm, 12);
+    expect(out.conductivity.at25MsPerCm).toBeCloseTo(conductivityAt({ systems: [], strongIons: { 'K+': 0.01, 'Cl-': 0.01 } }).conductivityMsPerCm, 12);
+    expect(out.conductivity.estimates).toEqual([]);
   });
 
   it('runs the demo composition', () => {
@@ -70,6 +81,13 @@ describe('proton-ledger solve with forms by name', () => {
 
 describe('proton-ledger recipe and substances', () => {
   const recipe = { buffer: 'tris', targetPh: 7.5, concentrationMm: 20, volumeMl: 1000, titrant: { form: 'HCl', concentrationM: 1 } };
+
+  it('accepts a salt target by conductivity and prints the predicted conductivity', () => {
+    const { code, out } = call(['recipe', '--json', JSON.stringify({ ...recipe, saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, conductivityTemperatureC: 20 } })]);
+    expect(code).toBe(0);
+    expect(conductivityAt(out.composition, 20).conductivityMsPerCm).toBeCloseTo(15, 6);
+    expect(out.predictions.conductivity25MsPerCm).toBeGreaterThan(15);
+  });
 
   it('prints the plan as JSON', () => {
     const { code, out } = call(['recipe', '--json', JSON.stringify(recipe)]);

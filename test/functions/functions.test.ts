@@ -3,9 +3,9 @@
  * for ranges): typical use against direct core calls, the argument forms users type, and
  * every error path with its kind and message.
  */
-import { ACTIVITY_MODELS, afterDilution, capacity, idealOsmolarity, pKaAt, solvePh, speciate, titrantForPh, HYDROCHLORIC_ACID } from '../../src/chem';
+import { ACTIVITY_MODELS, afterDilution, capacity, conductivityAt, idealOsmolarity, pKaAt, solvePh, speciate, titrantForPh, HYDROCHLORIC_ACID } from '../../src/chem';
 import { defaultLibrary } from '../../src/chem/library';
-import { capacityOf, forms, grams, ionicStrengthMm, osmolarityIdeal, ph, phAtTemperature, phDiluted, pka, species, spillShape, substances, titrantMl, warnings, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
+import { capacityOf, conductivity, forms, grams, ionicStrengthMm, osmolarityIdeal, ph, phAtTemperature, phDiluted, pka, species, spillShape, substances, titrantMl, warnings, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
 import { errorOf } from './errorOf';
 import { clearCallCache } from '../../src/functions/memo';
 
@@ -231,5 +231,16 @@ describe('SUBSTANCES and FORMS', () => {
     const formList = forms();
     expect(formList.map((r) => r[0])).toContain('sodium phosphate dibasic heptahydrate');
     expect(spillShape('FORMS', [0])!.rows).toBe(formList.length);
+  });
+});
+
+describe('CONDUCTIVITY', () => {
+  test('equals the core for a composition range, at 25 °C by default and at the temperature given', () => {
+    expect(conductivity(TRIS_SALINE)).toBeCloseTo(conductivityAt(trisSaline()).conductivityMsPerCm, SAME_DIGITS);
+    expect(conductivity(TRIS_SALINE, 4)).toBeCloseTo(conductivityAt(trisSaline(4)).conductivityMsPerCm, SAME_DIGITS);
+  });
+  test('refuses a temperature outside the conductivity model (0–60 °C) with the allowed range', () => {
+    const e = errorOf(() => conductivity(TRIS_SALINE, 80));
+    expect(e.message).toMatch(/temperatureC is 80; allowed: 0 to 60 °C/);
   });
 });

@@ -80,6 +80,16 @@ describe('RECIPE', () => {
     expect(rows.filter((r) => r[0] === 'caution').map((r) => r[2]).join(' ')).toMatch(/hydrochloric acid: corrosive/);
   });
 
+  it('lists the planner\'s predicted conductivity at the temperature of use and at 25 °C', () => {
+    const plan = planRecipe({ buffer: 'tris', targetPh: 8.0, concentrationMm: 50, volumeMl: 1000, form: 'tris base', titrant: { form: 'HCl', concentrationM: 6 }, useTemperatureC: 4, benchTemperatureC: 25 });
+    const rows = recipe('tris', 8.0, 50, 1000, 4, undefined, [['form', 'tris base'], ['titrant', 'HCl'], ['titrant.concentrationM', 6], ['benchTemperatureC', 25]]);
+    const atUse = rows.find((r) => r[1] === 'conductivity at 4 °C')!;
+    const at25 = rows.find((r) => r[1] === 'conductivity at 25 °C')!;
+    expect(Math.abs((atUse[2] as number) - plan.predictions.conductivityMsPerCm)).toBeLessThan(SAME);
+    expect(Math.abs((at25[2] as number) - plan.predictions.conductivity25MsPerCm)).toBeLessThan(SAME);
+    expect(atUse[3]).toBe('mS/cm');
+  });
+
   it('weighs two forms when given "acid form + base form"', () => {
     const rows = recipe('phosphate', 7.0, 100, 1000, '', undefined, [['form', 'NaH2PO4·H2O + Na2HPO4·7H2O']]);
     const amounts = rows.filter((r) => r[0] === 'amount' && r[3] === 'g');

@@ -11,6 +11,7 @@ import { ACTIVITY_MODELS } from '../activity';
 import { ChemError, MESSAGES } from '../errors';
 import { MAX_TARGET_PH, MIN_TARGET_PH } from '../titration';
 import { MAX_FORM_CONCENTRATION_M } from '../library/lookup';
+import { CONDUCTIVITY_MAX_C, CONDUCTIVITY_MIN_C } from '../conductivity';
 import { closestNames } from '../library/names';
 import { BASE_UNIT, Dimension, readQuantity, readQuantityList, splitList, unitsOf } from './quantity';
 
@@ -121,6 +122,14 @@ export const FIELDS: readonly Field[] = [
     kind: 'number', scope: 'recipe', name: 'saltTarget.idealOsmolarityMosm', label: 'Target ideal osmolarity (mOsm/L)', dimension: 'osmolarity', unit: 'mOsm/L', min: 0, max: 10000,
     description: 'Ideal osmolarity the salt target reaches.', example: '300 mOsm/L',
   },
+  {
+    kind: 'number', scope: 'recipe', name: 'saltTarget.conductivityMsPerCm', label: 'Target conductivity (mS/cm)', dimension: 'conductivity', unit: 'mS/cm', min: 0, max: 1000,
+    description: 'Conductivity the salt target reaches, read at the conductivity temperature.', example: '15 mS/cm',
+  },
+  {
+    ...TEMPERATURE, scope: 'recipe', name: 'saltTarget.conductivityTemperatureC', label: 'Conductivity read at (°C)', min: CONDUCTIVITY_MIN_C, max: CONDUCTIVITY_MAX_C, defaultText: 'the temperature of use',
+    description: 'Temperature at which the conductivity target is read.', example: '20 °C',
+  },
   { ...TEMPERATURE, scope: 'recipe', name: 'benchTemperatureC', label: 'Bench temp. (°C)', defaultText: 'the temperature of use', description: 'Temperature at which the pH is adjusted on the bench.', example: '22 °C' },
   {
     kind: 'number', scope: 'recipe', name: 'partVolumeFraction', label: 'Adjust at (fraction)', dimension: 'fraction', unit: '', min: 0.1, max: 1, default: 0.8,
@@ -132,6 +141,7 @@ export const FIELDS: readonly Field[] = [
     description: 'pKa uncertainty used for the titrant band.', example: '0.02',
   },
   // Worksheet arguments that are not recipe options.
+  { ...TEMPERATURE, scope: 'argument', name: 'conductivityTemperatureC', label: 'Conductivity at (°C)', min: CONDUCTIVITY_MIN_C, max: CONDUCTIVITY_MAX_C, default: 25, description: 'Temperature of a conductivity reading (the model covers 0–60 °C).', example: '20 °C' },
   { ...TEMPERATURE, scope: 'argument', name: 'temperatureC', label: 'Temperature (°C)', default: 25, description: 'Temperature of the solution.', example: '37 °C' },
   {
     kind: 'number', scope: 'argument', name: 'finalVolumeMl', required: true, label: 'Final volume (mL)', dimension: 'volume', unit: 'mL', min: 0.001, max: MAX_VOLUME_ML,

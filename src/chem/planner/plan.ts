@@ -9,8 +9,8 @@
  * bench temperature with every concentration raised by 1/(part-volume fraction), because
  * at adjustment everything weighed and titrated sits in that smaller volume. A stock is
  * the finished buffer times its fold, so its dilution lands on target by construction.
- * A salt target is met by bisection on the salt concentration (ionic strength and ideal
- * osmolarity rise with salt), re-solving the titrant at each step.
+ * A salt target is met by bisection on the salt concentration (ionic strength, ideal
+ * osmolarity and conductivity rise with salt), re-solving the titrant at each step.
  */
 import { ActivityModel } from '../activity';
 import { readChoiceField, readNumberField, readPurityField, readSaltsField, readTextField, requireNumberField } from '../input';
@@ -23,6 +23,7 @@ import { LibraryForm, SubstanceRecord } from '../library/types';
 import { SubstanceLibrary, defaultLibrary } from '../library/lookup';
 import { titrantFromForm } from '../library/titrant';
 import { nameKey } from '../library/names';
+import { CONDUCTIVITY_MAX_C, CONDUCTIVITY_MIN_C, conductivityAt, conductivityOf } from '../conductivity';
 import { idealOsmolarity } from '../osmolarity';
 import { report, speciate, solvePh, solvePrepared } from '../speciation';
 import { findStrongIon } from '../strongIons';
@@ -86,8 +87,8 @@ interface Settled {
   /** The titrant stock given; without a form, NaOH or HCl (whichever is needed) at that concentration. */
   readonly titrant?: { readonly form?: string; readonly concentrationM: number; readonly tolerancePercent: number };
   readonly stock?: { readonly fold: number; readonly volumeMl?: number };
-  /** The salt added to a target: its form, and the goal (mol/L of ionic strength, or osmol/L). */
-  readonly saltTarget?: { readonly form: LibraryForm; readonly byIonicStrength: boolean; readonly goal: number };
+  /** The salt added to a target: its form, what it reaches (mol/L of ionic strength, mOsm/L, or mS/cm read at readAtC °C). */
+  readonly saltTarget?: { readonly form: LibraryForm; readonly kind: 'ionicStrength' | 'osmolarity' | 'conductivity'; readonly goal: number; readonly readAtC: number };
   readonly pKaUncertainty?: number;
   readonly formPurityPercent?: number;
   readonly purityPercent: readonly { readonly key: string; readonly percent: number }[];
@@ -121,6 +122,8 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const result = report(prepared, state, finished);
   const cap = capacityOfPrepared(prepared, state.pH);
   const warnings = [...result.warnings];
+  const conductivity = conductivityOf(result);
+  warnings.push(...conductivity.warnings);
   const predictions = {
     useTemperatureC: s.useT,
     pHAtUse: result.pH,
@@ -132,20 +135,26 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
     betaMPerPh: cap.betaMPerPh,
     pHPerDegreeC: dpHdT(finished, s.useT),
     pHAfterTenfoldDilution: solvePh(scaleComposition(finished, 0.1)),
+    conductivityMsPerCm: conductivity.conductivityMsPerCm,
+    conductivity25MsPerCm: s.useT === 25 ? conductivity.conductivityMsPerCm : conductivityAt(finished, 25).conductivityMsPerCm,
   };
 
   const components = componentsOf(s, made, madeVolumeL, titration);
+  const stockKappa = s.route === 'stock' ? conductivityAt(made.composition) : undefined;
   const stock =
-    s.route === 'stock'
+    stockKappa
       ? {
           fold,
           stockVolumeMl: madeVolumeL * 1000,
           stockPhAtUse: solvePh(made.composition),
           stockPerBatchMl: (s.volumeL * 1000) / fold,
           waterPerBatchMl: s.volumeL * 1000 * (1 - 1 / fold),
+          stockConductivityMsPerCm: stockKappa.conductivityMsPerCm,
+          stockConductivity25MsPerCm: conductivityAt(made.composition, 25).conductivityMsPerCm,
         }
       : undefined;
 
+  if (stockKappa) warnings.push(...stockKappa.warnings.map((w) => `The stock: ${w}`));
   warnings.push(...planWarnings(s, made, components, madeVolumeL, titration));
   const metals = metalComplexWarning(finished);
   if (metals) warnings.push(metals);
@@ -244,7 +253,7 @@ function settle(input: RecipeInput, library: SubstanceLibrary): Settled {
     salts,
     ...(titrant ? { titrant } : {}),
     ...(stock ? { stock } : {}),
-    saltTarget: settleSaltTarget(input.saltTarget, library),
+    saltTarget: settleSaltTarget(input.saltTarget, library, useT),
     pKaUncertainty: readNumberField('pKaUncertainty', input.pKaUncertainty),
     formPurityPercent: readPurityField('formPurityPercent', input.formPurityPercent),
     purityPercent: Object.entries(input.purityPercent ?? {}).map(([name, value]) => ({ key: nameKey(name), percent: readPurityField('formPurityPercent', value, `purityPercent.${name}`) ?? 100 })),
@@ -260,17 +269,22 @@ function settleTitrant(t: NonNullable<RecipeInput['titrant']>): NonNullable<Sett
   };
 }
 
-function settleSaltTarget(t: RecipeInput['saltTarget'], library: SubstanceLibrary): Settled['saltTarget'] {
+function settleSaltTarget(t: RecipeInput['saltTarget'], library: SubstanceLibrary, useT: number): Settled['saltTarget'] {
   if (t === undefined) return undefined;
   const name = readTextField('saltTarget.form', t?.form);
   if (name === undefined) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('saltTarget.form', 'a salt form'), 'saltTarget.form', 'a name');
   const form = library.findForm(name, 'saltTarget.form');
-  const ionic = readNumberField('saltTarget.ionicStrengthM', t.ionicStrengthM);
-  const osm = readNumberField('saltTarget.idealOsmolarityMosm', t.idealOsmolarityMosm);
-  if ((ionic === undefined) === (osm === undefined)) {
-    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('saltTarget', 'either ionicStrengthM or idealOsmolarityMosm'), 'saltTarget', 'ionicStrengthM or idealOsmolarityMosm');
+  const goals = [
+    { kind: 'ionicStrength' as const, goal: readNumberField('saltTarget.ionicStrengthM', t.ionicStrengthM) },
+    { kind: 'osmolarity' as const, goal: readNumberField('saltTarget.idealOsmolarityMosm', t.idealOsmolarityMosm) },
+    { kind: 'conductivity' as const, goal: readNumberField('saltTarget.conductivityMsPerCm', t.conductivityMsPerCm) },
+  ].filter((g): g is { kind: 'ionicStrength' | 'osmolarity' | 'conductivity'; goal: number } => g.goal !== undefined);
+  if (goals.length !== 1) {
+    const allowed = 'one of ionicStrengthM, idealOsmolarityMosm, conductivityMsPerCm';
+    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('saltTarget', `one goal only: ${allowed}`), 'saltTarget', allowed);
   }
-  return ionic !== undefined ? { form, byIonicStrength: true, goal: ionic } : { form, byIonicStrength: false, goal: osm! / 1000 };
+  const readAtC = readNumberField('saltTarget.conductivityTemperatureC', t.conductivityTemperatureC) ?? Math.min(Math.max(useT, CONDUCTIVITY_MIN_C), CONDUCTIVITY_MAX_C);
+  return { form, ...goals[0], readAtC };
 }
 
 /** Moles of the buffer system one mole of a form adds (0 if none). */
@@ -399,27 +413,38 @@ function routeResult(s: Settled, saltTargetM: number): RouteResult {
   return s.route === 'two-forms' ? twoFormsRoute(s, saltTargetM) : titrateRoute(s, saltTargetM);
 }
 
-/** Solves the route, adding the salt-target salt by bisection when one is asked for. */
+/**
+ * Solves the route, adding the salt-target salt by bisection when one is asked for. Ionic
+ * strength, ideal osmolarity and conductivity all rise with every added mole of a salt that
+ * dissociates, so one bisection serves all three goals. A goal the buffer already passes
+ * without salt, or one that the largest salt amount tried cannot reach (a zwitterion such as
+ * glycine adds no ionic strength), is infeasible, never a success.
+ */
 function solveWithSaltTarget(s: Settled): RouteResult {
   const target = s.saltTarget;
   if (!target) return routeResult(s, 0);
-  const { byIonicStrength, goal } = target;
-  const measure = (r: RouteResult) => {
-    const sp = speciate(r.composition);
-    return byIonicStrength ? sp.ionicStrengthM : idealOsmolarity(sp);
+  const measure = (saltM: number): number => {
+    const c = routeResult(s, saltM).composition;
+    if (target.kind === 'conductivity') return conductivityAt(c, target.readAtC).conductivityMsPerCm;
+    const sp = speciate(c);
+    return target.kind === 'ionicStrength' ? sp.ionicStrengthM : idealOsmolarity(sp) * 1000;
   };
-  const none = routeResult(s, 0);
-  const reached = measure(none);
-  if (reached > goal) {
-    const what = byIonicStrength ? 'ionic strength (mol/L)' : 'ideal osmolarity (mOsm/L)';
-    const shown = byIonicStrength ? Number(reached.toPrecision(4)) : Number((reached * 1000).toPrecision(4));
-    throw new ChemError('infeasible-target', 'saltTargetUnreachable', MESSAGES.saltTargetUnreachable(what, byIonicStrength ? goal : goal * 1000, shown), 'saltTarget', `a target above ${shown}`);
+  const what =
+    target.kind === 'conductivity' ? `conductivity (mS/cm at ${target.readAtC} °C)` : target.kind === 'ionicStrength' ? 'ionic strength (mol/L)' : 'ideal osmolarity (mOsm/L)';
+  const shown = (x: number) => Number(x.toPrecision(4));
+  const reached = measure(0);
+  if (reached > target.goal) {
+    throw new ChemError('infeasible-target', 'saltTargetUnreachable', MESSAGES.saltTargetUnreachable(what, target.goal, shown(reached)), 'saltTarget', `a target above ${shown(reached)}`);
+  }
+  const most = measure(MAX_SALT_TARGET_M);
+  if (most < target.goal) {
+    throw new ChemError('infeasible-target', 'saltTargetBeyondSalt', MESSAGES.saltTargetBeyondSalt(what, target.goal, shown(most), target.form.name, MAX_SALT_TARGET_M), 'saltTarget', `a target up to ${shown(most)}`);
   }
   let lo = 0;
   let hi = MAX_SALT_TARGET_M;
   for (let i = 0; i < SALT_TARGET_STEPS && hi - lo > 1e-12 * hi; i++) {
     const mid = 0.5 * (lo + hi);
-    if (measure(routeResult(s, mid)) < goal) lo = mid;
+    if (measure(mid) < target.goal) lo = mid;
     else hi = mid;
   }
   return routeResult(s, 0.5 * (lo + hi));

@@ -127,6 +127,11 @@ export function protocolSteps(plan: RecipePlan): string[] {
   return steps;
 }
 
+/** A conductivity for print, mS/cm to three significant figures (µS/cm below 1 mS/cm). */
+function conductivityText(msPerCm: number): string {
+  return msPerCm < 1 ? `${(msPerCm * 1000).toPrecision(3)} µS/cm` : `${msPerCm.toPrecision(3)} mS/cm`;
+}
+
 /**
  * The whole plan as printable text: components, steps, predictions, warnings, cautions.
  *
@@ -154,6 +159,9 @@ export function formatRecipe(plan: RecipePlan): string {
   lines.push(`  pH at use               ${formatPh(p.pHAtUse)} at ${p.useTemperatureC} °C${atBench}`);
   lines.push(`  ionic strength          ${(p.ionicStrengthM * 1000).toFixed(1)} mM`);
   lines.push(`  ideal osmolarity        ${p.idealOsmolarityMosm.toFixed(0)} mOsm/L`);
+  const at25 = p.useTemperatureC === 25 ? '' : `; ${conductivityText(p.conductivity25MsPerCm)} at 25 °C`;
+  lines.push(`  conductivity            ${conductivityText(p.conductivityMsPerCm)} at ${p.useTemperatureC} °C${at25}`);
+  if (plan.stock) lines.push(`  stock conductivity      ${conductivityText(plan.stock.stockConductivityMsPerCm)} at ${p.useTemperatureC} °C; ${conductivityText(plan.stock.stockConductivity25MsPerCm)} at 25 °C`);
   lines.push(`  capacity                ${p.baseMmPerTenthPh.toFixed(2)} mM base or ${p.acidMmPerTenthPh.toFixed(2)} mM acid per 0.1 pH`);
   lines.push(`  temperature             ${p.pHPerDegreeC.toFixed(4)} pH per °C`);
   lines.push(`  tenfold dilution        pH ${formatPh(p.pHAfterTenfoldDilution)}`);

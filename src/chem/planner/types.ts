@@ -43,6 +43,10 @@ export interface SaltTarget {
   readonly ionicStrengthM?: Amount;
   /** Target ideal osmolarity, mOsm/L. */
   readonly idealOsmolarityMosm?: Amount;
+  /** Target conductivity, mS/cm (instead of the two above), read at `conductivityTemperatureC`. */
+  readonly conductivityMsPerCm?: Amount;
+  /** Temperature at which the conductivity target is read, °C, 0–60 (default: the temperature of use). */
+  readonly conductivityTemperatureC?: Amount;
 }
 
 /** Everything the planner needs. Units are in the names. */
@@ -149,6 +153,10 @@ export interface RecipePredictions {
   readonly pHPerDegreeC: number;
   /** pH after a tenfold dilution with water, at the temperature of use. */
   readonly pHAfterTenfoldDilution: number;
+  /** Conductivity of the finished buffer at the temperature of use, mS/cm (uncompensated, as a meter reads it there). */
+  readonly conductivityMsPerCm: number;
+  /** Conductivity of the finished buffer at 25 °C, mS/cm. */
+  readonly conductivity25MsPerCm: number;
 }
 
 /** The stock route's extra numbers. */
@@ -161,6 +169,9 @@ export interface StockPlan {
   /** Stock and water for one batch of working buffer, mL. */
   readonly stockPerBatchMl: number;
   readonly waterPerBatchMl: number;
+  /** Conductivity of the undiluted stock at the temperature of use and at 25 °C, mS/cm (the working dilution's are in the predictions). */
+  readonly stockConductivityMsPerCm: number;
+  readonly stockConductivity25MsPerCm: number;
 }
 
 /** The planner's answer. */

@@ -1,4 +1,4 @@
-import { ChemError, Composition, scaleComposition, solvePh, speciate } from '../../../src/chem';
+import { ChemError, Composition, conductivityAt, scaleComposition, solvePh, speciate } from '../../../src/chem';
 import { createLibrary, defaultLibrary, findForm } from '../../../src/chem/library';
 import { RecipeInput, RecipePlan, formatRecipe, planRecipe } from '../../../src/chem/planner';
 import { volumeText } from '../../../src/chem/planner/protocol';
@@ -244,6 +244,12 @@ describe('recipe planner: bad input names the field and what is allowed', () => 
     ['a salt list text with no amount', { salts: 'NaCl' }, 'invalid-input', 'notANumber', 'salts'],
     ['a salt target already passed', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 10 } }, 'infeasible-target', 'saltTargetUnreachable', 'saltTarget'],
     ['a salt target with both goals', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 300, ionicStrengthM: 0.1 } }, 'invalid-input', 'missingValue', 'saltTarget'],
+    ['a conductivity target already passed', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 0.1 } }, 'infeasible-target', 'saltTargetUnreachable', 'saltTarget'],
+    ['a conductivity target beyond the most salt tried', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 900 } }, 'infeasible-target', 'saltTargetBeyondSalt', 'saltTarget'],
+    ['an ionic-strength target a zwitterion cannot reach', { targetPh: 6.0, saltTarget: { form: 'glycine', ionicStrengthM: 0.15 } }, 'infeasible-target', 'saltTargetBeyondSalt', 'saltTarget'],
+    ['a conductivity target beside another goal', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, ionicStrengthM: 0.1 } }, 'invalid-input', 'missingValue', 'saltTarget'],
+    ['a conductivity target read at 80 °C', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, conductivityTemperatureC: 80 } }, 'invalid-input', 'outOfRange', 'saltTarget.conductivityTemperatureC'],
+    ['a conductivity target in µS/cm beyond the most salt tried', { saltTarget: { form: 'NaCl', conductivityMsPerCm: '900000 µS/cm' } }, 'infeasible-target', 'saltTargetBeyondSalt', 'saltTarget'],
   ];
   it.each(cases)('given %s', (_label, change, kind, code, field) => {
     let caught: unknown;
@@ -304,5 +310,48 @@ describe('volumes as a pipette or cylinder is read', () => {
     [200000, '200 L'],
   ])('%p mL reads %p', (ml, text) => {
     expect(volumeText(ml)).toBe(text);
+  });
+});
+
+describe('conductivity predictions', () => {
+  it('gives κ of the finished buffer at the temperature of use and at 25 °C, the same as the core for the same composition', () => {
+    const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, useTemperatureC: 4, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'NaCl', concentrationMm: 150 }] });
+    expect(plan.predictions.conductivityMsPerCm).toBeCloseTo(conductivityAt(plan.composition).conductivityMsPerCm, 12);
+    expect(plan.predictions.conductivity25MsPerCm).toBeCloseTo(conductivityAt(plan.composition, 25).conductivityMsPerCm, 12);
+    // A cold buffer reads lower than at 25 °C: ions move about 2 % per °C slower.
+    expect(plan.predictions.conductivityMsPerCm).toBeLessThan(0.7 * plan.predictions.conductivity25MsPerCm);
+    expect(formatRecipe(plan)).toMatch(/conductivity\s+\d+(\.\d+)? mS\/cm at 4 °C; \d+(\.\d+)? mS\/cm at 25 °C/);
+  });
+
+  it('gives the stock its own κ: above the working dilution, below fold × it (ions slow down as the stock crowds them)', () => {
+    const plan = planRecipe({ buffer: 'phosphate', targetPh: 7.4, concentrationMm: 50, volumeMl: 1000, route: 'stock', stock: { fold: 10 }, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 5 } });
+    const working = plan.predictions.conductivityMsPerCm;
+    expect(plan.stock!.stockConductivityMsPerCm).toBeGreaterThan(working);
+    expect(plan.stock!.stockConductivityMsPerCm).toBeLessThan(10 * working);
+    expect(plan.stock!.stockConductivity25MsPerCm).toBeCloseTo(plan.stock!.stockConductivityMsPerCm, 12);
+  });
+});
+
+describe('salt target by conductivity', () => {
+  it('adds NaCl until the finished buffer reads 15.0 mS/cm at 20 °C (used at 25 °C), and the plan\'s own composition reads it back', () => {
+    const plan = planRecipe({ buffer: 'tris', targetPh: 7.5, concentrationMm: 20, volumeMl: 1000, form: 'tris base', titrant: { form: 'HCl', concentrationM: 1 }, saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, conductivityTemperatureC: 20 } });
+    expect(conductivityAt(plan.composition, 20).conductivityMsPerCm).toBeCloseTo(15, 6);
+    const salt = plan.components.find((c) => c.role === 'salt');
+    // About 150 mM NaCl makes 15 mS/cm at 20 °C (κ ≈ 16 mS/cm for 1 % NaCl, CRC Handbook): the amount is of that order.
+    expect(salt!.concentrationMm).toBeGreaterThan(100);
+    expect(salt!.concentrationMm).toBeLessThan(200);
+    expect(Math.abs(plan.predictions.pHAtUse - 7.5)).toBeLessThan(ROUND_TRIP_PH);
+  });
+
+  it('reads the target at the temperature of use when no temperature is given', () => {
+    const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, useTemperatureC: 4, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, saltTarget: { form: 'KCl', conductivityMsPerCm: 10 } });
+    expect(plan.predictions.conductivityMsPerCm).toBeCloseTo(10, 6);
+  });
+});
+
+describe('conductivity of a concentrated stock', () => {
+  it('warns that a stock beyond 1 M ionic strength is an extrapolation of the conductivity model', () => {
+    const plan = planRecipe({ buffer: 'phosphate', targetPh: 7.4, concentrationMm: 50, volumeMl: 1000, route: 'stock', stock: { fold: 10 }, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 5 }, salts: [{ form: 'NaCl', concentrationMm: 150 }] });
+    expect(plan.warnings.join(' ')).toMatch(/The stock: Ionic strength .* beyond where the conductivity model was checked/);
   });
 });
