@@ -4,7 +4,7 @@
  * registered as `PROTON.<NAME>`, exactly as formulas are written in Excel, so a workbook's
  * formulas evaluate unchanged in the preview page and on the command line.
  *
- *   const hf = createFormulaEngine({ Sheet1: [['tris base', 50], ['NaCl', 150], ['=PROTON.PH(A1:B2, 25)']] });
+ *   const hf = createFormulaEngine({ Sheet1: [['tris base', 50], ['NaCl', 150], ['=PROTON.PH.OF(A1:B2, 25)']] });
  *   hf.getCellValue({ sheet: 0, row: 2, col: 0 }); // 10.4…
  *
  * Errors come back as the engine's error values (#VALUE!, #N/A) with the message; nothing
@@ -21,7 +21,7 @@ import { spillShape } from './functions';
 /** Licence key for HyperFormula under the GPL (without it every formula gives #LIC!). */
 export const HYPERFORMULA_LICENSE_KEY = 'gpl-v3';
 
-/** Engine name of a catalog function: `PROTON.PH`. */
+/** Engine name of a catalog function: `PROTON.PH.OF`. */
 export function engineName(fn: CatalogFunction): string {
   return `${NAMESPACE}.${fn.id}`;
 }

@@ -7,7 +7,7 @@
  * into spreadsheet errors (errors.ts). Nothing here touches Office or a formula engine.
  *
  * In Excel every name carries the add-in's namespace (PROTON, set in manifest.xml):
- * `=PROTON.PH(A2:B4)`.
+ * `=PROTON.PH.OF(A2:B4)`.
  */
 /* eslint-disable @typescript-eslint/no-explicit-any -- `any` is how custom-functions metadata spells a cell of any type */
 import { apparentPKa, capacity, solutionWarnings, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
@@ -47,8 +47,8 @@ function solution(composition: any, temperatureC: any, activityModel: any, userS
 
 /**
  * Predicted pH of a solution given as a range of names and amounts.
- * @customfunction PH PH
- * @helpurl https://localhost:3000/help/functions.html#ph
+ * @customfunction PH.OF PH.OF
+ * @helpurl https://localhost:3000/help/functions.html#ph-of
  * @param composition Two columns: substance or form name (e.g. "tris base", "Na2HPO4·7H2O", "NaCl"), then amount in mM. Blank rows are ignored.
  * @param [temperatureC] Temperature in °C (blank: 25).
  * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
@@ -56,7 +56,7 @@ function solution(composition: any, temperatureC: any, activityModel: any, userS
  * @returns pH, as a calibrated meter would read it at that temperature.
  */
 export function ph(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
-  return memoised('PH', [composition, temperatureC, activityModel, userSubstances], () => solvePh(solution(composition, temperatureC, activityModel, userSubstances)));
+  return memoised('PH.OF', [composition, temperatureC, activityModel, userSubstances], () => solvePh(solution(composition, temperatureC, activityModel, userSubstances)));
 }
 
 /**
@@ -224,7 +224,7 @@ export function osmolarityIdeal(composition: any[][], temperatureC?: any, activi
 }
 
 /**
- * Warnings about a solution's prediction, as one cell of text: "none", or how many and each in turn. Put it beside a PH cell: single-value results cannot carry their warnings.
+ * Warnings about a solution's prediction, as one cell of text: "none", or how many and each in turn. Put it beside a PH.OF cell: single-value results cannot carry their warnings.
  * @customfunction WARNINGS WARNINGS
  * @helpurl https://localhost:3000/help/functions.html#warnings
  * @param composition Two columns: substance or form name, then amount in mM.

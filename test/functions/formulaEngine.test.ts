@@ -27,8 +27,8 @@ describe('formula engine', () => {
   test('formulas as typed in Excel (any case) give the catalog\'s values; ordinary formulas mix in', () => {
     const hf = createFormulaEngine({
       Prep: [
-        ['tris base', 50, '=PROTON.PH(A1:B2)', '=proton.ph(A1:B2, "25", "Davies")', '=ROUND(C1, 2)'],
-        ['NaCl', 150, '=PROTON.GRAMS("tris HCl", 50, 1000, 99%)', '=PROTON.GRAMS("tris HCl", 50, 1000, "99%")', '=PROTON.PH({"tris base",50;"NaCl",150})'],
+        ['tris base', 50, '=PROTON.PH.OF(A1:B2)', '=proton.ph.of(A1:B2, "25", "Davies")', '=ROUND(C1, 2)'],
+        ['NaCl', 150, '=PROTON.GRAMS("tris HCl", 50, 1000, 99%)', '=PROTON.GRAMS("tris HCl", 50, 1000, "99%")', '=PROTON.PH.OF({"tris base",50;"NaCl",150})'],
       ],
     });
     const at = (row: number, col: number) => hf.getCellValue({ sheet: 0, row, col });
@@ -45,7 +45,7 @@ describe('formula engine', () => {
   test('errors are the engine\'s #VALUE! / #N/A with the message; upstream errors propagate; wrong argument counts are caught', () => {
     const hf = createFormulaEngine({
       S: [
-        ['tris base', 50, '=PROTON.PH(A1:B1, 120)', '=PROTON.PH(A2:B2)', '=PROTON.PH(A1:B1, 1/0)', '=PROTON.PH()'],
+        ['tris base', 50, '=PROTON.PH.OF(A1:B1, 120)', '=PROTON.PH.OF(A2:B2)', '=PROTON.PH.OF(A1:B1, 1/0)', '=PROTON.PH.OF()'],
         ['HEPSE', 10, '=PROTON.TITRANT.ML("tris base", 50, 1000, 11, "HCl", 1)'],
       ],
     });
@@ -76,7 +76,7 @@ describe('formula engine', () => {
     expect(toEngineFormula('_xldudf_PROTON_TITRANT_ML(A1,50,1000,7.4,"HCl",1)+_xlfn.XLOOKUP(1,A:A,B:B)')).toBe('PROTON.TITRANT.ML(A1,50,1000,7.4,"HCl",1)+XLOOKUP(1,A:A,B:B)');
     expect(toEngineFormula('[1]!_xldudf_PROTON_IONIC_STRENGTH_MM(A1:B3)')).toBe('PROTON.IONIC.STRENGTH.MM(A1:B3)');
     // Prefixes another add-in's registration can leave, as reported in OfficeDev/office-js issues 2568 and 3872.
-    expect(toEngineFormula('Other.xla!_xldudf_PROTON_PH(A1:B3)+1')).toBe('PROTON.PH(A1:B3)+1');
+    expect(toEngineFormula('Other.xla!_xldudf_PROTON_PH_OF(A1:B3)+1')).toBe('PROTON.PH.OF(A1:B3)+1');
     expect(toEngineFormula("'Lab tools.xlam'!_xldudf_PROTON_WARNINGS(A1:B3)")).toBe('PROTON.WARNINGS(A1:B3)');
     expect(toEngineFormula('_xldudf_OTHER_ADDIN_FN(1)')).toBe('_xldudf_OTHER_ADDIN_FN(1)');
   });

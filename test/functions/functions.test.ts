@@ -21,7 +21,7 @@ const trisSaline = (temperatureC = 25, activityModel: 'davies' | 'ideal' | 'bate
 
 beforeEach(() => clearCallCache());
 
-describe('PH', () => {
+describe('PH.OF', () => {
   test('equals the core solver for a composition range (typical use)', () => {
     expect(ph(TRIS_SALINE)).toBeCloseTo(solvePh(trisSaline()), SAME_DIGITS);
     expect(ph(TRIS_SALINE, 37, 'ideal')).toBeCloseTo(solvePh(trisSaline(37, 'ideal')), SAME_DIGITS);
@@ -178,7 +178,7 @@ describe('WARNINGS', () => {
     const text = warnings([['trisodium citrate dihydrate', 10], ['CaCl2·2H2O', 2]]);
     expect(text).toMatch(/^2 warnings: \(1\) pH \d+\.\d\d is more than 1 unit from every pKa′ .* \(2\) Ca2\+ with citrate: metal–buffer complexes are not modelled/);
   });
-  test('passes on the solver warnings (temperature, ionic strength) that a PH cell cannot show', () => {
+  test('passes on the solver warnings (temperature, ionic strength) that a PH.OF cell cannot show', () => {
     expect(warnings(TRIS_SALINE.concat([['HCl', 25]]), 80)).toMatch(/^1 warning: \(1\) Temperature 80 °C is above 60 °C/);
     expect(warnings([['NaCl', 2000], ['sodium acetate trihydrate', 50], ['acetic acid', 50]])).toMatch(/Ionic strength 2\.\d+ M is above 0\.5 M/);
   });

@@ -28,7 +28,7 @@ describe('userSubstances range', () => {
   const library = createLibrary([
     { name: 'Lab amine', chargeOfMostProtonated: 1, pKa: [7.85], deltaHkJ: [40], forms: [{ name: 'Lab amine base', molarMass: 131.2, protonsLost: 1 }, { name: 'Lab amine HCl', molarMass: 167.6, protonsLost: 0, counterIons: { 'Cl-': 1 } }] },
   ]);
-  test('a user form works in PH exactly as the same record given to the core', () => {
+  test('a user form works in PH.OF exactly as the same record given to the core', () => {
     const composition = library.compositionFromForms([{ form: 'Lab amine base', concentrationM: 0.02 }, { form: 'Lab amine HCl', concentrationM: 0.03 }]);
     expect(ph([['lab amine base', 20], ['LAB AMINE HCL', 30]], 25, '', USER)).toBeCloseTo(solvePh(composition), SAME_DIGITS);
     expect(ph([['Lab diacid', 10], ['Lab diacid disodium', 5]], '', '', USER)).toBeCloseTo(
