@@ -60,7 +60,27 @@ class HelpPagePlugin {
   }
 }
 
-module.exports = (env, argv) => {
+/**
+ * The https server of `npm run dev-server`: the localhost certificate of office-addin-dev-certs
+ * (its CA is what `npx office-addin-dev-certs install` puts in the system's trust store, which
+ * Excel desktop trusts). Where that cannot be set up (no trust store, no administrator rights),
+ * webpack-dev-server's own self-signed certificate, which only a browser told to accept it
+ * trusts (Excel on the web), with a warning that says so.
+ */
+async function devServerHttps() {
+  try {
+    const { getHttpsServerOptions } = require('office-addin-dev-certs');
+    return { type: 'https', options: await getHttpsServerOptions() };
+  } catch (error) {
+    console.warn(
+      `[dev-server] office-addin-dev-certs could not provide a trusted certificate (${error instanceof Error ? error.message.split('\n')[0] : error}).\n` +
+        '[dev-server] Serving a self-signed certificate instead: Excel desktop will not load the add-in. Run `npx office-addin-dev-certs install` (see docs/excel.md).',
+    );
+    return 'https';
+  }
+}
+
+function buildConfig(env, argv) {
   const production = argv.mode !== 'development';
   const hasFunctions = fs.existsSync(FUNCTIONS_ENTRY);
   const entry = {
@@ -117,7 +137,7 @@ module.exports = (env, argv) => {
     ],
     devServer: {
       port: DEV_PORT,
-      // webpack-dev-server makes and keeps its own self-signed certificate (see docs/excel.md).
+      // `webpack serve` replaces this with office-addin-dev-certs' certificate (devServerHttps).
       server: 'https',
       headers: { 'Access-Control-Allow-Origin': '*' },
       static: false,
@@ -126,6 +146,13 @@ module.exports = (env, argv) => {
       client: { overlay: false },
     },
   };
+}
+
+/** The configuration; under `webpack serve` a promise of it, with the trusted dev certificate (a build never touches the trust store). */
+module.exports = (env, argv) => {
+  const config = buildConfig(env, argv);
+  if (!(env && env.WEBPACK_SERVE)) return config;
+  return devServerHttps().then((server) => ({ ...config, devServer: { ...config.devServer, server } }));
 };
 module.exports.OUTPUTS = OUTPUTS;
 module.exports.PREVIEW_CSP = PREVIEW_CSP;
