@@ -5,7 +5,9 @@
  *   functions.js   worksheet functions registered with CustomFunctions (src/functions/excel.ts)
  *   functions.json custom-function metadata (copied from src/functions/metadata.json)
  *   index.html     the preview workbook (grid + formula engine + task pane), no Excel needed
- *   office.js …    Office.js served from @microsoft/office-js (no network at run time)
+ *   (Office.js)    the Excel pages load it from Microsoft's CDN (OFFICE_JS_CDN); only with
+ *                  OFFICE_JS=local, for closed networks, is a copy from @microsoft/office-js
+ *                  served from dist/office/ instead
  *   assets/, help/ icons and the worksheet-function help page
  *   manifest.xml   only with ADDIN_ORIGIN set: the manifest rewritten for that origin
  *                  (functions.json's help URLs likewise; see scripts/deployOrigin.js)
@@ -39,6 +41,33 @@ const PREVIEW_CSP = [
   "base-uri 'none'",
   "form-action 'none'",
 ].join('; ');
+
+/**
+ * Office.js as Microsoft publishes it for add-ins: the Excel pages load it from here (Microsoft
+ * requires the CDN copy for AppSource and keeps it current; the npm copy is a frozen snapshot).
+ * Source: Microsoft, "Referencing the Office JavaScript API library"
+ * (https://learn.microsoft.com/office/dev/add-ins/develop/referencing-the-javascript-api-for-office-library-from-its-cdn).
+ */
+const OFFICE_JS_CDN = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
+
+/** True for a build with OFFICE_JS=local: Office.js served from our own origin (closed networks; development only). */
+function localOfficeJs() {
+  const mode = process.env.OFFICE_JS;
+  if (mode === undefined || mode === '' || mode === 'cdn') return false;
+  if (mode === 'local') return true;
+  throw new Error(`OFFICE_JS must be "cdn" (the default) or "local", not ${JSON.stringify(mode)}.`);
+}
+
+/**
+ * Content-Security-Policy of the Excel pages (task pane, functions page): scripts from our own
+ * origin and from Office.js's origin (nothing else, no inline script, no eval); no plugins, no
+ * <base>, no form posts. Office.js loads its host files from its own origin and talks to Excel
+ * through the host's message channel, so the other fetch directives are left to it.
+ */
+function excelCsp(local) {
+  const scripts = local ? "'self'" : `'self' ${new URL(OFFICE_JS_CDN).origin}`;
+  return [`script-src ${scripts}`, "object-src 'none'", "base-uri 'none'", "form-action 'none'"].join('; ');
+}
 
 /** Files the build writes that manifest.xml points at (checked by test/manifest.test.ts). */
 const OUTPUTS = ['taskpane.html', 'functions.html', 'functions.js', 'functions.json', 'help/functions.html', 'index.html'];
@@ -97,10 +126,16 @@ function buildConfig(env, argv) {
     { from: 'node_modules/exceljs/dist/exceljs.min.js', to: 'vendor/exceljs.min.js', info: { minimized: true } },
     { from: 'src/taskpane/pane.css', to: 'pane.css' },
     { from: 'src/preview/preview.css', to: 'preview.css' },
-    { from: path.join(OFFICE_JS, '*.js').replace(/\\/g, '/'), to: 'office/[name][ext]', globOptions: { ignore: ['**/*.debug.js'] } },
-    // Office.js loads its host- and locale-specific files from folders beside itself.
-    { from: path.join(OFFICE_JS, 'en-us').replace(/\\/g, '/'), to: 'office/en-us', noErrorOnMissing: true },
   ];
+  const local = localOfficeJs();
+  if (local) {
+    copies.push(
+      { from: path.join(OFFICE_JS, '*.js').replace(/\\/g, '/'), to: 'office/[name][ext]', globOptions: { ignore: ['**/*.debug.js'] } },
+      // Office.js loads its host- and locale-specific files from folders beside itself.
+      { from: path.join(OFFICE_JS, 'en-us').replace(/\\/g, '/'), to: 'office/en-us', noErrorOnMissing: true },
+    );
+  }
+  const excelPage = { officeJs: local ? 'office/office.js' : OFFICE_JS_CDN, csp: excelCsp(local) };
   // A deployment build (ADDIN_ORIGIN set) rewrites the development origin in what it serves.
   const origin = process.env.ADDIN_ORIGIN ? checkOrigin(process.env.ADDIN_ORIGIN) : undefined;
   const rewrite = origin ? { transform: (content) => withOrigin(content.toString(), origin) } : {};
@@ -122,15 +157,15 @@ function buildConfig(env, argv) {
     },
     performance: { hints: false },
     // The Excel bundles are minified; the preview bundle (HyperFormula) and the copied
-    // Office.js and exceljs files are not: minifying those took about four minutes here, and
+    // Office.js (OFFICE_JS=local) and exceljs files are not: minifying those took about four minutes here, and
     // they are served from our own origin, where their size does not matter.
     optimization: {
       minimize: production,
       minimizer: [new TerserPlugin({ exclude: [/^office\//, /^vendor\//, /^preview/], terserOptions: { compress: { passes: 2 } } })],
     },
     plugins: [
-      new HtmlWebpackPlugin({ filename: 'taskpane.html', template: './src/taskpane/taskpane.html', chunks: sharedChunks, inject: 'body' }),
-      new HtmlWebpackPlugin({ filename: 'functions.html', template: './src/taskpane/functions.html', chunks: hasFunctions ? ['functions'] : [], inject: 'body' }),
+      new HtmlWebpackPlugin({ filename: 'taskpane.html', template: './src/taskpane/taskpane.html', chunks: sharedChunks, inject: 'body', templateParameters: excelPage }),
+      new HtmlWebpackPlugin({ filename: 'functions.html', template: './src/taskpane/functions.html', chunks: hasFunctions ? ['functions'] : [], inject: 'body', templateParameters: excelPage }),
       new HtmlWebpackPlugin({ filename: 'index.html', template: './src/preview/index.html', chunks: ['preview'], inject: 'body', templateParameters: { csp: PREVIEW_CSP } }),
       new CopyWebpackPlugin({ patterns: copies }),
       new HelpPagePlugin(),
@@ -156,4 +191,6 @@ module.exports = (env, argv) => {
 };
 module.exports.OUTPUTS = OUTPUTS;
 module.exports.PREVIEW_CSP = PREVIEW_CSP;
+module.exports.OFFICE_JS_CDN = OFFICE_JS_CDN;
+module.exports.excelCsp = excelCsp;
 module.exports.DEV_PORT = DEV_PORT;
