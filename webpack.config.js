@@ -148,7 +148,8 @@ function buildConfig(env, argv) {
     devtool: 'source-map',
     context: root,
     entry,
-    output: { path: path.join(root, 'dist'), filename: '[name].js', clean: true },
+    // DIST_DIR builds elsewhere (the conformance test's deployment build); dist/ by default.
+    output: { path: process.env.DIST_DIR ? path.resolve(root, process.env.DIST_DIR) : path.join(root, 'dist'), filename: '[name].js', clean: true },
     resolve: { extensions: ['.ts', '.js', '.json'] },
     module: {
       rules: [
