@@ -7,8 +7,9 @@ import { DetailedCellError } from 'hyperformula';
 import { titrantForPh } from '../../src/chem';
 import { defaultLibrary } from '../../src/chem/library';
 import { CATALOG } from '../../src/functions/catalog';
-import { createFormulaEngine, toEngineFormula } from '../../src/functions/formulaEngine';
-import { ph, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
+import { createFormulaEngine, padToSpill, toEngineFormula } from '../../src/functions/formulaEngine';
+import { ph, RECIPE_TABLE_ROWS, species, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
+import { SheetError } from '../../src/functions/errors';
 import { clearCallCache } from '../../src/functions/memo';
 
 /** Engine and direct call run the same arithmetic (smartRounding is off): only the mL scaling may round differently. */
@@ -70,6 +71,22 @@ describe('formula engine', () => {
     expect(hf.getCellValue({ sheet: 0, row: SPECIES_TABLE_ROWS - 1, col: 6 })).toBe('');
     expect(hf.getCellValue({ sheet: 0, row: 0, col: 7 })).toBe(lib.list()[0].name);
     hf.destroy();
+  });
+
+  test('only this host pads: SPECIES and RECIPE fill their fixed shape with blank text here, though the functions return only the rows they have', () => {
+    const hf = createFormulaEngine({ S: [['tris base', 50, '=PROTON.SPECIES(A1:B1)', null, null, null, '=PROTON.RECIPE("tris", 8, 50, 1000)']] });
+    const speciesRows = species([['tris base', 50]]).length;
+    expect(speciesRows).toBeLessThan(SPECIES_TABLE_ROWS);
+    expect(hf.getCellValue({ sheet: 0, row: speciesRows - 1, col: 2 })).not.toBe('');
+    for (let row = speciesRows; row < SPECIES_TABLE_ROWS; row++) expect(hf.getCellValue({ sheet: 0, row, col: 2 })).toBe('');
+    expect(hf.getCellValue({ sheet: 0, row: RECIPE_TABLE_ROWS - 1, col: 6 })).toBe('');
+    expect(hf.getSheetDimensions(0).height).toBe(RECIPE_TABLE_ROWS);
+    hf.destroy();
+  });
+
+  test('padToSpill pads ragged rows and refuses a result larger than the reserved size', () => {
+    expect(padToSpill([[1], ['a', 2]], { width: 2, height: 3 })).toEqual([[1, ''], ['a', 2], ['', '']]);
+    expect(padToSpill([[1, 2, 3]], { width: 2, height: 3 })).toBeInstanceOf(SheetError);
   });
 
   test('formulas as Excel saves them (_xldudf_PROTON_…, _xlfn.) are translated', () => {
