@@ -15,7 +15,7 @@ export const DEPLOY_DIST = join(ROOT, 'test-artifacts', 'dist-deploy');
 export const DEPLOY_ORIGIN = 'https://example.org';
 
 /** What a build reads: a change to any of these makes a build stale. */
-const INPUTS = ['src', 'docs', 'scripts', 'assets', 'manifest.xml', 'webpack.config.js'];
+const INPUTS = ['src', 'docs/functions.md', 'scripts', 'assets', 'manifest.xml', 'webpack.config.js', 'package-lock.json'];
 
 /** Newest modification time of the files under a path, ms. */
 function newest(path: string): number {
