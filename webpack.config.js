@@ -5,7 +5,9 @@
  *   functions.js   worksheet functions registered with CustomFunctions (src/functions/excel.ts)
  *   functions.json custom-function metadata (copied from src/functions/metadata.json)
  *   index.html     the preview workbook (grid + formula engine + task pane), no Excel needed
- *   office.js …    Office.js served from @microsoft/office-js (no network at run time)
+ *   (Office.js)    the Excel pages load it from Microsoft's CDN (OFFICE_JS_CDN); only with
+ *                  OFFICE_JS=local, for closed networks, is a copy from @microsoft/office-js
+ *                  served from dist/office/ instead
  *   assets/, help/ icons and the worksheet-function help page
  *   manifest.xml   only with ADDIN_ORIGIN set: the manifest rewritten for that origin
  *                  (functions.json's help URLs likewise; see scripts/deployOrigin.js)
@@ -40,6 +42,33 @@ const PREVIEW_CSP = [
   "form-action 'none'",
 ].join('; ');
 
+/**
+ * Office.js as Microsoft publishes it for add-ins: the Excel pages load it from here (Microsoft
+ * requires the CDN copy for AppSource and keeps it current; the npm copy is a frozen snapshot).
+ * Source: Microsoft, "Referencing the Office JavaScript API library"
+ * (https://learn.microsoft.com/office/dev/add-ins/develop/referencing-the-javascript-api-for-office-library-from-its-cdn).
+ */
+const OFFICE_JS_CDN = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
+
+/** True for a build with OFFICE_JS=local: Office.js served from our own origin (closed networks; development only). */
+function localOfficeJs() {
+  const mode = process.env.OFFICE_JS;
+  if (mode === undefined || mode === '' || mode === 'cdn') return false;
+  if (mode === 'local') return true;
+  throw new Error(`OFFICE_JS must be "cdn" (the default) or "local", not ${JSON.stringify(mode)}.`);
+}
+
+/**
+ * Content-Security-Policy of the Excel pages (task pane, functions page): scripts from our own
+ * origin and from Office.js's origin (nothing else, no inline script, no eval); no plugins, no
+ * <base>, no form posts. Office.js loads its host files from its own origin and talks to Excel
+ * through the host's message channel, so the other fetch directives are left to it.
+ */
+function excelCsp(local) {
+  const scripts = local ? "'self'" : `'self' ${new URL(OFFICE_JS_CDN).origin}`;
+  return [`script-src ${scripts}`, "object-src 'none'", "base-uri 'none'", "form-action 'none'"].join('; ');
+}
+
 /** Files the build writes that manifest.xml points at (checked by test/manifest.test.ts). */
 const OUTPUTS = ['taskpane.html', 'functions.html', 'functions.js', 'functions.json', 'help/functions.html', 'index.html'];
 
@@ -60,7 +89,27 @@ class HelpPagePlugin {
   }
 }
 
-module.exports = (env, argv) => {
+/**
+ * The https server of `npm run dev-server`: the localhost certificate of office-addin-dev-certs
+ * (its CA is what `npx office-addin-dev-certs install` puts in the system's trust store, which
+ * Excel desktop trusts). Where that cannot be set up (no trust store, no administrator rights),
+ * webpack-dev-server's own self-signed certificate, which only a browser told to accept it
+ * trusts (Excel on the web), with a warning that says so.
+ */
+async function devServerHttps() {
+  try {
+    const { getHttpsServerOptions } = require('office-addin-dev-certs');
+    return { type: 'https', options: await getHttpsServerOptions() };
+  } catch (error) {
+    console.warn(
+      `[dev-server] office-addin-dev-certs could not provide a trusted certificate (${error instanceof Error ? error.message.split('\n')[0] : error}).\n` +
+        '[dev-server] Serving a self-signed certificate instead: Excel desktop will not load the add-in. Run `npx office-addin-dev-certs install` (see docs/excel.md).',
+    );
+    return 'https';
+  }
+}
+
+function buildConfig(env, argv) {
   const production = argv.mode !== 'development';
   const hasFunctions = fs.existsSync(FUNCTIONS_ENTRY);
   const entry = {
@@ -77,10 +126,16 @@ module.exports = (env, argv) => {
     { from: 'node_modules/exceljs/dist/exceljs.min.js', to: 'vendor/exceljs.min.js', info: { minimized: true } },
     { from: 'src/taskpane/pane.css', to: 'pane.css' },
     { from: 'src/preview/preview.css', to: 'preview.css' },
-    { from: path.join(OFFICE_JS, '*.js').replace(/\\/g, '/'), to: 'office/[name][ext]', globOptions: { ignore: ['**/*.debug.js'] } },
-    // Office.js loads its host- and locale-specific files from folders beside itself.
-    { from: path.join(OFFICE_JS, 'en-us').replace(/\\/g, '/'), to: 'office/en-us', noErrorOnMissing: true },
   ];
+  const local = localOfficeJs();
+  if (local) {
+    copies.push(
+      { from: path.join(OFFICE_JS, '*.js').replace(/\\/g, '/'), to: 'office/[name][ext]', globOptions: { ignore: ['**/*.debug.js'] } },
+      // Office.js loads its host- and locale-specific files from folders beside itself.
+      { from: path.join(OFFICE_JS, 'en-us').replace(/\\/g, '/'), to: 'office/en-us', noErrorOnMissing: true },
+    );
+  }
+  const excelPage = { officeJs: local ? 'office/office.js' : OFFICE_JS_CDN, csp: excelCsp(local) };
   // A deployment build (ADDIN_ORIGIN set) rewrites the development origin in what it serves.
   const origin = process.env.ADDIN_ORIGIN ? checkOrigin(process.env.ADDIN_ORIGIN) : undefined;
   const rewrite = origin ? { transform: (content) => withOrigin(content.toString(), origin) } : {};
@@ -93,7 +148,8 @@ module.exports = (env, argv) => {
     devtool: 'source-map',
     context: root,
     entry,
-    output: { path: path.join(root, 'dist'), filename: '[name].js', clean: true },
+    // DIST_DIR builds elsewhere (the conformance test's deployment build); dist/ by default.
+    output: { path: process.env.DIST_DIR ? path.resolve(root, process.env.DIST_DIR) : path.join(root, 'dist'), filename: '[name].js', clean: true },
     resolve: { extensions: ['.ts', '.js', '.json'] },
     module: {
       rules: [
@@ -102,22 +158,22 @@ module.exports = (env, argv) => {
     },
     performance: { hints: false },
     // The Excel bundles are minified; the preview bundle (HyperFormula) and the copied
-    // Office.js and exceljs files are not: minifying those took about four minutes here, and
+    // Office.js (OFFICE_JS=local) and exceljs files are not: minifying those took about four minutes here, and
     // they are served from our own origin, where their size does not matter.
     optimization: {
       minimize: production,
       minimizer: [new TerserPlugin({ exclude: [/^office\//, /^vendor\//, /^preview/], terserOptions: { compress: { passes: 2 } } })],
     },
     plugins: [
-      new HtmlWebpackPlugin({ filename: 'taskpane.html', template: './src/taskpane/taskpane.html', chunks: sharedChunks, inject: 'body' }),
-      new HtmlWebpackPlugin({ filename: 'functions.html', template: './src/taskpane/functions.html', chunks: hasFunctions ? ['functions'] : [], inject: 'body' }),
+      new HtmlWebpackPlugin({ filename: 'taskpane.html', template: './src/taskpane/taskpane.html', chunks: sharedChunks, inject: 'body', templateParameters: excelPage }),
+      new HtmlWebpackPlugin({ filename: 'functions.html', template: './src/taskpane/functions.html', chunks: hasFunctions ? ['functions'] : [], inject: 'body', templateParameters: excelPage }),
       new HtmlWebpackPlugin({ filename: 'index.html', template: './src/preview/index.html', chunks: ['preview'], inject: 'body', templateParameters: { csp: PREVIEW_CSP } }),
       new CopyWebpackPlugin({ patterns: copies }),
       new HelpPagePlugin(),
     ],
     devServer: {
       port: DEV_PORT,
-      // webpack-dev-server makes and keeps its own self-signed certificate (see docs/excel.md).
+      // `webpack serve` replaces this with office-addin-dev-certs' certificate (devServerHttps).
       server: 'https',
       headers: { 'Access-Control-Allow-Origin': '*' },
       static: false,
@@ -126,7 +182,16 @@ module.exports = (env, argv) => {
       client: { overlay: false },
     },
   };
+}
+
+/** The configuration; under `webpack serve` a promise of it, with the trusted dev certificate (a build never touches the trust store). */
+module.exports = (env, argv) => {
+  const config = buildConfig(env, argv);
+  if (!(env && env.WEBPACK_SERVE)) return config;
+  return devServerHttps().then((server) => ({ ...config, devServer: { ...config.devServer, server } }));
 };
 module.exports.OUTPUTS = OUTPUTS;
 module.exports.PREVIEW_CSP = PREVIEW_CSP;
+module.exports.OFFICE_JS_CDN = OFFICE_JS_CDN;
+module.exports.excelCsp = excelCsp;
 module.exports.DEV_PORT = DEV_PORT;

@@ -16,14 +16,14 @@ const LIMIT_MS = 50;
 const huge = Array.from({ length: 100_000 }, () => ['NaCl', 1]);
 
 const cases: [string, () => unknown][] = [
-  ['PH: 100,000-row composition', () => ph(huge)],
-  ['PH: unknown name', () => ph([['tris baes', 50]])],
-  ['PH: non-ASCII name', () => ph([['трис', 50]])],
-  ['PH: -20 °C', () => ph([['tris base', 50]], -20)],
-  ['PH: 150 °C', () => ph([['tris base', 50]], 150)],
-  ['PH: 10 M NaOH', () => ph([['NaOH', 10000]])],
-  ['PH: NaN as text', () => ph([['tris base', 'NaN']])],
-  ['PH: one-column range', () => ph([['tris base'], ['HCl']])],
+  ['PH.OF: 100,000-row composition', () => ph(huge)],
+  ['PH.OF: unknown name', () => ph([['tris baes', 50]])],
+  ['PH.OF: non-ASCII name', () => ph([['трис', 50]])],
+  ['PH.OF: -20 °C', () => ph([['tris base', 50]], -20)],
+  ['PH.OF: 150 °C', () => ph([['tris base', 50]], 150)],
+  ['PH.OF: 10 M NaOH', () => ph([['NaOH', 10000]])],
+  ['PH.OF: NaN as text', () => ph([['tris base', 'NaN']])],
+  ['PH.OF: one-column range', () => ph([['tris base'], ['HCl']])],
   ['GRAMS: "50 kg"', () => grams('NaCl', '50 kg', 1000)],
   ['GRAMS: negative volume', () => grams('NaCl', 50, -1)],
   ['TITRANT.ML: pH 15', () => titrantMl('tris base', 50, 1000, 15, 'HCl', 1)],

@@ -50,7 +50,7 @@ const letter = (c: number) => (c < 26 ? String.fromCharCode(65 + c) : String.fro
 const rows: unknown[][] = [[null, ...TEMPERATURES]];
 TARGETS.forEach((target, i) => rows.push([target, ...TEMPERATURES.map((_, j) => `=PROTON.TITRANT.ML("tris base", 50, 1000, $A${i + 2}, "HCl", 1, ${letter(j + 1)}$1)`)]));
 clearCallCache();
-createFormulaEngine({ Warm: [['tris base', 1, '=PROTON.PH(A1:B1)']] }).destroy();
+createFormulaEngine({ Warm: [['tris base', 1, '=PROTON.PH.OF(A1:B1)']] }).destroy();
 const engine = time(() => createFormulaEngine({ Grid: rows }));
 const values = engine.value.getSheetValues(0);
 const errors = values.flat().filter((v) => typeof v === 'object' && v !== null).length;

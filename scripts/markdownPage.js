@@ -32,6 +32,7 @@ function cellsOf(line) {
 function markdownToHtml(markdown) {
   const lines = markdown.replace(/\r\n/g, '\n').split('\n');
   const out = [];
+  let pendingId;
   let i = 0;
   while (i < lines.length) {
     const line = lines[i];
@@ -43,10 +44,21 @@ function markdownToHtml(markdown) {
       out.push(`<pre><code>${escapeHtml(code.join('\n'))}</code></pre>`);
       continue;
     }
+    // `<a id="name"></a>` on a line of its own names the heading that follows (the functions'
+    // help links point at these short ids); anywhere else it stays an anchor of its own.
+    const anchor = /^<a id="([a-z0-9-]+)"><\/a>\s*$/.exec(line);
+    if (anchor) {
+      i++;
+      while (i < lines.length && lines[i].trim() === '') i++;
+      if (i < lines.length && /^#{1,4}\s/.test(lines[i])) pendingId = anchor[1];
+      else out.push(`<a id="${anchor[1]}"></a>`);
+      continue;
+    }
     const heading = /^(#{1,4})\s+(.*)$/.exec(line);
     if (heading) {
       const level = heading[1].length;
-      const id = heading[2].toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
+      const id = pendingId ?? heading[2].toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
+      pendingId = undefined;
       out.push(`<h${level} id="${id}">${inline(heading[2])}</h${level}>`);
       i++;
       continue;

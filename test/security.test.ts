@@ -1,11 +1,16 @@
 /**
  * Security checks on the source and on the built pages and bundles: no code from strings,
- * no HTML from strings, no network requests at run time, a Content-Security-Policy on the
- * preview page, and the least permission in the manifest.
+ * no HTML from strings, no network requests from any bundle of ours, the Excel pages loading
+ * Office.js from Microsoft's CDN (and nothing else remote) under a Content-Security-Policy,
+ * the preview page fully local under its own, and the least permission in the manifest.
  */
-import { readFileSync, readdirSync, statSync } from 'fs';
+import { existsSync, readFileSync, readdirSync } from 'fs';
 import { join } from 'path';
 import { DIST, ROOT, ensureBuild } from './support/build';
+
+// eslint-disable-next-line @typescript-eslint/no-require-imports
+const webpackConfig = require('../webpack.config.js') as ((env: unknown, argv: { mode: string }) => unknown) & { OFFICE_JS_CDN: string; excelCsp: (local: boolean) => string };
+const { OFFICE_JS_CDN, excelCsp } = webpackConfig;
 
 function filesUnder(dir: string, ending: RegExp): string[] {
   return readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
@@ -45,28 +50,64 @@ describe('the built pages and bundles', () => {
     }
   });
 
-  it('load scripts, styles and images from their own origin only (relative addresses; Office.js is served from dist/office)', () => {
+  /** The pages Excel opens (they load Office.js); every other page is ours alone. */
+  const EXCEL_PAGES = ['taskpane.html', 'functions.html'];
+
+  it('load scripts, styles and images from their own origin only; the Excel pages add Office.js from Microsoft and nothing else', () => {
     for (const page of pages()) {
       const html = readFileSync(page, 'utf8');
+      const excel = EXCEL_PAGES.some((name) => page === join(DIST, name));
       const addresses = [...html.matchAll(/\b(?:src|href)\s*=\s*"([^"]*)"/g)].map((m) => m[1]);
-      for (const address of addresses) expect({ page, address, remote: /^([a-z]+:)?\/\//i.test(address) }).toEqual({ page, address, remote: false });
+      const remote = addresses.filter((address) => /^([a-z]+:)?\/\//i.test(address));
+      expect({ page, remote }).toEqual({ page, remote: excel ? [OFFICE_JS_CDN] : [] });
     }
   });
 
-  it('the preview page carries a Content-Security-Policy that forbids inline script, eval and remote code', () => {
-    const html = readFileSync(join(DIST, 'index.html'), 'utf8');
-    const csp = /http-equiv="Content-Security-Policy"\s+content="([^"]+)"/.exec(html)?.[1] ?? '';
-    expect(csp).toMatch(/default-src 'self'/);
-    expect(csp).toMatch(/script-src 'self'(;|$)/);
-    expect(csp).toMatch(/connect-src 'self'/);
-    expect(csp).not.toMatch(/unsafe-inline|unsafe-eval|https?:/);
+  it.each(EXCEL_PAGES)('%s loads Office.js from Microsoft\'s CDN in <head>, under a CSP that allows scripts from there and our origin only', (name) => {
+    const html = readFileSync(join(DIST, name), 'utf8');
+    const head = html.slice(0, html.indexOf('</head>'));
+    expect(OFFICE_JS_CDN).toBe('https://appsforoffice.microsoft.com/lib/1/hosted/office.js');
+    expect(head).toContain(`<script src="${OFFICE_JS_CDN}"></script>`);
+    const csp = /http-equiv="Content-Security-Policy"\s+content="([^"]+)"/.exec(head)?.[1] ?? '';
+    expect(head.indexOf('Content-Security-Policy')).toBeLessThan(head.indexOf(OFFICE_JS_CDN));
+    expect(csp).toMatch(/(^|; )script-src 'self' https:\/\/appsforoffice\.microsoft\.com(;|$)/);
+    expect(csp).toMatch(/object-src 'none'/);
+    expect(csp).not.toMatch(/unsafe-inline|unsafe-eval/);
     expect(html).not.toMatch(/<script(?![^>]*\bsrc=)[^>]*>/);
   });
 
-  it('the Excel pages load Office.js from our own origin', () => {
-    const html = readFileSync(join(DIST, 'taskpane.html'), 'utf8');
-    expect(html).toMatch(/src="office\/office\.js"/);
-    expect(statSync(join(DIST, 'office', 'office.js')).size).toBeGreaterThan(1000);
+  it('no copy of Office.js in a default build (only OFFICE_JS=local writes dist/office)', () => {
+    expect(existsSync(join(DIST, 'office'))).toBe(false);
+  });
+
+  it('the preview page loads no Office.js', () => {
+    const html = readFileSync(join(DIST, 'index.html'), 'utf8');
+    expect(html).not.toMatch(/office\.js|appsforoffice/i);
+    expect(readFileSync(join(DIST, 'preview.js'), 'utf8')).not.toMatch(/appsforoffice/);
+  });
+});
+
+describe('OFFICE_JS=local (closed networks)', () => {
+  const saved = process.env.OFFICE_JS;
+  afterEach(() => {
+    if (saved === undefined) delete process.env.OFFICE_JS;
+    else process.env.OFFICE_JS = saved;
+  });
+  type Plugin = { userOptions?: { filename?: string; templateParameters?: { officeJs: string; csp: string } }; patterns?: { to: string }[] };
+  const plugins = () => (webpackConfig({}, { mode: 'production' }) as { plugins: Plugin[] }).plugins;
+
+  it('serves Office.js from our own origin, copies it into office/, and narrows the CSP to our origin', () => {
+    process.env.OFFICE_JS = 'local';
+    const pages = plugins().filter((p) => ['taskpane.html', 'functions.html'].includes(p.userOptions?.filename ?? ''));
+    expect(pages).toHaveLength(2);
+    for (const page of pages) expect(page.userOptions!.templateParameters).toEqual({ officeJs: 'office/office.js', csp: excelCsp(true) });
+    expect(excelCsp(true)).toMatch(/^script-src 'self';/);
+    expect(plugins().flatMap((p) => p.patterns ?? []).some((c) => c.to === 'office/[name][ext]')).toBe(true);
+  });
+
+  it('any other value stops the build', () => {
+    process.env.OFFICE_JS = 'offline';
+    expect(() => plugins()).toThrow(/OFFICE_JS must be "cdn" \(the default\) or "local"/);
   });
 });
 

@@ -4,7 +4,7 @@
  * registered as `PROTON.<NAME>`, exactly as formulas are written in Excel, so a workbook's
  * formulas evaluate unchanged in the preview page and on the command line.
  *
- *   const hf = createFormulaEngine({ Sheet1: [['tris base', 50], ['NaCl', 150], ['=PROTON.PH(A1:B2, 25)']] });
+ *   const hf = createFormulaEngine({ Sheet1: [['tris base', 50], ['NaCl', 150], ['=PROTON.PH.OF(A1:B2, 25)']] });
  *   hf.getCellValue({ sheet: 0, row: 2, col: 0 }); // 10.4…
  *
  * Errors come back as the engine's error values (#VALUE!, #N/A) with the message; nothing
@@ -16,12 +16,13 @@ import type { InterpreterValue } from 'hyperformula/typings/interpreter/Interpre
 import type { Ast, ProcedureAst } from 'hyperformula/typings/parser';
 import { CATALOG, CatalogFunction, NAMESPACE, callFunction } from './catalog';
 import { SheetError } from './errors';
+import { SHEET_MESSAGES } from './messages';
 import { spillShape } from './functions';
 
 /** Licence key for HyperFormula under the GPL (without it every formula gives #LIC!). */
 export const HYPERFORMULA_LICENSE_KEY = 'gpl-v3';
 
-/** Engine name of a catalog function: `PROTON.PH`. */
+/** Engine name of a catalog function: `PROTON.PH.OF`. */
 export function engineName(fn: CatalogFunction): string {
   return `${NAMESPACE}.${fn.id}`;
 }
@@ -46,6 +47,23 @@ function toCellError(error: SheetError): CellError {
   return new CellError(error.kind === 'na' ? ErrorType.NA : ErrorType.VALUE, error.message);
 }
 
+/**
+ * A spilled result padded with blank text to the size the engine gave it before computing
+ * (HyperFormula sizes arrays at parse time, from spillShape). Excel needs no padding: the
+ * functions return only the rows they have, and only this host pads.
+ *
+ * @param rows - the function's result
+ * @param size - the array size the engine reserved
+ * @returns the padded rows, or an error when the result does not fit (spillShape is an upper bound, so never expected)
+ */
+export function padToSpill(rows: readonly (readonly unknown[])[], size: { width: number; height: number }): (number | string | boolean)[][] | SheetError {
+  const columns = Math.max(0, ...rows.map((r) => r.length));
+  if (rows.length > size.height || columns > size.width) return new SheetError('value', SHEET_MESSAGES.resultLargerThanSpill(rows.length, columns, size.height, size.width));
+  const out = rows.map((r) => [...r, ...new Array<string>(size.width - r.length).fill('')] as (number | string | boolean)[]);
+  while (out.length < size.height) out.push(new Array<string>(size.width).fill(''));
+  return out;
+}
+
 /** The plugin class: one method per catalog function, named after its position. */
 class ProtonFunctionsPlugin extends FunctionPlugin {
   static implementedFunctions: ImplementedFunctions = {};
@@ -57,7 +75,10 @@ class ProtonFunctionsPlugin extends FunctionPlugin {
       if (upstream) return upstream;
       const result = callFunction(fn, args);
       if (result instanceof SheetError) return toCellError(result);
-      if (Array.isArray(result)) return SimpleRangeValue.onlyValues(result.map((row) => [...row] as (number | string | boolean)[]));
+      if (Array.isArray(result)) {
+        const padded = padToSpill(result, this.spillSize(fn, ast, state));
+        return padded instanceof SheetError ? toCellError(padded) : SimpleRangeValue.onlyValues(padded);
+      }
       return result as number | string | boolean;
     }) as InterpreterValue;
   }

@@ -7,7 +7,7 @@
  * into spreadsheet errors (errors.ts). Nothing here touches Office or a formula engine.
  *
  * In Excel every name carries the add-in's namespace (PROTON, set in manifest.xml):
- * `=PROTON.PH(A2:B4)`.
+ * `=PROTON.PH.OF(A2:B4)`.
  */
 /* eslint-disable @typescript-eslint/no-explicit-any -- `any` is how custom-functions metadata spells a cell of any type */
 import { ChemError, MESSAGES, apparentPKa, capacity, conductivityAt, solutionWarnings, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
@@ -22,7 +22,7 @@ import { memoised } from './memo';
 import { SHEET_MESSAGES } from './messages';
 import { libraryFor, userRowCount } from './userRange';
 
-/** Rows of the SPECIES table, header included: fixed so every host knows the spill size before computing (HyperFormula sizes arrays at parse time). 29 species covers H⁺, OH⁻, the strong ions and several polyprotic systems. */
+/** Most rows of the SPECIES table, header included. Excel spills only the rows a solution has; the formula engine, which sizes arrays before computing, pads to this (formulaEngine.ts). 29 species covers H⁺, OH⁻, the strong ions and several polyprotic systems. */
 export const SPECIES_TABLE_ROWS = 30;
 /** Columns of the SPECIES table. */
 export const SPECIES_TABLE_HEADER = ['species', 'mM', 'activity (mM)', 'charge'] as const;
@@ -46,8 +46,8 @@ function solution(composition: any, temperatureC: any, activityModel: any, userS
 
 /**
  * Predicted pH of a solution given as a range of names and amounts.
- * @customfunction PH PH
- * @helpurl https://localhost:3000/help/functions.html#ph
+ * @customfunction PH.OF PH.OF
+ * @helpurl https://localhost:3000/help/functions.html#ph-of
  * @param composition Two columns: substance or form name (e.g. "tris base", "Na2HPO4·7H2O", "NaCl"), then amount in mM. Blank rows are ignored.
  * @param [temperatureC] Temperature in °C (blank: 25).
  * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
@@ -55,7 +55,7 @@ function solution(composition: any, temperatureC: any, activityModel: any, userS
  * @returns pH, as a calibrated meter would read it at that temperature.
  */
 export function ph(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
-  return memoised('PH', [composition, temperatureC, activityModel, userSubstances], () => solvePh(solution(composition, temperatureC, activityModel, userSubstances)));
+  return memoised('PH.OF', [composition, temperatureC, activityModel, userSubstances], () => solvePh(solution(composition, temperatureC, activityModel, userSubstances)));
 }
 
 /**
@@ -242,7 +242,7 @@ export function conductivity(composition: any[][], temperatureC?: any, activityM
 
 
 /**
- * Warnings about a solution's prediction, as one cell of text: "none", or how many and each in turn. Put it beside a PH cell: single-value results cannot carry their warnings.
+ * Warnings about a solution's prediction, as one cell of text: "none", or how many and each in turn. Put it beside a PH.OF cell: single-value results cannot carry their warnings.
  * @customfunction WARNINGS WARNINGS
  * @helpurl https://localhost:3000/help/functions.html#warnings
  * @param composition Two columns: substance or form name, then amount in mM.
@@ -264,7 +264,7 @@ export function warnings(composition: any[][], temperatureC?: any, activityModel
 }
 
 /**
- * Every species of a solution: name, concentration (mM), activity (mM) and charge. Spills a fixed 30 rows × 4 columns, header first, padded with blanks.
+ * Every species of a solution: name, concentration (mM), activity (mM) and charge. Spills a header and one row per species (at most 29), 4 columns.
  * @customfunction SPECIES SPECIES
  * @helpurl https://localhost:3000/help/functions.html#species
  * @param composition Two columns: substance or form name, then amount in mM.
@@ -279,31 +279,30 @@ export function species(composition: any[][], temperatureC?: any, activityModel?
     if (result.species.length > SPECIES_TABLE_ROWS - 1) throw invalid('tooManySpecies', 'composition', SHEET_MESSAGES.tooManySpecies(result.species.length, SPECIES_TABLE_ROWS - 1));
     const rows: (string | number)[][] = [[...SPECIES_TABLE_HEADER]];
     for (const sp of result.species) rows.push([sp.name, sp.concentrationM * 1000, sp.activity * 1000, sp.charge]);
-    while (rows.length < SPECIES_TABLE_ROWS) rows.push(['', '', '', '']);
     return rows;
   });
 }
 
 /**
- * Names of every substance in the library (and your own), one per row, for drop-down lists. Spills the library's count plus one row per row of userSubstances, padded with blanks.
+ * Names of every substance in the library (and your own), one per row, for drop-down lists. Spills one row per substance.
  * @customfunction SUBSTANCES SUBSTANCES
  * @helpurl https://localhost:3000/help/functions.html#substances
  * @param [userSubstances] Range of your own substances, listed after the library's.
  * @returns One column of names.
  */
 export function substances(userSubstances?: any[][]): string[][] {
-  return memoised('SUBSTANCES', [userSubstances], () => padColumn(libraryFor(userSubstances).list().map((r) => r.name), listLength('substances', userSubstances)));
+  return memoised('SUBSTANCES', [userSubstances], () => column(libraryFor(userSubstances).list().map((r) => r.name)));
 }
 
 /**
- * Names of every form on the shelf (salts, hydrates, free acids and bases), one per row, for drop-down lists of composition names. Spills the library's count plus one row per row of userSubstances, padded with blanks.
+ * Names of every form on the shelf (salts, hydrates, free acids and bases), one per row, for drop-down lists of composition names. Spills one row per form.
  * @customfunction FORMS FORMS
  * @helpurl https://localhost:3000/help/functions.html#forms
  * @param [userSubstances] Range of your own substances, whose forms are listed after the library's.
  * @returns One column of form names.
  */
 export function forms(userSubstances?: any[][]): string[][] {
-  return memoised('FORMS', [userSubstances], () => padColumn(formNames(libraryFor(userSubstances)), listLength('forms', userSubstances)));
+  return memoised('FORMS', [userSubstances], () => column(formNames(libraryFor(userSubstances))));
 }
 
 function formNames(library: ReturnType<typeof libraryFor>): string[] {
@@ -311,8 +310,9 @@ function formNames(library: ReturnType<typeof libraryFor>): string[] {
 }
 
 /**
- * Rows a SUBSTANCES or FORMS list spills: the built-in library's count plus one per row of
- * the user range, so the size follows from the arguments' shape alone.
+ * Most rows a SUBSTANCES or FORMS list can spill: the built-in library's count plus one per
+ * row of the user range, so the size follows from the arguments' shape alone (what the
+ * formula engine pads to).
  *
  * @param list - which list
  * @param userSubstances - the user range argument (only its row count matters)
@@ -322,10 +322,8 @@ export function listLength(list: 'substances' | 'forms', userSubstances: unknown
   return (list === 'substances' ? library.list().length : formNames(library).length) + userRowCount(userSubstances);
 }
 
-function padColumn(names: readonly string[], rows: number): string[][] {
-  const out = names.slice(0, rows).map((n) => [n]);
-  while (out.length < rows) out.push(['']);
-  return out;
+function column(names: readonly string[]): string[][] {
+  return names.map((n) => [n]);
 }
 
 /** Columns of RECIPE.ROW, in order; a recipe table's header row. */
@@ -343,7 +341,7 @@ export const RECIPE_ROW_HEADER = [
   'warnings',
 ] as const;
 
-/** Rows of the RECIPE sheet: fixed, so every host knows the spill size before computing. */
+/** Most rows of the RECIPE sheet, header included: Excel spills only the rows a recipe has; the formula engine pads to this. */
 export const RECIPE_TABLE_ROWS = 48;
 /** Columns of the RECIPE sheet. */
 export const RECIPE_TABLE_HEADER = ['section', 'item', 'value', 'unit'] as const;
@@ -422,7 +420,7 @@ export function recipeRow(buffer: any, targetPh: any, concentrationMm: any, volu
 }
 
 /**
- * The whole recipe as a sheet: amounts, the meter reading, the titrant band, predictions, the bench steps, warnings and cautions. Spills 4 columns (section, item, value, unit). Give "acid form + base form" as the form option to weigh two forms instead of titrating.
+ * The whole recipe as a sheet: amounts, the meter reading, the titrant band, predictions, the bench steps, warnings and cautions. Spills one row per line (at most 48) × 4 columns (section, item, value, unit). Give "acid form + base form" as the form option to weigh two forms instead of titrating.
  * @customfunction RECIPE RECIPE
  * @helpurl https://localhost:3000/help/functions.html#recipe
  * @param buffer Buffer system (e.g. "HEPES", "tris", "phosphate").
@@ -466,7 +464,6 @@ export function recipe(buffer: any, targetPh: any, concentrationMm: any, volumeM
     for (const w of plan.warnings) rows.push(['warning', '', w, '']);
     for (const c of plan.cautions) rows.push(['caution', '', c, '']);
     if (rows.length > RECIPE_TABLE_ROWS) throw invalid('recipeTooLong', undefined, SHEET_MESSAGES.recipeTooLong(rows.length, RECIPE_TABLE_ROWS));
-    while (rows.length < RECIPE_TABLE_ROWS) rows.push(['', '', '', '']);
     return rows;
   });
 }
@@ -478,9 +475,11 @@ export interface SpillShape {
 }
 
 /**
- * The size a spilling function's result will have, from the row counts of its arguments
- * alone (0 for an omitted argument). Every host can size the spill before computing it;
- * HyperFormula must. Undefined for functions that return one value.
+ * The most a spilling function's result can hold, from the row counts of its arguments
+ * alone (0 for an omitted argument). Excel sizes a spill when the result comes back, so the
+ * functions return only the rows they have; HyperFormula sizes arrays before computing, so
+ * its registration (formulaEngine.ts) pads every result to this shape. Undefined for
+ * functions that return one value.
  *
  * @param id - function id
  * @param argumentRows - row count of each argument as passed (1 for a single value)

@@ -22,7 +22,7 @@ export function text(value: string): string {
   return `"${value.replace(/"/g, '""')}"`;
 }
 
-/** A call with trailing blank arguments dropped: call('PH', 'A1:B3', '', '') → `PROTON.PH(A1:B3)`. */
+/** A call with trailing blank arguments dropped: call('PH.OF', 'A1:B3', '', '') → `PROTON.PH.OF(A1:B3)`. */
 export function call(name: string, ...args: string[]): string {
   const kept = [...args];
   while (kept.length > 0 && kept[kept.length - 1] === '') kept.pop();

@@ -158,7 +158,7 @@ describeBrowser('preview workbook in Chromium', () => {
     const names = wb.worksheets.map((w) => w.name);
     expect(names[0]).toBe('North bench prep');
     const e6 = wb.getWorksheet('North bench prep')!.getCell('E6').value as ExcelJS.CellFormulaValue;
-    expect(e6.formula).toBe('PROTON.PH(A6:B8, 4)');
+    expect(e6.formula).toBe('PROTON.PH.OF(A6:B8, 4)');
     expect(typeof e6.result).toBe('number');
     const recipe = wb.getWorksheet(names[1])!;
     // G21 holds the row's PROTON.RECIPE.ROW formula, written as an array formula over G21:Q21; H21 (titrant mL) holds its cached value.

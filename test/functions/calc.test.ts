@@ -28,11 +28,11 @@ describe('calc command', () => {
     ws.getCell('B1').value = 50;
     ws.getCell('A2').value = 'NaCl';
     ws.getCell('B2').value = 150;
-    ws.getCell('C1').value = { formula: 'PROTON.PH(A1:B2)' } as ExcelJS.CellFormulaValue;
+    ws.getCell('C1').value = { formula: 'PROTON.PH.OF(A1:B2)' } as ExcelJS.CellFormulaValue;
     ws.getCell('C2').value = { formula: '_xldudf_PROTON_TITRANT_ML("tris base",50,1000,7.4,"HCl",1)' } as ExcelJS.CellFormulaValue;
     ws.getCell('C3').value = { formula: 'ROUND(C1,1)+Other!A1' } as ExcelJS.CellFormulaValue;
     ws.getCell('C4').value = '=text, not a formula';
-    ws.getCell('C5').value = { formula: 'PROTON.PH(A1:B2,"hot")' } as ExcelJS.CellFormulaValue;
+    ws.getCell('C5').value = { formula: 'PROTON.PH.OF(A1:B2,"hot")' } as ExcelJS.CellFormulaValue;
     ws.getCell('C6').value = { formula: 'PROTON.GRAMS("tris HCl",B1,250,"99%")' } as ExcelJS.CellFormulaValue;
     ws.getCell('C6').numFmt = '0.000';
     ws.getCell('E1').value = { formula: 'PROTON.SPECIES(A1:B2)' } as ExcelJS.CellFormulaValue;
@@ -74,7 +74,7 @@ describe('calc command', () => {
 
   test('reads CSV input (formulas start with "=", an apostrophe keeps text) and writes .xlsx', async () => {
     const csv = join(dir, 'book.csv');
-    writeFileSync(csv, 'tris base,50,"=PROTON.PH(A1:B1, 25)"\r\nNaCl,150,\'=not me\r\n-5 mM,,=PROTON.IONIC.STRENGTH.MM(A2:B2)\r\n');
+    writeFileSync(csv, 'tris base,50,"=PROTON.PH.OF(A1:B1, 25)"\r\nNaCl,150,\'=not me\r\n-5 mM,,=PROTON.IONIC.STRENGTH.MM(A2:B2)\r\n');
     const output = join(dir, 'from-csv.xlsx');
     const { code } = await run(['calc', csv, '-o', output]);
     expect(code).toBe(0);

@@ -44,7 +44,7 @@ describe('Excel registration', () => {
       }
       throw new Error('expected a throw');
     };
-    const bad = thrown(() => registered.get('PH')!([['tris base', 50]], 'warm'));
+    const bad = thrown(() => registered.get('PH.OF')!([['tris base', 50]], 'warm'));
     expect(bad).toBeInstanceOf(FakeError);
     expect(bad.code).toBe('#VALUE!');
     expect(bad.message).toMatch(/temperatureC must be a number/);

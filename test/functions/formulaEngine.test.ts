@@ -7,8 +7,9 @@ import { DetailedCellError } from 'hyperformula';
 import { titrantForPh } from '../../src/chem';
 import { defaultLibrary } from '../../src/chem/library';
 import { CATALOG } from '../../src/functions/catalog';
-import { createFormulaEngine, toEngineFormula } from '../../src/functions/formulaEngine';
-import { ph, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
+import { createFormulaEngine, padToSpill, toEngineFormula } from '../../src/functions/formulaEngine';
+import { ph, RECIPE_TABLE_ROWS, species, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
+import { SheetError } from '../../src/functions/errors';
 import { clearCallCache } from '../../src/functions/memo';
 
 /** Engine and direct call run the same arithmetic (smartRounding is off): only the mL scaling may round differently. */
@@ -27,8 +28,8 @@ describe('formula engine', () => {
   test('formulas as typed in Excel (any case) give the catalog\'s values; ordinary formulas mix in', () => {
     const hf = createFormulaEngine({
       Prep: [
-        ['tris base', 50, '=PROTON.PH(A1:B2)', '=proton.ph(A1:B2, "25", "Davies")', '=ROUND(C1, 2)'],
-        ['NaCl', 150, '=PROTON.GRAMS("tris HCl", 50, 1000, 99%)', '=PROTON.GRAMS("tris HCl", 50, 1000, "99%")', '=PROTON.PH({"tris base",50;"NaCl",150})'],
+        ['tris base', 50, '=PROTON.PH.OF(A1:B2)', '=proton.ph.of(A1:B2, "25", "Davies")', '=ROUND(C1, 2)'],
+        ['NaCl', 150, '=PROTON.GRAMS("tris HCl", 50, 1000, 99%)', '=PROTON.GRAMS("tris HCl", 50, 1000, "99%")', '=PROTON.PH.OF({"tris base",50;"NaCl",150})'],
       ],
     });
     const at = (row: number, col: number) => hf.getCellValue({ sheet: 0, row, col });
@@ -45,7 +46,7 @@ describe('formula engine', () => {
   test('errors are the engine\'s #VALUE! / #N/A with the message; upstream errors propagate; wrong argument counts are caught', () => {
     const hf = createFormulaEngine({
       S: [
-        ['tris base', 50, '=PROTON.PH(A1:B1, 120)', '=PROTON.PH(A2:B2)', '=PROTON.PH(A1:B1, 1/0)', '=PROTON.PH()'],
+        ['tris base', 50, '=PROTON.PH.OF(A1:B1, 120)', '=PROTON.PH.OF(A2:B2)', '=PROTON.PH.OF(A1:B1, 1/0)', '=PROTON.PH.OF()'],
         ['HEPSE', 10, '=PROTON.TITRANT.ML("tris base", 50, 1000, 11, "HCl", 1)'],
       ],
     });
@@ -72,11 +73,27 @@ describe('formula engine', () => {
     hf.destroy();
   });
 
+  test('only this host pads: SPECIES and RECIPE fill their fixed shape with blank text here, though the functions return only the rows they have', () => {
+    const hf = createFormulaEngine({ S: [['tris base', 50, '=PROTON.SPECIES(A1:B1)', null, null, null, '=PROTON.RECIPE("tris", 8, 50, 1000)']] });
+    const speciesRows = species([['tris base', 50]]).length;
+    expect(speciesRows).toBeLessThan(SPECIES_TABLE_ROWS);
+    expect(hf.getCellValue({ sheet: 0, row: speciesRows - 1, col: 2 })).not.toBe('');
+    for (let row = speciesRows; row < SPECIES_TABLE_ROWS; row++) expect(hf.getCellValue({ sheet: 0, row, col: 2 })).toBe('');
+    expect(hf.getCellValue({ sheet: 0, row: RECIPE_TABLE_ROWS - 1, col: 6 })).toBe('');
+    expect(hf.getSheetDimensions(0).height).toBe(RECIPE_TABLE_ROWS);
+    hf.destroy();
+  });
+
+  test('padToSpill pads ragged rows and refuses a result larger than the reserved size', () => {
+    expect(padToSpill([[1], ['a', 2]], { width: 2, height: 3 })).toEqual([[1, ''], ['a', 2], ['', '']]);
+    expect(padToSpill([[1, 2, 3]], { width: 2, height: 3 })).toBeInstanceOf(SheetError);
+  });
+
   test('formulas as Excel saves them (_xldudf_PROTON_…, _xlfn.) are translated', () => {
     expect(toEngineFormula('_xldudf_PROTON_TITRANT_ML(A1,50,1000,7.4,"HCl",1)+_xlfn.XLOOKUP(1,A:A,B:B)')).toBe('PROTON.TITRANT.ML(A1,50,1000,7.4,"HCl",1)+XLOOKUP(1,A:A,B:B)');
     expect(toEngineFormula('[1]!_xldudf_PROTON_IONIC_STRENGTH_MM(A1:B3)')).toBe('PROTON.IONIC.STRENGTH.MM(A1:B3)');
     // Prefixes another add-in's registration can leave, as reported in OfficeDev/office-js issues 2568 and 3872.
-    expect(toEngineFormula('Other.xla!_xldudf_PROTON_PH(A1:B3)+1')).toBe('PROTON.PH(A1:B3)+1');
+    expect(toEngineFormula('Other.xla!_xldudf_PROTON_PH_OF(A1:B3)+1')).toBe('PROTON.PH.OF(A1:B3)+1');
     expect(toEngineFormula("'Lab tools.xlam'!_xldudf_PROTON_WARNINGS(A1:B3)")).toBe('PROTON.WARNINGS(A1:B3)');
     expect(toEngineFormula('_xldudf_OTHER_ADDIN_FN(1)')).toBe('_xldudf_OTHER_ADDIN_FN(1)');
   });
