@@ -66,6 +66,8 @@ export const MESSAGES = {
       : `"${field}" is not an option; allowed: ${allowed}.`,
   badSaltItem: (field: string, item: string, allowed: string) =>
     `${field}: cannot read "${item}" as a salt and its amount; allowed: ${allowed}.`,
+  titrantTooLarge: (titrantMl: number, roomMl: number, stockM: number, suggestion: string) =>
+    `The ${stockM} M titrant stock is too dilute: it would take ${titrantMl.toPrecision(4)} mL, more than the ${roomMl.toPrecision(4)} mL part volume the pH is adjusted in; use ${suggestion}.`,
   givenTwice: (field: string) =>
     `${field} is given twice; give it once.`,
   notText: (field: string, value: unknown) =>

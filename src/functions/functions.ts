@@ -14,10 +14,10 @@ import { ChemError, MESSAGES, apparentPKa, capacity, conductivityAt, solutionWar
 import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toField, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
 import { recipeOptions } from './recipeOptions';
-import { RecipeInput, RecipePlan, planRecipe } from '../chem/planner';
+import { DEFAULT_PART_VOLUME_FRACTION, RecipeInput, RecipePlan, checkTitrantFits, planRecipe } from '../chem/planner';
 import { volumeText } from '../chem/planner/protocol';
 import { compositionFrom, MAX_COMPOSITION_ROWS } from './composition';
-import { SheetError, invalid } from './errors';
+import { invalid } from './errors';
 import { memoised } from './memo';
 import { SHEET_MESSAGES } from './messages';
 import { libraryFor, userRowCount } from './userRange';
@@ -88,7 +88,8 @@ export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, t
       : compositionFrom(s.library, [[formName, mM], ...toRange(salts)], s.temperatureC, s.model);
     const t = titrantFromForm(s.library.findForm(toText('titrant', titrant)), s.library);
     const ml = (titrantForPh(composition, t, target).concentrationM * volumeMl) / stockM;
-    if (ml > volumeMl) throw new SheetError('na', SHEET_MESSAGES.titrantExceedsVolume(ml, volumeMl), 'titrantExceedsVolume', 'titrantConcentrationM', 'a stronger stock');
+    // The same rule as a recipe's: the titrant must fit in the part volume the pH is adjusted in.
+    checkTitrantFits(ml, volumeMl, DEFAULT_PART_VOLUME_FRACTION, stockM);
     return ml;
   });
 }

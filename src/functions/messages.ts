@@ -24,8 +24,6 @@ export const SHEET_MESSAGES = {
     `"${name}" is given twice with different ${column}; give the substance's columns once (later rows of the same substance may leave them blank).`,
   badCounterIons: (text: string) =>
     `cannot read the counter-ions "${text}"; write them as "Na+", "2 Na+" or "K+; Cl-".`,
-  titrantExceedsVolume: (titrantMl: number, finalVolumeMl: number) =>
-    `The titrant stock is too dilute: it would take ${titrantMl.toPrecision(4)} mL, more than the final volume of ${finalVolumeMl} mL; use a stronger stock.`,
   tooManyRows: (argument: string, rows: number, limit: number) =>
     `${argument} has ${rows} rows; allowed: up to ${limit} rows with values.`,
   oneFormOnly: (argument: string, text: string) =>

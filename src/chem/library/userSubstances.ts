@@ -102,6 +102,10 @@ function formFromInput(input: UserForm, field: string, substance: string, chem: 
   if (input.formula !== undefined) {
     formula = input.formula;
     const computed = molarMassOf(formula, `${field}.formula`);
+    // A formula is checked like a typed molar mass: C1000000000H2 is a slip, not a buffer form.
+    if (!(computed <= MAX_USER_MOLAR_MASS)) {
+      throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(`${field}.formula`, formula, `a formula of 1 to ${MAX_USER_MOLAR_MASS} g/mol (this one gives ${computed.toPrecision(4)} g/mol)`), `${field}.formula`, `1 to ${MAX_USER_MOLAR_MASS} g/mol`);
+    }
     listed = input.molarMass === undefined ? computed : requireNumber(`${field}.molarMass`, input.molarMass, 1, MAX_USER_MOLAR_MASS, `1 to ${MAX_USER_MOLAR_MASS} g/mol`);
   } else if (input.molarMass !== undefined) {
     listed = requireNumber(`${field}.molarMass`, input.molarMass, 1, MAX_USER_MOLAR_MASS, `1 to ${MAX_USER_MOLAR_MASS} g/mol`);

@@ -13,7 +13,7 @@
  * osmolarity and conductivity rise with salt), re-solving the titrant at each step.
  */
 import { ActivityModel } from '../activity';
-import { readChoiceField, readNumberField, readPurityField, readSaltsField, readTextField, requireNumberField } from '../input';
+import { MAX_TITRANT_M, readChoiceField, readNumberField, readPurityField, readSaltsField, readTextField, requireNumberField } from '../input';
 import { capacityOfPrepared, scaleComposition } from '../capacity';
 import { BUFFERING_HALF_WIDTH, metalComplexWarning } from '../checks';
 import { AcidBaseSystem, Composition, prepare, systemAt, withConditions } from '../composition';
@@ -44,6 +44,12 @@ export const FIRST_PORTION_SHARE = 0.9;
 export { BUFFERING_HALF_WIDTH };
 /** Below this total titrant volume (mL) the pH cannot be approached in portions: about two drops (one drop ≈ 0.05 mL, common practice). */
 export const SMALLEST_TITRANT_ML = 0.1;
+/** A target this close to the unadjusted solution's pH needs no titrant: half the 0.01 resolution of a bench pH meter (common practice). */
+export const NO_TITRANT_PH = 0.005;
+/** Largest dilution of a titrant stock the planner advises (1 M to 1 mM); a smaller amount means the target is practically reached already. */
+export const MAX_STOCK_DILUTION_ADVICE = 1000;
+/** A titrant should take at most this share of the final volume (common practice: a tenth keeps the dilution and the volume error small). */
+export const COMFORTABLE_TITRANT_SHARE = 0.1;
 /** Below this mass a weighing is poor on an analytical balance, g (common practice: about 10 mg at 0.1 mg readability). */
 export const SMALLEST_GOOD_WEIGHING_G = 0.01;
 /** Largest dilution fold for a stock (declared with the other input limits). */
@@ -68,6 +74,8 @@ interface RouteResult {
     /** The solution before any titrant. */
     readonly before: Composition;
   };
+  /** pH of the weighed forms and salts before any titrant (titrate route). */
+  readonly unadjustedPh?: number;
 }
 
 /** Validated, defaulted input. */
@@ -116,6 +124,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
 
   const meterPh = solvePh(withConditions(scaleComposition(made.composition, 1 / s.partFraction), s.benchT));
   const titration = made.titrant ? titrationPlan(s, made, madeVolumeL) : undefined;
+  if (titration) checkTitrantFits(titration.volumeMl, madeVolumeL * 1000, s.partFraction, titration.stockM);
 
   const prepared = prepare(finished);
   const state = solvePrepared(prepared, s.targetPh);
@@ -181,6 +190,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
     cautions: cautionsFor(made.weighed.map((w) => w.form).concat(made.titrant ? [made.titrant.form] : [])),
     constants,
     composition: finished,
+    ...(base.unadjustedPh === undefined ? {} : { unadjustedPh: base.unadjustedPh }),
   };
   return { ...plan, steps: protocolSteps(plan) };
 }
@@ -338,12 +348,16 @@ function titrateRoute(s: Settled, saltTargetM: number): RouteResult {
   const form = weighedForm(s);
   const formM = s.concentrationM / systemMolesIn(form, s.system);
   const start = baseComposition(s, [{ form, concentrationM: formM }], saltTargetM);
+  const weighed = [{ role: 'buffer' as const, form, concentrationM: formM }, ...saltComponents(s, saltTargetM)];
+  const startPh = solvePh(start);
+  if (Math.abs(startPh - s.targetPh) <= NO_TITRANT_PH) return { composition: start, weighed, unadjustedPh: startPh };
   const chosen = chooseTitrant(s, start);
   const composition = withTitrant(start, chosen.titrant, chosen.concentrationM);
   return {
     composition,
-    weighed: [{ role: 'buffer', form, concentrationM: formM }, ...saltComponents(s, saltTargetM)],
+    weighed,
     titrant: { ...chosen, before: start },
+    unadjustedPh: startPh,
   };
 }
 
@@ -456,6 +470,8 @@ function scaleRoute(r: RouteResult, fold: number): RouteResult {
     composition: scaleComposition(r.composition, fold),
     weighed: r.weighed.map((w) => ({ ...w, concentrationM: w.concentrationM * fold })),
     ...(r.titrant ? { titrant: { ...r.titrant, concentrationM: r.titrant.concentrationM * fold, before: scaleComposition(r.titrant.before, fold) } } : {}),
+    // The finished buffer's unadjusted pH, as the plan reports it (not the stock's).
+    ...(r.unadjustedPh === undefined ? {} : { unadjustedPh: r.unadjustedPh }),
   };
 }
 
@@ -493,6 +509,33 @@ function titrationPlan(s: Settled, made: RouteResult, volumeL: number): Titratio
     pKaUncertainty: u,
     tolerancePercent: t.stock.tolerancePercent,
   };
+}
+
+/** The next strength up in a 1–2–5 series, mol/L (the stocks a lab keeps or makes easily). */
+function roundedStock(m: number): number {
+  const decade = Math.pow(10, Math.floor(Math.log10(m)));
+  for (const step of [1, 2, 5, 10]) if (step * decade >= m * (1 - 1e-12)) return step * decade;
+  return 10 * decade;
+}
+
+/**
+ * Refuses a titrant that does not fit: at adjustment everything sits in the part volume, so
+ * the titrant cannot take more than the part volume leaves. One rule for every host (the
+ * planner, RECIPE, RECIPE.ROW, TITRANT.ML). The message names a stock strong enough that the
+ * titrant takes about a tenth of the final volume, or says none is strong enough.
+ *
+ * @param titrantMl - titrant volume needed, mL
+ * @param finalVolumeMl - volume being made, mL
+ * @param partVolumeFraction - share of the final volume in which the pH is adjusted
+ * @param stockM - the titrant stock, mol/L
+ * @throws ChemError infeasible-target `titrantTooLarge`, field `titrant.concentrationM`
+ */
+export function checkTitrantFits(titrantMl: number, finalVolumeMl: number, partVolumeFraction: number, stockM: number): void {
+  const roomMl = finalVolumeMl * partVolumeFraction;
+  if (!(titrantMl > roomMl)) return;
+  const needed = (stockM * titrantMl) / (COMFORTABLE_TITRANT_SHARE * finalVolumeMl);
+  const suggestion = needed <= MAX_TITRANT_M ? `a ${roundedStock(needed)} M stock` : `no stock is strong enough (it would take above ${MAX_TITRANT_M} M); weigh a form nearer the target pH instead`;
+  throw new ChemError('infeasible-target', 'titrantTooLarge', MESSAGES.titrantTooLarge(titrantMl, roomMl, stockM, suggestion), 'titrant.concentrationM', suggestion);
 }
 
 /** Net charge a strong titrant adds per mole (positive: a base). */
@@ -561,11 +604,19 @@ function planWarnings(s: Settled, made: RouteResult, components: readonly Recipe
     }
     if (titration.volumeMl < SMALLEST_TITRANT_ML) {
       const fold = Math.pow(10, Math.ceil(Math.log10(SMALLEST_TITRANT_ML / titration.volumeMl)));
-      w.push(`The whole titrant is only ${(titration.volumeMl * 1000).toPrecision(3)} µL: too little to add in portions that approach the target; dilute the stock ${fold}× (${(titration.stockM / fold).toPrecision(3)} M) to add about ${volumeText(titration.volumeMl * fold)}.`);
+      if (fold <= MAX_STOCK_DILUTION_ADVICE) {
+        w.push(`The whole titrant is only ${(titration.volumeMl * 1000).toPrecision(3)} µL: too little to add in portions that approach the target; dilute the stock ${fold}× (${(titration.stockM / fold).toPrecision(3)} M) to add about ${volumeText(titration.volumeMl * fold)}.`);
+      } else {
+        const unadjusted = made.unadjustedPh ?? s.targetPh;
+        w.push(`The whole titrant is only ${(titration.volumeMl * 1000).toPrecision(2)} µL: the solution without titrant is already within ${Math.abs(s.targetPh - unadjusted).toFixed(3)} pH of the target; check it with the meter and adjust, if at all, drop by drop with a ${MAX_STOCK_DILUTION_ADVICE}× diluted stock (${(titration.stockM / MAX_STOCK_DILUTION_ADVICE).toPrecision(2)} M).`);
+      }
     }
     if (titration.highMl > totalMl * s.partFraction) {
       w.push(`The titrant may not fit: up to ${titration.highMl.toFixed(1)} mL is expected, more than the ${(totalMl * s.partFraction).toFixed(0)} mL part volume; use a more concentrated stock.`);
     }
+  }
+  if (!titration && made.unadjustedPh !== undefined) {
+    w.push(`The weighed form alone gives pH ${made.unadjustedPh.toFixed(3)} at ${s.useT} °C, within ${NO_TITRANT_PH} of the target: no titrant is needed; check it with the meter.`);
   }
   made.weighed.forEach((item, i) => {
     // componentsOf lists the weighed forms first, in this order, with the grams printed (purity applied).

@@ -194,6 +194,8 @@ export interface RecipePlan {
   readonly cautions: readonly string[];
   /** The pKa values (25 °C and at the temperature of use) and their sources. */
   readonly constants: readonly { readonly pKa25: number; readonly pKaAtUse: number; readonly source: string }[];
+  /** pH of the finished buffer's weighed form(s) and salts before any titrant, at the temperature of use (titrate and stock routes). */
+  readonly unadjustedPh?: number;
   /** The finished buffer as the solver sees it, at the temperature of use (mol/L). */
   readonly composition: Composition;
 }

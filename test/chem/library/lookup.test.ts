@@ -195,6 +195,17 @@ describe('user substances', () => {
     expect(c.strongIons).toEqual({ 'Cl-': 0.1, 'Na+': 0.05 });
   });
 
+  it('refuse a formula far heavier than any buffer form (C1000000000H2 is a slip: 12 tonnes per mole)', () => {
+    let caught: ChemError | undefined;
+    try {
+      createLibrary([{ name: 'heavy', chargeOfMostProtonated: 0, pKa: [5], formula: 'C1000000000H2' }]);
+    } catch (e) {
+      caught = e as ChemError;
+    }
+    expect(caught).toMatchObject({ kind: 'invalid-input', code: 'outOfRange' });
+    expect(caught?.field).toMatch(/formula$/);
+  });
+
   it('get a default form (the neutral species) when no forms are given', () => {
     const lib = createLibrary([{ name: 'my acid', chargeOfMostProtonated: 0, pKa: [4.2], molarMass: 100 }]);
     expect(lib.findForm('My Acid')).toMatchObject({ molarMass: 100, adds: [{ system: 'my acid', moles: 1, protonsLost: 0 }] });

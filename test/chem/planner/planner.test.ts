@@ -170,10 +170,40 @@ describe('recipe planner: warnings', () => {
     expect(p.warnings.join(' ')).toMatch(/above 0.5 M/);
   });
 
-  it('warns when the titrant is more than half the volume and may not fit', () => {
-    const p = planRecipe({ buffer: 'tris', targetPh: 7.5, concentrationMm: 200, volumeMl: 100, form: 'tris base', titrant: { form: 'HCl', concentrationM: 0.2 } });
+  it('warns when the titrant is more than half the volume', () => {
+    const p = planRecipe({ buffer: 'tris', targetPh: 7.5, concentrationMm: 200, volumeMl: 100, form: 'tris base', titrant: { form: 'HCl', concentrationM: 0.25 } });
+    expect(p.titration!.volumeMl).toBeGreaterThan(50);
     expect(p.warnings.join(' ')).toMatch(/more than half the final volume/);
-    expect(p.warnings.join(' ')).toMatch(/may not fit/);
+  });
+
+  it('refuses a titrant that does not fit in the part volume, naming a stock strong enough (infeasible, never a plan)', () => {
+    let caught: ChemError | undefined;
+    try {
+      planRecipe({ buffer: 'tris', targetPh: 7.5, concentrationMm: 200, volumeMl: 100, form: 'tris base', titrant: { form: 'HCl', concentrationM: 0.2 } });
+    } catch (e) {
+      caught = e as ChemError;
+    }
+    expect(caught).toMatchObject({ kind: 'infeasible-target', code: 'titrantTooLarge', field: 'titrant.concentrationM', allowed: 'a 2 M stock' });
+    // HEPES to pH 0 would need more 1 M HCl than the whole buffer holds: no stock is strong enough at a tenth of the volume either.
+    expect(() => planRecipe({ buffer: 'HEPES', targetPh: 0, concentrationMm: 50, volumeMl: 500, titrant: { form: 'HCl', concentrationM: 1 } })).toThrow(ChemError);
+  });
+
+  it('says no titrant is needed when the weighed form alone is within 0.005 of the target', () => {
+    const lone = planRecipe({ buffer: 'acetate', form: 'sodium acetate trihydrate', targetPh: 7, concentrationMm: 50, volumeMl: 500 });
+    const startPh = lone.unadjustedPh!;
+    for (const target of [startPh, startPh + 0.004]) {
+      const p = planRecipe({ buffer: 'acetate', form: 'sodium acetate trihydrate', targetPh: target, concentrationMm: 50, volumeMl: 500 });
+      expect(p.titration).toBeUndefined();
+      expect(p.warnings.join(' ')).toMatch(/no titrant is needed/);
+    }
+  });
+
+  it('caps the stock-dilution advice: a target a hair off the unadjusted pH gets "check with the meter", not a 10^10-fold dilution', () => {
+    const lone = planRecipe({ buffer: 'acetate', form: 'sodium acetate trihydrate', targetPh: 7, concentrationMm: 50, volumeMl: 500 });
+    const p = planRecipe({ buffer: 'acetate', form: 'sodium acetate trihydrate', targetPh: lone.unadjustedPh! + 0.006, concentrationMm: 50, volumeMl: 500 });
+    const text = p.warnings.join(' ');
+    expect(text).not.toMatch(/dilute the stock \d{5,}×/);
+    expect(text).toMatch(/check it with the meter/);
   });
 
   it('warns when the whole titrant is too small to add in portions, and gives the volumes in µL', () => {
