@@ -68,6 +68,10 @@ export const MESSAGES = {
     `${field}: cannot read "${item}" as a salt and its amount; allowed: ${allowed}.`,
   titrantTooLarge: (titrantMl: number, roomMl: number, stockM: number, suggestion: string) =>
     `The ${stockM} M titrant stock is too dilute: it would take ${titrantMl.toPrecision(4)} mL, more than the ${roomMl.toPrecision(4)} mL part volume the pH is adjusted in; use ${suggestion}.`,
+  notJson: (detail: string) =>
+    `The input is not valid JSON: ${detail}.`,
+  unknownCommand: (command: string, commands: readonly string[]) =>
+    `"${command}" is not a command; the commands are ${commands.join(', ')} (proton-ledger --help lists them).`,
   givenTwice: (field: string) =>
     `${field} is given twice; give it once.`,
   notText: (field: string, value: unknown) =>

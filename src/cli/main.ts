@@ -3,59 +3,114 @@
  * proton-ledger command line.
  *
  *   proton-ledger solve [--json '<composition>'] [--pretty]   (composition on stdin otherwise)
- *   proton-ledger demo                                          (solve our demo composition)
+ *   proton-ledger recipe [--json '<recipe>'] [--text]
+ *   proton-ledger recipe --batch inputs.csv [-o out.csv|.jsonl|.xlsx]
  *
- * Output is one JSON object on stdout; on bad input a JSON error on stdout and exit code 2.
+ * Output is JSON on stdout; on bad input a JSON error ({kind, code, message, field, allowed})
+ * and exit code 2. The workbook libraries load only for `calc` and .xlsx output, so the
+ * other commands start fast.
  */
-import { readFileSync } from 'fs';
-import { ChemError, conductivityAt, conductivityOf, solutionWarnings, speciate } from '../chem';
+import { readFileSync, writeFileSync } from 'fs';
+import { extname } from 'path';
+import { ChemError, MESSAGES } from '../chem';
+import { FIELDS, allowedOf } from '../chem/input';
 import { defaultLibrary } from '../chem/library';
 import { formatRecipe, planRecipe } from '../chem/planner';
-import { compositionInputSchema, describeSchemaError, libraryFor, toComposition } from './compositionInput';
-import { runCalc } from './calc';
+import { libraryFor } from './compositionInput';
 import { DEMO_COMPOSITION } from './demo';
 import { toRecipeInput } from './recipeInput';
+import { solveComposition } from './solve';
 
-const USAGE = `Usage:
-  proton-ledger solve [--json '<composition JSON>'] [--pretty]   read a composition (stdin if no --json), print the equilibrium
-  proton-ledger recipe [--json '<recipe JSON>'] [--text]         plan a buffer: amounts, bench steps, meter reading, predictions
-  proton-ledger substances [--json]                              list the substance library (a table, or JSON)
-  proton-ledger demo [--pretty]                                  solve the demo composition (our QC lab's HEPES saline)
-  proton-ledger calc <book.xlsx|.csv> -o <filled.xlsx|.csv>      evaluate a workbook's formulas (PROTON functions included), write values
-  proton-ledger help                                             this text`;
-
-/** A failure to report as JSON with an exit code. */
-class CliFailure extends Error {
-  constructor(message: string, readonly field?: string, readonly kind = 'invalid-input') {
-    super(message);
+/** The package version, for --version (read from package.json beside lib/). */
+function version(): string {
+  try {
+    return (JSON.parse(readFileSync(`${__dirname}/../../package.json`, 'utf8')) as { version: string }).version;
+  } catch {
+    return 'unknown';
   }
 }
 
-function readInput(args: string[]): unknown {
+const USAGE = `Usage: proton-ledger <command> [options]
+
+Commands:
+  solve [--json '<composition JSON>'] [--pretty]     the equilibrium of a composition: pH, species, ionic strength, conductivity
+  solve --batch <file.csv|.jsonl> [-o <out>]         many compositions at once, one output row each
+  recipe [--json '<recipe JSON>'] [--text]           plan a buffer: amounts, bench steps, meter reading, predictions
+  recipe --batch <file.csv|.jsonl> [-o <out>]        a what-if table: one recipe row per input row (CSV, JSON lines or .xlsx out)
+  substances [--json]                                list the substance library (a table, or JSON)
+  demo [--pretty]                                    solve the demo composition (our QC lab's HEPES saline)
+  calc <book.xlsx|.csv> -o <filled.xlsx|.csv>        evaluate a workbook's formulas (PROTON functions included), write values
+  help [command]                                     this text, or one command's fields
+
+Options: --help (any command), --version. Input JSON may also come on standard input.
+Numbers may be text with units and decimal commas: "20 mM", "0,5 L", "4 °C" (docs/input.md).`;
+
+const SOLVE_HELP = `Usage: proton-ledger solve [--json '<composition JSON>'] [--pretty]
+       proton-ledger solve --batch <file.csv|.jsonl> [-o <out.csv|.jsonl|.xlsx>]
+
+A composition (JSON object):
+  temperatureC      °C, 0 to 100 (default 25)
+  activityModel     davies (default), ideal, bates-guggenheim
+  forms             [{"form": "<library name>", "mM": <amount>} or {"form", "grams", "volumeMl"}]
+  systems           [{"name", "chargeOfMostProtonated", "pKa": [..], "deltaHkJ": [..], "deltaCpJ": [..], "totalMm"}]
+  strongIonsMm      {"Na+": <mM>, "Cl-": <mM>, ...}
+  userSubstances    your own substances (see docs/functions.md)
+
+Example (our own): proton-ledger solve --json '{"forms": [{"form": "tris base", "mM": "50 mM"}, {"form": "HCl", "mM": 30}], "temperatureC": "4 °C"}'`;
+
+function recipeHelp(): string {
+  const rows = FIELDS.filter((f) => f.scope === 'recipe').map((f) => {
+    const def = f.kind === 'number' ? (f.default !== undefined ? String(f.default) : (f.defaultText ?? (f.required ? 'required' : '—'))) : f.kind === 'choice' ? f.default : f.kind === 'text' ? (f.required ? 'required' : (f.defaultText ?? '—')) : '—';
+    return `  ${f.name.padEnd(32)} ${allowedOf(f)}; default: ${def}. ${f.description}`;
+  });
+  return [
+    `Usage: proton-ledger recipe [--json '<recipe JSON>'] [--text]`,
+    `       proton-ledger recipe --batch <file.csv|.jsonl> [-o <out.csv|.jsonl|.xlsx>]`,
+    '',
+    'Fields of the recipe JSON (dotted names are nested objects: "titrant": {"form": "NaOH", "concentrationM": 5};',
+    'in a batch CSV, use the dotted names as column headers):',
+    ...rows,
+    '  userSubstances                   your own substances (see docs/functions.md)',
+    '',
+    `Example (our own): proton-ledger recipe --text --json '{"buffer": "HEPES", "targetPh": 7.4, "concentrationMm": "25 mM", "volumeMl": "0.5 L", "useTemperatureC": 4, "benchTemperatureC": 22, "salts": "NaCl 150 mM"}'`,
+  ].join('\n');
+}
+
+const CALC_HELP = `Usage: proton-ledger calc <book.xlsx|.csv> -o <filled.xlsx|.csv> [--force]
+
+Evaluates every formula of the workbook (PROTON functions included) and writes a copy with
+values. Prints a JSON report: formulas evaluated, errors (each with its cell and message),
+and the deliberate #N/A cells that formulas return by design. Refuses to overwrite an
+existing output unless --force.`;
+
+const HELP: Readonly<Record<string, () => string>> = {
+  solve: () => SOLVE_HELP,
+  recipe: recipeHelp,
+  calc: () => CALC_HELP,
+  substances: () => 'Usage: proton-ledger substances [--json]\n\nLists every substance of the library: name, pKa values at 25 °C, forms.',
+  demo: () => 'Usage: proton-ledger demo [--pretty]\n\nSolves the demo composition: the QC bench’s 25 mM HEPES / 150 mM NaCl wash buffer at 4 °C.',
+};
+
+/** Where the input comes from: --json, a file for --batch, or standard input (never a terminal, which would wait). */
+function readText(args: string[], write: (text: string) => void, command: string): string | undefined {
   const i = args.indexOf('--json');
-  const text = i >= 0 ? args[i + 1] ?? '' : readFileSync(0, 'utf8');
+  if (i >= 0) return args[i + 1] ?? '';
+  if (process.stdin.isTTY) {
+    write(HELP[command]() + '\n');
+    return undefined;
+  }
+  return readFileSync(0, 'utf8');
+}
+
+function parseJson(text: string): unknown {
   try {
     return JSON.parse(text);
   } catch (e) {
-    throw new CliFailure(`The input is not valid JSON: ${(e as Error).message}`);
+    throw new ChemError('invalid-input', 'notJson', MESSAGES.notJson((e as Error).message), 'input', 'one JSON object');
   }
 }
 
-function solveCommand(raw: unknown): unknown {
-  const parsed = compositionInputSchema.safeParse(raw);
-  if (!parsed.success) throw new CliFailure(describeSchemaError(parsed.error));
-  const composition = toComposition(parsed.data);
-  const result = speciate(composition);
-  const kappa = conductivityOf(result);
-  const conductivity = {
-    temperatureC: result.temperatureC,
-    msPerCm: kappa.conductivityMsPerCm,
-    at25MsPerCm: result.temperatureC === 25 ? kappa.conductivityMsPerCm : conductivityAt(composition, 25).conductivityMsPerCm,
-    estimates: kappa.estimates,
-  };
-  // The solver's own warnings plus the plain-words checks (weak buffering, metal complexes) and the conductivity model's.
-  return { ...result, conductivity, warnings: [...solutionWarnings(composition, result), ...kappa.warnings] };
-}
+const solveCommand = solveComposition;
 
 function recipeCommand(raw: unknown) {
   const { recipe, userSubstances } = toRecipeInput(raw);
@@ -72,18 +127,61 @@ function substanceTable(): string {
   return [head, ...rows.map((r) => [r[0].padEnd(width[0]), r[1].padEnd(width[1]), r[2]].join('  '))].join('\n') + '\n';
 }
 
-/** Runs one command; returns the process exit code. Exported for tests. */
+function optionValue(args: string[], name: string): string | undefined {
+  const i = args.indexOf(name);
+  return i >= 0 ? args[i + 1] : undefined;
+}
+
+/** Runs a batch; returns the exit code: 0 when every row was planned, 1 when some rows hold errors. */
+async function batchCommand(command: 'recipe' | 'solve', args: string[], write: (text: string) => void): Promise<number> {
+  const batch = await import('./batch');
+  const file = optionValue(args, '--batch');
+  if (!file) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('--batch', 'a CSV or JSON-lines file (or - for standard input)'), '--batch', 'a file');
+  const text = file === '-' ? readFileSync(0, 'utf8') : readFileSync(file, 'utf8');
+  const inputs = batch.readBatch(text);
+  const rows = command === 'recipe' ? batch.recipeBatch(inputs) : batch.solveBatch(inputs);
+  const out = optionValue(args, '-o');
+  const kind = out ? extname(out).toLowerCase() : '.csv';
+  if (kind === '.xlsx') {
+    const { writeTableXlsx } = await import('./tableXlsx');
+    await writeTableXlsx(out!, `${command} batch`, batch.batchTable(command, rows));
+  } else {
+    const body = kind === '.jsonl' || kind === '.json' ? batch.batchJsonLines(command, rows) : batch.batchCsv(command, rows);
+    if (out) writeFileSync(out, body);
+    else write(body);
+  }
+  const failed = rows.filter((r) => r.error).length;
+  if (out) write(JSON.stringify({ rows: rows.length, planned: rows.length - failed, failed, output: out }) + '\n');
+  return failed > 0 ? 1 : 0;
+}
+
+function printError(e: unknown, print: (value: unknown) => void): void {
+  if (e instanceof ChemError) print({ error: { kind: e.kind, code: e.code, message: e.message, field: e.field, allowed: e.allowed } });
+  else if ((e as NodeJS.ErrnoException)?.code === 'ENOENT') print({ error: { kind: 'invalid-input', code: 'fileNotFound', message: (e as Error).message, field: 'file' } });
+  else print({ error: { kind: 'invalid-input', code: 'unexpected', message: `Unexpected failure (please report it): ${(e as Error).message}` } });
+}
+
+/** Runs one command (not calc or batch); returns the process exit code. Exported for tests. */
 export function run(args: string[], write: (text: string) => void): number {
   const pretty = args.includes('--pretty');
   const print = (value: unknown) => write(JSON.stringify(value, null, pretty ? 2 : undefined) + '\n');
   const command = args[0];
   try {
+    if (command !== undefined && args.includes('--help') && HELP[command]) {
+      write(HELP[command]() + '\n');
+      return 0;
+    }
     switch (command) {
-      case 'solve':
-        print(solveCommand(readInput(args)));
+      case 'solve': {
+        const text = readText(args, write, 'solve');
+        if (text === undefined) return 0;
+        print(solveCommand(parseJson(text)));
         return 0;
+      }
       case 'recipe': {
-        const plan = recipeCommand(readInput(args));
+        const text = readText(args, write, 'recipe');
+        if (text === undefined) return 0;
+        const plan = recipeCommand(parseJson(text));
         if (args.includes('--text')) write(formatRecipe(plan) + '\n');
         else print(plan);
         return 0;
@@ -95,29 +193,44 @@ export function run(args: string[], write: (text: string) => void): number {
       case 'demo':
         print({ composition: DEMO_COMPOSITION, result: solveCommand(DEMO_COMPOSITION) });
         return 0;
+      case '--version':
+      case 'version':
+        write(`proton-ledger ${version()}\n`);
+        return 0;
       case undefined:
-      case 'help':
       case '--help':
         write(USAGE + '\n');
         return 0;
+      case 'help':
+        write((args[1] && HELP[args[1]] ? HELP[args[1]]() : USAGE) + '\n');
+        return 0;
       default:
-        throw new CliFailure(`Unknown command "${command}".\n${USAGE}`);
+        throw new ChemError('invalid-input', 'unknownField', MESSAGES.unknownCommand(command, Object.keys(HELP).concat('help')), 'command', Object.keys(HELP).join(', '));
     }
   } catch (e) {
-    if (e instanceof ChemError) {
-      print({ error: { kind: e.kind, code: e.code, message: e.message, field: e.field, allowed: e.allowed } });
-    } else if (e instanceof CliFailure) {
-      print({ error: { kind: e.kind, message: e.message, field: e.field } });
-    } else {
-      print({ error: { kind: 'invalid-input', message: (e as Error).message } });
-    }
+    printError(e, print);
     return 2;
   }
 }
 
-/** Runs any command, the asynchronous `calc` included; resolves to the exit code. */
+/** Runs any command, the asynchronous `calc` and batches included; resolves to the exit code. */
 export async function main(args: string[], write: (text: string) => void): Promise<number> {
-  if (args[0] === 'calc') return runCalc(args.slice(1), write);
+  if (args[0] === 'calc') {
+    if (args.includes('--help')) {
+      write(CALC_HELP + '\n');
+      return 0;
+    }
+    const { runCalc } = await import('./calc');
+    return runCalc(args.slice(1), write);
+  }
+  if ((args[0] === 'recipe' || args[0] === 'solve') && args.includes('--batch') && !args.includes('--help')) {
+    try {
+      return await batchCommand(args[0], args, write);
+    } catch (e) {
+      printError(e, (v) => write(JSON.stringify(v) + '\n'));
+      return 2;
+    }
+  }
   return run(args, write);
 }
 

@@ -8,7 +8,7 @@ import { ChemError, MESSAGES } from '../chem';
 import { FIELDS } from '../chem/input';
 import { closestNames, nameKey } from '../chem/library/names';
 import { RecipeInput } from '../chem/planner';
-import { userSubstancesSchema } from './compositionInput';
+import { readUserSubstances } from './compositionInput';
 
 /** Keys besides the declared fields: user substances, and purity by form name. */
 const EXTRA_KEYS = ['userSubstances', 'purityPercent'];
@@ -56,8 +56,7 @@ export function toRecipeInput(raw: unknown): { recipe: RecipeInput; userSubstanc
   if (!isObject(raw)) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('recipe', 'a JSON object such as {"buffer": "HEPES", "targetPh": 7.4, "concentrationMm": 25, "volumeMl": 500}'), 'recipe', 'an object');
   checkKeys(raw, '');
   const { userSubstances, ...rest } = raw;
-  const users = userSubstancesSchema.safeParse(userSubstances);
-  if (!users.success) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('userSubstances', 'a list of substance objects'), 'userSubstances', 'a list of objects');
+  const users = readUserSubstances(userSubstances);
   const recipe = (typeof rest.titrant === 'string' ? { ...rest, titrant: { form: rest.titrant } } : rest) as unknown as RecipeInput;
-  return { recipe, userSubstances: users.data };
+  return { recipe, userSubstances: users };
 }

@@ -14,6 +14,7 @@ import { ChemError, MESSAGES, apparentPKa, capacity, conductivityAt, solutionWar
 import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toField, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
 import { recipeOptions } from './recipeOptions';
+import { RECIPE_ROW_HEADER, recipeRowValues } from './recipeRow';
 import { DEFAULT_PART_VOLUME_FRACTION, RecipeInput, RecipePlan, checkTitrantFits, planRecipe } from '../chem/planner';
 import { volumeText } from '../chem/planner/protocol';
 import { compositionFrom, MAX_COMPOSITION_ROWS } from './composition';
@@ -327,20 +328,7 @@ function column(names: readonly string[]): string[][] {
   return names.map((n) => [n]);
 }
 
-/** Columns of RECIPE.ROW, in order; a recipe table's header row. */
-export const RECIPE_ROW_HEADER = [
-  'form (g)',
-  'titrant (mL)',
-  'titrant low (mL)',
-  'titrant high (mL)',
-  'meter reads (pH)',
-  'pH at use',
-  'base per 0.1 pH (mM)',
-  'acid per 0.1 pH (mM)',
-  'ionic strength (mM)',
-  'ideal osmolarity (mOsm/L)',
-  'warnings',
-] as const;
+export { RECIPE_ROW_HEADER } from './recipeRow';
 
 /** Most rows of the RECIPE sheet, header included: Excel spills only the rows a recipe has; the formula engine pads to this. */
 export const RECIPE_TABLE_ROWS = 48;
@@ -412,11 +400,7 @@ function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl:
 export function recipeRow(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC?: any, salts?: any[][], options?: any[][], userSubstances?: any[][]): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('RECIPE.ROW', args, () => {
-    const plan = recipePlan(args, false);
-    const weighed = plan.components.find((c) => c.role === 'buffer');
-    const t = plan.titration;
-    const p = plan.predictions;
-    return [[weighed?.grams ?? 0, t?.volumeMl ?? 0, t?.lowMl ?? 0, t?.highMl ?? 0, plan.meter.pH, p.pHAtUse, p.baseMmPerTenthPh, p.acidMmPerTenthPh, p.ionicStrengthM * 1000, p.idealOsmolarityMosm, plan.warnings.join(' ')]];
+    return [recipeRowValues(recipePlan(args, false))];
   });
 }
 

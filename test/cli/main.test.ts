@@ -34,16 +34,26 @@ describe('proton-ledger solve', () => {
   });
 
   it.each([
-    ['invalid JSON', ['solve', '--json', '{nope'], /not valid JSON/],
-    ['a missing field', ['solve', '--json', '{"systems":[{"name":"x","pKa":[6]}]}'], /systems\.0\.chargeOfMostProtonated: Required/],
-    ['an unknown field', ['solve', '--json', '{"temperature":25}'], /Unrecognized key/],
-    ['a chemistry error', ['solve', '--json', '{"systems":[],"temperatureC":150,"strongIonsMm":{"Na+":1}}'], /temperatureC is 150/],
-    ['mismatched ΔH list', ['solve', '--json', '{"systems":[{"name":"x","chargeOfMostProtonated":0,"pKa":[4,6],"deltaHkJ":[1],"totalMm":10}]}'], /one value per pKa step/],
-    ['an unknown command', ['brew'], /Unknown command "brew"/],
-  ])('given %s, prints a JSON error and exits 2', (_label, args, message) => {
-    const { code, out } = call(args as string[]);
-    expect(code).toBe(2);
-    expect(out.error.message).toMatch(message);
+    ['invalid JSON', ['solve', '--json', '{nope'], 'notJson', 'input'],
+    ['a missing field', ['solve', '--json', '{"systems":[{"name":"x","pKa":[6]}]}'], 'notANumber', 'systems[0].chargeOfMostProtonated'],
+    ['an unknown field', ['solve', '--json', '{"temperature":25}'], 'unknownField', 'temperature'],
+    ['an unknown field inside a system', ['solve', '--json', '{"systems":[{"name":"x","chargeOfMostProtonated":0,"pKa":[6],"totalMM":5}]}'], 'unknownField', 'systems[0].totalMM'],
+    ['a chemistry error', ['solve', '--json', '{"systems":[],"temperatureC":150,"strongIonsMm":{"Na+":1}}'], 'outOfRange', 'temperatureC'],
+    ['mismatched ΔH list', ['solve', '--json', '{"systems":[{"name":"x","chargeOfMostProtonated":0,"pKa":[4,6],"deltaHkJ":[1],"totalMm":10}]}'], 'listLengthMismatch', 'systems[0].deltaHkJ'],
+    ['a misspelt form', ['solve', '--json', '{"forms":[{"form":"tris bsae","mM":5}]}'], 'unknownSubstance', 'forms[0].form'],
+    ['an ambiguous unit', ['solve', '--json', '{"forms":[{"form":"tris base","mM":"5 m"}]}'], 'ambiguousUnit', 'forms[0].mM'],
+    ['an unknown command', ['brew'], 'unknownField', 'command'],
+  ])('given %s, prints a JSON error with kind, code, field and message, and exits 2', (_label, args, code, field) => {
+    const { code: exit, out } = call(args as string[]);
+    expect(exit).toBe(2);
+    expect(out.error).toMatchObject({ kind: 'invalid-input', code, field });
+    expect(typeof out.error.message).toBe('string');
+  });
+
+  it('reads numbers with units in a composition, as the worksheet functions do', () => {
+    const typed = call(['solve', '--json', JSON.stringify({ forms: [{ form: 'tris base', mM: '0,05 M' }, { form: 'HCl', mM: '25 mM' }], temperatureC: '4 °C' })]);
+    const plain = call(['solve', '--json', JSON.stringify({ forms: [{ form: 'tris base', mM: 50 }, { form: 'HCl', mM: 25 }], temperatureC: 4 })]);
+    expect(typed.out.pH).toBe(plain.out.pH);
   });
 
   it('prints usage for help', () => {
@@ -122,5 +132,62 @@ describe('proton-ledger recipe and substances', () => {
     const { out } = call(['substances', '--json']);
     expect(out.length).toBeGreaterThanOrEqual(45);
     expect(out.find((s: { name: string }) => s.name === 'HEPES').pKa).toEqual([7.564]);
+  });
+});
+
+describe('proton-ledger help, version and batches', () => {
+  const { main } = jest.requireActual('../../src/cli/main') as typeof import('../../src/cli/main');
+  const { mkdtempSync, writeFileSync, readFileSync } = jest.requireActual('fs') as typeof import('fs');
+  const { join } = jest.requireActual('path') as typeof import('path');
+  const { tmpdir } = jest.requireActual('os') as typeof import('os');
+
+  async function cli(args: string[]): Promise<{ code: number; text: string }> {
+    let text = '';
+    const code = await main(args, (t) => (text += t));
+    return { code, text };
+  }
+
+  it('prints every recipe field with its unit and default for recipe --help, and the version for --version', async () => {
+    const help = await cli(['recipe', '--help']);
+    expect(help.code).toBe(0);
+    for (const field of ['targetPh', 'titrant.concentrationM', 'saltTarget.conductivityMsPerCm', 'partVolumeFraction']) expect(help.text).toContain(field);
+    expect(help.text).toMatch(/0\.001 to 20 M; default: 1/);
+    expect((await cli(['calc', '--help'])).text).toMatch(/Usage: proton-ledger calc/);
+    expect((await cli(['--version'])).text).toMatch(/^proton-ledger \d+\.\d+\.\d+/);
+  });
+
+  it('plans a CSV batch of our own what-if table: one row per input, an impossible row keeps its error and the exit code says so', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'pl-batch-'));
+    const input = join(dir, 'grid.csv');
+    writeFileSync(input, ['buffer,targetPh,concentrationMm,volumeMl,useTemperatureC,titrant.form', 'HEPES,7.2,25 mM,1 L,4,NaOH', 'HEPES,"7,6",25,1000,25,NaOH', 'HEPES,7.4,25,1000,25,HCl', 'tris,8.1,50,500,4,'].join('\n'));
+    const out = join(dir, 'grid.jsonl');
+    const result = await cli(['recipe', '--batch', input, '-o', out]);
+    expect(result.code).toBe(1);
+    expect(JSON.parse(result.text)).toEqual({ rows: 4, planned: 3, failed: 1, output: out });
+    const rows = readFileSync(out, 'utf8').trim().split('\n').map((l) => JSON.parse(l));
+    expect(rows.map((r) => r.row)).toEqual([1, 2, 3, 4]);
+    expect(Math.abs(rows[1]['pH at use'] - 7.6)).toBeLessThan(0.001);
+    // HCl lowers the pH of HEPES free acid: the target is out of reach, said in its row.
+    expect(rows[2].error).toMatchObject({ kind: 'infeasible-target', code: 'unreachablePh' });
+    expect(rows[3]['titrant (mL)']).toBeGreaterThan(0);
+    const csv = await cli(['recipe', '--batch', input]);
+    expect(csv.text.split('\n')[0]).toMatch(/^row,form \(g\),titrant \(mL\)/);
+  });
+
+  it('writes a batch as .xlsx, and solves a JSON-lines batch of compositions', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'pl-batch-'));
+    const input = join(dir, 'mixes.jsonl');
+    writeFileSync(input, [JSON.stringify({ forms: [{ form: 'tris base', mM: 50 }, { form: 'HCl', mM: 25 }] }), 'not json', JSON.stringify({ forms: [{ form: 'MES free acid', mM: '20 mM' }], temperatureC: '37 °C' })].join('\n'));
+    const out = join(dir, 'mixes.xlsx');
+    const result = await cli(['solve', '--batch', input, '-o', out]);
+    expect(result.code).toBe(1);
+    expect(JSON.parse(result.text)).toMatchObject({ rows: 3, planned: 2, failed: 1 });
+    const ExcelJS = jest.requireActual('exceljs');
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.readFile(out);
+    const ws = wb.worksheets[0];
+    expect(ws.getRow(1).getCell(2).value).toBe('pH');
+    expect(ws.getRow(3).getCell(6).value).toBe('notJson');
+    expect(Math.abs((ws.getRow(2).getCell(2).value as number) - 8.07)).toBeLessThan(0.1);
   });
 });
