@@ -10,6 +10,8 @@ export const SOURCES = {
   harnedOwen1958:
     'H. S. Harned, B. B. Owen, The Physical Chemistry of Electrolytic Solutions, 3rd ed., Reinhold (1958)',
   bates1973: 'R. G. Bates, Determination of pH, 2nd ed., Wiley (1973)',
+  cleggRardPitzer1994:
+    'S. L. Clegg, J. A. Rard, K. S. Pitzer, "Thermodynamic properties of 0–6 mol kg−1 aqueous sulfuric acid from 273.15 to 328.15 K", J. Chem. Soc., Faraday Trans. 90 (1994) 1875–1894, eq. 21 (K of HSO4−)',
   crcDissociation:
     'CRC Handbook of Chemistry and Physics, "Dissociation constants of organic acids and bases" (edition not checked)',
   crcSolubility:
@@ -23,12 +25,20 @@ export const SOURCES = {
 export type SourceId = keyof typeof SOURCES;
 
 /**
- * Where the values marked `verified: true` were checked: public copies of the
- * Goldberg et al. 2002 selected values found with the project's code search (a TypeScript
- * buffer module listing pK, ΔH°, ΔCp° for 29 ionization steps; a source-review note
- * quoting TAPSO and imidazole from the printed tables; a C# ITC-analysis table quoting the
- * phosphate steps; a reference manager quoting phosphate, acetate, citrate, tris and
- * carbonate pK values; and a scanned page of the review for ADA).
+ * The copies library values were checked against. A copy is a place a reader can open
+ * (a journal table, a primary paper, or a public transcription of one), named so that a
+ * step's `checkedAgainst` list can say which copy, where in it, and what it gives. One
+ * transcription is not the journal: a value checked only against a transcription says so.
  */
-export const VERIFICATION_NOTE =
-  'Checked against public copies of the Goldberg et al. 2002 tables found by code search (not against the printed journal itself).';
+export const COPIES = {
+  goldbergTranscriptionTs:
+    'A public TypeScript buffer module, found by code search, that transcribes the Goldberg et al. 2002 selected values (pK, ΔH°, ΔCp° for 29 ionization steps); it disagrees with other copies on several Good-buffer ΔCp° values, so it counts as one transcription, not as the journal',
+  goldbergReviewNote: 'A public source-review note quoting the TAPSO and imidazole lines of the Goldberg et al. 2002 tables (Tables 7.62 and 7.41)',
+  goldbergScanAda: 'A scanned page of the Goldberg et al. 2002 review (p. 242, the ADA literature table)',
+  goldbergItcTable: 'A public C# isothermal-titration-calorimetry buffer table (AnalysisITC) quoting Goldberg et al. 2002 ΔH° and ΔCp° for HEPES, tris and phosphate',
+  pytzerDissociation:
+    'The fitted equations transcribed in pytzer (github.com/mvdh7/pytzer, pytzer/dissociation.py): Bates & Hetzer 1961 eq. 3 (tris), Clegg, Rard & Pitzer 1994 eq. 21 (HSO4−), Millero 1979 (boric and carbonic acid), Plummer & Busenberg 1982 (carbonic acid), Bates & Pinching 1949 (ammonium), and the phosphoric-acid fits of Bates 1951, Bates & Acree 1943 and Schwarzenbach & Meier 1964 as given by Millero & Pierrot 1998. pK, ΔH° and ΔCp° at 298.15 K are read off each equation by differentiation (ΔH° = RT² d lnK/dT, ΔCp° = dΔH°/dT)',
+} as const;
+
+/** Key of a copy in COPIES. */
+export type CopyId = keyof typeof COPIES;

@@ -1,8 +1,8 @@
 /**
  * The substance library: one typed table of acid–base systems and strong electrolytes,
- * each with the forms found on the shelf. Every constant names its source on its record;
- * `verified: false` marks values written from memory of the source and not yet checked
- * against a copy of it.
+ * each with the forms found on the shelf. Every constant names its source on its record,
+ * the copies it was checked against (`checkedAgainst`, or `memory` when no copy was
+ * found) and the temperatures its data cover. docs/constants.md explains the audit.
  *
  * Conventions: pKa at 25 °C and I = 0; ΔH° in kJ/mol; ΔCp° in J K⁻¹ mol⁻¹; steps in
  * order of proton loss from the most protonated form listed. A form's `adds` says which
@@ -11,18 +11,28 @@
  * whole is neutral. Molar masses: listed = supplier label; computed from the formula.
  */
 import { SourceId } from './sources';
-import { CautionFlag, FormRecord, SourcedStep, SubstanceRecord, SystemPortion } from './types';
+import { CautionFlag, FormRecord, Provenance, SourcedStep, SubstanceRecord, SystemPortion, ValueCheck } from './types';
 
-/** Goldberg et al. 2002 data mostly span about 0–60 °C; the range the constants are meant for. */
+/** Most data Goldberg et al. 2002 reviewed span about 0–60 °C (memory of the review's literature tables); used where a step's own range was not read. */
 const GOLDBERG_RANGE_C: readonly [number, number] = [0, 60];
-/** Values known at 25 °C only (no ΔH° recorded): treat other temperatures as an estimate. */
-const ROOM_ONLY_RANGE_C: readonly [number, number] = [20, 30];
+/** Bates & Hetzer 1961 measured tris from 0 to 50 °C (the range in their title, as the pytzer reference list gives it). */
+const TRIS_RANGE_C: readonly [number, number] = [0, 50];
+/** Clegg, Rard & Pitzer 1994 fit HSO4− from 273.15 to 328.15 K (the range in their title, as the pytzer reference list gives it). */
+const CRP94_RANGE_C: readonly [number, number] = [0, 55];
+/** No ΔH° known: the pKa is held at its 25 °C value, fit for 25 ± 2 °C only. */
+const NO_ENTHALPY_RANGE_C: readonly [number, number] = [23, 27];
+
+/** The Goldberg et al. 2002 selected value as the public TypeScript transcription gives it. */
+const TRANSCRIPTION: ValueCheck = { copy: 'goldbergTranscriptionTs', where: 'the entry of the same name', reads: 'pK, ΔH°, ΔCp° read line by line; same numbers as stored' };
 
 /** A step's constants and where they come from, by name (so that ΔH° and ΔCp° cannot be swapped unnoticed). */
 interface StepData {
   readonly source: SourceId;
   readonly entry: string;
-  readonly verified: boolean;
+  /** The copies the numbers were checked against, or `memory`. */
+  readonly checkedAgainst: Provenance;
+  /** Temperatures the step's data cover, °C. */
+  readonly temperatureRangeC: readonly [number, number];
   /** pKa at 25 °C, I = 0. */
   readonly pKa: number;
   /** ΔH° of ionisation, kJ/mol. */
@@ -39,15 +49,25 @@ function step(d: StepData): SourcedStep {
     ...(d.deltaCpJ === undefined ? {} : { deltaCpJ: d.deltaCpJ }),
     source: d.source,
     entry: d.entry,
-    verified: d.verified,
+    checkedAgainst: d.checkedAgainst,
+    temperatureRangeC: d.temperatureRangeC,
     ...(d.note === undefined ? {} : { note: d.note }),
   };
 }
 
-/** Goldberg et al. 2002, checked against a found copy of its table. */
-const gv = (d: Omit<StepData, 'source' | 'verified'> & { deltaHkJ: number; deltaCpJ: number }) => step({ ...d, source: 'goldberg2002', verified: true });
-/** Goldberg et al. 2002, written from memory (not checked). */
-const gm = (d: Omit<StepData, 'source' | 'verified'>) => step({ ...d, source: 'goldberg2002', verified: false, note: d.note ?? '(memory) not checked against a copy of the source' });
+type GoldbergData = Omit<StepData, 'source' | 'checkedAgainst' | 'temperatureRangeC'> & { readonly temperatureRangeC?: readonly [number, number] };
+
+/** Goldberg et al. 2002, checked against the public transcription and any further copies named in `also`. */
+const gv = (d: GoldbergData & { deltaHkJ: number; deltaCpJ: number; also?: readonly ValueCheck[] }) => {
+  const { also, ...rest } = d;
+  return step({ ...rest, source: 'goldberg2002', checkedAgainst: [TRANSCRIPTION, ...(also ?? [])], temperatureRangeC: d.temperatureRangeC ?? GOLDBERG_RANGE_C });
+};
+/** Goldberg et al. 2002, written from memory (no copy found). */
+const gm = (d: GoldbergData) =>
+  step({ ...d, source: 'goldberg2002', checkedAgainst: 'memory', temperatureRangeC: d.temperatureRangeC ?? GOLDBERG_RANGE_C, note: d.note ?? '(memory) not checked against a copy of the source' });
+/** A step without ΔH°, written from memory: its pKa holds at 25 ± 2 °C only. */
+const roomOnly = (d: Omit<StepData, 'checkedAgainst' | 'temperatureRangeC' | 'deltaHkJ' | 'deltaCpJ'>) =>
+  step({ ...d, checkedAgainst: 'memory', temperatureRangeC: NO_ENTHALPY_RANGE_C });
 
 /** A form on the shelf, by name: molar mass and what one mole adds are named fields. */
 interface FormData extends Partial<Pick<FormRecord, 'protonsReleased' | 'cautions' | 'cautionNote' | 'note' | 'solubility'>> {
@@ -75,7 +95,6 @@ interface SystemData {
   readonly cautions?: readonly CautionFlag[];
   readonly cautionNote?: string;
   readonly note?: string;
-  readonly temperatureRangeC?: readonly [number, number];
 }
 
 function system(d: SystemData): SubstanceRecord {
@@ -85,7 +104,6 @@ function system(d: SystemData): SubstanceRecord {
     kind: 'acid-base',
     chargeOfMostProtonated: d.chargeOfMostProtonated,
     steps: d.steps,
-    temperatureRangeC: d.temperatureRangeC ?? GOLDBERG_RANGE_C,
     cautions: d.cautions ?? [],
     ...(d.cautionNote === undefined ? {} : { cautionNote: d.cautionNote }),
     ...(d.note === undefined ? {} : { note: d.note }),
@@ -110,18 +128,18 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'MES monohydrate', aliases: ['MES hydrate', 'MES·H2O'], formula: 'C6H13NO4S·H2O', listedMolarMass: 213.25, adds: [{ system: 'MES', moles: 1, protonsLost: 0 }] }),
     form({ name: 'MES sodium salt', aliases: ['MES sodium', 'sodium MES', 'MES Na'], formula: 'C6H12NNaO4S', listedMolarMass: 217.22, adds: [{ system: 'MES', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
-  system({ name: 'Bis-Tris', aliases: ['bis(2-hydroxyethyl)amino-tris(hydroxymethyl)methane', 'bistris', 'bis tris methane'], chargeOfMostProtonated: 1, steps: [gv({ entry: 'bis-tris', pKa: 6.484, deltaHkJ: 28.4, deltaCpJ: -7 })], forms: [
+  system({ name: 'Bis-Tris', aliases: ['bis(2-hydroxyethyl)amino-tris(hydroxymethyl)methane', 'bistris', 'bis tris methane'], chargeOfMostProtonated: 1, steps: [step({ source: 'goldberg2002', entry: 'bis-tris', pKa: 6.484, deltaHkJ: 28.4, deltaCpJ: 27, checkedAgainst: [{ ...TRANSCRIPTION, reads: 'pK 6.484 and ΔH° 28.4 as stored; gives ΔCp° −7' }], temperatureRangeC: GOLDBERG_RANGE_C, note: 'ΔCp° +27 is the review\'s value as remembered (memory); the transcription\'s −7 was not kept because that copy disagrees with other copies on several Good-buffer ΔCp° values. Not yet checked against a second copy.' })], forms: [
     form({ name: 'Bis-Tris base', aliases: ['Bis-Tris', 'bistris base'], formula: 'C8H19NO5', listedMolarMass: 209.24, adds: [{ system: 'Bis-Tris', moles: 1, protonsLost: 1 }] }),
     form({ name: 'Bis-Tris hydrochloride', aliases: ['Bis-Tris HCl', 'bistris hydrochloride'], formula: 'C8H19NO5·HCl', listedMolarMass: 245.7, adds: [{ system: 'Bis-Tris', moles: 1, protonsLost: 0 }], counterIons: { 'Cl-': 1 } }),
   ], cautionNote: GOOD_CAUTION }),
   system({ name: 'ADA', aliases: ['N-(2-acetamido)iminodiacetic acid', 'acetamidoiminodiacetic acid'], chargeOfMostProtonated: 0, steps: [
-    step({ source: 'goldberg2002', entry: 'ADA, H2L± ⇌ HL− (reaction 2)', verified: false, pKa: 2.48, note: 'Mean of the four literature values on the review\'s ADA page (scanned copy, p. 242), which the review\'s comment says it adopted; the printed selected value itself not seen. ΔH° not recorded.' }),
-    step({ source: 'goldberg2002', entry: 'ADA, HL− ⇌ L2− (reaction 3)', verified: false, pKa: 6.844, deltaHkJ: 12.23, deltaCpJ: -144, note: '(memory) Matches the Roy et al. 1981 values quoted on the scanned p. 242 (pK 6.844, ΔH° 12.23 kJ/mol, ΔCp° 144 with its sign lost in the scan); the selected line itself not seen.' }),
+    step({ source: 'goldberg2002', entry: 'ADA, H2L± ⇌ HL− (reaction 2)', checkedAgainst: [{ copy: 'goldbergScanAda', where: 'p. 242, ADA literature table', reads: 'four literature pK values whose mean is 2.48' }], temperatureRangeC: NO_ENTHALPY_RANGE_C, pKa: 2.48, note: 'Mean of the four literature values on the review\'s ADA page (scanned copy, p. 242), which the review\'s comment says it adopted; the printed selected value itself not seen. ΔH° not recorded.' }),
+    step({ source: 'goldberg2002', entry: 'ADA, HL− ⇌ L2− (reaction 3)', checkedAgainst: [{ copy: 'goldbergScanAda', where: 'p. 242, Roy et al. 1981 line', reads: 'pK 6.844, ΔH° 12.23 kJ/mol, ΔCp° 144 with its sign lost in the scan' }], temperatureRangeC: GOLDBERG_RANGE_C, pKa: 6.844, deltaHkJ: 12.23, deltaCpJ: -144, note: '(memory) Matches the Roy et al. 1981 values quoted on the scanned p. 242 (pK 6.844, ΔH° 12.23 kJ/mol, ΔCp° 144 with its sign lost in the scan); the selected line itself not seen.' }),
   ], forms: [
     form({ name: 'ADA free acid', aliases: ['ADA'], formula: 'C6H10N2O5', listedMolarMass: 190.15, adds: [{ system: 'ADA', moles: 1, protonsLost: 0 }] }),
     form({ name: 'ADA monosodium salt', aliases: ['ADA sodium salt', 'ADA sodium'], formula: 'C6H9N2NaO5', listedMolarMass: 212.14, adds: [{ system: 'ADA', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
   ], cautionNote: GOOD_CAUTION, note: 'Binds divalent metal ions (Ca2+, Mg2+, Cu2+); complexes are not modelled.' }),
-  system({ name: 'PIPES', aliases: ['piperazine-N,N\'-bis(2-ethanesulfonic acid)', '1,4-piperazinediethanesulfonic acid'], chargeOfMostProtonated: -1, steps: [gv({ entry: 'PIPES', pKa: 7.141, deltaHkJ: 11.2, deltaCpJ: -2 })], forms: [
+  system({ name: 'PIPES', aliases: ['piperazine-N,N\'-bis(2-ethanesulfonic acid)', '1,4-piperazinediethanesulfonic acid'], chargeOfMostProtonated: -1, steps: [step({ source: 'goldberg2002', entry: 'PIPES', pKa: 7.141, deltaHkJ: 11.2, deltaCpJ: 22, checkedAgainst: [{ ...TRANSCRIPTION, reads: 'pK 7.141 and ΔH° 11.2 as stored; gives ΔCp° −2' }], temperatureRangeC: GOLDBERG_RANGE_C, note: 'ΔCp° +22 is the review\'s value as remembered (memory); the transcription\'s −2 was not kept (that copy disagrees with others on Good-buffer ΔCp°). Not yet checked against a second copy.' })], forms: [
     form({ name: 'PIPES free acid', aliases: ['PIPES', 'PIPES acid'], formula: 'C8H18N2O6S2', listedMolarMass: 302.37, adds: [{ system: 'PIPES', moles: 1, protonsLost: 0 }], counterIons: {}, protonsReleased: 1 }),
     form({ name: 'PIPES monosodium salt', aliases: ['PIPES sodium salt', 'PIPES sodium'], formula: 'C8H17N2NaO6S2', listedMolarMass: 324.35, adds: [{ system: 'PIPES', moles: 1, protonsLost: 0 }], counterIons: { 'Na+': 1 } }),
     form({ name: 'PIPES disodium salt', aliases: ['PIPES disodium'], formula: 'C8H16N2Na2O6S2', listedMolarMass: 346.33, adds: [{ system: 'PIPES', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 2 } }),
@@ -129,14 +147,14 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
   system({ name: 'ACES', aliases: ['N-(2-acetamido)-2-aminoethanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'ACES', pKa: 6.847, deltaHkJ: 30.43, deltaCpJ: -49 })], forms: [
     form({ name: 'ACES free acid', aliases: ['ACES'], formula: 'C4H10N2O4S', listedMolarMass: 182.2, adds: [{ system: 'ACES', moles: 1, protonsLost: 0 }] }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
-  system({ name: 'MOPSO', aliases: ['3-morpholino-2-hydroxypropanesulfonic acid', '3-(N-morpholino)-2-hydroxypropanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'MOPSO', pKa: 6.9, deltaHkJ: 25.0, deltaCpJ: 38 })], forms: [
+  system({ name: 'MOPSO', aliases: ['3-morpholino-2-hydroxypropanesulfonic acid', '3-(N-morpholino)-2-hydroxypropanesulfonic acid'], chargeOfMostProtonated: 0, steps: [step({ source: 'goldberg2002', entry: 'MOPSO', pKa: 6.88, deltaHkJ: 25.0, deltaCpJ: 38, checkedAgainst: [{ ...TRANSCRIPTION, reads: 'ΔH° 25.0 and ΔCp° 38 as stored; gives pK 6.90' }], temperatureRangeC: GOLDBERG_RANGE_C, note: 'pK 6.88 is the review\'s selected value as remembered (memory), where the transcription rounds to 6.90. Not yet checked against a second copy.' })], forms: [
     form({ name: 'MOPSO free acid', aliases: ['MOPSO'], formula: 'C7H15NO5S', listedMolarMass: 225.26, adds: [{ system: 'MOPSO', moles: 1, protonsLost: 0 }] }),
     form({ name: 'MOPSO sodium salt', aliases: ['MOPSO sodium'], formula: 'C7H14NNaO5S', listedMolarMass: 247.24, adds: [{ system: 'MOPSO', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
   system({ name: 'BES', aliases: ['N,N-bis(2-hydroxyethyl)-2-aminoethanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'BES', pKa: 7.187, deltaHkJ: 24.25, deltaCpJ: -2 })], forms: [
     form({ name: 'BES free acid', aliases: ['BES'], formula: 'C6H15NO5S', listedMolarMass: 213.25, adds: [{ system: 'BES', moles: 1, protonsLost: 0 }] }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
-  system({ name: 'MOPS', aliases: ['3-(N-morpholino)propanesulfonic acid', '3-morpholinopropanesulfonic acid', '4-morpholinepropanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'MOPS', pKa: 7.184, deltaHkJ: 21.1, deltaCpJ: -5 })], forms: [
+  system({ name: 'MOPS', aliases: ['3-(N-morpholino)propanesulfonic acid', '3-morpholinopropanesulfonic acid', '4-morpholinepropanesulfonic acid'], chargeOfMostProtonated: 0, steps: [step({ source: 'goldberg2002', entry: 'MOPS', pKa: 7.184, deltaHkJ: 21.1, deltaCpJ: 25, checkedAgainst: [{ ...TRANSCRIPTION, reads: 'pK 7.184 and ΔH° 21.1 as stored; gives ΔCp° −5' }], temperatureRangeC: GOLDBERG_RANGE_C, note: 'ΔCp° +25 is the review\'s value as remembered (memory); the transcription\'s −5 was not kept (that copy disagrees with others on Good-buffer ΔCp°). Not yet checked against a second copy.' })], forms: [
     form({ name: 'MOPS free acid', aliases: ['MOPS', 'MOPS acid'], formula: 'C7H15NO4S', listedMolarMass: 209.26, adds: [{ system: 'MOPS', moles: 1, protonsLost: 0 }] }),
     form({ name: 'MOPS sodium salt', aliases: ['MOPS sodium', 'sodium MOPS'], formula: 'C7H14NNaO4S', listedMolarMass: 231.25, adds: [{ system: 'MOPS', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
@@ -144,7 +162,7 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'TES free acid', aliases: ['TES'], formula: 'C6H15NO6S', listedMolarMass: 229.25, adds: [{ system: 'TES', moles: 1, protonsLost: 0 }] }),
     form({ name: 'TES sodium salt', aliases: ['TES sodium'], formula: 'C6H14NNaO6S', listedMolarMass: 251.23, adds: [{ system: 'TES', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
-  system({ name: 'HEPES', aliases: ['4-(2-hydroxyethyl)piperazine-1-ethanesulfonic acid', 'N-(2-hydroxyethyl)piperazine-N\'-(2-ethanesulfonic acid)'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'HEPES', pKa: 7.564, deltaHkJ: 20.4, deltaCpJ: 47 })], forms: [
+  system({ name: 'HEPES', aliases: ['4-(2-hydroxyethyl)piperazine-1-ethanesulfonic acid', 'N-(2-hydroxyethyl)piperazine-N\'-(2-ethanesulfonic acid)'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'HEPES', pKa: 7.564, deltaHkJ: 20.4, deltaCpJ: 47, also: [{ copy: 'goldbergItcTable', where: 'Buffer enum, HEPES', reads: 'ΔH° 20400 J/mol, ΔCp° 47: same as stored' }] })], forms: [
     form({ name: 'HEPES free acid', aliases: ['HEPES', 'HEPES acid'], formula: 'C8H18N2O4S', listedMolarMass: 238.3, adds: [{ system: 'HEPES', moles: 1, protonsLost: 0 }] }),
     form({ name: 'HEPES sodium salt', aliases: ['HEPES sodium', 'sodium HEPES', 'HEPES Na'], formula: 'C8H17N2NaO4S', listedMolarMass: 260.29, adds: [{ system: 'HEPES', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
     form({ name: 'HEPES hemisodium salt', aliases: ['HEPES hemisodium'], formula: 'C8H17.5N2Na0.5O4S', listedMolarMass: 249.29, adds: [{ system: 'HEPES', moles: 1, protonsLost: 0.5 }], counterIons: { 'Na+': 0.5 } }),
@@ -155,7 +173,7 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
   system({ name: 'TAPSO', aliases: ['3-[N-tris(hydroxymethyl)methylamino]-2-hydroxypropanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'TAPSO', pKa: 7.635, deltaHkJ: 39.09, deltaCpJ: -16 })], forms: [
     form({ name: 'TAPSO free acid', aliases: ['TAPSO'], formula: 'C7H17NO7S', listedMolarMass: 259.28, adds: [{ system: 'TAPSO', moles: 1, protonsLost: 0 }] }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
-  system({ name: 'POPSO', aliases: ['piperazine-N,N\'-bis(2-hydroxypropanesulfonic acid)'], chargeOfMostProtonated: -1, steps: [gm({ entry: 'POPSO', pKa: 7.78, deltaHkJ: 25.3 })], forms: [
+  system({ name: 'POPSO', aliases: ['piperazine-N,N\'-bis(2-hydroxypropanesulfonic acid)'], chargeOfMostProtonated: -1, steps: [gm({ entry: 'POPSO', pKa: 7.8, deltaHkJ: 19.9, deltaCpJ: 134, note: '(memory) The review\'s selected values as remembered, replacing earlier values also from memory (pK 7.78, ΔH° 25.3, no ΔCp°). Not checked against a copy.' })], forms: [
     form({ name: 'POPSO free acid', aliases: ['POPSO'], formula: 'C10H22N2O8S2', listedMolarMass: 362.42, adds: [{ system: 'POPSO', moles: 1, protonsLost: 0 }], counterIons: {}, protonsReleased: 1 }),
   ], note: DISULFONATE_NOTE, cautionNote: GOOD_CAUTION }),
   system({ name: 'HEPPSO', aliases: ['N-(2-hydroxyethyl)piperazine-N\'-(2-hydroxypropanesulfonic acid)'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'HEPPSO', pKa: 8.042, deltaHkJ: 23.7, deltaCpJ: 47 })], forms: [
@@ -188,8 +206,11 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
 
   // ── Amines ──────────────────────────────────────────────────────────────────────────
-  system({ name: 'tris', aliases: ['tris(hydroxymethyl)aminomethane', 'trometamol', 'tromethamine', 'THAM', '2-amino-2-(hydroxymethyl)propane-1,3-diol', 'Trizma'], chargeOfMostProtonated: 1, steps: [gv({ entry: 'tris', pKa: 8.072, deltaHkJ: 47.45, deltaCpJ: -59 })], forms: [
-    form({ name: 'tris base', aliases: ['tris', 'tris free base', 'Trizma base', 'tromethamine base'], formula: 'C4H11NO3', listedMolarMass: 121.14, adds: [{ system: 'tris', moles: 1, protonsLost: 1 }], counterIons: {}, solubility: { gramsPerLitre: 550, temperatureC: 25, source: 'supplierLabel', verified: false } }),
+  system({ name: 'tris', aliases: ['tris(hydroxymethyl)aminomethane', 'trometamol', 'tromethamine', 'THAM', '2-amino-2-(hydroxymethyl)propane-1,3-diol', 'Trizma'], chargeOfMostProtonated: 1, steps: [gv({ entry: 'tris', pKa: 8.072, deltaHkJ: 47.45, deltaCpJ: -59, temperatureRangeC: TRIS_RANGE_C, also: [
+      { copy: 'goldbergItcTable', where: 'Buffer enum, Tris', reads: 'ΔH° 47450 J/mol, ΔCp° −59: same as stored' },
+      { copy: 'pytzerDissociation', where: 'trisH_BH61 (Bates & Hetzer 1961 eq. 3)', reads: 'pK 8.0719, ΔH° 47.60 kJ/mol, ΔCp° −64 at 298.15 K: agrees within 0.001 in pK' },
+    ] })], forms: [
+    form({ name: 'tris base', aliases: ['tris', 'tris free base', 'Trizma base', 'tromethamine base'], formula: 'C4H11NO3', listedMolarMass: 121.14, adds: [{ system: 'tris', moles: 1, protonsLost: 1 }], counterIons: {}, solubility: { gramsPerLitre: 550, temperatureC: 25, source: 'supplierLabel', checkedAgainst: 'memory' } }),
     form({ name: 'tris hydrochloride', aliases: ['tris HCl', 'tris-HCl', 'Trizma hydrochloride', 'tromethamine hydrochloride'], formula: 'C4H11NO3·HCl', listedMolarMass: 157.6, adds: [{ system: 'tris', moles: 1, protonsLost: 0 }], counterIons: { 'Cl-': 1 } }),
   ], cautionNote: 'Irritating to eyes as a powder. Its pH moves about −0.03 per °C: adjust at the working temperature.', cautions: ['irritant'] }),
   system({ name: 'bis-tris propane', aliases: ['BTP', '1,3-bis[tris(hydroxymethyl)methylamino]propane', 'bis tris propane'], chargeOfMostProtonated: 2, steps: [
@@ -224,7 +245,9 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'piperazine anhydrous', aliases: ['piperazine'], formula: 'C4H10N2', listedMolarMass: 86.14, adds: [{ system: 'piperazine', moles: 1, protonsLost: 2 }] }),
     form({ name: 'piperazine hexahydrate', aliases: ['piperazine·6H2O'], formula: 'C4H10N2·6H2O', listedMolarMass: 194.23, adds: [{ system: 'piperazine', moles: 1, protonsLost: 2 }] }),
   ], cautions: ['corrosive'], cautionNote: 'Causes burns and may cause skin or breathing sensitisation.' }),
-  system({ name: 'ammonia', aliases: ['ammonium', 'NH3', 'NH4+'], chargeOfMostProtonated: 1, steps: [gv({ entry: 'ammonia (ammonium ion)', pKa: 9.245, deltaHkJ: 51.95, deltaCpJ: 8 })], forms: [
+  system({ name: 'ammonia', aliases: ['ammonium', 'NH3', 'NH4+'], chargeOfMostProtonated: 1, steps: [gv({ entry: 'ammonia (ammonium ion)', pKa: 9.245, deltaHkJ: 51.95, deltaCpJ: 8, temperatureRangeC: [0, 50], also: [
+      { copy: 'pytzerDissociation', where: 'NH4_MP98 (Bates & Pinching 1949)', reads: 'pK 9.2447, ΔH° 52.38 kJ/mol, ΔCp° 1 at 298.15 K: agrees' },
+    ] })], forms: [
     form({ name: 'ammonium chloride', aliases: ['NH4Cl', 'sal ammoniac'], formula: 'NH4Cl', listedMolarMass: 53.49, adds: [{ system: 'ammonia', moles: 1, protonsLost: 0 }], counterIons: { 'Cl-': 1 }, cautions: ['irritant'], cautionNote: 'Harmful if swallowed; irritating to eyes.' }),
     form({ name: 'ammonium sulfate', aliases: ['(NH4)2SO4', 'ammonium sulphate'], formula: '(NH4)2SO4', listedMolarMass: 132.14, adds: [{ system: 'ammonia', moles: 2, protonsLost: 0 }, { system: 'sulfate', moles: 1, protonsLost: 2 }] }),
     form({ name: 'ammonium acetate', aliases: ['NH4OAc', 'CH3COONH4'], formula: 'C2H7NO2', listedMolarMass: 77.08, adds: [{ system: 'ammonia', moles: 1, protonsLost: 0 }, { system: 'acetate', moles: 1, protonsLost: 1 }] }),
@@ -247,26 +270,35 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'glycylglycine free base', aliases: ['glycylglycine', 'Gly-Gly'], formula: 'C4H8N2O3', listedMolarMass: 132.12, adds: [{ system: 'glycylglycine', moles: 1, protonsLost: 1 }] }),
   ] }),
   system({ name: 'histidine', aliases: ['L-histidine', 'His'], chargeOfMostProtonated: 2, steps: [
-    step({ source: 'crcDissociation', entry: 'L-histidine, carboxyl', verified: false, pKa: 1.8, note: '(memory) ΔH° not recorded: pKa treated as independent of temperature.' }),
-    step({ source: 'crcDissociation', entry: 'L-histidine, imidazolium', verified: false, pKa: 6.04, note: '(memory) ΔH° not recorded: pKa treated as independent of temperature.' }),
-    step({ source: 'crcDissociation', entry: 'L-histidine, ammonium', verified: false, pKa: 9.33, note: '(memory) ΔH° not recorded: pKa treated as independent of temperature.' }),
+    roomOnly({ source: 'crcDissociation', entry: 'L-histidine, carboxyl', pKa: 1.8, note: '(memory) ΔH° not recorded: pKa held at its 25 °C value.' }),
+    step({ source: 'crcDissociation', entry: 'L-histidine, imidazolium', pKa: 6.04, deltaHkJ: 29.3, checkedAgainst: 'memory', temperatureRangeC: [0, 50], note: '(memory) ΔH° about 29 kJ/mol (7.0 kcal/mol) from calorimetric compilations of proton-ionization heats, as remembered; ΔCp° not recorded. Not checked against a copy.' }),
+    step({ source: 'crcDissociation', entry: 'L-histidine, ammonium', pKa: 9.33, deltaHkJ: 43.5, checkedAgainst: 'memory', temperatureRangeC: [0, 50], note: '(memory) ΔH° about 43.5 kJ/mol (10.4 kcal/mol) from calorimetric compilations of proton-ionization heats, as remembered; ΔCp° not recorded. Not checked against a copy.' }),
   ], forms: [
     form({ name: 'L-histidine', aliases: ['histidine', 'histidine free base'], formula: 'C6H9N3O2', listedMolarMass: 155.15, adds: [{ system: 'histidine', moles: 1, protonsLost: 2 }] }),
     form({ name: 'L-histidine monohydrochloride monohydrate', aliases: ['histidine HCl', 'histidine hydrochloride', 'histidine HCl H2O', 'L-histidine hydrochloride monohydrate'], formula: 'C6H9N3O2·HCl·H2O', listedMolarMass: 209.63, adds: [{ system: 'histidine', moles: 1, protonsLost: 1 }], counterIons: { 'Cl-': 1 } }),
-  ], temperatureRangeC: ROOM_ONLY_RANGE_C }),
+  ] }),
 
   // ── Inorganic acids ─────────────────────────────────────────────────────────────────
   system({ name: 'phosphate', aliases: ['phosphoric acid', 'orthophosphate', 'H3PO4', 'Pi'], chargeOfMostProtonated: 0, steps: [
-    gv({ entry: 'phosphoric acid, H3PO4 ⇌ H2PO4−', pKa: 2.148, deltaHkJ: -8.0, deltaCpJ: -141 }),
-    gv({ entry: 'phosphoric acid, H2PO4− ⇌ HPO42−', pKa: 7.198, deltaHkJ: 3.6, deltaCpJ: -230 }),
-    gv({ entry: 'phosphoric acid, HPO42− ⇌ PO43−', pKa: 12.35, deltaHkJ: 16.0, deltaCpJ: -242 }),
+    gv({ entry: 'phosphoric acid, H3PO4 ⇌ H2PO4−', pKa: 2.148, deltaHkJ: -8.0, deltaCpJ: -141, also: [
+      { copy: 'goldbergItcTable', where: 'Buffer enum, Phosphate (comment)', reads: 'ΔH° −8000 J/mol, ΔCp° −141: same as stored' },
+      { copy: 'pytzerDissociation', where: 'H3PO4_MP98 (Bates 1951)', reads: 'pK 2.149, ΔH° −7.69 kJ/mol, ΔCp° −153 at 298.15 K' },
+    ] }),
+    gv({ entry: 'phosphoric acid, H2PO4− ⇌ HPO42−', pKa: 7.198, deltaHkJ: 3.6, deltaCpJ: -230, also: [
+      { copy: 'pytzerDissociation', where: 'H2PO4_MP98 (Bates & Acree 1943)', reads: 'pK 7.1998, ΔH° 4.06 kJ/mol, ΔCp° −232 at 298.15 K' },
+      { copy: 'goldbergItcTable', where: 'Buffer enum, Phosphate', reads: 'ΔH° 5120 J/mol, ΔCp° −187: disagrees; not kept (the other two copies agree with the stored values)' },
+    ] }),
+    gv({ entry: 'phosphoric acid, HPO42− ⇌ PO43−', pKa: 12.35, deltaHkJ: 16.0, deltaCpJ: -242, also: [
+      { copy: 'goldbergItcTable', where: 'Buffer enum, Phosphate (comment)', reads: 'ΔH° 16000 J/mol, ΔCp° −242: same as stored' },
+      { copy: 'pytzerDissociation', where: 'HPO4_MP98 (Schwarzenbach & Meier 1964, two-term fit)', reads: 'pK 12.345, ΔH° 25.5 kJ/mol, ΔCp° 0: disagrees on ΔH°; the review\'s value kept (a two-term fit cannot carry ΔCp°)' },
+    ] }),
   ], forms: [
     form({ name: 'phosphoric acid', aliases: ['orthophosphoric acid', 'H3PO4'], formula: 'H3PO4', listedMolarMass: 98.0, adds: [{ system: 'phosphate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['corrosive'],
       cautionNote: 'Concentrated acid causes burns. The amount is that of H3PO4: read the assay (85 % is typical).' }),
     form({ name: 'sodium phosphate monobasic anhydrous', aliases: ['sodium dihydrogen phosphate', 'monosodium phosphate', 'NaH2PO4', 'NaH2PO4 anhydrous', 'sodium phosphate monobasic', 'sodium dihydrogen phosphate anhydrous'], formula: 'NaH2PO4', listedMolarMass: 119.98, adds: [{ system: 'phosphate', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
     form({ name: 'sodium phosphate monobasic monohydrate', aliases: ['NaH2PO4·H2O', 'sodium dihydrogen phosphate monohydrate', 'monosodium phosphate monohydrate'], formula: 'NaH2PO4·H2O', listedMolarMass: 137.99, adds: [{ system: 'phosphate', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
     form({ name: 'sodium phosphate monobasic dihydrate', aliases: ['NaH2PO4·2H2O', 'sodium dihydrogen phosphate dihydrate', 'monosodium phosphate dihydrate'], formula: 'NaH2PO4·2H2O', listedMolarMass: 156.01, adds: [{ system: 'phosphate', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
-    form({ name: 'sodium phosphate dibasic anhydrous', aliases: ['disodium hydrogen phosphate', 'disodium phosphate', 'Na2HPO4', 'Na2HPO4 anhydrous', 'sodium phosphate dibasic', 'disodium hydrogen phosphate anhydrous'], formula: 'Na2HPO4', listedMolarMass: 141.96, adds: [{ system: 'phosphate', moles: 1, protonsLost: 2 }], counterIons: { 'Na+': 2 }, solubility: { gramsPerLitre: 77, temperatureC: 20, source: 'crcSolubility', verified: false } }),
+    form({ name: 'sodium phosphate dibasic anhydrous', aliases: ['disodium hydrogen phosphate', 'disodium phosphate', 'Na2HPO4', 'Na2HPO4 anhydrous', 'sodium phosphate dibasic', 'disodium hydrogen phosphate anhydrous'], formula: 'Na2HPO4', listedMolarMass: 141.96, adds: [{ system: 'phosphate', moles: 1, protonsLost: 2 }], counterIons: { 'Na+': 2 }, solubility: { gramsPerLitre: 77, temperatureC: 20, source: 'crcSolubility', checkedAgainst: 'memory' } }),
     form({ name: 'sodium phosphate dibasic dihydrate', aliases: ['Na2HPO4·2H2O', 'disodium hydrogen phosphate dihydrate', 'disodium phosphate dihydrate'], formula: 'Na2HPO4·2H2O', listedMolarMass: 177.99, adds: [{ system: 'phosphate', moles: 1, protonsLost: 2 }], counterIons: { 'Na+': 2 } }),
     form({ name: 'sodium phosphate dibasic heptahydrate', aliases: ['Na2HPO4·7H2O', 'disodium hydrogen phosphate heptahydrate', 'disodium phosphate heptahydrate'], formula: 'Na2HPO4·7H2O', listedMolarMass: 268.07, adds: [{ system: 'phosphate', moles: 1, protonsLost: 2 }], counterIons: { 'Na+': 2 } }),
     form({ name: 'sodium phosphate dibasic dodecahydrate', aliases: ['Na2HPO4·12H2O', 'disodium hydrogen phosphate dodecahydrate', 'disodium phosphate dodecahydrate'], formula: 'Na2HPO4·12H2O', listedMolarMass: 358.14, adds: [{ system: 'phosphate', moles: 1, protonsLost: 2 }], counterIons: { 'Na+': 2 } }),
@@ -279,8 +311,14 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
       cautionNote: 'Strongly alkaline in solution; irritating to eyes and skin.' }),
   ] }),
   system({ name: 'carbonate', aliases: ['carbonic acid', 'bicarbonate', 'hydrogen carbonate', 'CO2', 'H2CO3'], chargeOfMostProtonated: 0, steps: [
-    gm({ entry: 'carbonic acid, H2CO3* (CO2 + H2O) ⇌ HCO3−', pKa: 6.351, deltaHkJ: 9.15, deltaCpJ: -371, note: '(memory) Another copy of the review table found by code search gives 6.352 (the Harned & Davis value); ΔH°, ΔCp° not checked.' }),
-    gv({ entry: 'carbonic acid, HCO3− ⇌ CO32−', pKa: 10.329, deltaHkJ: 14.7, deltaCpJ: -249 }),
+    step({ source: 'goldberg2002', entry: 'carbonic acid, H2CO3* (CO2 + H2O) ⇌ HCO3−', pKa: 6.351, deltaHkJ: 9.15, deltaCpJ: -371, temperatureRangeC: [0, 50], checkedAgainst: [
+      { copy: 'pytzerDissociation', where: 'H2CO3_MP98 (Millero 1979)', reads: 'pK 6.3515, ΔH° 9.31 kJ/mol, ΔCp° −375 at 298.15 K' },
+      { copy: 'pytzerDissociation', where: 'H2CO3_PB82 (Plummer & Busenberg 1982)', reads: 'pK 6.3519, ΔH° 9.11 kJ/mol, ΔCp° −367 at 298.15 K' },
+    ], note: 'Both fits agree with the stored values within 0.001 in pK, 0.2 kJ/mol and 5 J/(K·mol).' }),
+    gv({ entry: 'carbonic acid, HCO3− ⇌ CO32−', pKa: 10.329, deltaHkJ: 14.7, deltaCpJ: -249, temperatureRangeC: [0, 50], also: [
+      { copy: 'pytzerDissociation', where: 'HCO3_MP98 (Millero 1979)', reads: 'pK 10.3297, ΔH° 15.06 kJ/mol, ΔCp° −280 at 298.15 K' },
+      { copy: 'pytzerDissociation', where: 'HCO3_PB82 (Plummer & Busenberg 1982)', reads: 'pK 10.3289, ΔH° 14.90 kJ/mol, ΔCp° −291 at 298.15 K' },
+    ], note: 'pK and ΔH° agree with both fits; their ΔCp° (−280, −291) is more negative than the review\'s −249, which is kept: over 0–50 °C the difference moves pK by under 0.005.' }),
   ], forms: [
     form({ name: 'sodium bicarbonate', aliases: ['sodium hydrogen carbonate', 'NaHCO3', 'baking soda'], formula: 'NaHCO3', listedMolarMass: 84.01, adds: [{ system: 'carbonate', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
     form({ name: 'sodium carbonate anhydrous', aliases: ['sodium carbonate', 'Na2CO3', 'Na2CO3 anhydrous', 'soda ash'], formula: 'Na2CO3', listedMolarMass: 105.99, adds: [{ system: 'carbonate', moles: 1, protonsLost: 2 }], counterIons: { 'Na+': 2 }, cautions: ['irritant'],
@@ -291,21 +329,25 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'potassium carbonate', aliases: ['K2CO3', 'potash'], formula: 'K2CO3', listedMolarMass: 138.21, adds: [{ system: 'carbonate', moles: 1, protonsLost: 2 }], counterIons: { 'K+': 2 }, cautions: ['irritant'],
       cautionNote: 'Causes serious eye irritation; alkaline in solution.' }),
   ], note: 'Open solutions exchange CO2 with air; the model treats the system as closed (no gas exchange).' }),
-  system({ name: 'borate', aliases: ['boric acid', 'B(OH)3', 'tetraborate'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'boric acid, B(OH)3 + H2O ⇌ B(OH)4− + H+', pKa: 9.237, deltaHkJ: 13.8, deltaCpJ: -240 })], forms: [
+  system({ name: 'borate', aliases: ['boric acid', 'B(OH)3', 'tetraborate'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'boric acid, B(OH)3 + H2O ⇌ B(OH)4− + H+', pKa: 9.237, deltaHkJ: 13.8, deltaCpJ: -240, also: [
+      { copy: 'pytzerDissociation', where: 'BOH3_M79 (Millero 1979)', reads: 'pK 9.2364, ΔH° 13.98 kJ/mol, ΔCp° −203 at 298.15 K: agrees on pK and ΔH°; ΔCp° less negative, the review\'s −240 kept' },
+    ] })], forms: [
     form({ name: 'boric acid', aliases: ['H3BO3', 'orthoboric acid', 'B(OH)3'], formula: 'H3BO3', listedMolarMass: 61.83, adds: [{ system: 'borate', moles: 1, protonsLost: 0 }] }),
     form({ name: 'sodium tetraborate decahydrate', aliases: ['borax', 'Na2B4O7·10H2O', 'disodium tetraborate decahydrate', 'sodium borate decahydrate'], formula: 'Na2B4O7·10H2O', listedMolarMass: 381.37, adds: [{ system: 'borate', moles: 4, protonsLost: 2 }], counterIons: { 'Na+': 2 }, note: 'Dissolves to 2 B(OH)3 + 2 B(OH)4− + 2 Na+: four moles of borate with two protons lost in total. Polyborate ions at high concentration are not modelled.' }),
     form({ name: 'sodium tetraborate anhydrous', aliases: ['Na2B4O7', 'sodium tetraborate', 'disodium tetraborate'], formula: 'Na2B4O7', listedMolarMass: 201.22, adds: [{ system: 'borate', moles: 4, protonsLost: 2 }], counterIons: { 'Na+': 2 } }),
   ], cautions: ['toxic'], cautionNote: 'Boric acid and borates may damage fertility or the unborn child (EU reproductive toxicant, category 1B); avoid dust.' }),
   system({ name: 'sulfate', aliases: ['sulphate', 'sulfuric acid', 'bisulfate', 'hydrogen sulfate', 'HSO4-'], chargeOfMostProtonated: 0, steps: [
-    step({ source: 'commonlyStated', entry: 'sulfuric acid, H2SO4 ⇌ HSO4−', verified: false, pKa: -3, note: 'Strong first step: commonly stated pKa about −3 (order of magnitude only); any value below 0 gives the same result in buffers.' }),
-    step({ source: 'harnedOwen1958', entry: 'hydrogen sulfate ion, HSO4− ⇌ SO42−', verified: false, pKa: 1.99, deltaHkJ: -22.4, note: '(memory) pKa 1.99 as commonly cited from Harned & Owen (1.987 in later work); ΔH° about −22 kJ/mol from memory; ΔCp° not recorded.' }),
+    step({ source: 'commonlyStated', entry: 'sulfuric acid, H2SO4 ⇌ HSO4−', checkedAgainst: 'memory', temperatureRangeC: [0, 100], pKa: -3, note: 'Strong first step: commonly stated pKa about −3 (order of magnitude only); any value below 0 gives the same result in buffers.' }),
+    step({ source: 'cleggRardPitzer1994', entry: 'hydrogen sulfate ion, HSO4− ⇌ SO42− (eq. 21)', pKa: 1.979, deltaHkJ: -22.76, deltaCpJ: -275, temperatureRangeC: CRP94_RANGE_C, checkedAgainst: [
+      { copy: 'pytzerDissociation', where: 'HSO4_CRP94 (eq. 21)', reads: 'pK 1.9788, ΔH° −22.76 kJ/mol, ΔCp° −275 at 298.15 K, read off the equation by differentiation' },
+    ], note: 'Replaces pK 1.99 and ΔH° −22.4 written from memory of Harned & Owen (no ΔCp°).' }),
   ], forms: [
     form({ name: 'sulfuric acid', aliases: ['H2SO4', 'sulphuric acid', 'oil of vitriol'], formula: 'H2SO4', listedMolarMass: 98.08, adds: [{ system: 'sulfate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['corrosive'],
       cautionNote: 'Causes severe burns; concentrated acid reacts violently with water: always add acid to water, slowly, never water to acid.' }),
     form({ name: 'sodium sulfate anhydrous', aliases: ['Na2SO4', 'sodium sulphate'], formula: 'Na2SO4', listedMolarMass: 142.04, adds: [{ system: 'sulfate', moles: 1, protonsLost: 2 }], counterIons: { 'Na+': 2 } }),
     form({ name: 'potassium sulfate', aliases: ['K2SO4', 'potassium sulphate'], formula: 'K2SO4', listedMolarMass: 174.26, adds: [{ system: 'sulfate', moles: 1, protonsLost: 2 }], counterIons: { 'K+': 2 } }),
     form({ name: 'magnesium sulfate heptahydrate', aliases: ['MgSO4·7H2O', 'Epsom salt', 'magnesium sulphate heptahydrate'], formula: 'MgSO4·7H2O', listedMolarMass: 246.47, adds: [{ system: 'sulfate', moles: 1, protonsLost: 2 }], counterIons: { 'Mg2+': 1 } }),
-  ], temperatureRangeC: ROOM_ONLY_RANGE_C, note: 'The HSO4− step matters only below about pH 3.' }),
+  ], note: 'The HSO4− step matters only below about pH 3. The H2SO4 step is strong: its pKa only has to lie below 0, at any temperature.' }),
 
   // ── Carboxylic acids ────────────────────────────────────────────────────────────────
   system({ name: 'formate', aliases: ['formic acid', 'methanoic acid', 'HCOOH'], chargeOfMostProtonated: 0, steps: [gm({ entry: 'formic acid', pKa: 3.744, deltaHkJ: -0.1, deltaCpJ: -165 })], forms: [
@@ -313,11 +355,11 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
       cautionNote: 'Concentrated acid causes severe burns and its vapour is toxic; flammable. Read the assay on the bottle.' }),
     form({ name: 'sodium formate', aliases: ['HCOONa', 'sodium methanoate'], formula: 'CHNaO2', listedMolarMass: 68.01, adds: [{ system: 'formate', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
   ] }),
-  system({ name: 'lactate', aliases: ['lactic acid', '2-hydroxypropanoic acid'], chargeOfMostProtonated: 0, steps: [step({ source: 'crcDissociation', entry: 'lactic acid', verified: false, pKa: 3.86, note: '(memory) ΔH° not recorded: pKa treated as independent of temperature.' })], forms: [
+  system({ name: 'lactate', aliases: ['lactic acid', '2-hydroxypropanoic acid'], chargeOfMostProtonated: 0, steps: [roomOnly({ source: 'crcDissociation', entry: 'lactic acid', pKa: 3.86, note: '(memory) ΔH° not recorded: pKa held at its 25 °C value.' })], forms: [
     form({ name: 'lactic acid', aliases: ['DL-lactic acid', 'L-lactic acid'], formula: 'C3H6O3', listedMolarMass: 90.08, adds: [{ system: 'lactate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['corrosive'],
       cautionNote: 'Concentrated solutions cause eye damage and skin irritation. Commercial lactic acid contains lactide; read the assay.' }),
     form({ name: 'sodium lactate', aliases: ['sodium L-lactate', 'sodium DL-lactate'], formula: 'C3H5NaO3', listedMolarMass: 112.06, adds: [{ system: 'lactate', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 }, note: 'Often sold as a 50–60 % syrup: read the assay.' }),
-  ], temperatureRangeC: ROOM_ONLY_RANGE_C }),
+  ] }),
   system({ name: 'acetate', aliases: ['acetic acid', 'ethanoic acid', 'OAc', 'AcOH'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'acetic acid', pKa: 4.756, deltaHkJ: -0.41, deltaCpJ: -142 })], forms: [
     form({ name: 'acetic acid glacial', aliases: ['glacial acetic acid', 'acetic acid', 'AcOH', 'CH3COOH', 'ethanoic acid'], formula: 'C2H4O2', listedMolarMass: 60.05, adds: [{ system: 'acetate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['corrosive'],
       cautionNote: 'Glacial acetic acid causes severe burns and is flammable; pungent vapour.' }),
@@ -339,11 +381,11 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'maleic acid', aliases: ['cis-butenedioic acid'], formula: 'C4H4O4', listedMolarMass: 116.07, adds: [{ system: 'maleate', moles: 1, protonsLost: 0 }] }),
   ], cautions: ['irritant', 'toxic'], cautionNote: 'Harmful if swallowed; irritates eyes and skin and may cause skin sensitisation.' }),
   system({ name: 'malate', aliases: ['malic acid', 'hydroxybutanedioic acid'], chargeOfMostProtonated: 0, steps: [
-    step({ source: 'crcDissociation', entry: 'malic acid, H2L ⇌ HL−', verified: false, pKa: 3.4, note: '(memory) ΔH° not recorded: pKa treated as independent of temperature.' }),
-    step({ source: 'crcDissociation', entry: 'malic acid, HL− ⇌ L2−', verified: false, pKa: 5.2, note: '(memory) ΔH° not recorded: pKa treated as independent of temperature.' }),
+    roomOnly({ source: 'crcDissociation', entry: 'malic acid, H2L ⇌ HL−', pKa: 3.46, note: '(memory) Thermodynamic (I = 0) value as remembered, replacing 3.40 (a value nearer I = 0.1). ΔH° not recorded: pKa held at its 25 °C value.' }),
+    roomOnly({ source: 'crcDissociation', entry: 'malic acid, HL− ⇌ L2−', pKa: 5.1, note: '(memory) Thermodynamic (I = 0) value as remembered, replacing 5.20. ΔH° not recorded: pKa held at its 25 °C value.' }),
   ], forms: [
     form({ name: 'DL-malic acid', aliases: ['malic acid', 'L-malic acid'], formula: 'C4H6O5', listedMolarMass: 134.09, adds: [{ system: 'malate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['irritant'], cautionNote: 'Causes serious eye irritation.' }),
-  ], temperatureRangeC: ROOM_ONLY_RANGE_C }),
+  ] }),
   system({ name: 'citrate', aliases: ['citric acid', '2-hydroxypropane-1,2,3-tricarboxylic acid'], chargeOfMostProtonated: 0, steps: [
     gv({ entry: 'citric acid, H3L ⇌ H2L−', pKa: 3.128, deltaHkJ: 4.07, deltaCpJ: -131 }),
     gv({ entry: 'citric acid, H2L− ⇌ HL2−', pKa: 4.761, deltaHkJ: 2.23, deltaCpJ: -178 }),
@@ -357,7 +399,7 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'tripotassium citrate monohydrate', aliases: ['potassium citrate', 'potassium citrate monohydrate', 'K3C6H5O7·H2O'], formula: 'K3C6H5O7·H2O', listedMolarMass: 324.41, adds: [{ system: 'citrate', moles: 1, protonsLost: 3 }], counterIons: { 'K+': 3 } }),
   ], note: 'Binds Ca2+ and Mg2+ strongly; complexes are not modelled.' }),
   system({ name: 'phthalate', aliases: ['phthalic acid', 'benzene-1,2-dicarboxylic acid'], chargeOfMostProtonated: 0, steps: [
-    gm({ entry: 'phthalic acid, H2L ⇌ HL−', pKa: 2.95, deltaHkJ: 2.7, deltaCpJ: -88 }),
+    gm({ entry: 'phthalic acid, H2L ⇌ HL−', pKa: 2.95, deltaHkJ: -2.7, deltaCpJ: -88, note: '(memory) ΔH° −2.7 kJ/mol: the earlier +2.7 had the sign wrong (with it, 0.05 mol/kg potassium hydrogen phthalate read 0.061 above its IUPAC pH(S) at 0 °C; with −2.7, within 0.02 from 0 to 50 °C). ΔCp° −88 as remembered. Not checked against a copy.' }),
     gm({ entry: 'phthalic acid, HL− ⇌ L2−', pKa: 5.408, deltaHkJ: -2.17, deltaCpJ: -295 }),
   ], forms: [
     form({ name: 'potassium hydrogen phthalate', aliases: ['KHP', 'potassium biphthalate', 'potassium acid phthalate', 'KHC8H4O4'], formula: 'C8H5KO4', listedMolarMass: 204.22, adds: [{ system: 'phthalate', moles: 1, protonsLost: 1 }], counterIons: { 'K+': 1 } }),
@@ -371,12 +413,12 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'sodium oxalate', aliases: ['Na2C2O4', 'disodium oxalate'], formula: 'Na2C2O4', listedMolarMass: 134.0, adds: [{ system: 'oxalate', moles: 1, protonsLost: 2 }], counterIons: { 'Na+': 2 } }),
   ], cautions: ['toxic'], cautionNote: 'Oxalates are harmful if swallowed or in contact with skin (they bind calcium in the body).' }),
   system({ name: 'tartrate', aliases: ['tartaric acid', 'L-tartaric acid', '2,3-dihydroxybutanedioic acid'], chargeOfMostProtonated: 0, steps: [
-    step({ source: 'bates1973', entry: 'L-tartaric acid, H2L ⇌ HL−', verified: false, pKa: 3.036, note: '(memory) ΔH° not recorded: pKa treated as independent of temperature.' }),
-    step({ source: 'bates1973', entry: 'L-tartaric acid, HL− ⇌ L2−', verified: false, pKa: 4.366, note: '(memory) ΔH° not recorded: pKa treated as independent of temperature.' }),
+    roomOnly({ source: 'bates1973', entry: 'L-tartaric acid, H2L ⇌ HL−', pKa: 3.036, note: '(memory) ΔH° not recorded: pKa held at its 25 °C value.' }),
+    roomOnly({ source: 'bates1973', entry: 'L-tartaric acid, HL− ⇌ L2−', pKa: 4.366, note: '(memory) ΔH° not recorded: pKa held at its 25 °C value.' }),
   ], forms: [
     form({ name: 'L-tartaric acid', aliases: ['tartaric acid'], formula: 'C4H6O6', listedMolarMass: 150.09, adds: [{ system: 'tartrate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['irritant'], cautionNote: 'Causes serious eye damage as a powder.' }),
     form({ name: 'potassium sodium tartrate tetrahydrate', aliases: ['Rochelle salt', 'Seignette salt', 'KNaC4H4O6·4H2O'], formula: 'KNaC4H4O6·4H2O', listedMolarMass: 282.22, adds: [{ system: 'tartrate', moles: 1, protonsLost: 2 }], counterIons: { 'K+': 1, 'Na+': 1 } }),
-  ], temperatureRangeC: ROOM_ONLY_RANGE_C }),
+  ] }),
   system({ name: 'cacodylate', aliases: ['cacodylic acid', 'dimethylarsinic acid', 'dimethylarsinate'], chargeOfMostProtonated: 0, steps: [gm({ entry: 'cacodylic acid', pKa: 6.28, deltaHkJ: -3.0, deltaCpJ: -86 })], forms: [
     form({ name: 'sodium cacodylate trihydrate', aliases: ['sodium cacodylate', 'sodium dimethylarsinate trihydrate'], formula: 'C2H6AsNaO2·3H2O', listedMolarMass: 214.03, adds: [{ system: 'cacodylate', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
     form({ name: 'cacodylic acid', aliases: ['dimethylarsinic acid'], formula: 'C2H7AsO2', listedMolarMass: 138.0, adds: [{ system: 'cacodylate', moles: 1, protonsLost: 0 }] }),
@@ -384,7 +426,7 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     cautionNote: 'Contains arsenic: toxic if swallowed or inhaled, and a carcinogen. Weigh in a fume hood with gloves; collect all waste as arsenic waste.' }),
 
   // ── Strong electrolytes and titrants ────────────────────────────────────────────────
-  strong('sodium chloride', ['NaCl', 'salt'], [form({ name: 'sodium chloride', aliases: ['NaCl', 'halite'], formula: 'NaCl', listedMolarMass: 58.44, adds: [], counterIons: { 'Na+': 1, 'Cl-': 1 }, solubility: { gramsPerLitre: 317, temperatureC: 25, source: 'crcSolubility', verified: false } })]),
+  strong('sodium chloride', ['NaCl', 'salt'], [form({ name: 'sodium chloride', aliases: ['NaCl', 'halite'], formula: 'NaCl', listedMolarMass: 58.44, adds: [], counterIons: { 'Na+': 1, 'Cl-': 1 }, solubility: { gramsPerLitre: 317, temperatureC: 25, source: 'crcSolubility', checkedAgainst: 'memory' } })]),
   strong('potassium chloride', ['KCl'], [form({ name: 'potassium chloride', aliases: ['KCl', 'sylvite'], formula: 'KCl', listedMolarMass: 74.55, adds: [], counterIons: { 'K+': 1, 'Cl-': 1 } })]),
   strong('magnesium chloride', ['MgCl2'], [
     form({ name: 'magnesium chloride anhydrous', aliases: ['MgCl2', 'magnesium chloride'], formula: 'MgCl2', listedMolarMass: 95.21, adds: [], counterIons: { 'Mg2+': 1, 'Cl-': 2 }, note: 'Anhydrous MgCl2 takes up water from air and dissolves exothermically; the hexahydrate is the usual form.' }),

@@ -145,7 +145,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const constants = s.system.steps.map((step) => ({
     pKa25: step.pKa,
     pKaAtUse: pKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, s.useT),
-    source: `${SOURCES[step.source]}${step.entry ? `, entry ${step.entry}` : ''}${step.verified ? '' : ' (written from memory, not yet checked against the source)'}`,
+    source: `${SOURCES[step.source]}${step.entry ? `, entry ${step.entry}` : ''}${step.checkedAgainst === 'memory' ? ' (written from memory, not yet checked against a copy of the source)' : ''}`,
   }));
   const meter = { pH: meterPh, benchTemperatureC: s.benchT, partVolumeMl: madeVolumeL * 1000 * s.partFraction, partVolumeFraction: s.partFraction };
   const plan: RecipePlan = {
