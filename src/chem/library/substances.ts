@@ -206,12 +206,12 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
 
   // ── Amines ──────────────────────────────────────────────────────────────────────────
-  system({ name: 'tris', aliases: ['tris(hydroxymethyl)aminomethane', 'trometamol', 'tromethamine', 'THAM', '2-amino-2-(hydroxymethyl)propane-1,3-diol', 'Trizma'], chargeOfMostProtonated: 1, steps: [gv({ entry: 'tris', pKa: 8.072, deltaHkJ: 47.45, deltaCpJ: -59, temperatureRangeC: TRIS_RANGE_C, also: [
+  system({ name: 'tris', aliases: ['tris(hydroxymethyl)aminomethane', 'trometamol', 'tromethamine', '2-amino-2-(hydroxymethyl)propane-1,3-diol'], chargeOfMostProtonated: 1, steps: [gv({ entry: 'tris', pKa: 8.072, deltaHkJ: 47.45, deltaCpJ: -59, temperatureRangeC: TRIS_RANGE_C, also: [
       { copy: 'goldbergItcTable', where: 'Buffer enum, Tris', reads: 'ΔH° 47450 J/mol, ΔCp° −59: same as stored' },
       { copy: 'pytzerDissociation', where: 'trisH_BH61 (Bates & Hetzer 1961 eq. 3)', reads: 'pK 8.0719, ΔH° 47.60 kJ/mol, ΔCp° −64 at 298.15 K: agrees within 0.001 in pK' },
     ] })], forms: [
-    form({ name: 'tris base', aliases: ['tris', 'tris free base', 'Trizma base', 'tromethamine base'], formula: 'C4H11NO3', listedMolarMass: 121.14, adds: [{ system: 'tris', moles: 1, protonsLost: 1 }], counterIons: {}, solubility: { gramsPerLitre: 550, temperatureC: 25, source: 'supplierLabel', checkedAgainst: 'memory' } }),
-    form({ name: 'tris hydrochloride', aliases: ['tris HCl', 'tris-HCl', 'Trizma hydrochloride', 'tromethamine hydrochloride'], formula: 'C4H11NO3·HCl', listedMolarMass: 157.6, adds: [{ system: 'tris', moles: 1, protonsLost: 0 }], counterIons: { 'Cl-': 1 } }),
+    form({ name: 'tris base', aliases: ['tris', 'tris free base', 'tromethamine base'], formula: 'C4H11NO3', listedMolarMass: 121.14, adds: [{ system: 'tris', moles: 1, protonsLost: 1 }], counterIons: {}, solubility: { gramsPerLitre: 550, temperatureC: 25, source: 'supplierLabel', checkedAgainst: 'memory' } }),
+    form({ name: 'tris hydrochloride', aliases: ['tris HCl', 'tris-HCl', 'tromethamine hydrochloride'], formula: 'C4H11NO3·HCl', listedMolarMass: 157.6, adds: [{ system: 'tris', moles: 1, protonsLost: 0 }], counterIons: { 'Cl-': 1 } }),
   ], cautionNote: 'Irritating to eyes as a powder. Its pH moves about −0.03 per °C: adjust at the working temperature.', cautions: ['irritant'] }),
   system({ name: 'bis-tris propane', aliases: ['BTP', '1,3-bis[tris(hydroxymethyl)methylamino]propane', 'bis tris propane'], chargeOfMostProtonated: 2, steps: [
     gm({ entry: 'bis-tris propane, H2L2+ ⇌ HL+', pKa: 6.65, deltaHkJ: 28.4 }),

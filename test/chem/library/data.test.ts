@@ -26,6 +26,15 @@ describe('the table as a whole', () => {
     for (let pH = 2; pH <= 11; pH += 0.5) expect(pKas.some((p) => Math.abs(p - pH) <= 1)).toBe(true);
   });
 
+  // Aliases are generic, IUPAC or common chemical names only. These are the supplier or
+  // drug trade names the list once held (a registered name for tris and for tromethamine injection).
+  it('no alias is a brand or catalogue name (Trizma, THAM) or carries a trade mark sign', () => {
+    const names = SUBSTANCES.flatMap((r) => [r.name, ...r.aliases, ...r.forms.flatMap((f) => [f.name, ...f.aliases])]);
+    for (const n of names) {
+      expect(n).not.toMatch(/trizma|^tham$|[®™]/i);
+    }
+  });
+
   it('names every substance once (names and aliases do not collide)', () => {
     expect(() => defaultLibrary().list()).not.toThrow();
     expect(new Set(SUBSTANCES.map((r) => r.name)).size).toBe(SUBSTANCES.length);
