@@ -35,6 +35,12 @@ describe('proton-ledger solve', () => {
     expect(out.error.message).toMatch(message);
   });
 
+  it('warns when a library system is used outside the temperatures its data cover (tris at 60 °C, Bates & Hetzer measured 0–50 °C)', () => {
+    const { code, out } = call(['solve', '--json', JSON.stringify({ forms: [{ form: 'tris base', mM: 20 }, { form: 'tris HCl', mM: 30 }], temperatureC: 60 })]);
+    expect(code).toBe(0);
+    expect(out.warnings).toContainEqual(expect.stringMatching(/^Temperature 60 °C lies outside 0–50 °C, the temperatures the data for tris/));
+  });
+
   it('prints usage for help', () => {
     expect(call(['help']).out).toMatch(/Usage:/);
   });

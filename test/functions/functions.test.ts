@@ -179,8 +179,12 @@ describe('WARNINGS', () => {
     expect(text).toMatch(/^2 warnings: \(1\) pH \d+\.\d\d is more than 1 unit from every pKa′ .* \(2\) Ca2\+ with citrate: metal–buffer complexes are not modelled/);
   });
   test('passes on the solver warnings (temperature, ionic strength) that a PH cell cannot show', () => {
-    expect(warnings(TRIS_SALINE.concat([['HCl', 25]]), 80)).toMatch(/^1 warning: \(1\) Temperature 80 °C is above 60 °C/);
+    expect(warnings(TRIS_SALINE.concat([['HCl', 25]]), 80)).toMatch(/^2 warnings: \(1\) Temperature 80 °C is above 60 °C.* \(2\) Temperature 80 °C lies outside 0–50 °C, the temperatures the data for tris/);
     expect(warnings([['NaCl', 2000], ['sodium acetate trihydrate', 50], ['acetic acid', 50]])).toMatch(/Ionic strength 2\.\d+ M is above 0\.5 M/);
+  });
+  test('warns when a system without ΔH° (tartrate) is used away from 25 ± 2 °C, not at 25 °C', () => {
+    expect(warnings([['L-tartaric acid', 10], ['Rochelle salt', 10]], 4)).toMatch(/tartrate has no ΔH° for steps 1, 2: its pKa is held at the 25 °C value/);
+    expect(warnings([['L-tartaric acid', 10], ['Rochelle salt', 10]], 25)).not.toMatch(/no ΔH°/);
   });
   test('names substances whose constants are from memory, but not the user own', () => {
     const formate = lib.findSystem('formate');

@@ -26,6 +26,7 @@ import { idealOsmolarity } from '../osmolarity';
 import { report, speciate, solvePh, solvePrepared } from '../speciation';
 import { findStrongIon } from '../strongIons';
 import { MAX_TARGET_PH, MIN_TARGET_PH, Titrant, titrantForPh, withTitrant } from '../titration';
+import { temperatureWarnings } from '../temperatureChecks';
 import { pKaAt } from '../vantHoff';
 import { RecipeComponent, RecipeInput, RecipePlan, RecipeRoute, TitrationPlan } from './types';
 import { cautionsFor, protocolSteps, volumeText } from './protocol';
@@ -142,6 +143,9 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   warnings.push(...planWarnings(s, made, components, madeVolumeL, titration));
   const metals = metalComplexWarning(finished);
   if (metals) warnings.push(metals);
+  // The temperature of use and the bench temperature, each against the constants' data (the same messages when equal are merged by dedupe).
+  for (const w of temperatureWarnings(finished.systems, s.useT, 'The temperature of use')) warnings.push(w.message);
+  if (s.benchT !== s.useT) for (const w of temperatureWarnings(finished.systems, s.benchT, 'The bench temperature')) warnings.push(w.message);
   const constants = s.system.steps.map((step) => ({
     pKa25: step.pKa,
     pKaAtUse: pKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, s.useT),
