@@ -7,6 +7,7 @@ import { defaultLibrary, findForm, findSystem, netChargeOfForm, usefulPhRange } 
 import { COPIES, SOURCES } from '../../../src/chem/library/sources';
 import { SUBSTANCES } from '../../../src/chem/library/substances';
 import { STRONG_IONS } from '../../../src/chem/strongIons';
+import { expectClose, trisPKaBatesHetzer } from '../fixtures';
 
 /** Listed (label) molar masses are rounded to 0.01 g/mol and labels use older atomic weights (e.g. S 32.065); 0.01 g/mol plus float slack. */
 const MOLAR_MASS_TOLERANCE = 0.01 + 1e-9;
@@ -185,6 +186,12 @@ describe('common practice', () => {
 
   it('tris pKa 8.850 at 0 °C: Bates & Hetzer 1961 as quoted in Goldberg et al. 2002 (tris literature table), within 0.01', () => {
     expect(Math.abs(pKaAt(tris.pKa, tris.deltaHkJ ?? 0, tris.deltaCpJ ?? 0, 0) - 8.85)).toBeLessThanOrEqual(0.01);
+  });
+
+  /** Bates & Hetzer's own fit reproduces their points to about 0.001; 0.01 leaves room for the review's rounded ΔH° and ΔCp°. */
+  const BATES_HETZER_TOLERANCE = 0.01;
+  it.each([0, 5, 10, 15, 20, 25, 30, 35, 40, 45, 50])('tris pKa at %d °C: Bates & Hetzer 1961 (J. Phys. Chem. 65, 667, eq. 3), within 0.01', (t) => {
+    expectClose(`tris pKa at ${t} °C`, pKaAt(tris.pKa, tris.deltaHkJ ?? 0, tris.deltaCpJ ?? 0, t), trisPKaBatesHetzer(t), BATES_HETZER_TOLERANCE);
   });
 
   it('phosphate step 2 moves far less with temperature than tris (common practice: under a fifth, 4–37 °C)', () => {
