@@ -32,10 +32,11 @@ export type SourceId = keyof typeof SOURCES;
  */
 export const COPIES = {
   goldbergTranscriptionTs:
-    'A public TypeScript buffer module, found by code search, that transcribes the Goldberg et al. 2002 selected values (pK, ΔH°, ΔCp° for 29 ionization steps); it disagrees with other copies on several Good-buffer ΔCp° values, so it counts as one transcription, not as the journal',
+    'A public TypeScript buffer module (a buffer calculator\'s test table headed "Goldberg, Kishore & Lennen 2002, Section 8"), found by code search, that transcribes pK, ΔH° and ΔCp° for about 30 steps. It disagrees with other copies on the ΔCp° of bis-tris, MOPS and PIPES, so it counts as one transcription, not as the journal; no value was newly taken from it in the constants audit',
   goldbergReviewNote: 'A public source-review note quoting the TAPSO and imidazole lines of the Goldberg et al. 2002 tables (Tables 7.62 and 7.41)',
   goldbergScanAda: 'A scanned page of the Goldberg et al. 2002 review (p. 242, the ADA literature table)',
-  goldbergItcTable: 'A public C# isothermal-titration-calorimetry buffer table (AnalysisITC) quoting Goldberg et al. 2002 ΔH° and ΔCp° for HEPES, tris and phosphate',
+  goldbergItcTable:
+    'The buffer table (enum Buffer) of a public C# isothermal-titration-calorimetry analysis program (namespace AnalysisITC), found by code search: ionization ΔH° (J/mol) and ΔCp° for about 25 buffers, matching the Goldberg et al. 2002 selected values for most; its pKa column holds rounded working values, not the thermodynamic pK',
   pytzerDissociation:
     'The fitted equations transcribed in pytzer (github.com/mvdh7/pytzer, pytzer/dissociation.py): Bates & Hetzer 1961 eq. 3 (tris), Clegg, Rard & Pitzer 1994 eq. 21 (HSO4−), Millero 1979 (boric and carbonic acid), Plummer & Busenberg 1982 (carbonic acid), Bates & Pinching 1949 (ammonium), and the phosphoric-acid fits of Bates 1951, Bates & Acree 1943 and Schwarzenbach & Meier 1964 as given by Millero & Pierrot 1998. pK, ΔH° and ΔCp° at 298.15 K are read off each equation by differentiation (ΔH° = RT² d lnK/dT, ΔCp° = dΔH°/dT)',
 } as const;
