@@ -36,7 +36,7 @@ describe('temperatureWarnings', () => {
   });
 
   it('names the temperature as the caller says (bench or use)', () => {
-    const [w] = temperatureWarnings([chemistryOf(findSystem('tartrate'))], 20, 'The bench temperature');
+    const [w] = temperatureWarnings([chemistryOf(findSystem('lactate'))], 20, 'The bench temperature');
     expect(w.message).toMatch(/at the bench temperature 20 °C \(beyond 25 ± 2 °C\)/);
   });
 

@@ -39,6 +39,8 @@ export const COPIES = {
     'The buffer table (enum Buffer) of a public C# isothermal-titration-calorimetry analysis program (namespace AnalysisITC), found by code search: ionization ΔH° (J/mol) and ΔCp° for about 25 buffers, matching the Goldberg et al. 2002 selected values for most; its pKa column holds rounded working values, not the thermodynamic pK',
   pytzerDissociation:
     'The fitted equations transcribed in pytzer (github.com/mvdh7/pytzer, pytzer/dissociation.py): Bates & Hetzer 1961 eq. 3 (tris), Clegg, Rard & Pitzer 1994 eq. 21 (HSO4−), Millero 1979 (boric and carbonic acid), Plummer & Busenberg 1982 (carbonic acid), Bates & Pinching 1949 (ammonium), and the phosphoric-acid fits of Bates 1951, Bates & Acree 1943 and Schwarzenbach & Meier 1964 as given by Millero & Pierrot 1998. pK, ΔH° and ΔCp° at 298.15 K are read off each equation by differentiation (ΔH° = RT² d lnK/dT, ΔCp° = dΔH°/dT)',
+  minteqV4:
+    'minteq.v4.dat, the MINTEQA2 v4 thermodynamic database distributed with PHREEQC (github.com/usgs-coupled/phreeqc3, database/minteq.v4.dat): log K and ΔH of each protonation reaction at 25 °C and I = 0, with NIST Critical Stability Constants (NIST46) named as source. Read as pKa = log K of one protonation (cumulative constants differenced) and ΔH° of ionization = −ΔH of protonation',
 } as const;
 
 /** Key of a copy in COPIES. */

@@ -123,7 +123,7 @@ const DISULFONATE_NOTE =
 /** Every substance the library knows. */
 export const SUBSTANCES: readonly SubstanceRecord[] = [
   // ── Zwitterionic Good buffers, in order of pKa ───────────────────────────────────────
-  system({ name: 'MES', aliases: ['2-(N-morpholino)ethanesulfonic acid', '2-morpholinoethanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'MES', pKa: 6.27, deltaHkJ: 14.8, deltaCpJ: 5 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, MES', reads: 'ΔH° 14800 J/mol, ΔCp° 5: same as stored' }] })], forms: [
+  system({ name: 'MES', aliases: ['2-(N-morpholino)ethanesulfonic acid', '2-morpholinoethanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'MES', pKa: 6.27, deltaHkJ: 14.8, deltaCpJ: 5, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, MES', reads: 'ΔH° 14800 J/mol, ΔCp° 5: same as stored' }] })], forms: [
     form({ name: 'MES free acid', aliases: ['MES', 'MES acid', 'MES anhydrous'], formula: 'C6H13NO4S', listedMolarMass: 195.24, adds: [{ system: 'MES', moles: 1, protonsLost: 0 }] }),
     form({ name: 'MES monohydrate', aliases: ['MES hydrate', 'MES·H2O'], formula: 'C6H13NO4S·H2O', listedMolarMass: 213.25, adds: [{ system: 'MES', moles: 1, protonsLost: 0 }] }),
     form({ name: 'MES sodium salt', aliases: ['MES sodium', 'sodium MES', 'MES Na'], formula: 'C6H12NNaO4S', listedMolarMass: 217.22, adds: [{ system: 'MES', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
@@ -144,21 +144,21 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'PIPES monosodium salt', aliases: ['PIPES sodium salt', 'PIPES sodium'], formula: 'C8H17N2NaO6S2', listedMolarMass: 324.35, adds: [{ system: 'PIPES', moles: 1, protonsLost: 0 }], counterIons: { 'Na+': 1 } }),
     form({ name: 'PIPES disodium salt', aliases: ['PIPES disodium'], formula: 'C8H16N2Na2O6S2', listedMolarMass: 346.33, adds: [{ system: 'PIPES', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 2 } }),
   ], note: DISULFONATE_NOTE, cautionNote: GOOD_CAUTION }),
-  system({ name: 'ACES', aliases: ['N-(2-acetamido)-2-aminoethanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'ACES', pKa: 6.847, deltaHkJ: 30.43, deltaCpJ: -49 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, ACES', reads: 'ΔH° 30430 J/mol, ΔCp° −49: same as stored' }] })], forms: [
+  system({ name: 'ACES', aliases: ['N-(2-acetamido)-2-aminoethanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'ACES', pKa: 6.847, deltaHkJ: 30.43, deltaCpJ: -49, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, ACES', reads: 'ΔH° 30430 J/mol, ΔCp° −49: same as stored' }] })], forms: [
     form({ name: 'ACES free acid', aliases: ['ACES'], formula: 'C4H10N2O4S', listedMolarMass: 182.2, adds: [{ system: 'ACES', moles: 1, protonsLost: 0 }] }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
   system({ name: 'MOPSO', aliases: ['3-morpholino-2-hydroxypropanesulfonic acid', '3-(N-morpholino)-2-hydroxypropanesulfonic acid'], chargeOfMostProtonated: 0, steps: [step({ source: 'goldberg2002', entry: 'MOPSO', pKa: 6.88, deltaHkJ: 25.0, deltaCpJ: 38, checkedAgainst: [{ ...TRANSCRIPTION, reads: 'ΔH° 25.0 and ΔCp° 38 as stored; gives pK 6.90' }], temperatureRangeC: GOLDBERG_RANGE_C, note: 'pK 6.88 is the review\'s selected value as remembered (memory), where the transcription rounds to 6.90. Not yet checked against a second copy.' })], forms: [
     form({ name: 'MOPSO free acid', aliases: ['MOPSO'], formula: 'C7H15NO5S', listedMolarMass: 225.26, adds: [{ system: 'MOPSO', moles: 1, protonsLost: 0 }] }),
     form({ name: 'MOPSO sodium salt', aliases: ['MOPSO sodium'], formula: 'C7H14NNaO5S', listedMolarMass: 247.24, adds: [{ system: 'MOPSO', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
-  system({ name: 'BES', aliases: ['N,N-bis(2-hydroxyethyl)-2-aminoethanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'BES', pKa: 7.187, deltaHkJ: 24.25, deltaCpJ: -2 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, BES', reads: 'ΔH° 24250 J/mol, ΔCp° −2: same as stored' }] })], forms: [
+  system({ name: 'BES', aliases: ['N,N-bis(2-hydroxyethyl)-2-aminoethanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'BES', pKa: 7.187, deltaHkJ: 24.25, deltaCpJ: -2, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, BES', reads: 'ΔH° 24250 J/mol, ΔCp° −2: same as stored' }] })], forms: [
     form({ name: 'BES free acid', aliases: ['BES'], formula: 'C6H15NO5S', listedMolarMass: 213.25, adds: [{ system: 'BES', moles: 1, protonsLost: 0 }] }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
   system({ name: 'MOPS', aliases: ['3-(N-morpholino)propanesulfonic acid', '3-morpholinopropanesulfonic acid', '4-morpholinepropanesulfonic acid'], chargeOfMostProtonated: 0, steps: [step({ source: 'goldberg2002', entry: 'MOPS', pKa: 7.184, deltaHkJ: 21.1, deltaCpJ: 25, checkedAgainst: [{ ...TRANSCRIPTION, reads: 'pK 7.184 and ΔH° 21.1 as stored; gives ΔCp° −5' }, { copy: 'goldbergItcTable', where: 'Buffer table, MOPS', reads: 'ΔH° 22200 J/mol, ΔCp° +25' }], temperatureRangeC: GOLDBERG_RANGE_C, note: 'Copies disagree. ΔCp°: +25 (the ITC table, and the review as remembered) against −5 (the transcription); +25 chosen, as for bis-tris and PIPES. ΔH°: 21.1 (the transcription, and the review as remembered) against 22.2 (the ITC table); 21.1 kept (over 4–37 °C the difference moves pK by under 0.02).' })], forms: [
     form({ name: 'MOPS free acid', aliases: ['MOPS', 'MOPS acid'], formula: 'C7H15NO4S', listedMolarMass: 209.26, adds: [{ system: 'MOPS', moles: 1, protonsLost: 0 }] }),
     form({ name: 'MOPS sodium salt', aliases: ['MOPS sodium', 'sodium MOPS'], formula: 'C7H14NNaO4S', listedMolarMass: 231.25, adds: [{ system: 'MOPS', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
-  system({ name: 'TES', aliases: ['N-[tris(hydroxymethyl)methyl]-2-aminoethanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'TES', pKa: 7.55, deltaHkJ: 32.13, deltaCpJ: 0 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, TES', reads: 'ΔH° 32130 J/mol, ΔCp° 0: same as stored' }] })], forms: [
+  system({ name: 'TES', aliases: ['N-[tris(hydroxymethyl)methyl]-2-aminoethanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'TES', pKa: 7.55, deltaHkJ: 32.13, deltaCpJ: 0, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, TES', reads: 'ΔH° 32130 J/mol, ΔCp° 0: same as stored' }] })], forms: [
     form({ name: 'TES free acid', aliases: ['TES'], formula: 'C6H15NO6S', listedMolarMass: 229.25, adds: [{ system: 'TES', moles: 1, protonsLost: 0 }] }),
     form({ name: 'TES sodium salt', aliases: ['TES sodium'], formula: 'C6H14NNaO6S', listedMolarMass: 251.23, adds: [{ system: 'TES', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
@@ -182,26 +182,26 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
   system({ name: 'EPPS', aliases: ['HEPPS', '4-(2-hydroxyethyl)piperazine-1-propanesulfonic acid', 'N-(2-hydroxyethyl)piperazine-N\'-(3-propanesulfonic acid)'], chargeOfMostProtonated: 0, steps: [gm({ entry: 'HEPPS (EPPS)', pKa: 7.957, deltaHkJ: 21.5, deltaCpJ: 47 })], forms: [
     form({ name: 'EPPS free acid', aliases: ['EPPS', 'HEPPS free acid'], formula: 'C9H20N2O4S', listedMolarMass: 252.33, adds: [{ system: 'EPPS', moles: 1, protonsLost: 0 }] }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
-  system({ name: 'tricine', aliases: ['N-[tris(hydroxymethyl)methyl]glycine'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'tricine', pKa: 8.135, deltaHkJ: 31.37, deltaCpJ: -53 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, Tricine', reads: 'ΔH° 31370 J/mol, ΔCp° −53: same as stored' }] })], forms: [
+  system({ name: 'tricine', aliases: ['N-[tris(hydroxymethyl)methyl]glycine'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'tricine', pKa: 8.135, deltaHkJ: 31.37, deltaCpJ: -53, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, Tricine', reads: 'ΔH° 31370 J/mol, ΔCp° −53: same as stored' }] })], forms: [
     form({ name: 'tricine free acid', aliases: ['tricine'], formula: 'C6H13NO5', listedMolarMass: 179.17, adds: [{ system: 'tricine', moles: 1, protonsLost: 0 }] }),
   ], note: 'Zwitterionic glycine derivative; only the amine step is listed (the carboxyl step lies near pH 2).', cautionNote: GOOD_CAUTION }),
-  system({ name: 'bicine', aliases: ['N,N-bis(2-hydroxyethyl)glycine'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'bicine', pKa: 8.334, deltaHkJ: 26.34, deltaCpJ: 0 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, Bicine', reads: 'ΔH° 26340 J/mol, ΔCp° 0: same as stored' }] })], forms: [
+  system({ name: 'bicine', aliases: ['N,N-bis(2-hydroxyethyl)glycine'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'bicine', pKa: 8.334, deltaHkJ: 26.34, deltaCpJ: 0, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, Bicine', reads: 'ΔH° 26340 J/mol, ΔCp° 0: same as stored' }] })], forms: [
     form({ name: 'bicine free acid', aliases: ['bicine'], formula: 'C6H13NO4', listedMolarMass: 163.17, adds: [{ system: 'bicine', moles: 1, protonsLost: 0 }] }),
   ], note: 'Zwitterionic glycine derivative; only the amine step is listed (the carboxyl step lies near pH 2).', cautionNote: GOOD_CAUTION }),
-  system({ name: 'TAPS', aliases: ['N-[tris(hydroxymethyl)methyl]-3-aminopropanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'TAPS', pKa: 8.44, deltaHkJ: 40.4, deltaCpJ: 15 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, TAPS', reads: 'ΔH° 40400 J/mol, ΔCp° 15: same as stored' }] })], forms: [
+  system({ name: 'TAPS', aliases: ['N-[tris(hydroxymethyl)methyl]-3-aminopropanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'TAPS', pKa: 8.44, deltaHkJ: 40.4, deltaCpJ: 15, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, TAPS', reads: 'ΔH° 40400 J/mol, ΔCp° 15: same as stored' }] })], forms: [
     form({ name: 'TAPS free acid', aliases: ['TAPS'], formula: 'C7H17NO6S', listedMolarMass: 243.28, adds: [{ system: 'TAPS', moles: 1, protonsLost: 0 }] }),
     form({ name: 'TAPS sodium salt', aliases: ['TAPS sodium'], formula: 'C7H16NNaO6S', listedMolarMass: 265.26, adds: [{ system: 'TAPS', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
   system({ name: 'AMPSO', aliases: ['3-[(1,1-dimethyl-2-hydroxyethyl)amino]-2-hydroxypropanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gm({ entry: 'AMPSO', pKa: 9.138, deltaHkJ: 43.19 })], forms: [
     form({ name: 'AMPSO free acid', aliases: ['AMPSO'], formula: 'C7H17NO5S', listedMolarMass: 227.28, adds: [{ system: 'AMPSO', moles: 1, protonsLost: 0 }] }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
-  system({ name: 'CHES', aliases: ['2-(N-cyclohexylamino)ethanesulfonic acid', '2-(cyclohexylamino)ethanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'CHES', pKa: 9.394, deltaHkJ: 39.55, deltaCpJ: 9 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, CHES', reads: 'ΔH° 39550 J/mol, ΔCp° 9: same as stored' }] })], forms: [
+  system({ name: 'CHES', aliases: ['2-(N-cyclohexylamino)ethanesulfonic acid', '2-(cyclohexylamino)ethanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'CHES', pKa: 9.394, deltaHkJ: 39.55, deltaCpJ: 9, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, CHES', reads: 'ΔH° 39550 J/mol, ΔCp° 9: same as stored' }] })], forms: [
     form({ name: 'CHES free acid', aliases: ['CHES'], formula: 'C8H17NO3S', listedMolarMass: 207.29, adds: [{ system: 'CHES', moles: 1, protonsLost: 0 }] }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
   system({ name: 'CAPSO', aliases: ['3-(cyclohexylamino)-2-hydroxy-1-propanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gm({ entry: 'CAPSO', pKa: 9.825, deltaHkJ: 46.67 })], forms: [
     form({ name: 'CAPSO free acid', aliases: ['CAPSO'], formula: 'C9H19NO4S', listedMolarMass: 237.32, adds: [{ system: 'CAPSO', moles: 1, protonsLost: 0 }] }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
-  system({ name: 'CAPS', aliases: ['3-(cyclohexylamino)-1-propanesulfonic acid', 'N-cyclohexyl-3-aminopropanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'CAPS', pKa: 10.499, deltaHkJ: 48.1, deltaCpJ: 57 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, CAPS', reads: 'ΔH° 48100 J/mol, ΔCp° 57: same as stored' }] })], forms: [
+  system({ name: 'CAPS', aliases: ['3-(cyclohexylamino)-1-propanesulfonic acid', 'N-cyclohexyl-3-aminopropanesulfonic acid'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'CAPS', pKa: 10.499, deltaHkJ: 48.1, deltaCpJ: 57, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, CAPS', reads: 'ΔH° 48100 J/mol, ΔCp° 57: same as stored' }] })], forms: [
     form({ name: 'CAPS free acid', aliases: ['CAPS'], formula: 'C9H19NO3S', listedMolarMass: 221.32, adds: [{ system: 'CAPS', moles: 1, protonsLost: 0 }] }),
   ], note: GOOD_NOTE, cautionNote: GOOD_CAUTION }),
 
@@ -258,8 +258,8 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
 
   // ── Amino acids and peptides ────────────────────────────────────────────────────────
   system({ name: 'glycine', aliases: ['Gly', 'aminoacetic acid', 'aminoethanoic acid'], chargeOfMostProtonated: 1, steps: [
-    gm({ entry: 'glycine, H2L+ ⇌ HL±', pKa: 2.351, deltaHkJ: 4.0, deltaCpJ: -139 }),
-    gv({ entry: 'glycine, HL± ⇌ L−', pKa: 9.78, deltaHkJ: 44.2, deltaCpJ: -57 }),
+    step({ source: 'goldberg2002', entry: 'glycine, H2L+ ⇌ HL±', pKa: 2.351, deltaHkJ: 4.0, deltaCpJ: -139, temperatureRangeC: GOLDBERG_RANGE_C, checkedAgainst: [{ copy: 'minteqV4', where: 'H+ + Glycine- and 2H+ + Glycine- (NIST46.2)', reads: 'pK 12.128 − 9.778 = 2.350, ΔH° 48.45 − 44.35 = 4.10 kJ/mol: agrees; no ΔCp°' }], note: 'ΔCp° −139 from memory of the review (the copy gives none).' }),
+    gv({ entry: 'glycine, HL± ⇌ L−', pKa: 9.78, deltaHkJ: 44.2, deltaCpJ: -57, also: [{ copy: 'minteqV4', where: 'H+ + Glycine- = H(Glycine) (NIST46.2)', reads: 'log K 9.778, ΔH 44.35 kJ/mol: agrees' }] }),
   ], forms: [
     form({ name: 'glycine', aliases: ['glycine free base', 'glycine zwitterion'], formula: 'C2H5NO2', listedMolarMass: 75.07, adds: [{ system: 'glycine', moles: 1, protonsLost: 1 }] }),
   ] }),
@@ -350,7 +350,7 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
   ], note: 'The HSO4− step matters only below about pH 3. The H2SO4 step is strong: its pKa only has to lie below 0, at any temperature.' }),
 
   // ── Carboxylic acids ────────────────────────────────────────────────────────────────
-  system({ name: 'formate', aliases: ['formic acid', 'methanoic acid', 'HCOOH'], chargeOfMostProtonated: 0, steps: [gm({ entry: 'formic acid', pKa: 3.744, deltaHkJ: -0.1, deltaCpJ: -165 })], forms: [
+  system({ name: 'formate', aliases: ['formic acid', 'methanoic acid', 'HCOOH'], chargeOfMostProtonated: 0, steps: [step({ source: 'goldberg2002', entry: 'formic acid', pKa: 3.744, deltaHkJ: -0.1, deltaCpJ: -165, temperatureRangeC: GOLDBERG_RANGE_C, checkedAgainst: [{ copy: 'minteqV4', where: 'H+ + Formate- = H(Formate) (NIST46.2)', reads: 'log K 3.745, ΔH° of ionization −0.17 kJ/mol: agrees within 0.001 and 0.1 kJ/mol; no ΔCp°' }], note: 'ΔH° −0.1 and ΔCp° −165 from memory of the review; the copy gives −0.17 (the difference moves pK by under 0.001 over 0–50 °C).' })], forms: [
     form({ name: 'formic acid', aliases: ['HCOOH', 'methanoic acid'], formula: 'CH2O2', listedMolarMass: 46.03, adds: [{ system: 'formate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['corrosive'],
       cautionNote: 'Concentrated acid causes severe burns and its vapour is toxic; flammable. Read the assay on the bottle.' }),
     form({ name: 'sodium formate', aliases: ['HCOONa', 'sodium methanoate'], formula: 'CHNaO2', listedMolarMass: 68.01, adds: [{ system: 'formate', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
@@ -360,7 +360,7 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
       cautionNote: 'Concentrated solutions cause eye damage and skin irritation. Commercial lactic acid contains lactide; read the assay.' }),
     form({ name: 'sodium lactate', aliases: ['sodium L-lactate', 'sodium DL-lactate'], formula: 'C3H5NaO3', listedMolarMass: 112.06, adds: [{ system: 'lactate', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 }, note: 'Often sold as a 50–60 % syrup: read the assay.' }),
   ] }),
-  system({ name: 'acetate', aliases: ['acetic acid', 'ethanoic acid', 'OAc', 'AcOH'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'acetic acid', pKa: 4.756, deltaHkJ: -0.41, deltaCpJ: -142 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, Acetate', reads: 'ΔH° −410 J/mol, ΔCp° −142: same as stored' }] })], forms: [
+  system({ name: 'acetate', aliases: ['acetic acid', 'ethanoic acid', 'OAc', 'AcOH'], chargeOfMostProtonated: 0, steps: [gv({ entry: 'acetic acid', pKa: 4.756, deltaHkJ: -0.41, deltaCpJ: -142, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, Acetate', reads: 'ΔH° −410 J/mol, ΔCp° −142: same as stored' }, { copy: 'minteqV4', where: 'H+ + Acetate- = H(Acetate) (NIST46.4)', reads: 'log K 4.757, ΔH° of ionization −0.41 kJ/mol: agrees' }] })], forms: [
     form({ name: 'acetic acid glacial', aliases: ['glacial acetic acid', 'acetic acid', 'AcOH', 'CH3COOH', 'ethanoic acid'], formula: 'C2H4O2', listedMolarMass: 60.05, adds: [{ system: 'acetate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['corrosive'],
       cautionNote: 'Glacial acetic acid causes severe burns and is flammable; pungent vapour.' }),
     form({ name: 'sodium acetate anhydrous', aliases: ['sodium acetate', 'NaOAc', 'CH3COONa', 'anhydrous sodium acetate'], formula: 'C2H3NaO2', listedMolarMass: 82.03, adds: [{ system: 'acetate', moles: 1, protonsLost: 1 }], counterIons: { 'Na+': 1 } }),
@@ -387,9 +387,9 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'DL-malic acid', aliases: ['malic acid', 'L-malic acid'], formula: 'C4H6O5', listedMolarMass: 134.09, adds: [{ system: 'malate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['irritant'], cautionNote: 'Causes serious eye irritation.' }),
   ] }),
   system({ name: 'citrate', aliases: ['citric acid', '2-hydroxypropane-1,2,3-tricarboxylic acid'], chargeOfMostProtonated: 0, steps: [
-    gv({ entry: 'citric acid, H3L ⇌ H2L−', pKa: 3.128, deltaHkJ: 4.07, deltaCpJ: -131 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, Citrate (comment, pKa1)', reads: 'ΔH° 4070 J/mol, ΔCp° −131: same as stored' }] }),
-    gv({ entry: 'citric acid, H2L− ⇌ HL2−', pKa: 4.761, deltaHkJ: 2.23, deltaCpJ: -178 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, Citrate (comment, pKa2)', reads: 'ΔH° 2230 J/mol, ΔCp° −178: same as stored' }] }),
-    gv({ entry: 'citric acid, HL2− ⇌ L3−', pKa: 6.396, deltaHkJ: -3.38, deltaCpJ: -254 , also: [{ copy: 'goldbergItcTable', where: 'Buffer table, Citrate', reads: 'ΔH° −3380 J/mol, ΔCp° −254: same as stored' }] }),
+    gv({ entry: 'citric acid, H3L ⇌ H2L−', pKa: 3.128, deltaHkJ: 4.07, deltaCpJ: -131, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, Citrate (comment, pKa1)', reads: 'ΔH° 4070 J/mol, ΔCp° −131: same as stored' }] }),
+    gv({ entry: 'citric acid, H2L− ⇌ HL2−', pKa: 4.761, deltaHkJ: 2.23, deltaCpJ: -178, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, Citrate (comment, pKa2)', reads: 'ΔH° 2230 J/mol, ΔCp° −178: same as stored' }] }),
+    gv({ entry: 'citric acid, HL2− ⇌ L3−', pKa: 6.396, deltaHkJ: -3.38, deltaCpJ: -254, also: [{ copy: 'goldbergItcTable', where: 'Buffer table, Citrate', reads: 'ΔH° −3380 J/mol, ΔCp° −254: same as stored' }] }),
   ], forms: [
     form({ name: 'citric acid anhydrous', aliases: ['citric acid', 'anhydrous citric acid', 'C6H8O7'], formula: 'C6H8O7', listedMolarMass: 192.12, adds: [{ system: 'citrate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['irritant'], cautionNote: 'Causes serious eye irritation.' }),
     form({ name: 'citric acid monohydrate', aliases: ['C6H8O7·H2O'], formula: 'C6H8O7·H2O', listedMolarMass: 210.14, adds: [{ system: 'citrate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['irritant'], cautionNote: 'Causes serious eye irritation.' }),
@@ -399,8 +399,8 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'tripotassium citrate monohydrate', aliases: ['potassium citrate', 'potassium citrate monohydrate', 'K3C6H5O7·H2O'], formula: 'K3C6H5O7·H2O', listedMolarMass: 324.41, adds: [{ system: 'citrate', moles: 1, protonsLost: 3 }], counterIons: { 'K+': 3 } }),
   ], note: 'Binds Ca2+ and Mg2+ strongly; complexes are not modelled.' }),
   system({ name: 'phthalate', aliases: ['phthalic acid', 'benzene-1,2-dicarboxylic acid'], chargeOfMostProtonated: 0, steps: [
-    gm({ entry: 'phthalic acid, H2L ⇌ HL−', pKa: 2.95, deltaHkJ: -2.7, deltaCpJ: -88, note: '(memory) ΔH° −2.7 kJ/mol: the earlier +2.7 had the sign wrong (with it, 0.05 mol/kg potassium hydrogen phthalate read 0.061 above its IUPAC pH(S) at 0 °C; with −2.7, within 0.02 from 0 to 50 °C). ΔCp° −88 as remembered. Not checked against a copy.' }),
-    gm({ entry: 'phthalic acid, HL− ⇌ L2−', pKa: 5.408, deltaHkJ: -2.17, deltaCpJ: -295 }),
+    step({ source: 'goldberg2002', entry: 'phthalic acid, H2L ⇌ HL−', pKa: 2.95, deltaHkJ: -2.7, deltaCpJ: -88, temperatureRangeC: GOLDBERG_RANGE_C, checkedAgainst: [{ copy: 'minteqV4', where: '2H+ + Phthalate-2 = H2(Phthalate) less H+ + Phthalate-2 (NIST46.2)', reads: 'pK 8.358 − 5.408 = 2.950; ΔH° of ionization −(4.853 − 2.176) = −2.68 kJ/mol: agrees with −2.7; no ΔCp°' }], note: 'ΔH° −2.7 kJ/mol: the earlier +2.7 had the sign wrong (with it, 0.05 mol/kg potassium hydrogen phthalate read 0.061 above its IUPAC pH(S) at 0 °C; with −2.7, within 0.02 from 0 to 50 °C). ΔCp° −88 from memory of the review, not in the copy.' }),
+    step({ source: 'goldberg2002', entry: 'phthalic acid, HL− ⇌ L2−', pKa: 5.408, deltaHkJ: -2.17, deltaCpJ: -295, temperatureRangeC: GOLDBERG_RANGE_C, checkedAgainst: [{ copy: 'minteqV4', where: 'H+ + Phthalate-2 = H(Phthalate)- (NIST46.2)', reads: 'log K 5.408, ΔH° of ionization −2.18 kJ/mol: agrees; no ΔCp°' }], note: 'ΔCp° −295 from memory of the review, not in the copy.' }),
   ], forms: [
     form({ name: 'potassium hydrogen phthalate', aliases: ['KHP', 'potassium biphthalate', 'potassium acid phthalate', 'KHC8H4O4'], formula: 'C8H5KO4', listedMolarMass: 204.22, adds: [{ system: 'phthalate', moles: 1, protonsLost: 1 }], counterIons: { 'K+': 1 } }),
     form({ name: 'phthalic acid', aliases: ['benzene-1,2-dicarboxylic acid'], formula: 'C8H6O4', listedMolarMass: 166.13, adds: [{ system: 'phthalate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['irritant'], cautionNote: 'Irritating to eyes and airways.' }),
@@ -413,8 +413,8 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'sodium oxalate', aliases: ['Na2C2O4', 'disodium oxalate'], formula: 'Na2C2O4', listedMolarMass: 134.0, adds: [{ system: 'oxalate', moles: 1, protonsLost: 2 }], counterIons: { 'Na+': 2 } }),
   ], cautions: ['toxic'], cautionNote: 'Oxalates are harmful if swallowed or in contact with skin (they bind calcium in the body).' }),
   system({ name: 'tartrate', aliases: ['tartaric acid', 'L-tartaric acid', '2,3-dihydroxybutanedioic acid'], chargeOfMostProtonated: 0, steps: [
-    roomOnly({ source: 'bates1973', entry: 'L-tartaric acid, H2L ⇌ HL−', pKa: 3.036, note: '(memory) ΔH° not recorded: pKa held at its 25 °C value.' }),
-    roomOnly({ source: 'bates1973', entry: 'L-tartaric acid, HL− ⇌ L2−', pKa: 4.366, note: '(memory) ΔH° not recorded: pKa held at its 25 °C value.' }),
+    step({ source: 'bates1973', entry: 'L-tartaric acid, H2L ⇌ HL−', pKa: 3.036, deltaHkJ: 2.93, temperatureRangeC: [0, 50], checkedAgainst: [{ copy: 'minteqV4', where: '2H+ + Tartarate-2 = H2(Tartarate) less H+ + Tartarate-2 (NIST46.2)', reads: 'pK 7.402 − 4.366 = 3.036: same as stored; ΔH° of ionization −(−3.682 + 0.753) = +2.93 kJ/mol' }], note: 'ΔH° 2.93 kJ/mol from the copy (before: none, pKa held at 25 °C); no ΔCp°. Range 0–50 °C: the span of the emf data behind the tartrate standard, as remembered.' }),
+    step({ source: 'bates1973', entry: 'L-tartaric acid, HL− ⇌ L2−', pKa: 4.366, deltaHkJ: 0.75, temperatureRangeC: [0, 50], checkedAgainst: [{ copy: 'minteqV4', where: 'H+ + Tartarate-2 = H(Tartarate)- (NIST46.2)', reads: 'log K 4.366: same as stored; ΔH° of ionization +0.75 kJ/mol' }], note: 'ΔH° 0.75 kJ/mol from the copy (before: none); no ΔCp°. Range as for step 1.' }),
   ], forms: [
     form({ name: 'L-tartaric acid', aliases: ['tartaric acid'], formula: 'C4H6O6', listedMolarMass: 150.09, adds: [{ system: 'tartrate', moles: 1, protonsLost: 0 }], counterIons: {}, cautions: ['irritant'], cautionNote: 'Causes serious eye damage as a powder.' }),
     form({ name: 'potassium sodium tartrate tetrahydrate', aliases: ['Rochelle salt', 'Seignette salt', 'KNaC4H4O6·4H2O'], formula: 'KNaC4H4O6·4H2O', listedMolarMass: 282.22, adds: [{ system: 'tartrate', moles: 1, protonsLost: 2 }], counterIons: { 'K+': 1, 'Na+': 1 } }),
