@@ -6,7 +6,7 @@
  * Appl. Chem. 74 (2002) 2169, with where each number was read). The standards are defined
  * in mol/kg; the tool works in mol/L, so each molality is converted with the density of
  * pure water at the temperature, c = m·ρw(t) — enough for these dilute solutions (the
- * solutes' own volume is below 0.1 %). Skipping the conversion would move these pH values
+ * solutes' own volume changes c by a few tenths of a percent more: under 0.001 pH). Skipping the conversion would move these pH values
  * by up to 0.0014 at 50 °C (docs/constants.md).
  *
  * The standards were assigned under the Bates–Guggenheim convention, so pH(PS) is checked
