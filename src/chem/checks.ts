@@ -61,6 +61,6 @@ export function solutionWarnings(composition: Composition, result: SpeciationRes
   if (weak) warnings.push(weak);
   const metals = metalComplexWarning(composition);
   if (metals) warnings.push(metals);
-  for (const w of temperatureWarnings(composition.systems, composition.temperatureC ?? 25)) warnings.push(w.message);
+  for (const w of temperatureWarnings(composition.systems, composition.temperatureC ?? 25, 'Temperature', result.pH)) warnings.push(w.message);
   return warnings;
 }

@@ -17,7 +17,7 @@ export type { Titrant, TitrantAmount } from './titration';
 export { afterDilution, afterLoad, atTemperature, capacity, capacityOfPrepared, idealCapacityAt, scaleComposition } from './capacity';
 export type { AcidBaseLoad, Capacity } from './capacity';
 export { idealOsmolarity } from './osmolarity';
-export { NO_ENTHALPY_TOLERANCE_C, temperatureWarnings } from './temperatureChecks';
+export { IRRELEVANT_STEP_DISTANCE, NO_ENTHALPY_TOLERANCE_C, temperatureWarnings } from './temperatureChecks';
 export type { TemperatureWarning } from './temperatureChecks';
 export { pKaAt } from './vantHoff';
 export { debyeHuckelA, pKw, waterDensity, waterPermittivity } from './water';

@@ -15,6 +15,14 @@ export const NO_ENTHALPY_TOLERANCE_C = 2;
 /** The reference temperature of tabulated pKa values, °C. */
 const REFERENCE_C = 25;
 
+/**
+ * A step whose pKa lies further than this from the solution's pH holds under 0.1 % of the
+ * system in one of its two forms there; a pKa(T) wrong by the few tenths a missing ΔH° or an
+ * extrapolation can cause moves that share, and so the pH, by a negligible amount. Such steps
+ * are not warned about when the pH is known (histidine's carboxyl step in a pH 6 buffer).
+ */
+export const IRRELEVANT_STEP_DISTANCE = 3;
+
 /** A step whose pKa lies at or below this is a strong acid in water (H2SO4 → HSO4−): fully dissociated at any temperature, so its missing ΔH° does not matter. */
 const STRONG_STEP_PKA = 0;
 
@@ -37,13 +45,15 @@ export interface TemperatureWarning {
  * Temperature warnings for the acid–base systems of a solution at one temperature.
  *
  * Method: for each system (with a total above zero, when it has one) and each step that is
- * not a strong acid (pKa > 0): a step without ΔH° warns `noEnthalpy` when |t − 25| > 2 °C;
- * a step with ΔH° warns `outsideDataRange` when t lies outside its `temperatureRangeC`.
- * Steps of one system with the same range share one warning.
+ * not a strong acid (pKa > 0) and, when the pH is given, lies within 3 units of it: a step
+ * without ΔH° warns `noEnthalpy` when |t − 25| > 2 °C; a step with ΔH° warns
+ * `outsideDataRange` when t lies outside its `temperatureRangeC`. Steps of one system with
+ * the same range share one warning.
  *
  * @param systems - the solution's systems (library systems carry each step's range)
  * @param temperatureC - the temperature checked, °C
  * @param where - how the temperature is named in the message ("Temperature", "The bench temperature")
+ * @param pH - the solution's pH at that temperature, when known: steps far from it are left out
  * @returns one warning per system and kind (and range), in the systems' order
  * @example temperatureWarnings([findSystem('malate')], 4)[0].code // 'noEnthalpy'
  */
@@ -51,6 +61,7 @@ export function temperatureWarnings(
   systems: readonly (AcidBaseChemistry & { readonly totalM?: number })[],
   temperatureC: number,
   where = 'Temperature',
+  pH?: number,
 ): TemperatureWarning[] {
   const out: TemperatureWarning[] = [];
   const awayFromReference = Math.abs(temperatureC - REFERENCE_C) > NO_ENTHALPY_TOLERANCE_C;
@@ -60,6 +71,7 @@ export function temperatureWarnings(
     const outside = new Map<string, { range: readonly [number, number]; steps: number[] }>();
     sys.steps.forEach((step, k) => {
       if (step.pKa <= STRONG_STEP_PKA) return;
+      if (pH !== undefined && Math.abs(step.pKa - pH) > IRRELEVANT_STEP_DISTANCE) return;
       if (step.deltaHkJ === undefined) {
         if (awayFromReference) noEnthalpy.push(k + 1);
         return;

@@ -30,6 +30,11 @@ describe('temperatureWarnings', () => {
     expect(at('histidine', 4)).toEqual([expect.objectContaining({ code: 'noEnthalpy', steps: [1] })]);
   });
 
+  it('leaves out steps more than 3 units from the pH when it is given: histidine\'s carboxyl step in a pH 6 buffer at 4 °C', () => {
+    expect(temperatureWarnings([chemistryOf(findSystem('histidine'))], 4, 'Temperature', 6)).toEqual([]);
+    expect(temperatureWarnings([chemistryOf(findSystem('histidine'))], 4, 'Temperature', 4.7)).toEqual([expect.objectContaining({ code: 'noEnthalpy', steps: [1] })]);
+  });
+
   it('leaves out the strong H2SO4 step (pKa below 0) and systems with no amount', () => {
     expect(at('sulfate', 4)).toEqual([]);
     expect(at('malate', 4, 0)).toEqual([]);

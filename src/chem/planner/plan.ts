@@ -144,8 +144,8 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const metals = metalComplexWarning(finished);
   if (metals) warnings.push(metals);
   // The temperature of use and the bench temperature, each against the constants' data (the same messages when equal are merged by dedupe).
-  for (const w of temperatureWarnings(finished.systems, s.useT, 'The temperature of use')) warnings.push(w.message);
-  if (s.benchT !== s.useT) for (const w of temperatureWarnings(finished.systems, s.benchT, 'The bench temperature')) warnings.push(w.message);
+  for (const w of temperatureWarnings(finished.systems, s.useT, 'The temperature of use', s.targetPh)) warnings.push(w.message);
+  if (s.benchT !== s.useT) for (const w of temperatureWarnings(finished.systems, s.benchT, 'The bench temperature', meterPh)) warnings.push(w.message);
   const constants = s.system.steps.map((step) => ({
     pKa25: step.pKa,
     pKaAtUse: pKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, s.useT),
