@@ -10,6 +10,8 @@ export const SOURCES = {
   harnedOwen1958:
     'H. S. Harned, B. B. Owen, The Physical Chemistry of Electrolytic Solutions, 3rd ed., Reinhold (1958)',
   bates1973: 'R. G. Bates, Determination of pH, 2nd ed., Wiley (1973)',
+  roy2014:
+    'R. N. Roy, L. N. Roy, K. Hundley, T. Wehmeyer, L. Tebbe, "Thermodynamics of the second dissociation constants (pK2) of piperazine-N,N′-bis-2-hydroxypropanesulfonic acid (POPSO sesquisodium salt) … from (278.15 to 328.15) K", J. Biophys. Chem. 5 (2014) 143–151',
   cleggRardPitzer1994:
     'S. L. Clegg, J. A. Rard, K. S. Pitzer, "Thermodynamic properties of 0–6 mol kg−1 aqueous sulfuric acid from 273.15 to 328.15 K", J. Chem. Soc., Faraday Trans. 90 (1994) 1875–1894, eq. 21 (K of HSO4−)',
   crcDissociation:
@@ -41,6 +43,8 @@ export const COPIES = {
     'The fitted equations transcribed in pytzer (github.com/mvdh7/pytzer, pytzer/dissociation.py): Bates & Hetzer 1961 eq. 3 (tris), Clegg, Rard & Pitzer 1994 eq. 21 (HSO4−), Millero 1979 (boric and carbonic acid), Plummer & Busenberg 1982 (carbonic acid), Bates & Pinching 1949 (ammonium), and the phosphoric-acid fits of Bates 1951, Bates & Acree 1943 and Schwarzenbach & Meier 1964 as given by Millero & Pierrot 1998. pK, ΔH° and ΔCp° at 298.15 K are read off each equation by differentiation (ΔH° = RT² d lnK/dT, ΔCp° = dΔH°/dT)',
   minteqV4:
     'minteq.v4.dat, the MINTEQA2 v4 thermodynamic database distributed with PHREEQC (github.com/usgs-coupled/phreeqc3, database/minteq.v4.dat): log K and ΔH of each protonation reaction at 25 °C and I = 0, with NIST Critical Stability Constants (NIST46) named as source. Read as pKa = log K of one protonation (cumulative constants differenced) and ΔH° of ionization = −ΔH of protonation',
+  royAbstracts:
+    'The abstracts (and, for J. Chem. Eng. Data 42 (1997) 41, the first page) of R. N. Roy and co-workers\' emf studies of Good buffers from 5 to 55 °C, as shown on public index and publisher pages: each gives pK2 at 25 °C (and 37 °C) or the fitted pK2(T) equation. Where an equation is given, pK, ΔH° and ΔCp° at 298.15 K are read off it by differentiation; where two temperatures are given, they are compared with the stored constants',
 } as const;
 
 /** Key of a copy in COPIES. */
