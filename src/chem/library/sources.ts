@@ -45,6 +45,8 @@ export const COPIES = {
     'minteq.v4.dat, the MINTEQA2 v4 thermodynamic database distributed with PHREEQC (github.com/usgs-coupled/phreeqc3, database/minteq.v4.dat): log K and ΔH of each protonation reaction at 25 °C and I = 0, with NIST Critical Stability Constants (NIST46) named as source. Read as pKa = log K of one protonation (cumulative constants differenced) and ΔH° of ionization = −ΔH of protonation',
   royAbstracts:
     'The abstracts (and, for J. Chem. Eng. Data 42 (1997) 41, the first page) of R. N. Roy and co-workers\' emf studies of Good buffers from 5 to 55 °C, as shown on public index and publisher pages: each gives pK2 at 25 °C (and 37 °C) or the fitted pK2(T) equation. Where an equation is given, pK, ΔH° and ΔCp° at 298.15 K are read off it by differentiation; where two temperatures are given, they are compared with the stored constants',
+  batesAllen1960:
+    'The abstract of R. G. Bates, G. F. Allen, "Acidic dissociation constant and related thermodynamic quantities for triethanolammonium ion in water from 0 to 50 °C", J. Res. Natl. Bur. Stand. 64A (1960) 343, as indexed on PubMed (PMID 32196172)',
 } as const;
 
 /** Key of a copy in COPIES. */

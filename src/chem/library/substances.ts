@@ -221,7 +221,7 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
   ], forms: [
     form({ name: 'bis-tris propane base', aliases: ['bis-tris propane', 'BTP base'], formula: 'C11H26N2O6', listedMolarMass: 282.33, adds: [{ system: 'bis-tris propane', moles: 1, protonsLost: 2 }] }),
   ], cautionNote: GOOD_CAUTION }),
-  system({ name: 'triethanolamine', aliases: ['TEA', 'tris(2-hydroxyethyl)amine', '2,2\',2\'\'-nitrilotriethanol', 'TEOA'], chargeOfMostProtonated: 1, steps: [gm({ entry: 'triethanolamine', pKa: 7.762, deltaHkJ: 33.6, deltaCpJ: 50 })], forms: [
+  system({ name: 'triethanolamine', aliases: ['TEA', 'tris(2-hydroxyethyl)amine', '2,2\',2\'\'-nitrilotriethanol', 'TEOA'], chargeOfMostProtonated: 1, steps: [step({ source: 'goldberg2002', entry: 'triethanolamine', pKa: 7.762, deltaHkJ: 33.6, deltaCpJ: 50, temperatureRangeC: [0, 50], checkedAgainst: [{ copy: 'batesAllen1960', where: 'abstract', reads: 'ΔH° 33 450 J/mol and ΔCp° 52 at 25 °C, measured from 0 to 50 °C: agrees (0.15 kJ/mol, 2 J K⁻¹ mol⁻¹); the abstract as indexed omits the pK formula' }], note: 'pK 7.762 from memory of the review (not in the copy); ΔH° and ΔCp° confirmed by Bates & Allen 1960.' })], forms: [
     form({ name: 'triethanolamine base', aliases: ['triethanolamine', 'TEA base'], formula: 'C6H15NO3', listedMolarMass: 149.19, adds: [{ system: 'triethanolamine', moles: 1, protonsLost: 1 }] }),
     form({ name: 'triethanolamine hydrochloride', aliases: ['TEA HCl', 'triethanolamine HCl'], formula: 'C6H15NO3·HCl', listedMolarMass: 185.65, adds: [{ system: 'triethanolamine', moles: 1, protonsLost: 0 }], counterIons: { 'Cl-': 1 } }),
   ], cautions: ['irritant'], cautionNote: 'Viscous liquid; irritating to eyes and skin.' }),
