@@ -8,7 +8,8 @@ import { writeFileSync } from 'fs';
 import { join } from 'path';
 import { ATOMIC_WEIGHTS_SOURCE } from '../src/chem/library/formula';
 import { defaultLibrary, usefulPhRange } from '../src/chem/library/lookup';
-import { SOURCES, VERIFICATION_NOTE } from '../src/chem/library/sources';
+import { COPIES, SOURCES } from '../src/chem/library/sources';
+import type { SourcedStep } from '../src/chem/library/types';
 import { SUBSTANCES } from '../src/chem/library/substances';
 
 /** Path of the generated document, relative to the repository root. */
@@ -22,6 +23,13 @@ function num(x: number | undefined, digits?: number): string {
 
 function cell(text: string): string {
   return text.replace(/\|/g, '\\|');
+}
+
+/** What a step was checked against, in one cell: each copy with where and what it reads, or "memory". */
+function provenance(s: SourcedStep): string {
+  if (s.checkedAgainst === 'memory') return 'memory';
+  if (s.checkedAgainst.length === 0) return 'user';
+  return s.checkedAgainst.map((c) => `\`${c.copy}\` (${c.where}): ${c.reads}`).join('; ');
 }
 
 /**
@@ -41,8 +49,7 @@ export function substanceDocsMarkdown(): string {
   out.push('');
   out.push(`${acidBase.length} acid–base systems, ${strong.length} strong electrolytes, ${formCount} forms.`);
   out.push('pKa at 25 °C and I = 0; ΔH° in kJ/mol; ΔCp° in J K⁻¹ mol⁻¹; useful range = pKa ± 1 (common practice).');
-  out.push('A value marked ✓ was checked against a found copy of its source; ✗ marks a value written from memory of the source and not yet checked.');
-  out.push(`${VERIFICATION_NOTE}`);
+  out.push('"Checked against" lists each copy a step was compared with (which copy, where in it, what it reads); "memory" marks values written from memory of the source with no copy found. The range is the span of temperatures the step\'s data cover. How the audit was done: docs/constants.md.');
   out.push(`Molar masses are computed from the formula with ${ATOMIC_WEIGHTS_SOURCE}; the listed value is the supplier label.`);
   out.push('Cautions are a planning aid only: always follow the safety data sheet and your lab\'s rules.');
   out.push('');
@@ -50,22 +57,26 @@ export function substanceDocsMarkdown(): string {
   out.push('');
   for (const [id, text] of Object.entries(SOURCES)) out.push(`- \`${id}\`: ${text}`);
   out.push('');
+  out.push('## Copies checked against');
+  out.push('');
+  for (const [id, text] of Object.entries(COPIES)) out.push(`- \`${id}\`: ${text}`);
+  out.push('');
   out.push('## Acid–base systems');
   for (const r of acidBase) {
     out.push('');
     out.push(`### ${r.name}`);
     out.push('');
     if (r.aliases.length > 0) out.push(`Also: ${r.aliases.join('; ')}.`);
-    out.push(`Charge of the most protonated form: ${num(r.chargeOfMostProtonated)}. Constants meant for ${r.temperatureRangeC ? `${r.temperatureRangeC[0]}–${r.temperatureRangeC[1]} °C` : '25 °C'}.`);
+    out.push(`Charge of the most protonated form: ${num(r.chargeOfMostProtonated)}.`);
     if (r.cautions.length > 0 || r.cautionNote) out.push(`Caution${r.cautions.length > 0 ? ` (${r.cautions.join(', ')})` : ''}: ${r.cautionNote ?? 'see the safety data sheet.'}`);
     if (r.note) out.push(`Note: ${r.note}`);
     out.push('');
-    out.push('| Step | pKa (25 °C) | ΔH° | ΔCp° | Useful pH | Source | Checked | Note |');
-    out.push('| --- | --- | --- | --- | --- | --- | --- | --- |');
+    out.push('| Step | pKa (25 °C) | ΔH° | ΔCp° | Range (°C) | Useful pH | Source | Checked against | Note |');
+    out.push('| --- | --- | --- | --- | --- | --- | --- | --- | --- |');
     const ranges = usefulPhRange(r);
     r.steps.forEach((s, k) => {
       const [lo, hi] = ranges[k];
-      out.push(`| ${cell(s.entry)} | ${num(s.pKa)} | ${num(s.deltaHkJ)} | ${num(s.deltaCpJ)} | ${num(lo, 2)}–${num(hi, 2)} | \`${s.source}\` | ${s.verified ? '✓' : '✗'} | ${cell(s.note ?? '')} |`);
+      out.push(`| ${cell(s.entry)} | ${num(s.pKa)} | ${num(s.deltaHkJ)} | ${num(s.deltaCpJ)} | ${s.temperatureRangeC[0]}–${s.temperatureRangeC[1]} | ${num(lo, 2)}–${num(hi, 2)} | \`${s.source}\` | ${cell(provenance(s))} | ${cell(s.note ?? '')} |`);
     });
     out.push('');
     out.push('| Form | Formula | M (g/mol, computed) | M (listed) | Adds per mole | Caution |');

@@ -8,6 +8,7 @@
  */
 import type { Composition } from './composition';
 import type { SpeciationResult } from './speciation';
+import { temperatureWarnings } from './temperatureChecks';
 
 /** A step buffers usefully within pKa ± 1 (common practice). */
 export const BUFFERING_HALF_WIDTH = 1;
@@ -49,7 +50,7 @@ export function metalComplexWarning(composition: Composition): string | undefine
 
 /**
  * Every warning about a solved solution: the solver's own, then weak buffering, then metal
- * complexes.
+ * complexes, then its temperature against each step's data (temperatureChecks.ts).
  *
  * @param composition - the solution as given
  * @param result - its speciation
@@ -60,5 +61,6 @@ export function solutionWarnings(composition: Composition, result: SpeciationRes
   if (weak) warnings.push(weak);
   const metals = metalComplexWarning(composition);
   if (metals) warnings.push(metals);
+  for (const w of temperatureWarnings(composition.systems, composition.temperatureC ?? 25, 'Temperature', result.pH)) warnings.push(w.message);
   return warnings;
 }

@@ -16,6 +16,8 @@ export interface AcidBaseStep {
   readonly deltaHkJ?: number;
   /** Standard heat-capacity change of ionisation, J K⁻¹ mol⁻¹ (0 if unknown). */
   readonly deltaCpJ?: number;
+  /** Temperatures (°C) the step's data cover, when known: outside them pKa(T) is an extrapolation (see temperatureWarnings). */
+  readonly temperatureRangeC?: readonly [number, number];
 }
 
 /** The chemistry of one acid–base system, without an amount. */

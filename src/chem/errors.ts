@@ -82,6 +82,10 @@ export const MESSAGES = {
     `The ${what} target ${target} cannot be met: without any added salt the buffer already gives ${reached}.`,
   saltTargetBeyondSalt: (what: string, target: number, reached: number, salt: string, maxSaltM: number) =>
     `The ${what} target ${target} cannot be met: even ${maxSaltM} M of ${salt} gives only ${reached}.`,
+  outsideDataRange: (where: string, temperatureC: number, system: string, steps: string, lowC: number, highC: number) =>
+    `${where} ${temperatureC} °C lies outside ${lowC}–${highC} °C, the temperatures the data for ${system} (${steps}) cover: its pKa there is an extrapolation; check the pH with a meter at that temperature.`,
+  noEnthalpy: (where: string, temperatureC: number, system: string, steps: string, toleranceC: number) =>
+    `${system} has no ΔH° for ${steps}: its pKa is held at the 25 °C value, so at ${where.toLowerCase()} ${temperatureC} °C (beyond 25 ± ${toleranceC} °C) the pH is an estimate; measure it at that temperature.`,
 } as const;
 
 export type MessageCode = keyof typeof MESSAGES;

@@ -19,5 +19,7 @@ export type { AcidBaseLoad, Capacity } from './capacity';
 export { idealOsmolarity } from './osmolarity';
 export { CONDUCTIVITY_MAX_C, CONDUCTIVITY_MIN_C, conductivityAt, conductivityOf, onsagerCoefficients, waterViscosity } from './conductivity';
 export type { ConductivityEstimate, ConductivityResult, IonConductivity } from './conductivity';
+export { IRRELEVANT_STEP_DISTANCE, NO_ENTHALPY_TOLERANCE_C, temperatureWarnings } from './temperatureChecks';
+export type { TemperatureWarning } from './temperatureChecks';
 export { pKaAt } from './vantHoff';
 export { debyeHuckelA, pKw, waterDensity, waterPermittivity } from './water';

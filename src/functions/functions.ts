@@ -258,7 +258,7 @@ export function warnings(composition: any[][], temperatureC?: any, activityModel
     const s = setup(temperatureC, activityModel, userSubstances);
     const solved = compositionFrom(s.library, composition, s.temperatureC, s.model);
     const found = solutionWarnings(solved, speciate(solved));
-    const fromMemory = solved.systems.filter((sys) => sys.totalM > 0 && s.library.findSystem(sys.name).steps.some((st) => !st.verified && st.source !== 'userDefined')).map((sys) => sys.name);
+    const fromMemory = solved.systems.filter((sys) => sys.totalM > 0 && s.library.findSystem(sys.name).steps.some((st) => st.checkedAgainst === 'memory')).map((sys) => sys.name);
     if (fromMemory.length > 0) found.push(SHEET_MESSAGES.constantsFromMemory(fromMemory));
     if (found.length === 0) return 'none';
     return `${found.length} warning${found.length === 1 ? '' : 's'}: ${found.map((w, i) => `(${i + 1}) ${w}`).join(' ')}`;

@@ -156,7 +156,7 @@ export interface Provenance {
 export function constantSourcesOf(buffer: string): string {
   try {
     const steps = findSystem(buffer).steps;
-    const described = steps.map((s) => `${s.entry} (${s.source}${s.verified ? '' : ', from memory, unchecked'})`);
+    const described = steps.map((s) => `${s.entry} (${s.source}${s.checkedAgainst === 'memory' ? ', from memory, unchecked' : ''})`);
     return `${buffer}: ${described.join('; ')}`;
   } catch {
     return `${buffer}: your own substance range`;

@@ -53,13 +53,17 @@ describe('metal complexes', () => {
 });
 
 describe('every warning together', () => {
-  it('keeps the solver warnings first, then weak buffering, then metals', () => {
-    // Acetate just past its equivalence point with a trace of sulfate (HSO4− pKa about 1.99, a value recalled from memory): nothing buffers near pH 9.
+  it('keeps the solver warnings first, then weak buffering, then metals, then the temperature against each step\'s data', () => {
+    // Acetate just past its equivalence point with a trace of sulfate (HSO4− pKa about 1.99, a value recalled from memory): nothing buffers near pH 8.
     const sulfate = { name: 'sulfate', chargeOfMostProtonated: -1, steps: [{ pKa: 1.99 }] };
-    const c: Composition = { systems: [{ ...ACETATE, totalM: 0.05 }, { ...sulfate, totalM: 0.001 }], strongIons: { 'Na+': 0.85001, 'Cl-': 0.8, 'Ca2+': 0.001 }, temperatureC: 70 };
+    // A trace of a weak acid without ΔH° about two units above that pH (8.1): it does not buffer there, but lies close enough to be warned about at 70 °C.
+    const trace = { name: 'trace acid', chargeOfMostProtonated: 0, steps: [{ pKa: 10.5 }] };
+    const c: Composition = { systems: [{ ...ACETATE, totalM: 0.05 }, { ...sulfate, totalM: 0.001 }, { ...trace, totalM: 0.0001 }], strongIons: { 'Na+': 0.85001, 'Cl-': 0.8, 'Ca2+': 0.001 }, temperatureC: 70 };
     const result = speciate(c);
-    expect(result.pH).toBeGreaterThan(7);
+    expect(result.pH).toBeGreaterThan(7.5);
+    expect(result.pH).toBeLessThan(8.5);
     const w = solutionWarnings(c, result);
-    expect(w.map((x) => x.slice(0, 12))).toEqual(['Temperature ', 'Ionic streng', expect.stringMatching(/^pH /), 'Ca2+ with su']);
+    // Acetate and sulfate lie more than 3 units from the pH, so only the trace acid warns, last.
+    expect(w.map((x) => x.slice(0, 12))).toEqual(['Temperature ', 'Ionic streng', expect.stringMatching(/^pH /), 'Ca2+ with su', 'trace acid h']);
   });
 });

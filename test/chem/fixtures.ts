@@ -6,12 +6,12 @@
  */
 import type { AcidBaseChemistry } from '../../src/chem';
 
-/** Phthalic acid: pKa 2.950, 5.408; ΔH° 2.70, −2.17 kJ/mol. Goldberg et al. 2002 (memory); ΔCp° left out (not recalled; the checks using it are at 25 °C). */
+/** Phthalic acid: pKa 2.950, 5.408; ΔH° −2.70, −2.17 kJ/mol. Goldberg et al. 2002 (memory; step 1's sign as corrected in the library); ΔCp° left out (the checks using it are at 25 °C). */
 export const PHTHALATE: AcidBaseChemistry = {
   name: 'phthalate',
   chargeOfMostProtonated: 0,
   steps: [
-    { pKa: 2.95, deltaHkJ: 2.7 },
+    { pKa: 2.95, deltaHkJ: -2.7 },
     { pKa: 5.408, deltaHkJ: -2.17 },
   ],
 };
@@ -68,6 +68,19 @@ export const CITRATE: AcidBaseChemistry = {
     { pKa: 6.396, deltaHkJ: -3.38, deltaCpJ: -254 },
   ],
 };
+
+/**
+ * pK of tris-H⁺ from 0 to 50 °C as Bates & Hetzer fitted their emf measurements:
+ * pK = 2981.4/T − 3.5888 + 0.005571·T (T in K). R. G. Bates, H. B. Hetzer, J. Phys. Chem.
+ * 65 (1961) 667, eq. 3, as transcribed in pytzer (github.com/mvdh7/pytzer,
+ * pytzer/dissociation.py, trisH_BH61); the fit reproduces their measured values to about
+ * 0.001. It gives 8.848 at 0 °C against the 8.850 quoted from their table in Goldberg et
+ * al. 2002 (tris literature table), a second copy at that point.
+ */
+export function trisPKaBatesHetzer(temperatureC: number): number {
+  const t = temperatureC + 273.15;
+  return 2981.4 / t - 3.5888 + 0.005571 * t;
+}
 
 /** Formats a failed numeric check the house way: input, result, expected, difference, tolerance. */
 export function mismatch(input: string, result: number, expected: number, tolerance: number): string {

@@ -7,6 +7,7 @@ import { ACTIVITY_MODELS, afterDilution, capacity, conductivityAt, idealOsmolari
 import { defaultLibrary } from '../../src/chem/library';
 import { capacityOf, conductivity, forms, grams, ionicStrengthMm, osmolarityIdeal, ph, phAtTemperature, phDiluted, pka, species, spillShape, substances, titrantMl, warnings, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
 import { errorOf } from './errorOf';
+import { pHSAt25 } from '../chem/iupacStandards';
 import { clearCallCache } from '../../src/functions/memo';
 
 /** Decimal places to which a function equals the direct core call: same core, same arguments; only mM↔M scaling rounds. */
@@ -35,8 +36,8 @@ describe('PH.OF', () => {
     const direct = solvePh({ systems: [{ ...lib.compositionFromForms([{ form: 'HEPES free acid', concentrationM: 0.02 }]).systems[0] }], strongIons: { 'Na+': 0.01 } });
     expect(ph([['HEPES', 20], ['Na+', 10]])).toBeCloseTo(direct, SAME_DIGITS);
   });
-  test('KH2PO4 + Na2HPO4 0.025 + 0.025 mol/kg reads 6.865 at 25 °C (IUPAC 2002 primary standard, Buck et al., value from memory; tolerance 0.02: Davies model plus molal≈molar)', () => {
-    expect(Math.abs(ph([['KH2PO4', 25], ['Na2HPO4', 25]]) - 6.865)).toBeLessThan(0.02);
+  test('KH2PO4 + Na2HPO4 0.025 + 0.025 mol/kg reads 6.865 at 25 °C (IUPAC 2002 primary standard, Buck et al., from the shared fixture test/chem/iupacStandards.ts; tolerance 0.02: Davies model plus molal≈molar)', () => {
+    expect(Math.abs(ph([['KH2PO4', 25], ['Na2HPO4', 25]]) - pHSAt25('phosphate1to1'))).toBeLessThan(0.02);
   });
   test('errors: unknown name (#N/A with did-you-mean), one-column range, empty range, bad amount, bad temperature, bad model', () => {
     const unknown = errorOf(() => ph([['tris base', 50], ['HEPSE', 10]]));
@@ -180,13 +181,17 @@ describe('WARNINGS', () => {
     expect(text).toMatch(/^2 warnings: \(1\) pH \d+\.\d\d is more than 1 unit from every pKa′ .* \(2\) Ca2\+ with citrate: metal–buffer complexes are not modelled/);
   });
   test('passes on the solver warnings (temperature, ionic strength) that a PH.OF cell cannot show', () => {
-    expect(warnings(TRIS_SALINE.concat([['HCl', 25]]), 80)).toMatch(/^1 warning: \(1\) Temperature 80 °C is above 60 °C/);
+    expect(warnings(TRIS_SALINE.concat([['HCl', 25]]), 80)).toMatch(/^2 warnings: \(1\) Temperature 80 °C is above 60 °C.* \(2\) Temperature 80 °C lies outside 0–50 °C, the temperatures the data for tris/);
     expect(warnings([['NaCl', 2000], ['sodium acetate trihydrate', 50], ['acetic acid', 50]])).toMatch(/Ionic strength 2\.\d+ M is above 0\.5 M/);
   });
+  test('warns when a system without ΔH° (malate) is used away from 25 ± 2 °C, not at 25 °C', () => {
+    expect(warnings([['malic acid', 10], ['NaOH', 10]], 4)).toMatch(/malate has no ΔH° for steps 1, 2: its pKa is held at the 25 °C value/);
+    expect(warnings([['malic acid', 10], ['NaOH', 10]], 25)).not.toMatch(/no ΔH°/);
+  });
   test('names substances whose constants are from memory, but not the user own', () => {
-    const formate = lib.findSystem('formate');
-    expect(formate.steps.some((st) => !st.verified)).toBe(true);
-    expect(warnings([['sodium formate', 20], ['formic acid', 20]])).toMatch(/Constants for formate were written from memory/);
+    const oxalate = lib.findSystem('oxalate');
+    expect(oxalate.steps.some((st) => st.checkedAgainst === 'memory')).toBe(true);
+    expect(warnings([['sodium oxalate', 20], ['oxalic acid', 20]])).toMatch(/Constants for oxalate were written from memory/);
     const user = [
       ['name', 'charge of most protonated form', 'pKa list', 'ΔH list kJ/mol', 'ΔCp list J/(K·mol)', 'form name', 'molar mass g/mol', 'counter-ions', 'protons lost', 'formula'],
       ['Lab amine', 1, '7.85', '40', '', 'Lab amine base', 131.2, '', '', ''],

@@ -1,6 +1,6 @@
 /** The substance library: sourced acid–base data, forms on the shelf, and lookup by name. */
 export { SUBSTANCES } from './substances';
-export { SOURCES, VERIFICATION_NOTE } from './sources';
+export { COPIES, SOURCES } from './sources';
 export type { SourceId } from './sources';
 export type { CautionFlag, FormRecord, LibraryForm, Solubility, SourcedStep, SubstanceRecord, SystemPortion } from './types';
 export { ATOMIC_WEIGHTS, ATOMIC_WEIGHTS_SOURCE, elementCounts, molarMassOf } from './formula';

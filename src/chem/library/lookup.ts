@@ -87,7 +87,12 @@ export function chemistryOf(record: SubstanceRecord): AcidBaseChemistry {
   return {
     name: record.name,
     chargeOfMostProtonated: record.chargeOfMostProtonated,
-    steps: record.steps.map((s) => ({ pKa: s.pKa, ...(s.deltaHkJ === undefined ? {} : { deltaHkJ: s.deltaHkJ }), ...(s.deltaCpJ === undefined ? {} : { deltaCpJ: s.deltaCpJ }) })),
+    steps: record.steps.map((s) => ({
+      pKa: s.pKa,
+      ...(s.deltaHkJ === undefined ? {} : { deltaHkJ: s.deltaHkJ }),
+      ...(s.deltaCpJ === undefined ? {} : { deltaCpJ: s.deltaCpJ }),
+      temperatureRangeC: s.temperatureRangeC,
+    })),
   };
 }
 

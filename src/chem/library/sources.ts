@@ -10,6 +10,10 @@ export const SOURCES = {
   harnedOwen1958:
     'H. S. Harned, B. B. Owen, The Physical Chemistry of Electrolytic Solutions, 3rd ed., Reinhold (1958)',
   bates1973: 'R. G. Bates, Determination of pH, 2nd ed., Wiley (1973)',
+  roy2014:
+    'R. N. Roy, L. N. Roy, K. Hundley, T. Wehmeyer, L. Tebbe, "Thermodynamics of the second dissociation constants (pK2) of piperazine-N,N′-bis-2-hydroxypropanesulfonic acid (POPSO sesquisodium salt) … from (278.15 to 328.15) K", J. Biophys. Chem. 5 (2014) 143–151',
+  cleggRardPitzer1994:
+    'S. L. Clegg, J. A. Rard, K. S. Pitzer, "Thermodynamic properties of 0–6 mol kg−1 aqueous sulfuric acid from 273.15 to 328.15 K", J. Chem. Soc., Faraday Trans. 90 (1994) 1875–1894, eq. 21 (K of HSO4−)',
   crcDissociation:
     'CRC Handbook of Chemistry and Physics, "Dissociation constants of organic acids and bases" (edition not checked)',
   crcSolubility:
@@ -23,12 +27,27 @@ export const SOURCES = {
 export type SourceId = keyof typeof SOURCES;
 
 /**
- * Where the values marked `verified: true` were checked: public copies of the
- * Goldberg et al. 2002 selected values found with the project's code search (a TypeScript
- * buffer module listing pK, ΔH°, ΔCp° for 29 ionization steps; a source-review note
- * quoting TAPSO and imidazole from the printed tables; a C# ITC-analysis table quoting the
- * phosphate steps; a reference manager quoting phosphate, acetate, citrate, tris and
- * carbonate pK values; and a scanned page of the review for ADA).
+ * The copies library values were checked against. A copy is a place a reader can open
+ * (a journal table, a primary paper, or a public transcription of one), named so that a
+ * step's `checkedAgainst` list can say which copy, where in it, and what it gives. One
+ * transcription is not the journal: a value checked only against a transcription says so.
  */
-export const VERIFICATION_NOTE =
-  'Checked against public copies of the Goldberg et al. 2002 tables found by code search (not against the printed journal itself).';
+export const COPIES = {
+  goldbergTranscriptionTs:
+    'A public TypeScript buffer module (a buffer calculator\'s test table headed "Goldberg, Kishore & Lennen 2002, Section 8"), found by code search, that transcribes pK, ΔH° and ΔCp° for about 30 steps. It disagrees with other copies on the ΔCp° of bis-tris, MOPS and PIPES, so it counts as one transcription, not as the journal; no value was newly taken from it in the constants audit',
+  goldbergReviewNote: 'A public source-review note quoting the TAPSO and imidazole lines of the Goldberg et al. 2002 tables (Tables 7.62 and 7.41)',
+  goldbergScanAda: 'A scanned page of the Goldberg et al. 2002 review (p. 242, the ADA literature table)',
+  goldbergItcTable:
+    'The buffer table (enum Buffer) of a public C# isothermal-titration-calorimetry analysis program (namespace AnalysisITC), found by code search: ionization ΔH° (J/mol) and ΔCp° for about 25 buffers, matching the Goldberg et al. 2002 selected values for most; its pKa column holds rounded working values, not the thermodynamic pK',
+  pytzerDissociation:
+    'The fitted equations transcribed in pytzer (github.com/mvdh7/pytzer, pytzer/dissociation.py): Bates & Hetzer 1961 eq. 3 (tris), Clegg, Rard & Pitzer 1994 eq. 21 (HSO4−), Millero 1979 (boric and carbonic acid), Plummer & Busenberg 1982 (carbonic acid), Bates & Pinching 1949 (ammonium), and the phosphoric-acid fits of Bates 1951, Bates & Acree 1943 and Schwarzenbach & Meier 1964 as given by Millero & Pierrot 1998. pK, ΔH° and ΔCp° at 298.15 K are read off each equation by differentiation (ΔH° = RT² d lnK/dT, ΔCp° = dΔH°/dT)',
+  minteqV4:
+    'minteq.v4.dat, the MINTEQA2 v4 thermodynamic database distributed with PHREEQC (github.com/usgs-coupled/phreeqc3, database/minteq.v4.dat): log K and ΔH of each protonation reaction at 25 °C and I = 0, with NIST Critical Stability Constants (NIST46) named as source. Read as pKa = log K of one protonation (cumulative constants differenced) and ΔH° of ionization = −ΔH of protonation',
+  royAbstracts:
+    'The abstracts (and, for J. Chem. Eng. Data 42 (1997) 41, the first page) of R. N. Roy and co-workers\' emf studies of Good buffers from 5 to 55 °C, as shown on public index and publisher pages: each gives pK2 at 25 °C (and 37 °C) or the fitted pK2(T) equation. Where an equation is given, pK, ΔH° and ΔCp° at 298.15 K are read off it by differentiation; where two temperatures are given, they are compared with the stored constants',
+  batesAllen1960:
+    'The abstract of R. G. Bates, G. F. Allen, "Acidic dissociation constant and related thermodynamic quantities for triethanolammonium ion in water from 0 to 50 °C", J. Res. Natl. Bur. Stand. 64A (1960) 343, as indexed on PubMed (PMID 32196172)',
+} as const;
+
+/** Key of a copy in COPIES. */
+export type CopyId = keyof typeof COPIES;

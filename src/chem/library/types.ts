@@ -3,7 +3,7 @@
  * forms people weigh out (salts, hydrates, free acids and bases, titrants).
  */
 import { AcidBaseStep } from '../composition';
-import { SourceId } from './sources';
+import { CopyId, SourceId } from './sources';
 
 /** Hazards worth a word beside a recipe. The safety data sheet has the last word. */
 export type CautionFlag = 'corrosive' | 'toxic' | 'arsenic' | 'controlled' | 'irritant' | 'oxidiser';
@@ -15,22 +15,37 @@ export interface SourcedStep extends AcidBaseStep {
   /** The entry in that source, e.g. `tris` or `phosphoric acid, H2PO4− ⇌ HPO4²−`. */
   readonly entry: string;
   /**
-   * True when these numbers were checked against a found copy of the source (see the
-   * record's note); false when written from memory of the source and not yet checked.
+   * The copies these numbers were checked against (source, where in it, how read), or
+   * `memory` when they were written from memory of the source and no copy was found.
    */
-  readonly verified: boolean;
+  readonly checkedAgainst: Provenance;
+  /** Temperatures (°C) the step's data cover: outside them its pKa(T) is an extrapolation. */
+  readonly temperatureRangeC: readonly [number, number];
   /** Standard uncertainty of the pKa where the source gives one. */
   readonly pKaUncertainty?: number;
   /** Anything a user should know about this step (strong step, unknown ΔH, …). */
   readonly note?: string;
 }
 
+/** One copy a value was checked against. */
+export interface ValueCheck {
+  /** The copy read (a key of COPIES). */
+  readonly copy: CopyId;
+  /** Where in it: table, page, entry, line or function. */
+  readonly where: string;
+  /** How it was read, and what it gives (in full where it differs from the stored value). */
+  readonly reads: string;
+}
+
+/** What a value was checked against: a list of copies, or `memory` when none was found. */
+export type Provenance = readonly ValueCheck[] | 'memory';
+
 /** Solubility in water near room temperature, with its source. */
 export interface Solubility {
   readonly gramsPerLitre: number;
   readonly temperatureC: number;
   readonly source: SourceId;
-  readonly verified: boolean;
+  readonly checkedAgainst: Provenance;
 }
 
 /** A share of an acid–base system that one mole of a form adds to a solution. */
@@ -87,8 +102,6 @@ export interface SubstanceRecord {
   readonly chargeOfMostProtonated: number;
   /** Proton-dissociation steps, pKa ascending (empty for strong electrolytes). */
   readonly steps: readonly SourcedStep[];
-  /** Temperatures (°C) over which the source's constants were fitted or measured. */
-  readonly temperatureRangeC?: readonly [number, number];
   readonly cautions: readonly CautionFlag[];
   /** Plain-words caution line; always defer to the safety data sheet. */
   readonly cautionNote?: string;

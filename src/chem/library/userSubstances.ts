@@ -2,7 +2,7 @@
  * A user's own substances (e.g. from a workbook range), validated into library records so
  * they work everywhere a library substance does.
  */
-import { AcidBaseChemistry, validateChemistry } from '../composition';
+import { AcidBaseChemistry, MAX_TEMPERATURE_C, MIN_TEMPERATURE_C, validateChemistry } from '../composition';
 import { ChemError, MESSAGES, requireNumber } from '../errors';
 import { findStrongIon } from '../strongIons';
 import { molarMassOf } from './formula';
@@ -145,7 +145,9 @@ export function userRecordFromInput(input: UserSubstance, field: string): Substa
     ...(dCp === undefined ? {} : { deltaCpJ: dCp[k] }),
     source: 'userDefined',
     entry: name,
-    verified: false,
+    // The user is the source: no copy to list, and the range is the whole liquid range (the user's data may cover less).
+    checkedAgainst: [],
+    temperatureRangeC: [MIN_TEMPERATURE_C, MAX_TEMPERATURE_C] as const,
   }));
   const chem: AcidBaseChemistry = { name, chargeOfMostProtonated: input.chargeOfMostProtonated, steps };
   validateChemistry(field, chem);

@@ -28,6 +28,7 @@ import { idealOsmolarity } from '../osmolarity';
 import { report, speciate, solvePh, solvePrepared } from '../speciation';
 import { findStrongIon } from '../strongIons';
 import { Titrant, titrantForPh, withTitrant } from '../titration';
+import { temperatureWarnings } from '../temperatureChecks';
 import { pKaAt } from '../vantHoff';
 import { RecipeComponent, RecipeInput, RecipePlan, RecipeRoute, TitrationPlan } from './types';
 import { cautionsFor, protocolSteps, volumeText } from './protocol';
@@ -167,10 +168,13 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   warnings.push(...planWarnings(s, made, components, madeVolumeL, titration));
   const metals = metalComplexWarning(finished);
   if (metals) warnings.push(metals);
+  // The temperature of use and the bench temperature, each against the constants' data (the same messages when equal are merged by dedupe).
+  for (const w of temperatureWarnings(finished.systems, s.useT, 'The temperature of use', s.targetPh)) warnings.push(w.message);
+  if (s.benchT !== s.useT) for (const w of temperatureWarnings(finished.systems, s.benchT, 'The bench temperature', meterPh)) warnings.push(w.message);
   const constants = s.system.steps.map((step) => ({
     pKa25: step.pKa,
     pKaAtUse: pKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, s.useT),
-    source: `${SOURCES[step.source]}${step.entry ? `, entry ${step.entry}` : ''}${step.verified ? '' : ' (written from memory, not yet checked against the source)'}`,
+    source: `${SOURCES[step.source]}${step.entry ? `, entry ${step.entry}` : ''}${step.checkedAgainst === 'memory' ? ' (written from memory, not yet checked against a copy of the source)' : ''}`,
   }));
   const meter = { pH: meterPh, benchTemperatureC: s.benchT, partVolumeMl: madeVolumeL * 1000 * s.partFraction, partVolumeFraction: s.partFraction };
   const plan: RecipePlan = {

@@ -224,6 +224,17 @@ describe('recipe planner: warnings', () => {
     expect(usual.warnings.some((w) => w.includes('too little to weigh'))).toBe(false);
   });
 
+  it('warns for the temperature of use and the bench temperature against the constants\' data: malate (no ΔH°) used at 4 °C and adjusted at 20 °C; histidine at pH 6 not (only its far carboxyl step lacks ΔH°)', () => {
+    const p = planRecipe({ buffer: 'malate', targetPh: 4.5, concentrationMm: 20, volumeMl: 500, form: 'DL-malic acid', titrant: { form: 'NaOH', concentrationM: 1 }, useTemperatureC: 4, benchTemperatureC: 20 });
+    expect(p.warnings).toContainEqual(expect.stringMatching(/^malate has no ΔH° for steps 1, 2: .* at the temperature of use 4 °C/));
+    expect(p.warnings).toContainEqual(expect.stringMatching(/^malate has no ΔH° for steps 1, 2: .* at the bench temperature 20 °C/));
+    const histidine = planRecipe({ buffer: 'histidine', targetPh: 6.0, concentrationMm: 20, volumeMl: 500, form: 'L-histidine', titrant: { form: 'HCl', concentrationM: 1 }, useTemperatureC: 4, benchTemperatureC: 20 });
+    expect(histidine.warnings.some((w) => w.includes('no ΔH°'))).toBe(false);
+    const tris = planRecipe({ buffer: 'tris', targetPh: 7.5, concentrationMm: 50, volumeMl: 500, form: 'tris base', titrant: { form: 'HCl', concentrationM: 1 }, useTemperatureC: 55, benchTemperatureC: 22 });
+    expect(tris.warnings).toContainEqual(expect.stringMatching(/^The temperature of use 55 °C lies outside 0–50 °C, the temperatures the data for tris/));
+    expect(tris.warnings.some((w) => w.includes('bench temperature'))).toBe(false);
+  });
+
   it('speaks of litres and a tank for a 200 L batch', () => {
     const p = planRecipe({ buffer: 'tris', targetPh: 8.0, concentrationMm: 50, volumeMl: 200000, form: 'tris base', titrant: { form: 'HCl', concentrationM: 6 } });
     expect(p.steps.join(' ')).toMatch(/about 160 L \(80 % of the 200 L\)/);
