@@ -99,6 +99,6 @@ describe('calc command', () => {
   test('other commands still run through main()', async () => {
     let text = '';
     expect(await main(['help'], (t) => (text += t))).toBe(0);
-    expect(text).toMatch(/proton-ledger calc/);
+    expect(text).toMatch(/calc <book\.xlsx\|\.csv>/);
   });
 });
