@@ -118,3 +118,11 @@ describe('manifest.xml', () => {
     expect(permissions).toEqual(['ReadWriteDocument']);
   });
 });
+
+describe('citations stay inside the repository', () => {
+  it('no source, test, script or doc cites a planning file outside the repository (SCIENCE.md, "the brief")', () => {
+    const { execSync } = jest.requireActual('child_process') as typeof import('child_process');
+    const hits = execSync("git grep -n -I -E 'SCIENCE\\.md|the brief\\b|brief.s bar' -- src test scripts bench docs README.md DEVELOPERS.md ':!test/security.test.ts' || true", { cwd: `${__dirname}/..`, encoding: 'utf8' });
+    expect(hits).toBe('');
+  });
+});

@@ -63,7 +63,7 @@ export function parseActivityModel(field: string, value: unknown): ActivityModel
 
 /**
  * Apparent (mixed) pKa′ of one step at an ionic strength, for use with pH = −log a(H⁺):
- * pK′ = pKa + log γ(A) − log γ(HA), with A one charge below HA (SCIENCE.md).
+ * pK′ = pKa + log γ(A) − log γ(HA), with A one charge below HA (docs/science.md, Conventions).
  *
  * @param model - activity model
  * @param pKa - thermodynamic pKa at the temperature

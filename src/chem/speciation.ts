@@ -13,7 +13,7 @@
  * Special cases: the ideal model needs a single pH solve; an all-strong composition still
  * equilibrates water.
  *
- * References: SCIENCE.md of this project; R. G. Bates, Determination of pH (1973), ch. 3–4.
+ * References: docs/science.md (methods and conventions); R. G. Bates, Determination of pH (1973), ch. 3–4.
  */
 import { ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES } from './activity';
 import { Composition, PreparedComposition, prepare } from './composition';

@@ -7,7 +7,7 @@
  * titrant). The charge balance is then linear in the titrant amount:
  *   c_t = −f₀(a_H, I) / q_t(a_H, I),
  * iterated only on the ionic strength (which the titrant itself raises). No nested root
- * finding (SCIENCE.md, "Amount of a titrant for a known target pH").
+ * finding (docs/science.md, Methods: "Titrant for a known target pH").
  */
 import { ionicStrengthFactor } from './activity';
 import { AcidBaseChemistry, Composition, MAX_CONCENTRATION_M, PreparedComposition, appendStepConstants, prepare, systemAt, validateChemistry } from './composition';

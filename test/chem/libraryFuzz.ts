@@ -21,7 +21,7 @@ export const libraryComposition: fc.Arbitrary<Composition> = fc
     library.compositionFromForms(items.map((i) => ({ form: i.form, concentrationM: i.mM / 1000 })), { temperatureC, activityModel }),
   );
 
-/** The brief's bound on the charge-balance residual, relative to the total ionic charge. */
+/** Bound on the charge-balance residual, relative to the total ionic charge: far below any effect on a printed pH (docs/science.md, Methods). */
 export const RESIDUAL_BOUND = 1e-10;
 /** Round trips to a titrant amount hold to 1e-6 pH (the solver converges far tighter). */
 export const ROUND_TRIP_BOUND = 1e-6;

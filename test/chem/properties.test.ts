@@ -7,7 +7,7 @@ import { AcidBaseChemistry, Composition, SODIUM_HYDROXIDE, afterLoad, speciate, 
 
 /** Cases per property: 1000 in `npm test`; PROPERTY_RUNS=100000 for a long run (seeds are random each run). */
 const NUM_RUNS = Number(process.env.PROPERTY_RUNS ?? 1000);
-/** The brief's bound on the charge-balance residual relative to total ionic charge. */
+/** Bound on the charge-balance residual relative to total ionic charge: far below any effect on a printed pH (docs/science.md, Methods). */
 const RESIDUAL_BOUND = 1e-10;
 
 const chemistry: fc.Arbitrary<AcidBaseChemistry> = fc

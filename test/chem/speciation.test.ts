@@ -60,7 +60,7 @@ describe('speciate', () => {
     expect(r.diagnostics.ionicStrengthIterations).toBeGreaterThan(1);
   });
 
-  it('apparent pKa′ of a −1 acid (phosphate step 2) falls with ionic strength, of tris (+1) rises (SCIENCE.md conventions)', () => {
+  it('apparent pKa′ of a −1 acid (phosphate step 2) falls with ionic strength, of tris (+1) rises (docs/science.md, Conventions)', () => {
     const low = speciate({ systems: [{ ...PHOSPHATE, totalM: 0.001 }, { ...TRIS, totalM: 0.001 }], strongIons: { 'Na+': 0.0015 } });
     const high = speciate({ systems: [{ ...PHOSPHATE, totalM: 0.001 }, { ...TRIS, totalM: 0.001 }], strongIons: { 'Na+': 0.2015, 'Cl-': 0.2 } });
     expect(high.systems[0].apparentPKa[1]).toBeLessThan(low.systems[0].apparentPKa[1] - 0.1);

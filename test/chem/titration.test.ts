@@ -1,7 +1,7 @@
 import { ChemError, Composition, HYDROCHLORIC_ACID, SODIUM_HYDROXIDE, Titrant, solvePh, titrantForPh, withTitrant } from '../../src/chem';
 import { ACETATE, PHOSPHATE, TRIS, expectClose } from './fixtures';
 
-/** Round trips solve the charge balance to ~1e-13 in ln a(H⁺); 1e-6 pH is the brief's bar, with room to spare. */
+/** Round trips solve the charge balance to ~1e-13 in ln a(H⁺); 1e-6 pH is the bar, with room to spare. */
 const ROUND_TRIP_TOLERANCE = 1e-6;
 
 describe('titrantForPh', () => {

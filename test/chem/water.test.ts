@@ -4,7 +4,7 @@ import { expectClose } from './fixtures';
 /** The Harned & Owen fit reproduces its own tabulated values to about ±0.005. */
 const PKW_TOLERANCE = 0.005;
 
-describe('pKw(T), Harned & Owen 1958 (check values as listed in the project SCIENCE.md)', () => {
+describe('pKw(T), Harned & Owen 1958 (check values as listed in docs/science.md)', () => {
   it.each([
     [0, 14.94],
     [25, 13.995],
@@ -37,7 +37,7 @@ describe('permittivity, Malmberg & Maryott 1956', () => {
   });
 });
 
-describe('Debye–Hückel A(T) (check values as listed in the project SCIENCE.md)', () => {
+describe('Debye–Hückel A(T) (check values as listed in docs/science.md)', () => {
   it('A(0 °C) ≈ 0.492 within 0.002 (tables differ in the third decimal with the permittivity data used)', () => {
     expectClose('A(0)', debyeHuckelA(0), 0.492, 0.002);
   });

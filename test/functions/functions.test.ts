@@ -124,7 +124,7 @@ describe('PKA', () => {
   test('thermodynamic pKa at I = 0 and 25 °C: tris 8.07 (trade tables 8.06–8.08; tolerance 0.011 spans them)', () => {
     expect(Math.abs(pka('tris') - 8.07)).toBeLessThan(0.011);
   });
-  test('at I = 0 equals the van \'t Hoff pKa; with I the apparent pKa′ moves the way SCIENCE.md says (tris up, phosphate step 2 down)', () => {
+  test('at I = 0 equals the van \'t Hoff pKa; with I the apparent pKa′ moves the way docs/science.md says (tris up, phosphate step 2 down)', () => {
     const tris = lib.findSystem('tris').steps[0];
     expect(pka('Tris HCl', '', 37)).toBeCloseTo(pKaAt(tris.pKa, tris.deltaHkJ ?? 0, tris.deltaCpJ ?? 0, 37), SAME_DIGITS);
     expect(pka('tris', 1, 25, 150)).toBeGreaterThan(pka('tris', 1, 25, 0));

@@ -3,7 +3,7 @@ import { createLibrary, defaultLibrary, findForm } from '../../../src/chem/libra
 import { RecipeInput, RecipePlan, formatRecipe, planRecipe } from '../../../src/chem/planner';
 import { volumeText } from '../../../src/chem/planner/protocol';
 
-/** The brief's bar for round trips: the recipe's own numbers solve back to the target within 0.001 pH. */
+/** The bar for round trips: a recipe's own printed numbers solve back to the target within 0.001 pH (a tenth of a bench meter's 0.01 resolution). */
 const ROUND_TRIP_PH = 0.001;
 
 /**
