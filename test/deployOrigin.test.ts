@@ -6,13 +6,13 @@ import { readFileSync } from 'fs';
 import { join } from 'path';
 import { XMLParser } from 'fast-xml-parser';
 
-// eslint-disable-next-line @typescript-eslint/no-require-imports
+ 
 const { DEV_ORIGIN, checkOrigin, withOrigin } = require('../scripts/deployOrigin.js') as {
   DEV_ORIGIN: string;
   checkOrigin: (text: string) => string;
   withOrigin: (text: string, origin: string) => string;
 };
-// eslint-disable-next-line @typescript-eslint/no-require-imports
+ 
 const webpackConfig = require('../webpack.config.js') as (env: unknown, argv: { mode: string }) => { plugins: { patterns?: { from: string; to: string; transform?: (content: Buffer) => string }[] }[] };
 
 const ROOT = join(__dirname, '..');

@@ -6,7 +6,7 @@
 const getHttpsServerOptions = jest.fn();
 jest.mock('office-addin-dev-certs', () => ({ getHttpsServerOptions }));
 
-// eslint-disable-next-line @typescript-eslint/no-require-imports
+ 
 const webpackConfig = require('../webpack.config.js') as (env: unknown, argv: { mode: string }) => unknown;
 
 interface Config {

@@ -14,7 +14,7 @@ const ROOT = join(__dirname, '..');
 const xml = readFileSync(join(ROOT, 'manifest.xml'), 'utf8');
 const parser = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '@' });
 const doc = parser.parse(xml).OfficeApp;
-// eslint-disable-next-line @typescript-eslint/no-require-imports
+ 
 const { OUTPUTS, DEV_PORT } = require('../webpack.config.js') as { OUTPUTS: string[]; DEV_PORT: number };
 const ORIGIN = `https://localhost:${DEV_PORT}`;
 

@@ -8,7 +8,7 @@ import { existsSync, readFileSync, readdirSync } from 'fs';
 import { join } from 'path';
 import { DIST, ROOT, ensureBuild } from './support/build';
 
-// eslint-disable-next-line @typescript-eslint/no-require-imports
+ 
 const webpackConfig = require('../webpack.config.js') as ((env: unknown, argv: { mode: string }) => unknown) & { OFFICE_JS_CDN: string; excelCsp: (local: boolean) => string };
 const { OFFICE_JS_CDN, excelCsp } = webpackConfig;
 

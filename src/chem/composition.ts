@@ -162,12 +162,10 @@ export function prepare(composition: Composition): PreparedComposition {
   }
 
   const n = systems.length;
-  let stepTotal = 0;
   for (let j = 0; j < n; j++) {
     validateChemistry('systems', systems[j], j);
     const total = systems[j].totalM;
     if (!inRange(total, 0, MAX_CONCENTRATION_M)) requireNumber(`systems[${j}].totalM`, total, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
-    stepTotal += systems[j].steps.length;
   }
 
   // Plain arrays: for the handful of entries a buffer has they allocate several times faster than typed arrays.

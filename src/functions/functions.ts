@@ -9,7 +9,7 @@
  * In Excel every name carries the add-in's namespace (PROTON, set in manifest.xml):
  * `=PROTON.PH.OF(A2:B4)`.
  */
-/* eslint-disable @typescript-eslint/no-explicit-any -- `any` is how custom-functions metadata spells a cell of any type */
+ 
 import { ChemError, MESSAGES, apparentPKa, capacity, conductivityAt, solutionWarnings, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
 import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toField, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';

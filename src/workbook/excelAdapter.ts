@@ -51,8 +51,8 @@ export class ExcelAdapter implements WorkbookPort {
 
   async addSheet(name: string): Promise<void> {
     await this.run(async (context) => {
+      // isNullObject is set by the sync itself; it needs no load (Office.js *OrNullObject methods).
       const existing = context.workbook.worksheets.getItemOrNullObject(name);
-      existing.load('isNullObject');
       await context.sync();
       if (!existing.isNullObject) throw new Error(`A sheet named "${name}" exists already.`);
       context.workbook.worksheets.add(name);
@@ -162,7 +162,7 @@ export class ExcelAdapter implements WorkbookPort {
   async usedRange(sheet: string): Promise<RangeRef | null> {
     return this.run(async (context) => {
       const used = context.workbook.worksheets.getItem(sheet).getUsedRangeOrNullObject(true);
-      used.load(['isNullObject', 'rowIndex', 'columnIndex', 'rowCount', 'columnCount']);
+      used.load(['rowIndex', 'columnIndex', 'rowCount', 'columnCount']);
       await context.sync();
       if (used.isNullObject) return null;
       // From A1, so that positions in the copy match the original.
@@ -173,8 +173,7 @@ export class ExcelAdapter implements WorkbookPort {
   async readSelection(): Promise<Selection> {
     return this.run(async (context) => {
       const range = context.workbook.getSelectedRange();
-      range.load(['rowIndex', 'columnIndex', 'rowCount', 'columnCount']);
-      range.worksheet.load('name');
+      range.load(['rowIndex', 'columnIndex', 'rowCount', 'columnCount', 'worksheet/name']);
       await context.sync();
       return { sheet: range.worksheet.name, range: { row: range.rowIndex, col: range.columnIndex, rowCount: range.rowCount, colCount: range.columnCount } };
     });
