@@ -8,7 +8,9 @@
  */
 import type { Composition } from './composition';
 import type { SpeciationResult } from './speciation';
+import { MESSAGES } from './errors';
 import { temperatureWarnings } from './temperatureChecks';
+import { ChemWarning, warning } from './warnings';
 
 /** A step buffers usefully within pKa ± 1 (common practice). */
 export const BUFFERING_HALF_WIDTH = 1;
@@ -23,13 +25,13 @@ const DIVALENT_METALS = ['Mg2+', 'Ca2+'] as const;
  *
  * @param result - the solved solution; its apparent pKa′ (at its own ionic strength and temperature) are compared
  */
-export function weakBufferingWarning(result: SpeciationResult): string | undefined {
+export function weakBufferingWarning(result: SpeciationResult): ChemWarning | undefined {
   const present = result.systems.filter((s) => s.totalM > 0);
   if (present.length === 0) return undefined;
   const near = present.some((s) => s.apparentPKa.some((pk) => Math.abs(pk - result.pH) <= BUFFERING_HALF_WIDTH));
   if (near) return undefined;
   const listed = present.map((s) => `${s.name} ${s.apparentPKa.map((pk) => pk.toFixed(2)).join(', ')}`).join('; ');
-  return `pH ${result.pH.toFixed(2)} is more than ${BUFFERING_HALF_WIDTH} unit from every pKa′ in the solution (${listed}): it buffers weakly there, and small additions move the pH far.`;
+  return warning('weakBuffering', MESSAGES.weakBuffering(result.pH, BUFFERING_HALF_WIDTH, listed));
 }
 
 /**
@@ -39,13 +41,13 @@ export function weakBufferingWarning(result: SpeciationResult): string | undefin
  *
  * @param composition - the solution as given (strong ions in mol/L)
  */
-export function metalComplexWarning(composition: Composition): string | undefined {
+export function metalComplexWarning(composition: Composition): ChemWarning | undefined {
   const metals = DIVALENT_METALS.filter((m) => (composition.strongIons?.[m] ?? 0) > 0);
   if (metals.length === 0) return undefined;
   const binders = composition.systems.filter((s) => s.totalM > 0 && s.chargeOfMostProtonated - s.steps.length <= -2).map((s) => s.name);
   if (binders.length === 0) return undefined;
   const calcium = metals.includes('Ca2+') ? ' Calcium salts of these anions may also precipitate, above all on warming or at high pH.' : '';
-  return `${metals.join(' and ')} with ${binders.join(', ')}: metal–buffer complexes are not modelled, so the pH and the free ion amounts are estimates (binding releases protons, so the real pH is usually lower).${calcium}`;
+  return warning('metalComplexes', MESSAGES.metalComplexes(metals.join(' and '), binders.join(', '), calcium));
 }
 
 /**
@@ -55,12 +57,12 @@ export function metalComplexWarning(composition: Composition): string | undefine
  * @param composition - the solution as given
  * @param result - its speciation
  */
-export function solutionWarnings(composition: Composition, result: SpeciationResult): string[] {
+export function solutionWarnings(composition: Composition, result: SpeciationResult): ChemWarning[] {
   const warnings = [...result.warnings];
   const weak = weakBufferingWarning(result);
   if (weak) warnings.push(weak);
   const metals = metalComplexWarning(composition);
   if (metals) warnings.push(metals);
-  for (const w of temperatureWarnings(composition.systems, composition.temperatureC ?? 25, 'Temperature', result.pH)) warnings.push(w.message);
+  warnings.push(...temperatureWarnings(composition.systems, composition.temperatureC ?? 25, 'Temperature', result.pH));
   return warnings;
 }

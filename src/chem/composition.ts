@@ -4,6 +4,7 @@
  */
 import { ActivityModel, parseActivityModel } from './activity';
 import { ChemError, MESSAGES, requireInteger, requireNumber } from './errors';
+import { ChemWarning, warning } from './warnings';
 import { findStrongIon } from './strongIons';
 import { VantHoffTerms, lnKaAt, vantHoffTerms } from './vantHoff';
 import { debyeHuckelA, pKw } from './water';
@@ -92,7 +93,7 @@ export interface PreparedComposition {
   readonly strongIonicStrength: number;
   /** Largest ionic strength the composition could reach (every system in its most charged state), mol/L; scales rounding floors. */
   readonly ionicStrengthScale: number;
-  readonly warnings: string[];
+  readonly warnings: ChemWarning[];
 }
 
 /** True when `v` is a number within [min, max] (NaN fails): the cheap test made before any message is built. */
@@ -200,9 +201,9 @@ export function prepare(composition: Composition): PreparedComposition {
     strongIonicStrength += 0.5 * ion.charge * ion.charge * c;
   }
 
-  const warnings: string[] = [];
+  const warnings: ChemWarning[] = [];
   if (temperatureC > FITTED_RANGE_MAX_C) {
-    warnings.push(`Temperature ${temperatureC} °C is above ${FITTED_RANGE_MAX_C} °C, beyond the range most pKa temperature fits were made over; treat the pH as an estimate.`);
+    warnings.push(warning('aboveFittedRange', MESSAGES.aboveFittedRange(temperatureC, FITTED_RANGE_MAX_C), 'temperatureC'));
   }
   return {
     temperatureC,

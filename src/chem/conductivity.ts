@@ -42,6 +42,8 @@
  *   public copies of that table: tris 2.95, HEPES 2.35, MOPS 2.69, acetate 4.24 × 10⁻⁸ m²/(V s)).
  */
 import { Composition, withConditions } from './composition';
+import { MESSAGES } from './errors';
+import { ChemWarning, warning } from './warnings';
 import { SpeciationResult, speciate } from './speciation';
 import { KELVIN_OFFSET, waterPermittivity } from './water';
 
@@ -205,7 +207,7 @@ export interface ConductivityResult {
   readonly ions: readonly IonConductivity[];
   /** Ions whose λ° is the stated default (none published here). */
   readonly estimates: readonly ConductivityEstimate[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly ChemWarning[];
 }
 
 /**
@@ -285,17 +287,17 @@ export function conductivityOf(result: SpeciationResult): ConductivityResult {
   const estimates: ConductivityEstimate[] = ions
     .filter((i) => i.estimated)
     .map((i) => ({ species: i.species, charge: i.charge, lambda25: DEFAULT_LAMBDA_PER_CHARGE * Math.abs(i.charge), shareOfConductivity: total > 0 ? i.contributionMsPerCm / total : 0 }));
-  const warnings: string[] = [];
+  const warnings: ChemWarning[] = [];
   const material = estimates.filter((e) => e.shareOfConductivity >= 0.01);
   if (material.length > 0) {
     const names = material.map((e) => `${e.species} (${(100 * e.shareOfConductivity).toFixed(0)} %)`).join(', ');
-    warnings.push(`No published limiting conductivity for ${names}: ${DEFAULT_LAMBDA_PER_CHARGE} S cm²/mol per charge was assumed, so the conductivity is an estimate.`);
+    warnings.push(warning('conductivityEstimated', MESSAGES.conductivityEstimated(names, DEFAULT_LAMBDA_PER_CHARGE)));
   }
   if (t < CONDUCTIVITY_MIN_C || t > CONDUCTIVITY_MAX_C) {
-    warnings.push(`Temperature ${t} °C is outside ${CONDUCTIVITY_MIN_C}–${CONDUCTIVITY_MAX_C} °C, the range of the conductivity model; the conductivity is an extrapolation.`);
+    warnings.push(warning('conductivityTemperature', MESSAGES.conductivityTemperature(t, CONDUCTIVITY_MIN_C, CONDUCTIVITY_MAX_C), 'temperatureC'));
   }
   if (result.ionicStrengthM > CONDUCTIVITY_I_LIMIT_M) {
-    warnings.push(`Ionic strength ${result.ionicStrengthM.toPrecision(3)} M is above ${CONDUCTIVITY_I_LIMIT_M} M, beyond where the conductivity model was checked; the conductivity is an extrapolation.`);
+    warnings.push(warning('conductivityIonicStrength', MESSAGES.conductivityIonicStrength(result.ionicStrengthM, CONDUCTIVITY_I_LIMIT_M)));
   }
   return { conductivityMsPerCm: total, temperatureC: t, ionicStrengthM: result.ionicStrengthM, ions, estimates, warnings };
 }

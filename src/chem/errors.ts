@@ -72,6 +72,39 @@ export const MESSAGES = {
     `The input is not valid JSON: ${detail}.`,
   unknownCommand: (command: string, commands: readonly string[]) =>
     `"${command}" is not a command; the commands are ${commands.join(', ')} (proton-ledger --help lists them).`,
+  // Warnings (a result with a caveat); see warnings.ts.
+  constantsFromMemory: (systems: readonly string[]) =>
+    `Constants for ${systems.join(', ')} were written from memory of their source and not yet checked against it; see the substance list for the source, and check them there before relying on the result.`,
+  aboveFittedRange: (temperatureC: number, limitC: number) =>
+    `Temperature ${temperatureC} °C is above ${limitC} °C, beyond the range most pKa temperature fits were made over; treat the pH as an estimate.`,
+  beyondActivityModel: (ionicStrengthM: number, limitM: number, model: string) =>
+    `Ionic strength ${ionicStrengthM.toPrecision(3)} M is above ${limitM} M, beyond where the ${model} activity model is reliable; the pH is an extrapolation.`,
+  weakBuffering: (pH: number, halfWidth: number, listed: string) =>
+    `pH ${pH.toFixed(2)} is more than ${halfWidth} unit from every pKa′ in the solution (${listed}): it buffers weakly there, and small additions move the pH far.`,
+  metalComplexes: (metals: string, binders: string, calciumNote: string) =>
+    `${metals} with ${binders}: metal–buffer complexes are not modelled, so the pH and the free ion amounts are estimates (binding releases protons, so the real pH is usually lower).${calciumNote}`,
+  conductivityEstimated: (names: string, lambdaPerCharge: number) =>
+    `No published limiting conductivity for ${names}: ${lambdaPerCharge} S cm²/mol per charge was assumed, so the conductivity is an estimate.`,
+  conductivityTemperature: (temperatureC: number, lowC: number, highC: number) =>
+    `Temperature ${temperatureC} °C is outside ${lowC}–${highC} °C, the range of the conductivity model; the conductivity is an extrapolation.`,
+  conductivityIonicStrength: (ionicStrengthM: number, limitM: number) =>
+    `Ionic strength ${ionicStrengthM.toPrecision(3)} M is above ${limitM} M, beyond where the conductivity model was checked; the conductivity is an extrapolation.`,
+  ofTheStock: (message: string) =>
+    `The stock: ${message}`,
+  titrantOverHalf: (titrantMl: number, totalMl: number) =>
+    `The titrant (${titrantMl.toFixed(1)} mL) is more than half the final volume (${totalMl.toFixed(0)} mL): use a more concentrated stock.`,
+  titrantTiny: (microlitres: number, fold: number, dilutedM: number, volume: string) =>
+    `The whole titrant is only ${microlitres.toPrecision(3)} µL: too little to add in portions that approach the target; dilute the stock ${fold}× (${dilutedM.toPrecision(3)} M) to add about ${volume}.`,
+  titrantTinyCheckMeter: (microlitres: number, withinPh: number, fold: number, dilutedM: number) =>
+    `The whole titrant is only ${microlitres.toPrecision(2)} µL: the solution without titrant is already within ${withinPh.toFixed(3)} pH of the target; check it with the meter and adjust, if at all, drop by drop with a ${fold}× diluted stock (${dilutedM.toPrecision(2)} M).`,
+  titrantMayNotFit: (highMl: number, partMl: number) =>
+    `The titrant may not fit: up to ${highMl.toFixed(1)} mL is expected, more than the ${partMl.toFixed(0)} mL part volume; use a more concentrated stock.`,
+  noTitrantNeeded: (pH: number, temperatureC: number, tolerance: number) =>
+    `The weighed form alone gives pH ${pH.toFixed(3)} at ${temperatureC} °C, within ${tolerance} of the target: no titrant is needed; check it with the meter.`,
+  smallWeighing: (milligrams: number, form: string, leastMg: number) =>
+    `${milligrams.toPrecision(3)} mg of ${form} is too little to weigh well on an analytical balance (about ${leastMg} mg at least): make a larger volume or a concentrated stock and take a part of it.`,
+  aboveSolubility: (form: string, gramsPerLitre: number, solubility: number, temperatureC: number) =>
+    `${form} at ${gramsPerLitre.toFixed(0)} g/L in the part volume is above its solubility (about ${solubility} g/L at ${temperatureC} °C).`,
   givenTwice: (field: string) =>
     `${field} is given twice; give it once.`,
   notText: (field: string, value: unknown) =>

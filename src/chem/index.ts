@@ -8,6 +8,8 @@ export { MAX_CONCENTRATION_M, MAX_TEMPERATURE_C, MIN_TEMPERATURE_C, FITTED_RANGE
 export type { AcidBaseChemistry, AcidBaseStep, AcidBaseSystem, Composition } from './composition';
 export { BUFFERING_HALF_WIDTH, metalComplexWarning, solutionWarnings, weakBufferingWarning } from './checks';
 export { ChemError, MESSAGES } from './errors';
+export { uniqueWarnings, warning, warningTexts } from './warnings';
+export type { ChemWarning } from './warnings';
 export type { ChemErrorKind } from './errors';
 export { STRONG_IONS, findStrongIon } from './strongIons';
 export { chargeLabel, report, solvePh, solvePrepared, speciate } from './speciation';

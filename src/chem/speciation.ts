@@ -18,6 +18,7 @@
 import { ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES } from './activity';
 import { Composition, PreparedComposition, prepare } from './composition';
 import { ChemError, MESSAGES } from './errors';
+import { ChemWarning, warning } from './warnings';
 import { selfConsistentIonicStrength } from './ionicStrength';
 import { STRONG_IONS, findStrongIon } from './strongIons';
 import { pKw } from './water';
@@ -227,7 +228,7 @@ export interface SpeciationResult {
     /** Residual relative to the total ionic charge Σ|z|c. */
     readonly relativeResidual: number;
   };
-  readonly warnings: readonly string[];
+  readonly warnings: readonly ChemWarning[];
 }
 
 /** Formats a charge the way chemists write it: 0, 1+, 2−. */
@@ -294,7 +295,7 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
   });
   const warnings = [...p.warnings];
   if (p.model !== 'ideal' && state.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M) {
-    warnings.push(`Ionic strength ${state.ionicStrengthM.toPrecision(3)} M is above ${ACTIVITY_MODEL_LIMIT_M} M, beyond where the ${ACTIVITY_MODEL_NAMES[p.model]} activity model is reliable; the pH is an extrapolation.`);
+    warnings.push(warning('beyondActivityModel', MESSAGES.beyondActivityModel(state.ionicStrengthM, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES[p.model]), 'activityModel'));
   }
   return {
     pH: state.pH,

@@ -113,7 +113,7 @@ export function solveBatch(inputs: readonly BatchInput[]): BatchRow[] {
     try {
       if (typeof fields.__error === 'string') throw new ChemError('invalid-input', 'notJson', fields.__error, 'batch', 'one JSON object per line');
       const result = solveComposition(fields);
-      return { row, values: [result.pH, result.ionicStrengthM * 1000, result.conductivity.msPerCm, result.warnings.join(' ')] };
+      return { row, values: [result.pH, result.ionicStrengthM * 1000, result.conductivity.msPerCm, result.warnings.map((w) => w.message).join(' ')] };
     } catch (e) {
       return { row, values: [], error: errorOf(e) };
     }

@@ -10,7 +10,7 @@
  * `=PROTON.PH.OF(A2:B4)`.
  */
  
-import { ChemError, MESSAGES, apparentPKa, capacity, conductivityAt, solutionWarnings, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
+import { ChemError, MESSAGES, warning, apparentPKa, capacity, conductivityAt, solutionWarnings, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
 import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toField, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
 import { recipeOptions } from './recipeOptions';
@@ -259,9 +259,9 @@ export function warnings(composition: any[][], temperatureC?: any, activityModel
     const solved = compositionFrom(s.library, composition, s.temperatureC, s.model);
     const found = solutionWarnings(solved, speciate(solved));
     const fromMemory = solved.systems.filter((sys) => sys.totalM > 0 && s.library.findSystem(sys.name).steps.some((st) => st.checkedAgainst === 'memory')).map((sys) => sys.name);
-    if (fromMemory.length > 0) found.push(SHEET_MESSAGES.constantsFromMemory(fromMemory));
+    if (fromMemory.length > 0) found.push(warning('constantsFromMemory', MESSAGES.constantsFromMemory(fromMemory)));
     if (found.length === 0) return 'none';
-    return `${found.length} warning${found.length === 1 ? '' : 's'}: ${found.map((w, i) => `(${i + 1}) ${w}`).join(' ')}`;
+    return `${found.length} warning${found.length === 1 ? '' : 's'}: ${found.map((w, i) => `(${i + 1}) ${w.message}`).join(' ')}`;
   });
 }
 
@@ -446,7 +446,7 @@ export function recipe(buffer: any, targetPh: any, concentrationMm: any, volumeM
     rows.push(['predicted', 'change with temperature', p.pHPerDegreeC, 'pH per °C']);
     rows.push(['predicted', 'after tenfold dilution', p.pHAfterTenfoldDilution, 'pH']);
     plan.steps.forEach((step, i) => rows.push(['step', String(i + 1), step, '']));
-    for (const w of plan.warnings) rows.push(['warning', '', w, '']);
+    for (const w of plan.warnings) rows.push(['warning', '', w.message, '']);
     for (const c of plan.cautions) rows.push(['caution', '', c, '']);
     if (rows.length > RECIPE_TABLE_ROWS) throw invalid('recipeTooLong', undefined, SHEET_MESSAGES.recipeTooLong(rows.length, RECIPE_TABLE_ROWS));
     return rows;

@@ -32,8 +32,6 @@ export const SHEET_MESSAGES = {
     `The recipe needs ${rows} rows, more than the ${limit} this table shows; print it with the command line instead.`,
   resultLargerThanSpill: (rows: number, columns: number, spillRows: number, spillColumns: number) =>
     `The result has ${rows} × ${columns} cells, more than the ${spillRows} × ${spillColumns} this formula engine sized for it; please report it.`,
-  constantsFromMemory: (systems: readonly string[]) =>
-    `Constants for ${systems.join(', ')} were written from memory of their source and not yet checked against it; see the substance list for the source, and check them there before relying on the result.`,
   unexpected: (detail: string) =>
     `Unexpected failure (please report it): ${detail}`,
 } as const;

@@ -30,5 +30,5 @@ export function recipeRowValues(plan: RecipePlan): (number | string)[] {
   const weighed = plan.components.find((c) => c.role === 'buffer');
   const t = plan.titration;
   const p = plan.predictions;
-  return [weighed?.grams ?? 0, t?.volumeMl ?? 0, t?.lowMl ?? 0, t?.highMl ?? 0, plan.meter.pH, p.pHAtUse, p.baseMmPerTenthPh, p.acidMmPerTenthPh, p.ionicStrengthM * 1000, p.idealOsmolarityMosm, plan.warnings.join(' ')];
+  return [weighed?.grams ?? 0, t?.volumeMl ?? 0, t?.lowMl ?? 0, t?.highMl ?? 0, plan.meter.pH, p.pHAtUse, p.baseMmPerTenthPh, p.acidMmPerTenthPh, p.ionicStrengthM * 1000, p.idealOsmolarityMosm, plan.warnings.map((w) => w.message).join(' ')];
 }

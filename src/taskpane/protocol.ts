@@ -56,7 +56,7 @@ export function protocolBlock(request: TableRequest, row: TableRow, rowNumber: n
     lines.push({ value: `No protocol for this row: ${plan.message}`, style: 'warning' });
   } else {
     plan.steps.forEach((step, i) => lines.push({ value: `${i + 1}. ${step}`, style: 'label' }));
-    for (const w of plan.warnings) lines.push({ value: `Warning: ${w}`, style: 'warning' });
+    for (const w of plan.warnings) lines.push({ value: `Warning: ${w.message}`, style: 'warning' });
     for (const c of plan.cautions.filter((c) => c !== GENERAL_CAUTION)) lines.push({ value: `Caution: ${c}`, style: 'caution' });
   }
   const room = PROTOCOL_MAX_ROWS - 3;

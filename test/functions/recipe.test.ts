@@ -30,7 +30,9 @@ describe('RECIPE.ROW', () => {
 
   it('carries warnings as text', () => {
     const [r] = recipeRow('HEPES', 9.3, 25, 500, '', undefined, [['form', 'HEPES free acid'], ['titrant', 'NaOH']]);
-    expect(r[10]).toMatch(/buffer weakly/);
+    const plan = planRecipe({ buffer: 'HEPES', targetPh: 9.3, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } });
+    expect(plan.warnings.map((w) => w.code)).toContain('weakBuffering');
+    expect(r[10]).toBe(plan.warnings.map((w) => w.message).join(' '));
   });
 
   it('weighs more of a form that is less than pure: the same grams for 0.98, 98 and "98%", pure grams ÷ 0.98', () => {

@@ -15,7 +15,8 @@
 import { ActivityModel } from '../activity';
 import { MAX_TITRANT_M, readChoiceField, readNumberField, readPurityField, readSaltsField, readTextField, requireNumberField } from '../input';
 import { capacityOfPrepared, scaleComposition } from '../capacity';
-import { BUFFERING_HALF_WIDTH, metalComplexWarning } from '../checks';
+import { BUFFERING_HALF_WIDTH, metalComplexWarning, weakBufferingWarning } from '../checks';
+import { ChemWarning, uniqueWarnings, warning } from '../warnings';
 import { AcidBaseSystem, Composition, prepare, systemAt, withConditions } from '../composition';
 import { ChemError, MESSAGES } from '../errors';
 import { SOURCES } from '../library/sources';
@@ -131,7 +132,9 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const state = solvePrepared(prepared, s.targetPh);
   const result = report(prepared, state, finished);
   const cap = capacityOfPrepared(prepared, state.pH);
-  const warnings = [...result.warnings];
+  // One criterion for weak buffering everywhere: the apparent pKa′ of the finished buffer at its own ionic strength and temperature (checks.ts).
+  const weak = weakBufferingWarning(result);
+  const warnings: ChemWarning[] = [...result.warnings, ...(weak ? [weak] : [])];
   const conductivity = conductivityOf(result);
   warnings.push(...conductivity.warnings);
   const predictions = {
@@ -164,13 +167,13 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
         }
       : undefined;
 
-  if (stockKappa) warnings.push(...stockKappa.warnings.map((w) => `The stock: ${w}`));
+  if (stockKappa) warnings.push(...stockKappa.warnings.map((w) => warning(w.code, MESSAGES.ofTheStock(w.message), w.field)));
   warnings.push(...planWarnings(s, made, components, madeVolumeL, titration));
   const metals = metalComplexWarning(finished);
   if (metals) warnings.push(metals);
   // The temperature of use and the bench temperature, each against the constants' data (the same messages when equal are merged by dedupe).
-  for (const w of temperatureWarnings(finished.systems, s.useT, 'The temperature of use', s.targetPh)) warnings.push(w.message);
-  if (s.benchT !== s.useT) for (const w of temperatureWarnings(finished.systems, s.benchT, 'The bench temperature', meterPh)) warnings.push(w.message);
+  warnings.push(...temperatureWarnings(finished.systems, s.useT, 'The temperature of use', s.targetPh));
+  if (s.benchT !== s.useT) warnings.push(...temperatureWarnings(finished.systems, s.benchT, 'The bench temperature', meterPh));
   const constants = s.system.steps.map((step) => ({
     pKa25: step.pKa,
     pKaAtUse: pKaAt(step.pKa, step.deltaHkJ ?? 0, step.deltaCpJ ?? 0, s.useT),
@@ -190,7 +193,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
     ...(stock ? { stock } : {}),
     predictions,
     steps: [],
-    warnings: dedupe(warnings),
+    warnings: uniqueWarnings(warnings),
     cautions: cautionsFor(made.weighed.map((w) => w.form).concat(made.titrant ? [made.titrant.form] : [])),
     constants,
     composition: finished,
@@ -199,9 +202,6 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   return { ...plan, steps: protocolSteps(plan) };
 }
 
-function dedupe(xs: readonly string[]): string[] {
-  return [...new Set(xs)];
-}
 
 /**
  * The acid–base system a recipe buffers with, by the name given. Throws ChemError: the
@@ -594,46 +594,32 @@ function componentsOf(s: Settled, made: RouteResult, volumeL: number, titration:
   return out;
 }
 
-function planWarnings(s: Settled, made: RouteResult, components: readonly RecipeComponent[], volumeL: number, titration: TitrationPlan | undefined): string[] {
-  const w: string[] = [];
-  const near = s.system.steps.some((st) => Math.abs(pKaAt(st.pKa, st.deltaHkJ ?? 0, st.deltaCpJ ?? 0, s.useT) - s.targetPh) <= BUFFERING_HALF_WIDTH);
-  if (!near) {
-    const pkas = s.system.steps.map((st) => pKaAt(st.pKa, st.deltaHkJ ?? 0, st.deltaCpJ ?? 0, s.useT).toFixed(2)).join(', ');
-    w.push(`pH ${s.targetPh} is more than ${BUFFERING_HALF_WIDTH} unit from every pKa of ${s.system.name} at ${s.useT} °C (${pkas}): it will buffer weakly there.`);
-  }
+/** Warnings only a plan can give: the titrant's size, small weighings, solubility, no titrant needed. */
+function planWarnings(s: Settled, made: RouteResult, components: readonly RecipeComponent[], volumeL: number, titration: TitrationPlan | undefined): ChemWarning[] {
+  const w: ChemWarning[] = [];
   if (titration) {
     const totalMl = volumeL * 1000;
-    if (titration.volumeMl > 0.5 * totalMl) {
-      w.push(`The titrant (${titration.volumeMl.toFixed(1)} mL) is more than half the final volume (${totalMl.toFixed(0)} mL): use a more concentrated stock.`);
-    }
+    if (titration.volumeMl > 0.5 * totalMl) w.push(warning('titrantOverHalf', MESSAGES.titrantOverHalf(titration.volumeMl, totalMl), 'titrant.concentrationM'));
     if (titration.volumeMl < SMALLEST_TITRANT_ML) {
       const fold = Math.pow(10, Math.ceil(Math.log10(SMALLEST_TITRANT_ML / titration.volumeMl)));
       if (fold <= MAX_STOCK_DILUTION_ADVICE) {
-        w.push(`The whole titrant is only ${(titration.volumeMl * 1000).toPrecision(3)} µL: too little to add in portions that approach the target; dilute the stock ${fold}× (${(titration.stockM / fold).toPrecision(3)} M) to add about ${volumeText(titration.volumeMl * fold)}.`);
+        w.push(warning('titrantTiny', MESSAGES.titrantTiny(titration.volumeMl * 1000, fold, titration.stockM / fold, volumeText(titration.volumeMl * fold)), 'titrant.concentrationM'));
       } else {
         const unadjusted = made.unadjustedPh ?? s.targetPh;
-        w.push(`The whole titrant is only ${(titration.volumeMl * 1000).toPrecision(2)} µL: the solution without titrant is already within ${Math.abs(s.targetPh - unadjusted).toFixed(3)} pH of the target; check it with the meter and adjust, if at all, drop by drop with a ${MAX_STOCK_DILUTION_ADVICE}× diluted stock (${(titration.stockM / MAX_STOCK_DILUTION_ADVICE).toPrecision(2)} M).`);
+        w.push(warning('titrantTinyCheckMeter', MESSAGES.titrantTinyCheckMeter(titration.volumeMl * 1000, Math.abs(s.targetPh - unadjusted), MAX_STOCK_DILUTION_ADVICE, titration.stockM / MAX_STOCK_DILUTION_ADVICE), 'targetPh'));
       }
     }
-    if (titration.highMl > totalMl * s.partFraction) {
-      w.push(`The titrant may not fit: up to ${titration.highMl.toFixed(1)} mL is expected, more than the ${(totalMl * s.partFraction).toFixed(0)} mL part volume; use a more concentrated stock.`);
-    }
+    if (titration.highMl > totalMl * s.partFraction) w.push(warning('titrantMayNotFit', MESSAGES.titrantMayNotFit(titration.highMl, totalMl * s.partFraction), 'titrant.concentrationM'));
   }
-  if (!titration && made.unadjustedPh !== undefined) {
-    w.push(`The weighed form alone gives pH ${made.unadjustedPh.toFixed(3)} at ${s.useT} °C, within ${NO_TITRANT_PH} of the target: no titrant is needed; check it with the meter.`);
-  }
+  if (!titration && made.unadjustedPh !== undefined) w.push(warning('noTitrantNeeded', MESSAGES.noTitrantNeeded(made.unadjustedPh, s.useT, NO_TITRANT_PH), 'targetPh'));
   made.weighed.forEach((item, i) => {
     // componentsOf lists the weighed forms first, in this order, with the grams printed (purity applied).
     const grams = components[i].grams ?? 0;
-    if (grams > 0 && grams < SMALLEST_GOOD_WEIGHING_G) {
-      w.push(`${(grams * 1000).toPrecision(3)} mg of ${item.form.name} is too little to weigh well on an analytical balance (about ${SMALLEST_GOOD_WEIGHING_G * 1000} mg at least): make a larger volume or a concentrated stock and take a part of it.`);
-    }
+    if (grams > 0 && grams < SMALLEST_GOOD_WEIGHING_G) w.push(warning('smallWeighing', MESSAGES.smallWeighing(grams * 1000, item.form.name, SMALLEST_GOOD_WEIGHING_G * 1000), 'volumeMl'));
     const sol = item.form.solubility;
     if (!sol) return;
     const gPerL = (item.concentrationM * item.form.molarMass) / s.partFraction;
-    if (gPerL > sol.gramsPerLitre) {
-      w.push(`${item.form.name} at ${gPerL.toFixed(0)} g/L in the part volume is above its solubility (about ${sol.gramsPerLitre} g/L at ${sol.temperatureC} °C).`);
-    }
+    if (gPerL > sol.gramsPerLitre) w.push(warning('aboveSolubility', MESSAGES.aboveSolubility(item.form.name, gPerL, sol.gramsPerLitre, sol.temperatureC), 'concentrationMm'));
   });
   return w;
 }

@@ -168,7 +168,7 @@ export function formatRecipe(plan: RecipePlan): string {
   if (plan.warnings.length) {
     lines.push('');
     lines.push('Warnings');
-    for (const w of plan.warnings) lines.push(`  ! ${w}`);
+    for (const w of plan.warnings) lines.push(`  ! ${w.message}`);
   }
   lines.push('');
   lines.push('Cautions');

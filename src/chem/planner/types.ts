@@ -3,6 +3,7 @@
  */
 import type { ActivityModel } from '../activity';
 import type { Composition } from '../composition';
+import type { ChemWarning } from '../warnings';
 
 /**
  * A number given by a user: a number in the field's own unit (the unit in its name), or text
@@ -190,7 +191,7 @@ export interface RecipePlan {
   readonly predictions: RecipePredictions;
   /** The bench protocol, in order, in plain words. */
   readonly steps: readonly string[];
-  readonly warnings: readonly string[];
+  readonly warnings: readonly ChemWarning[];
   readonly cautions: readonly string[];
   /** The pKa values (25 °C and at the temperature of use) and their sources. */
   readonly constants: readonly { readonly pKa25: number; readonly pKaAtUse: number; readonly source: string }[];

@@ -3,6 +3,10 @@ import { createLibrary, defaultLibrary, findForm } from '../../../src/chem/libra
 import { RecipeInput, RecipePlan, formatRecipe, planRecipe } from '../../../src/chem/planner';
 import { volumeText } from '../../../src/chem/planner/protocol';
 
+/** Warnings are compared by code (and field), never by message text. */
+const codes = (ws: readonly { code: string }[]) => ws.map((w) => w.code);
+const texts = (ws: readonly { message: string }[]) => ws.map((w) => w.message);
+
 /** The bar for round trips: a recipe's own printed numbers solve back to the target within 0.001 pH (a tenth of a bench meter's 0.01 resolution). */
 const ROUND_TRIP_PH = 0.001;
 
@@ -162,18 +166,18 @@ describe('recipe planner: bench numbers', () => {
 describe('recipe planner: warnings', () => {
   it('warns when the target is more than 1 unit from every pKa', () => {
     const p = planRecipe({ buffer: 'HEPES', targetPh: 9.2, concentrationMm: 20, volumeMl: 100, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } });
-    expect(p.warnings.join(' ')).toMatch(/buffer weakly/);
+    expect(codes(p.warnings)).toContain('weakBuffering');
   });
 
   it('warns when the ionic strength is beyond the activity model', () => {
     const p = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 20, volumeMl: 100, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'NaCl', concentrationMm: 1000 }] });
-    expect(p.warnings.join(' ')).toMatch(/above 0.5 M/);
+    expect(codes(p.warnings)).toContain('beyondActivityModel');
   });
 
   it('warns when the titrant is more than half the volume', () => {
     const p = planRecipe({ buffer: 'tris', targetPh: 7.5, concentrationMm: 200, volumeMl: 100, form: 'tris base', titrant: { form: 'HCl', concentrationM: 0.25 } });
     expect(p.titration!.volumeMl).toBeGreaterThan(50);
-    expect(p.warnings.join(' ')).toMatch(/more than half the final volume/);
+    expect(codes(p.warnings)).toContain('titrantOverHalf');
   });
 
   it('refuses a titrant that does not fit in the part volume, naming a stock strong enough (infeasible, never a plan)', () => {
@@ -194,14 +198,15 @@ describe('recipe planner: warnings', () => {
     for (const target of [startPh, startPh + 0.004]) {
       const p = planRecipe({ buffer: 'acetate', form: 'sodium acetate trihydrate', targetPh: target, concentrationMm: 50, volumeMl: 500 });
       expect(p.titration).toBeUndefined();
-      expect(p.warnings.join(' ')).toMatch(/no titrant is needed/);
+      expect(codes(p.warnings)).toContain('noTitrantNeeded');
     }
   });
 
   it('caps the stock-dilution advice: a target a hair off the unadjusted pH gets "check with the meter", not a 10^10-fold dilution', () => {
     const lone = planRecipe({ buffer: 'acetate', form: 'sodium acetate trihydrate', targetPh: 7, concentrationMm: 50, volumeMl: 500 });
     const p = planRecipe({ buffer: 'acetate', form: 'sodium acetate trihydrate', targetPh: lone.unadjustedPh! + 0.006, concentrationMm: 50, volumeMl: 500 });
-    const text = p.warnings.join(' ');
+    const text = texts(p.warnings).join(' ');
+    expect(codes(p.warnings)).toContain('titrantTinyCheckMeter');
     expect(text).not.toMatch(/dilute the stock \d{5,}×/);
     expect(text).toMatch(/check it with the meter/);
   });
@@ -209,30 +214,30 @@ describe('recipe planner: warnings', () => {
   it('warns when the whole titrant is too small to add in portions, and gives the volumes in µL', () => {
     const p = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 10, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 10 } });
     expect(p.titration!.volumeMl).toBeLessThan(0.1);
-    const warning = p.warnings.find((w) => w.startsWith('The whole titrant'));
+    const warning = p.warnings.find((w) => w.code === 'titrantTiny')?.message;
     expect(warning).toMatch(/^The whole titrant is only 1\d\.\d µL: .* dilute the stock 10× \(1\.00 M\) to add about 1\d\d µL\.$/);
     expect(p.steps.join(' ')).toMatch(/expect 1\d\.\d–1\d\.\d µL in all, about 1\d\.\d µL/);
     // With the 1 M stock it advises, the warning is gone.
     const diluted = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 10, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } });
-    expect(diluted.warnings.some((w) => w.startsWith('The whole titrant'))).toBe(false);
+    expect(codes(diluted.warnings)).not.toContain('titrantTiny');
   });
 
   it('warns when a weighing is below about 10 mg, and not at 25 mM in 1 L', () => {
     const tiny = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 1, volumeMl: 10, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 0.01 } });
-    expect(tiny.warnings).toContainEqual(expect.stringMatching(/^2\.38 mg of HEPES free acid is too little to weigh well on an analytical balance/));
+    expect(tiny.warnings).toContainEqual(expect.objectContaining({ code: 'smallWeighing', message: expect.stringMatching(/^2\.38 mg of HEPES free acid/) }));
     const usual = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 1000, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } });
-    expect(usual.warnings.some((w) => w.includes('too little to weigh'))).toBe(false);
+    expect(codes(usual.warnings)).not.toContain('smallWeighing');
   });
 
   it('warns for the temperature of use and the bench temperature against the constants\' data: malate (no ΔH°) used at 4 °C and adjusted at 20 °C; histidine at pH 6 not (only its far carboxyl step lacks ΔH°)', () => {
     const p = planRecipe({ buffer: 'malate', targetPh: 4.5, concentrationMm: 20, volumeMl: 500, form: 'DL-malic acid', titrant: { form: 'NaOH', concentrationM: 1 }, useTemperatureC: 4, benchTemperatureC: 20 });
-    expect(p.warnings).toContainEqual(expect.stringMatching(/^malate has no ΔH° for steps 1, 2: .* at the temperature of use 4 °C/));
-    expect(p.warnings).toContainEqual(expect.stringMatching(/^malate has no ΔH° for steps 1, 2: .* at the bench temperature 20 °C/));
+    expect(p.warnings).toContainEqual(expect.objectContaining({ code: 'noEnthalpy', message: expect.stringMatching(/^malate has no ΔH° for steps 1, 2: .* at the temperature of use 4 °C/) }));
+    expect(p.warnings).toContainEqual(expect.objectContaining({ code: 'noEnthalpy', message: expect.stringMatching(/^malate has no ΔH° for steps 1, 2: .* at the bench temperature 20 °C/) }));
     const histidine = planRecipe({ buffer: 'histidine', targetPh: 6.0, concentrationMm: 20, volumeMl: 500, form: 'L-histidine', titrant: { form: 'HCl', concentrationM: 1 }, useTemperatureC: 4, benchTemperatureC: 20 });
-    expect(histidine.warnings.some((w) => w.includes('no ΔH°'))).toBe(false);
+    expect(codes(histidine.warnings)).not.toContain('noEnthalpy');
     const tris = planRecipe({ buffer: 'tris', targetPh: 7.5, concentrationMm: 50, volumeMl: 500, form: 'tris base', titrant: { form: 'HCl', concentrationM: 1 }, useTemperatureC: 55, benchTemperatureC: 22 });
-    expect(tris.warnings).toContainEqual(expect.stringMatching(/^The temperature of use 55 °C lies outside 0–50 °C, the temperatures the data for tris/));
-    expect(tris.warnings.some((w) => w.includes('bench temperature'))).toBe(false);
+    expect(tris.warnings).toContainEqual(expect.objectContaining({ code: 'outsideDataRange', message: expect.stringMatching(/^The temperature of use 55 °C lies outside 0–50 °C, the temperatures the data for tris/) }));
+    expect(texts(tris.warnings).some((w) => w.includes('bench temperature'))).toBe(false);
   });
 
   it('speaks of litres and a tank for a 200 L batch', () => {
@@ -243,19 +248,19 @@ describe('recipe planner: warnings', () => {
 
   it('warns when a solid is above its solubility in the part volume', () => {
     const p = planRecipe({ buffer: 'tris', targetPh: 8.0, concentrationMm: 50, volumeMl: 1000, route: 'stock', stock: { fold: 100 }, form: 'tris base', titrant: { form: 'HCl', concentrationM: 12 } });
-    expect(p.warnings.join(' ')).toMatch(/above its solubility/);
+    expect(codes(p.warnings)).toContain('aboveSolubility');
   });
 
   it('warns that metal–buffer complexes are not modelled when MgCl2 joins a phosphate recipe, not a HEPES one', () => {
     const phosphate = planRecipe({ buffer: 'phosphate', targetPh: 7.2, concentrationMm: 50, volumeMl: 500, route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'Na2HPO4·7H2O', salts: [{ form: 'MgCl2·6H2O', concentrationMm: 2 }] });
-    expect(phosphate.warnings.join(' ')).toMatch(/Mg2\+ with phosphate: metal–buffer complexes are not modelled/);
+    expect(phosphate.warnings).toContainEqual(expect.objectContaining({ code: 'metalComplexes', message: expect.stringMatching(/^Mg2\+ with phosphate/) }));
     const hepes = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 20, volumeMl: 100, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'MgCl2·6H2O', concentrationMm: 2 }] });
-    expect(hepes.warnings.join(' ')).not.toMatch(/complexes/);
+    expect(codes(hepes.warnings)).not.toContain('metalComplexes');
   });
 
   it('warns above 60 °C', () => {
     const p = planRecipe({ buffer: 'phosphate', targetPh: 7, useTemperatureC: 70, concentrationMm: 20, volumeMl: 100, route: 'two-forms', acidForm: 'KH2PO4', baseForm: 'K2HPO4' });
-    expect(p.warnings.join(' ')).toMatch(/above 60 °C/);
+    expect(codes(p.warnings)).toContain('aboveFittedRange');
   });
 });
 
@@ -393,6 +398,6 @@ describe('salt target by conductivity', () => {
 describe('conductivity of a concentrated stock', () => {
   it('warns that a stock beyond 1 M ionic strength is an extrapolation of the conductivity model', () => {
     const plan = planRecipe({ buffer: 'phosphate', targetPh: 7.4, concentrationMm: 50, volumeMl: 1000, route: 'stock', stock: { fold: 10 }, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 5 }, salts: [{ form: 'NaCl', concentrationMm: 150 }] });
-    expect(plan.warnings.join(' ')).toMatch(/The stock: Ionic strength .* beyond where the conductivity model was checked/);
+    expect(plan.warnings).toContainEqual(expect.objectContaining({ code: 'conductivityIonicStrength', message: expect.stringMatching(/^The stock: Ionic strength/) }));
   });
 });
