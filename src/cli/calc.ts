@@ -6,20 +6,112 @@
  *   proton-ledger calc book.xlsx -o filled.xlsx
  *   proton-ledger calc book.csv -o filled.csv      (also .xlsx → .csv and .csv → .xlsx)
  *   proton-ledger calc book.xlsx -o sheet2.csv --sheet "Sheet 2"
+ *   proton-ledger calc book.xlsx -o filled.xlsx --force   (replace an existing filled.xlsx)
+ *
+ * Files: the output is never the input (compared by real path and by file identity, so
+ * `./book.xlsx`, a symbolic or a hard link are caught), an existing output is replaced only
+ * with --force, and every output is written to a temporary file in the same directory and
+ * then renamed over the name, so an interrupted run leaves the old file or the new one,
+ * never half of either.
  *
  * Reading: exceljs. Evaluating: HyperFormula with the PROTON functions (formulaEngine.ts).
  * Writing: values only; a spreadsheet error becomes the error value with its message in a
  * cell note. Text is always written as text: a value beginning with = + - @ never becomes
  * a formula (in CSV it is prefixed with an apostrophe, as spreadsheet programs expect).
  */
-import { readFileSync, writeFileSync } from 'fs';
-import { extname } from 'path';
+import { randomBytes } from 'crypto';
+import { closeSync, fsyncSync, linkSync, lstatSync, openSync, readFileSync, realpathSync, renameSync, statSync, Stats, unlinkSync, writeSync } from 'fs';
+import { basename, dirname, extname, join, resolve } from 'path';
 import ExcelJS from 'exceljs';
 import { DetailedCellError, HyperFormula } from 'hyperformula';
 import { createFormulaEngine, toEngineFormula } from '../functions/formulaEngine';
 import { literal } from '../workbook/port';
+import { CALC_MESSAGES } from './calcMessages';
 
-const USAGE = 'Usage: proton-ledger calc <input.xlsx|input.csv> -o <output.xlsx|output.csv> [--sheet NAME]';
+const USAGE = 'Usage: proton-ledger calc <input.xlsx|input.csv> -o <output.xlsx|output.csv> [--sheet NAME] [--force]';
+
+/** A refusal of calc, reported as a JSON error naming the argument at fault. */
+export class CalcFailure extends Error {
+  constructor(message: string, readonly field: 'input' | 'output' | 'sheet' | 'usage') {
+    super(message);
+  }
+}
+
+/** How calc may treat its output file. */
+export interface CalcOptions {
+  /** For CSV output from a workbook: which sheet (default the first). */
+  readonly sheetName?: string;
+  /** Replace an existing output file (never the input). */
+  readonly force?: boolean;
+}
+
+function statOrUndefined(path: string, follow: boolean): Stats | undefined {
+  try {
+    return follow ? statSync(path) : lstatSync(path);
+  } catch {
+    return undefined;
+  }
+}
+
+/**
+ * Refuses an output that is the input — the same real path (`./book.xlsx`, a symbolic link)
+ * or the same file (device and inode: a hard link) — a directory, and, without force, any
+ * existing file or link.
+ */
+export function checkOutput(input: string, output: string, force: boolean): void {
+  const inputStat = statOrUndefined(input, true);
+  if (!inputStat) throw new CalcFailure(CALC_MESSAGES.cannotRead(input, 'no such file'), 'input');
+  if (inputStat.isDirectory()) throw new CalcFailure(CALC_MESSAGES.cannotRead(input, 'it is a directory'), 'input');
+  const outputStat = statOrUndefined(output, true);
+  if (outputStat?.isDirectory()) throw new CalcFailure(CALC_MESSAGES.outputIsDirectory(output), 'output');
+  const sameFile = outputStat !== undefined && outputStat.dev === inputStat.dev && outputStat.ino === inputStat.ino;
+  if (sameFile || (outputStat && realpathSync(output) === realpathSync(input))) throw new CalcFailure(CALC_MESSAGES.outputIsInput(output, input), 'output');
+  if (!force && statOrUndefined(output, false)) throw new CalcFailure(CALC_MESSAGES.outputExists(output), 'output');
+}
+
+/**
+ * Writes a file through a temporary file in the same directory, flushed to disk, then moved
+ * onto the name in one step (a rename; without force a hard link, which fails rather than
+ * replace a file that appeared meanwhile). On any failure the temporary file is removed and
+ * whatever was at the name is left as it was.
+ */
+export function writeFileAtomically(output: string, data: string | Uint8Array, force: boolean): void {
+  const temp = join(dirname(resolve(output)), `.${basename(output)}.${process.pid}.${randomBytes(6).toString('hex')}.tmp`);
+  let created = false;
+  try {
+    const fd = openSync(temp, 'wx', 0o666);
+    created = true;
+    try {
+      const bytes = typeof data === 'string' ? Buffer.from(data, 'utf8') : data;
+      for (let offset = 0; offset < bytes.length; ) offset += writeSync(fd, bytes, offset, bytes.length - offset);
+      fsyncSync(fd);
+    } finally {
+      closeSync(fd);
+    }
+    if (force) renameSync(temp, output);
+    else {
+      try {
+        linkSync(temp, output);
+      } catch (e) {
+        if ((e as NodeJS.ErrnoException).code === 'EEXIST') throw new CalcFailure(CALC_MESSAGES.outputExists(output), 'output');
+        // A file system without hard links: the check before writing has to do.
+        if (statOrUndefined(output, false)) throw new CalcFailure(CALC_MESSAGES.outputExists(output), 'output');
+        renameSync(temp, output);
+      }
+    }
+  } catch (e) {
+    if (e instanceof CalcFailure) throw e;
+    throw new CalcFailure(CALC_MESSAGES.cannotWrite(output, (e as NodeJS.ErrnoException).code ?? (e as Error).message), 'output');
+  } finally {
+    if (created) {
+      try {
+        unlinkSync(temp);
+      } catch {
+        // Already renamed onto the output.
+      }
+    }
+  }
+}
 
 /** Error values a .xlsx cell can hold; others from the engine are written as #VALUE! with a note. */
 const XLSX_ERRORS = new Set(['#N/A', '#REF!', '#NAME?', '#DIV/0!', '#NULL!', '#VALUE!', '#NUM!']);
@@ -198,13 +290,15 @@ function fillSheet(hf: HyperFormula, sheetId: number, sheet: ExcelJS.Worksheet, 
  * Evaluates a workbook file and writes the result.
  *
  * @param input - .xlsx or .csv path
- * @param output - .xlsx or .csv path
- * @param sheetName - for CSV output from a workbook: which sheet (default the first)
+ * @param output - .xlsx or .csv path, never the input; an existing file only with `force`
+ * @param options - the sheet for CSV output, and whether to replace an existing output
  */
-export async function calcFile(input: string, output: string, sheetName?: string): Promise<CalcSummary> {
+export async function calcFile(input: string, output: string, options: CalcOptions = {}): Promise<CalcSummary> {
+  const { sheetName, force = false } = options;
   const inExt = extname(input).toLowerCase();
   const outExt = extname(output).toLowerCase();
-  if (!['.xlsx', '.csv'].includes(inExt) || !['.xlsx', '.csv'].includes(outExt)) throw new Error(`calc reads and writes .xlsx or .csv files.\n${USAGE}`);
+  if (!['.xlsx', '.csv'].includes(inExt) || !['.xlsx', '.csv'].includes(outExt)) throw new CalcFailure(`calc reads and writes .xlsx or .csv files.\n${USAGE}`, ['.xlsx', '.csv'].includes(inExt) ? 'output' : 'input');
+  checkOutput(input, output, force);
   let workbook: ExcelJS.Workbook;
   if (inExt === '.xlsx') {
     workbook = new ExcelJS.Workbook();
@@ -225,12 +319,12 @@ export async function calcFile(input: string, output: string, sheetName?: string
     if (outExt === '.xlsx') {
       // A workbook keeps its cells and styles, formulas replaced; CSV input has no cells yet, so every value is written.
       for (const name of names) fillSheet(hf, hf.getSheetId(name)!, workbook.getWorksheet(name)!, inExt === '.csv');
-      await workbook.xlsx.writeFile(output);
+      writeFileAtomically(output, new Uint8Array(await workbook.xlsx.writeBuffer()), force);
     } else {
       const name = sheetName ?? names[0];
       const id = hf.getSheetId(name);
-      if (id === undefined) throw new Error(`No sheet named "${name}"; the workbook has ${names.map((n) => `"${n}"`).join(', ')}.`);
-      writeFileSync(output, hf.getSheetValues(id).map((row) => row.map(csvField).join(',')).join('\r\n') + '\r\n');
+      if (id === undefined) throw new CalcFailure(`No sheet named "${name}"; the workbook has ${names.map((n) => `"${n}"`).join(', ')}.`, 'sheet');
+      writeFileAtomically(output, hf.getSheetValues(id).map((row) => row.map(csvField).join(',')).join('\r\n') + '\r\n', force);
     }
     return { output, sheets: names, formulas, errors };
   } finally {
@@ -249,11 +343,12 @@ export async function runCalc(args: string[], write: (text: string) => void): Pr
   const output = o >= 0 ? args[o + 1] : undefined;
   const input = args.find((a, i) => !a.startsWith('-') && !(o >= 0 && i === o + 1) && !(s >= 0 && i === s + 1));
   try {
-    if (!input || !output) throw new Error(USAGE);
-    write(JSON.stringify(await calcFile(input, output, s >= 0 ? args[s + 1] : undefined)) + '\n');
+    if (!input || !output) throw new CalcFailure(USAGE, 'usage');
+    write(JSON.stringify(await calcFile(input, output, { sheetName: s >= 0 ? args[s + 1] : undefined, force: args.includes('--force') })) + '\n');
     return 0;
   } catch (e) {
-    write(JSON.stringify({ error: { kind: 'invalid-input', message: e instanceof Error ? e.message : String(e) } }) + '\n');
+    const field = e instanceof CalcFailure ? e.field : undefined;
+    write(JSON.stringify({ error: { kind: 'invalid-input', message: e instanceof Error ? e.message : String(e), field } }) + '\n');
     return 2;
   }
 }
