@@ -15,7 +15,7 @@ import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
 import { DEFAULT_PART_VOLUME_FRACTION, DEFAULT_STOCK_TOLERANCE_PERCENT, RecipeInput, RecipePlan, planRecipe } from '../chem/planner';
 import { volumeText } from '../chem/planner/protocol';
-import { compositionFrom, MAX_AMOUNT_MM } from './composition';
+import { checkRowLimit, compositionFrom, MAX_AMOUNT_MM } from './composition';
 import { SheetError, invalid } from './errors';
 import { memoised } from './memo';
 import { SHEET_MESSAGES } from './messages';
@@ -84,6 +84,7 @@ export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, t
     const target = toNumber('targetPh', targetPh, { min: 0, max: 14, allowed: '0 to 14' });
     const stockM = toNumber('titrantConcentrationM', titrantConcentrationM, { min: Number.MIN_VALUE, max: 20, allowed: 'above 0 up to 20 mol/L' });
     // Without other components the composition is the form alone: built directly, it skips the range cache.
+    checkRowLimit('salts', salts);
     const composition = isBlankRange(salts)
       ? s.library.compositionFromForms([{ form: formName, concentrationM: mM / 1000 }], { temperatureC: s.temperatureC, activityModel: s.model })
       : compositionFrom(s.library, [[formName, mM], ...toRange(salts)], s.temperatureC, s.model);
@@ -353,6 +354,7 @@ function recipeInput(
   const pair = formText?.split(/\s+\+\s+/);
   const twoForms = pair !== undefined && pair.length === 2;
   if (twoForms && !twoFormsAllowed) throw invalid(SHEET_MESSAGES.oneFormOnly('form', formText!));
+  checkRowLimit('salts', salts);
   const saltRows = isBlankRange(salts) ? [] : toRange(salts).filter((row) => !row.every(isBlank));
   const tolerance = toNumber('titrantTolerancePercent', titrantTolerancePercent, { default: DEFAULT_STOCK_TOLERANCE_PERCENT, min: 0, max: 50, allowed: '0 to 50 %' });
   return {
