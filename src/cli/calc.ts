@@ -23,10 +23,11 @@ import { randomBytes } from 'crypto';
 import { closeSync, fsyncSync, linkSync, lstatSync, openSync, readFileSync, realpathSync, renameSync, statSync, Stats, unlinkSync, writeSync } from 'fs';
 import { basename, dirname, extname, join, resolve } from 'path';
 import ExcelJS from 'exceljs';
-import { DetailedCellError, HyperFormula } from 'hyperformula';
+import { AlwaysSparse, DetailedCellError, HyperFormula } from 'hyperformula';
 import { createFormulaEngine, toEngineFormula } from '../functions/formulaEngine';
 import { literal } from '../workbook/port';
 import { CALC_MESSAGES } from './calcMessages';
+import { InputRefused, MAX_CELL_CHARS, MAX_CELLS, MAX_COLUMNS, MAX_FILE_BYTES, MAX_ROWS, checkFormula, checkWorkbookPackage } from './calcLimits';
 
 const USAGE = 'Usage: proton-ledger calc <input.xlsx|input.csv> -o <output.xlsx|output.csv> [--sheet NAME] [--force]';
 
@@ -136,6 +137,13 @@ export interface CalcSummary {
 
 type Grid = unknown[][];
 
+/** A sheet's cells for the engine, and where its non-empty cells are (so nothing else is ever visited). */
+interface SheetInput {
+  /** Emptied once the engine holds the cells, so the two copies are never kept together longer than needed. */
+  grid: Grid;
+  readonly cells: readonly (readonly [number, number])[];
+}
+
 function columnLetters(col: number): string {
   let s = '';
   for (let n = col + 1; n > 0; n = Math.floor((n - 1) / 26)) s = String.fromCharCode(65 + ((n - 1) % 26)) + s;
@@ -147,7 +155,9 @@ function engineText(text: string): string {
   return `'${text}`;
 }
 
-function cellInput(cell: ExcelJS.Cell): unknown {
+function cellInput(cell: ExcelJS.Cell, where: string): unknown {
+  // A merged range holds its value in its first cell; the others are empty (exceljs reports the first cell's value for each).
+  if (cell.type === ExcelJS.ValueType.Merge) return null;
   const v = cell.value;
   if (v === null || v === undefined) return null;
   if (typeof v === 'number' || typeof v === 'boolean') return v;
@@ -156,7 +166,9 @@ function cellInput(cell: ExcelJS.Cell): unknown {
   if (typeof v === 'object') {
     if ('formula' in v || 'sharedFormula' in v) {
       const formula = cell.formula;
-      return formula ? `=${toEngineFormula(formula.replace(/^=/, ''))}` : null;
+      if (!formula) return null;
+      checkFormula(formula, where);
+      return `=${toEngineFormula(formula.replace(/^=/, ''))}`;
     }
     if ('richText' in v) return engineText(v.richText.map((r) => r.text).join(''));
     if ('error' in v) return v.error;
@@ -185,19 +197,61 @@ function arrayCovered(sheet: ExcelJS.Worksheet): Set<string> {
   return covered;
 }
 
-function gridOf(sheet: ExcelJS.Worksheet): Grid {
+function sheetInput(sheet: ExcelJS.Worksheet): SheetInput {
   const grid: Grid = [];
+  const cells: [number, number][] = [];
   const covered = arrayCovered(sheet);
   sheet.eachRow({ includeEmpty: false }, (row, rowNumber) => {
     row.eachCell({ includeEmpty: false }, (cell, colNumber) => {
       if (covered.has(`${rowNumber},${colNumber}`)) return;
-      const value = cellInput(cell);
+      const value = cellInput(cell, `${sheet.name}!${cell.address}`);
       if (value === null) return;
       (grid[rowNumber - 1] ??= [])[colNumber - 1] = value;
+      cells.push([rowNumber - 1, colNumber - 1]);
     });
   });
+  // The engine wants a row array for every row; rows stay sparse, so a value in the last cell costs one row array per row, not a grid.
   for (let r = 0; r < grid.length; r++) grid[r] ??= [];
-  return grid;
+  return { grid, cells };
+}
+
+/** A CSV file's cells for the engine, each field within Excel's limits. */
+function csvSheetInput(text: string): SheetInput {
+  const rows = parseCsv(text);
+  const cells: [number, number][] = [];
+  const grid = rows.map((row, r) =>
+    row.map((field, c) => {
+      if (field === '') return null;
+      if (cells.length >= MAX_CELLS) throw new InputRefused(CALC_MESSAGES.tooManyFields(cells.length + 1, MAX_CELLS));
+      const where = `${columnLetters(c)}${r + 1} of the CSV file`;
+      if (field.length > MAX_CELL_CHARS) throw new InputRefused(CALC_MESSAGES.textTooLong(where, field.length, MAX_CELL_CHARS));
+      if (field.startsWith('=')) checkFormula(field, where);
+      cells.push([r, c]);
+      return csvInput(field);
+    }),
+  );
+  return { grid, cells };
+}
+
+/**
+ * Every cell calc must read back: each non-empty input cell and each cell an array result
+ * spills into (found by walking from its formula along the spill), never the whole grid
+ * (a value in XFD1048576 would make that seventeen billion cells).
+ */
+function engineCells(hf: HyperFormula, sheet: number, input: SheetInput): [number, number][] {
+  const out: [number, number][] = [];
+  const spilled = (row: number, col: number) => hf.isCellPartOfArray({ sheet, row, col }) && !hf.doesCellHaveFormula({ sheet, row, col });
+  for (const [row, col] of input.cells) {
+    out.push([row, col]);
+    const address = { sheet, row, col };
+    if (!hf.doesCellHaveFormula(address) || !hf.isCellPartOfArray(address)) continue;
+    let width = 1;
+    while (col + width < MAX_COLUMNS && spilled(row, col + width)) width++;
+    let height = 1;
+    while (row + height < MAX_ROWS && spilled(row + height, col)) height++;
+    for (let r = row; r < row + height; r++) for (let c = col; c < col + width; c++) if (r !== row || c !== col) out.push([r, c]);
+  }
+  return out;
 }
 
 /** Splits CSV text (RFC 4180: quotes, doubled quotes, CRLF) into rows of strings. */
@@ -253,37 +307,69 @@ function csvField(value: unknown): string {
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
-function recordErrors(hf: HyperFormula, sheetId: number, sheetName: string, errors: CalcError[]): number {
+function recordErrors(hf: HyperFormula, sheetId: number, sheetName: string, cells: readonly (readonly [number, number])[], errors: CalcError[]): number {
   let formulas = 0;
-  const values = hf.getSheetValues(sheetId);
-  values.forEach((row, r) =>
-    row.forEach((value, c) => {
-      const address = { sheet: sheetId, row: r, col: c };
-      if (hf.doesCellHaveFormula(address)) formulas++;
-      if (value instanceof DetailedCellError) errors.push({ cell: `${sheetName}!${columnLetters(c)}${r + 1}`, value: value.value, message: value.message });
-    }),
-  );
+  const found: { row: number; col: number; error: DetailedCellError }[] = [];
+  for (const [row, col] of cells) {
+    const address = { sheet: sheetId, row, col };
+    if (hf.doesCellHaveFormula(address)) formulas++;
+    const value = hf.getCellValue(address);
+    if (value instanceof DetailedCellError) found.push({ row, col, error: value });
+  }
+  // Row by row, as a reader scans the sheet.
+  found.sort((a, b) => a.row - b.row || a.col - b.col);
+  for (const { row, col, error } of found) errors.push({ cell: `${sheetName}!${columnLetters(col)}${row + 1}`, value: error.value, message: error.message });
   return formulas;
 }
 
 /** Writes computed values over formulas (and into spill ranges) of an exceljs sheet. */
-function fillSheet(hf: HyperFormula, sheetId: number, sheet: ExcelJS.Worksheet, everyCell: boolean): void {
-  const values = hf.getSheetValues(sheetId);
-  values.forEach((row, r) =>
-    row.forEach((value, c) => {
-      const address = { sheet: sheetId, row: r, col: c };
-      if (!everyCell && !hf.doesCellHaveFormula(address) && !hf.isCellPartOfArray(address)) return;
-      if (value === null && everyCell) return;
-      const cell = sheet.getCell(r + 1, c + 1);
-      if (value instanceof DetailedCellError) {
-        cell.value = { error: (XLSX_ERRORS.has(value.value) ? value.value : '#VALUE!') as ExcelJS.CellErrorValue['error'] };
-        cell.note = value.message ? `${value.value} ${value.message}` : value.value;
-      } else {
-        // A string is stored as text by exceljs, never as a formula, whatever its first character.
-        cell.value = value === null ? null : (value as number | string | boolean);
+function fillSheet(hf: HyperFormula, sheetId: number, sheet: ExcelJS.Worksheet, cells: readonly (readonly [number, number])[], everyCell: boolean): void {
+  for (const [r, c] of cells) {
+    const address = { sheet: sheetId, row: r, col: c };
+    if (!everyCell && !hf.doesCellHaveFormula(address) && !hf.isCellPartOfArray(address)) continue;
+    const value = hf.getCellValue(address);
+    if (value === null && everyCell) continue;
+    const cell = sheet.getCell(r + 1, c + 1);
+    if (value instanceof DetailedCellError) {
+      cell.value = { error: (XLSX_ERRORS.has(value.value) ? value.value : '#VALUE!') as ExcelJS.CellErrorValue['error'] };
+      cell.note = value.message ? `${value.value} ${value.message}` : value.value;
+    } else {
+      // A string is stored as text by exceljs, never as a formula, whatever its first character.
+      cell.value = value === null ? null : (value as number | string | boolean);
+    }
+  }
+}
+
+/**
+ * Reads the input within calc's limits: the file's size first, a workbook's package before
+ * the reader sees it (calcLimits.ts), a CSV file's fields as they are split.
+ */
+async function readInput(input: string, isWorkbook: boolean): Promise<{ workbook: ExcelJS.Workbook; sheets: Record<string, SheetInput> }> {
+  try {
+    const size = statSync(input).size;
+    if (size > MAX_FILE_BYTES) throw new InputRefused(CALC_MESSAGES.fileTooLarge(input, size, MAX_FILE_BYTES));
+    const workbook = new ExcelJS.Workbook();
+    const sheets: Record<string, SheetInput> = {};
+    if (isWorkbook) {
+      const buf = readFileSync(input);
+      checkWorkbookPackage(buf, input);
+      try {
+        await workbook.xlsx.load(buf as unknown as ArrayBuffer);
+      } catch (e) {
+        throw new InputRefused(CALC_MESSAGES.notAWorkbook(input, (e as Error).message));
       }
-    }),
-  );
+      if (workbook.worksheets.length === 0) throw new InputRefused(CALC_MESSAGES.noSheets(input));
+      workbook.eachSheet((ws) => (sheets[ws.name] = sheetInput(ws)));
+    } else {
+      workbook.addWorksheet('Sheet1');
+      sheets.Sheet1 = csvSheetInput(readFileSync(input, 'utf8').replace(/^\uFEFF/, ''));
+    }
+    return { workbook, sheets };
+  } catch (e) {
+    if (e instanceof InputRefused) throw new CalcFailure(e.message, 'input');
+    if (e instanceof CalcFailure) throw e;
+    throw new CalcFailure(CALC_MESSAGES.cannotRead(input, (e as NodeJS.ErrnoException).code ?? (e as Error).message), 'input');
+  }
 }
 
 /**
@@ -299,31 +385,29 @@ export async function calcFile(input: string, output: string, options: CalcOptio
   const outExt = extname(output).toLowerCase();
   if (!['.xlsx', '.csv'].includes(inExt) || !['.xlsx', '.csv'].includes(outExt)) throw new CalcFailure(`calc reads and writes .xlsx or .csv files.\n${USAGE}`, ['.xlsx', '.csv'].includes(inExt) ? 'output' : 'input');
   checkOutput(input, output, force);
-  let workbook: ExcelJS.Workbook;
-  if (inExt === '.xlsx') {
-    workbook = new ExcelJS.Workbook();
-    await workbook.xlsx.readFile(input);
-  } else {
-    workbook = new ExcelJS.Workbook();
-    workbook.addWorksheet('Sheet1');
-  }
-  const sheets: Record<string, Grid> = {};
-  if (inExt === '.xlsx') workbook.eachSheet((ws) => (sheets[ws.name] = gridOf(ws)));
-  else sheets.Sheet1 = parseCsv(readFileSync(input, 'utf8').replace(/^\uFEFF/, '')).map((row) => row.map(csvInput));
-  const hf = createFormulaEngine(sheets, { maxRows: 1048576, maxColumns: 16384 });
+  const { workbook, sheets } = await readInput(input, inExt === '.xlsx');
+  const grids: Record<string, Grid> = {};
+  for (const [name, sheet] of Object.entries(sheets)) grids[name] = sheet.grid;
+  // Sparse address maps: the engine's dense maps take memory for the whole span of a sheet, so a value in XFD1048576 asked it for gigabytes.
+  const hf = createFormulaEngine(grids, { maxRows: MAX_ROWS, maxColumns: MAX_COLUMNS, chooseAddressMappingPolicy: new AlwaysSparse() });
+  for (const sheet of Object.values(sheets)) sheet.grid = [];
+  for (const name of Object.keys(grids)) delete grids[name];
   try {
     const errors: CalcError[] = [];
     let formulas = 0;
     const names = Object.keys(sheets);
-    for (const name of names) formulas += recordErrors(hf, hf.getSheetId(name)!, name, errors);
+    const cells = new Map(names.map((name) => [name, engineCells(hf, hf.getSheetId(name)!, sheets[name])]));
+    for (const name of names) formulas += recordErrors(hf, hf.getSheetId(name)!, name, cells.get(name)!, errors);
     if (outExt === '.xlsx') {
       // A workbook keeps its cells and styles, formulas replaced; CSV input has no cells yet, so every value is written.
-      for (const name of names) fillSheet(hf, hf.getSheetId(name)!, workbook.getWorksheet(name)!, inExt === '.csv');
+      for (const name of names) fillSheet(hf, hf.getSheetId(name)!, workbook.getWorksheet(name)!, cells.get(name)!, inExt === '.csv');
       writeFileAtomically(output, new Uint8Array(await workbook.xlsx.writeBuffer()), force);
     } else {
       const name = sheetName ?? names[0];
       const id = hf.getSheetId(name);
       if (id === undefined) throw new CalcFailure(`No sheet named "${name}"; the workbook has ${names.map((n) => `"${n}"`).join(', ')}.`, 'sheet');
+      const { width, height } = hf.getSheetDimensions(id);
+      if (width * height > MAX_CELLS) throw new CalcFailure(CALC_MESSAGES.csvTooLarge(name, height, width, MAX_CELLS), 'output');
       writeFileAtomically(output, hf.getSheetValues(id).map((row) => row.map(csvField).join(',')).join('\r\n') + '\r\n', force);
     }
     return { output, sheets: names, formulas, errors };

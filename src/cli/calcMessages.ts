@@ -20,25 +20,31 @@ export const CALC_MESSAGES = {
   unpackedTooLarge: (input: string, part: string, limit: number) =>
     `${input}: the part ${part} unpacks to more than ${mb(limit)}; calc unpacks up to ${mb(limit)} per workbook.`,
   tooManyCells: (sheet: string, cells: number, limit: number) =>
-    `Sheet "${sheet}" uses more than ${count(limit)} cells (at least ${count(cells)}); calc evaluates up to ${count(limit)} cells per workbook.`,
+    `Sheet "${sheet}" brings the workbook to more than ${count(limit)} cells with content (at least ${count(cells)}); calc evaluates up to ${count(limit)} cells per workbook.`,
   cellOutsideSheet: (sheet: string, address: string) =>
     `Sheet "${sheet}" has a cell at ${address}, beyond the last cell of a worksheet (XFD1048576).`,
   areaTooLarge: (sheet: string, what: string, range: string, cells: number, limit: number) =>
-    `Sheet "${sheet}": the ${what} over ${range} covers ${count(cells)} cells; calc handles a ${what} over up to ${count(limit)} cells.`,
-  textTooLong: (sheet: string, where: string, length: number, limit: number) =>
-    `Sheet "${sheet}"${where}: a text of ${count(length)} characters; a cell holds up to ${count(limit)} characters.`,
+    `Sheet "${sheet}": the ${what} over ${range} covers ${count(cells)} cells; calc reads data-validation rules and array formulas covering up to ${count(limit)} cells in all.`,
+  mergedTooLarge: (sheet: string, range: string, cells: number, limit: number) =>
+    `Sheet "${sheet}": the merged range ${range} covers ${count(cells)} cells; calc reads merged ranges covering up to ${count(limit)} cells in all.`,
+  textTooLong: (where: string, length: number, limit: number) =>
+    `${where}: a text of ${count(length)} characters; a cell holds up to ${count(limit)} characters.`,
   formulaTooLong: (where: string, length: number, limit: number) =>
     `${where}: a formula of ${count(length)} characters; a formula may have up to ${count(limit)} characters.`,
   formulaTooDeep: (where: string, depth: number, limit: number) =>
     `${where}: a formula nested ${count(depth)} levels deep; a formula may nest up to ${limit} levels.`,
+  formulaTooManyOperators: (where: string, operators: number, limit: number) =>
+    `${where}: a formula with ${count(operators)} operators; calc evaluates formulas with up to ${count(limit)} (split it over several cells).`,
   sheetOutsidePackage: (input: string, sheet: string, target: string) =>
     `${input}: the sheet "${sheet}" points to ${target}, outside the workbook's package; the workbook is damaged or not made by a spreadsheet program.`,
   sheetMissing: (input: string, sheet: string, target: string) =>
     `${input}: the sheet "${sheet}" points to ${target}, which the package does not hold; the workbook is damaged.`,
   noSheets: (input: string) =>
     `${input} holds no worksheets.`,
-  tooManyFields: (rows: number, limit: number) =>
-    `The CSV file has more than ${count(limit)} fields (at least ${count(rows)}); calc evaluates up to ${count(limit)} cells.`,
+  tooManyFields: (fields: number, limit: number) =>
+    `The CSV file has more than ${count(limit)} fields (at least ${count(fields)}); calc evaluates up to ${count(limit)} cells.`,
+  csvTooLarge: (sheet: string, rows: number, columns: number, limit: number) =>
+    `Sheet "${sheet}" spans ${count(rows)} rows by ${count(columns)} columns; calc writes CSV of up to ${count(limit)} cells (write .xlsx instead).`,
 } as const;
 
 function mb(bytes: number): string {
