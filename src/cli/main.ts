@@ -21,7 +21,7 @@ const USAGE = `Usage:
   proton-ledger recipe [--json '<recipe JSON>'] [--text]         plan a buffer: amounts, bench steps, meter reading, predictions
   proton-ledger substances [--json]                              list the substance library (a table, or JSON)
   proton-ledger demo [--pretty]                                  solve the demo composition (our QC lab's HEPES saline)
-  proton-ledger calc <book.xlsx|.csv> -o <filled.xlsx|.csv>      evaluate a workbook's formulas (PROTON functions included), write values
+  proton-ledger calc <book.xlsx|.csv> -o <filled.xlsx|.csv> [--force]  evaluate a workbook's formulas (PROTON functions included), write values
   proton-ledger help                                             this text`;
 
 /** A failure to report as JSON with an exit code. */
