@@ -14,7 +14,7 @@ import { mkdtempSync, rmSync, statSync, writeFileSync } from 'fs';
 import { tmpdir } from 'os';
 import { join } from 'path';
 import { randomBytes } from 'crypto';
-import { MAX_CELLS } from '../src/cli/calcLimits';
+import { MAX_CELLS, MAX_REFERENCED_CELLS } from '../src/cli/calcLimits';
 import { cell, row, workbookParts, zip } from '../test/support/craftWorkbook';
 
 const RSS_LIMIT_MB = 1024;
@@ -46,10 +46,14 @@ const cases: Case[] = [
   ['a merge over C1:XFD1048576', 'xlsx', () => zip(workbookParts([{ data: formulaCell, after: '<mergeCells count="1"><mergeCell ref="C1:XFD1048576"/></mergeCells>' }]))],
   ['merges over 49,152 cells (three full rows; the limit is 50,000)', 'xlsx', () => zip(workbookParts([{ data: formulaCell, after: '<mergeCells count="1"><mergeCell ref="A3:XFD5"/></mergeCells>' }]))],
   [
-    'every limit at once: the most cells, merges, one validated column',
+    'every limit at once: the most cells, merges, one validated column, ranges',
     'xlsx',
-    () => zip(workbookParts([{ data: denseSheet(CELLS), after: '<mergeCells count="1"><mergeCell ref="L1:XFD3"/></mergeCells><dataValidations count="1"><dataValidation type="whole" sqref="K1:K1048576"><formula1>1</formula1></dataValidation></dataValidations>' }])),
+    () =>
+      zip(workbookParts([{ data: denseSheet(CELLS - 1) + row(Math.ceil(CELLS / 10) + 1, cell(`L${Math.ceil(CELLS / 10) + 1}`, { f: `SUM(M1:M${MAX_REFERENCED_CELLS})` })), after: '<mergeCells count="1"><mergeCell ref="L1:XFD3"/></mergeCells><dataValidations count="1"><dataValidation type="whole" sqref="K1:K1048576"><formula1>1</formula1></dataValidation></dataValidations>' }])),
   ],
+  ['a formula reading C1:C1048576', 'xlsx', () => zip(workbookParts([{ data: row(1, cell('A1', { n: 2 }) + cell('B1', { f: 'SUM(C1:C1048576)' })) }]))],
+  ['a formula filled down 1,000 rows, each reading 100,000 cells', 'xlsx', () => zip(workbookParts([{ data: row(1, cell('A1', { n: 2 }) + '<c r="B1"><f t="shared" ref="B1:B1000" si="0">SUM(C1:C100000)</f></c>') }]))],
+  ['ranges up to the limit: a formula reading 100,000 cells', 'xlsx', () => zip(workbookParts([{ data: row(1, cell('A1', { n: 2 }) + cell('B1', { f: `SUM(C1:C${MAX_REFERENCED_CELLS})` })) }]))],
   ['a data-validation rule over the whole sheet', 'xlsx', () => zip(workbookParts([{ data: formulaCell, after: '<dataValidations count="1"><dataValidation type="whole" sqref="A1:XFD1048576"><formula1>1</formula1></dataValidation></dataValidations>' }]))],
   ['a data-validation rule over one whole column (the limit)', 'xlsx', () => zip(workbookParts([{ data: formulaCell, after: '<dataValidations count="1"><dataValidation type="whole" sqref="C1:C1048576"><formula1>1</formula1></dataValidation></dataValidations>' }]))],
   ['a 200 MB text cell in a small file', 'xlsx', () => zip(workbookParts([{ data: row(1, cell('A1', { text: 'x'.repeat(200 * MB) })) }]))],

@@ -27,7 +27,7 @@ import { AlwaysSparse, DetailedCellError, HyperFormula } from 'hyperformula';
 import { createFormulaEngine, toEngineFormula } from '../functions/formulaEngine';
 import { literal } from '../workbook/port';
 import { CALC_MESSAGES } from './calcMessages';
-import { InputRefused, MAX_CELL_CHARS, MAX_CELLS, MAX_COLUMNS, MAX_FILE_BYTES, MAX_ROWS, checkFormula, checkWorkbookPackage } from './calcLimits';
+import { InputRefused, MAX_CELL_CHARS, MAX_CELLS, MAX_COLUMNS, MAX_FILE_BYTES, MAX_ROWS, RangeBudget, checkFormula, checkWorkbookPackage } from './calcLimits';
 
 const USAGE = 'Usage: proton-ledger calc <input.xlsx|input.csv> -o <output.xlsx|output.csv> [--sheet NAME] [--force]';
 
@@ -219,13 +219,17 @@ function sheetInput(sheet: ExcelJS.Worksheet): SheetInput {
 function csvSheetInput(text: string): SheetInput {
   const rows = parseCsv(text);
   const cells: [number, number][] = [];
+  const ranges = new RangeBudget();
   const grid = rows.map((row, r) =>
     row.map((field, c) => {
       if (field === '') return null;
       if (cells.length >= MAX_CELLS) throw new InputRefused(CALC_MESSAGES.tooManyFields(cells.length + 1, MAX_CELLS));
       const where = `${columnLetters(c)}${r + 1} of the CSV file`;
       if (field.length > MAX_CELL_CHARS) throw new InputRefused(CALC_MESSAGES.textTooLong(where, field.length, MAX_CELL_CHARS));
-      if (field.startsWith('=')) checkFormula(field, where);
+      if (field.startsWith('=')) {
+        checkFormula(field, where);
+        ranges.count(field, where);
+      }
       cells.push([r, c]);
       return csvInput(field);
     }),

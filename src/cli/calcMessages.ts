@@ -35,6 +35,8 @@ export const CALC_MESSAGES = {
     `${where}: a formula nested ${count(depth)} levels deep; a formula may nest up to ${limit} levels.`,
   formulaTooManyOperators: (where: string, operators: number, limit: number) =>
     `${where}: a formula with ${count(operators)} operators; calc evaluates formulas with up to ${count(limit)} (split it over several cells).`,
+  rangesTooLarge: (where: string, range: string, cells: number, limit: number) =>
+    `${where}: the range ${range} (${count(cells)} cells) brings the cells read through ranges past ${count(limit)}, what calc evaluates; refer to whole columns as A:A, which costs nothing.`,
   sheetOutsidePackage: (input: string, sheet: string, target: string) =>
     `${input}: the sheet "${sheet}" points to ${target}, outside the workbook's package; the workbook is damaged or not made by a spreadsheet program.`,
   sheetMissing: (input: string, sheet: string, target: string) =>
