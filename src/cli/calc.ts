@@ -356,13 +356,16 @@ async function readInput(input: string, isWorkbook: boolean): Promise<{ workbook
     const sheets: Record<string, SheetInput> = {};
     if (isWorkbook) {
       const buf = readFileSync(input);
-      checkWorkbookPackage(buf, input);
+      const listed = checkWorkbookPackage(buf, input);
       try {
         await workbook.xlsx.load(buf as unknown as ArrayBuffer);
       } catch (e) {
         throw new InputRefused(CALC_MESSAGES.notAWorkbook(input, (e as Error).message));
       }
       if (workbook.worksheets.length === 0) throw new InputRefused(CALC_MESSAGES.noSheets(input));
+      const read = new Set(workbook.worksheets.map((ws) => ws.name));
+      const lost = listed.filter((name) => !read.has(name));
+      if (lost.length > 0) throw new InputRefused(CALC_MESSAGES.sheetNotRead(input, lost));
       workbook.eachSheet((ws) => (sheets[ws.name] = sheetInput(ws)));
     } else {
       workbook.addWorksheet('Sheet1');

@@ -365,9 +365,10 @@ function resolveTarget(base: string, target: string): string | undefined {
  *
  * @param buf - the whole .xlsx file
  * @param input - its path, for messages
+ * @returns the names of its worksheets, as the workbook lists them (to check the reader kept every one)
  * @throws InputRefused with the first limit passed, or the reason the package cannot be a workbook
  */
-export function checkWorkbookPackage(buf: Buffer, input: string): void {
+export function checkWorkbookPackage(buf: Buffer, input: string): string[] {
   if (buf.length > MAX_FILE_BYTES) throw new InputRefused(CALC_MESSAGES.fileTooLarge(input, buf.length, MAX_FILE_BYTES));
   const entries = readDirectory(buf, input).filter((e) => !e.name.endsWith('/'));
   const byName = new Map(entries.map((e) => [e.name.replace(/^\//, ''), e]));
@@ -378,13 +379,14 @@ export function checkWorkbookPackage(buf: Buffer, input: string): void {
   // Sheet names, and the part each points to.
   const workbook = small('xl/workbook.xml');
   if (workbook === undefined) throw new InputRefused(CALC_MESSAGES.notAWorkbook(input, 'no xl/workbook.xml'));
-  const rels = new Map<string, { target: string; external: boolean }>();
+  const rels = new Map<string, { target: string; external: boolean; worksheet: boolean }>();
   for (const m of (small('xl/_rels/workbook.xml.rels') ?? '').matchAll(/<Relationship\b([^<>]*)>/g)) {
     const id = attribute(m[1], 'Id');
     const target = attribute(m[1], 'Target');
-    if (id !== undefined && target !== undefined) rels.set(id, { target: decodeXml(target), external: /\sTargetMode="External"/.test(m[1]) });
+    if (id !== undefined && target !== undefined) rels.set(id, { target: decodeXml(target), external: /\sTargetMode="External"/.test(m[1]), worksheet: /\sType="[^"]*\/worksheet"/.test(m[1]) });
   }
   const sheetOfPart = new Map<string, string>();
+  const worksheets: string[] = [];
   for (const m of workbook.matchAll(/<sheet\b([^<>]*)>/g)) {
     const name = decodeXml(attribute(m[1], 'name') ?? `sheet ${sheetOfPart.size + 1}`);
     const link = rels.get(/\s[A-Za-z0-9]+:id="([^"]*)"/.exec(m[1])?.[1] ?? '');
@@ -392,6 +394,9 @@ export function checkWorkbookPackage(buf: Buffer, input: string): void {
     const part = link.external || /^[a-z][a-z0-9+.-]*:/i.test(link.target) ? undefined : resolveTarget('xl/workbook.xml', link.target);
     if (part === undefined) throw new InputRefused(CALC_MESSAGES.sheetOutsidePackage(input, name, link.target));
     if (!byName.has(part)) throw new InputRefused(CALC_MESSAGES.sheetMissing(input, name, link.target));
+    // The reader takes worksheets only from parts named like xl/worksheets/sheet3.xml and drops any other without a word.
+    if (link.worksheet && !WORKSHEET_PART.test(part)) throw new InputRefused(CALC_MESSAGES.sheetUnreadable(input, name, part));
+    if (link.worksheet) worksheets.push(name);
     sheetOfPart.set(part, name);
   }
   if (sheetOfPart.size === 0) throw new InputRefused(CALC_MESSAGES.noSheets(input));
@@ -406,4 +411,5 @@ export function checkWorkbookPackage(buf: Buffer, input: string): void {
     if (name === 'xl/sharedStrings.xml') scanSharedStrings(data);
     else if (WORKSHEET_PART.test(name)) scanSheet(data, sheetOfPart.get(name) ?? name, totals);
   }
+  return worksheets;
 }

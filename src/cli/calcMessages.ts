@@ -41,6 +41,10 @@ export const CALC_MESSAGES = {
     `${input}: the sheet "${sheet}" points to ${target}, outside the workbook's package; the workbook is damaged or not made by a spreadsheet program.`,
   sheetMissing: (input: string, sheet: string, target: string) =>
     `${input}: the sheet "${sheet}" points to ${target}, which the package does not hold; the workbook is damaged.`,
+  sheetUnreadable: (input: string, sheet: string, part: string) =>
+    `${input}: the sheet "${sheet}" is stored as ${part}; calc reads worksheets stored as xl/worksheets/sheet<number>.xml (save the workbook again from a spreadsheet program).`,
+  sheetNotRead: (input: string, sheets: readonly string[]) =>
+    `${input}: the sheet(s) ${sheets.map((s) => `"${s}"`).join(', ')} could not be read; nothing was written.`,
   noSheets: (input: string) =>
     `${input} holds no worksheets.`,
   tooManyFields: (fields: number, limit: number) =>

@@ -206,6 +206,19 @@ describe('the package itself', () => {
     await refused(book([{ data: twoCells, ...link }]), pattern);
   });
 
+  it('a sheet stored under a part name the reader skips: an error, not a sheet silently dropped', async () => {
+    const parts = workbookParts([{ data: twoCells }, { data: row(1, cell('A1', { f: 'Sheet1!B1+1' })), target: 'worksheets/data.xml' }]).map((p) =>
+      p.name === 'xl/worksheets/sheet2.xml' ? { ...p, name: 'xl/worksheets/data.xml' } : p,
+    );
+    await refused(zip(parts), /the sheet "Sheet2" is stored as xl\/worksheets\/data\.xml; calc reads worksheets stored as xl\/worksheets\/sheet<number>\.xml/);
+  });
+
+  it('sheet names with escaped characters are matched as the reader reads them', async () => {
+    const { code, out, output } = await calc(book([{ name: 'R&amp;D &lt;cold&gt;', data: twoCells }, { data: row(1, cell('A1', { f: "'R&amp;D &lt;cold&gt;'!B1+1" })) }]));
+    expect([code, out.sheets]).toEqual([0, ['R&D <cold>', 'Sheet2']]);
+    expect(await valueOf(output, 'A1', 1)).toBe(43);
+  });
+
   it('a workbook with no sheets: an error', async () => {
     const parts = workbookParts([{ data: twoCells }]).map((p) => (p.name === 'xl/workbook.xml' ? { ...p, data: String(p.data).replace(/<sheet [^>]*\/>/, '') } : p));
     await refused(zip(parts), /holds no worksheets/);
