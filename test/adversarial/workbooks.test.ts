@@ -10,6 +10,7 @@ import { tmpdir } from 'os';
 import { join } from 'path';
 import ExcelJS from 'exceljs';
 import { main } from '../../src/cli/main';
+import { parseCsv } from '../../src/cli/calc';
 import { MAX_CELL_CHARS, MAX_CELLS, MAX_FORMULA_CHARS, MAX_FORMULA_DEPTH, MAX_FORMULA_OPERATORS, MAX_MERGED_CELLS, rangeCells } from '../../src/cli/calcLimits';
 import { cell, Part, repeated, row, SHEET_HEAD, SHEET_TAIL, SheetSpec, workbookParts, zip } from '../support/craftWorkbook';
 
@@ -255,6 +256,16 @@ describe('the package itself', () => {
 });
 
 describe('CSV input', () => {
+  it.each([
+    ['quotes, doubled quotes, CRLF, LF and CR', 'a,"b,""c""",d\r\ne\nf\rg', [['a', 'b,"c"', 'd'], ['e'], ['f'], ['g']]],
+    ['a quote in the middle of a field opens quoted text', 'x"y,z"w,v\n', [['xy,zw', 'v']]],
+    ['an unterminated quote runs to the end', 'a,"b\nc', [['a', 'b\nc']]],
+    ['empty fields and a trailing separator', ',,\r\n,', [['', '', ''], ['', '']]],
+    ['20 MB in one quoted field', `"${'q'.repeat(20 * MB)}`, [['q'.repeat(20 * MB)]]],
+  ])('splits %s', (_label, text, rows) => {
+    expect(parseCsv(text)).toEqual(rows);
+  });
+
   it.each([
     ['a field of 40,000 characters', `a,${'b'.repeat(40_000)}\r\n`, /B1 of the CSV file: a text of 40,000 characters/],
     ['a formula of 9,000 characters', `1,=${'1+'.repeat(4500)}1\r\n`, /B1 of the CSV file: a formula of 9,002 characters/],
