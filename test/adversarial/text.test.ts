@@ -61,6 +61,13 @@ describe('"did you mean" on long names', () => {
     expectClearError(error, /is not in the substance library/);
   });
 
+  it('a name of 16,000 blanks, an x and 16,000 blanks more is keyed in linear time, and blanks never change a key', () => {
+    const { value, ms } = timed(() => nameKey(`Na2HPO4${' '.repeat(16_000)}x${' '.repeat(16_000)}7H2O`));
+    expect(ms).toBeLessThan(LINEAR_BOUND_MS);
+    expect(value).toBe(nameKey('Na2HPO4·7H2O'));
+    expect(nameKey('tris\t\tbase')).toBe(nameKey('tris base'));
+  });
+
   it('a bounded edit distance agrees with the full one up to the bound', () => {
     expect(editDistance('hepes', 'hpees')).toBe(1);
     expect(editDistance('hepes', 'hpees', 0)).toBe(1);

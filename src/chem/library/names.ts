@@ -28,6 +28,7 @@ const HYDRATE_WORDS: Readonly<Record<string, number>> = {
  * @example nameKey('Na2HPO4 x 7H2O') // 'na2hpo4·7h2o', as for 'Na2HPO4*7H2O' and 'Na2HPO4·7H2O'
  */
 export function nameKey(name: string): string {
+  if (name.length > KEY_CACHE_NAME_LENGTH) return computeNameKey(name);
   const cached = KEY_CACHE.get(name);
   if (cached !== undefined) return cached;
   const key = computeNameKey(name);
@@ -40,10 +41,15 @@ export function nameKey(name: string): string {
 
 /** Most names whose keys are remembered at once. */
 const KEY_CACHE_LIMIT = 5000;
+/** Longest name whose key is remembered: no name in the library comes near it, and 5000 full cells of text would hold 300 MB. */
+const KEY_CACHE_NAME_LENGTH = 256;
 const KEY_CACHE = new Map<string, string>();
 
 function computeNameKey(name: string): string {
-  let s = name.normalize('NFKC').toLowerCase().trim();
+  // Runs of blanks become one first: the patterns below allow blanks between a formula and
+  // its water, and on a long run of blanks they would try every split of it (a 32,767-character
+  // name took 0.7 s). The blanks are all removed at the end, so the key is the same.
+  let s = name.normalize('NFKC').toLowerCase().trim().replace(/\s+/g, ' ');
   s = s.replace(/[•∙⋅*×]/g, '·');
   s = s.replace(/([a-z)\]\d])\s*[x·]\s*(\d+(?:\.\d+)?)?\s*h2o\b/g, (_m, before: string, n?: string) => `${before}·${n ?? '1'}h2o`);
   s = s.replace(/([a-z)\]\d])\s+(\d+(?:\.\d+)?)\s*h2o\b/g, (_m, before: string, n: string) => `${before}·${n}h2o`);
