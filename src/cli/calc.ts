@@ -314,12 +314,15 @@ export function parseCsv(text: string): string[][] {
   return rows;
 }
 
+/** A plain number as CSV writes it; no two parts can match the same digits, so it reads in one pass (30,000 digits then a letter took 1.7 s with "\d+\.?\d*"). */
+const PLAIN_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
+
 /** A CSV field for the engine: "=…" is a formula, "'…" literal text, a plain number a number, anything else text. */
 function csvInput(field: string): unknown {
   if (field === '') return null;
   if (field.startsWith('=')) return `=${toEngineFormula(field.slice(1))}`;
   if (field.startsWith("'")) return engineText(field.slice(1));
-  if (/^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(field.trim())) return Number(field);
+  if (PLAIN_NUMBER.test(field.trim())) return Number(field);
   return engineText(field);
 }
 
