@@ -4,7 +4,7 @@
  */
 export { ACTIVITY_MODELS, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, apparentPKa, ionicStrengthFactor, log10Gamma } from './activity';
 export type { ActivityModel } from './activity';
-export { MAX_CONCENTRATION_M, MAX_TEMPERATURE_C, MIN_TEMPERATURE_C, FITTED_RANGE_MAX_C, prepare, systemAt, withConditions } from './composition';
+export { MAX_CONCENTRATION_M, MAX_STEPS, MAX_TEMPERATURE_C, MIN_TEMPERATURE_C, FITTED_RANGE_MAX_C, prepare, systemAt, withConditions } from './composition';
 export type { AcidBaseChemistry, AcidBaseStep, AcidBaseSystem, Composition } from './composition';
 export { BUFFERING_HALF_WIDTH, metalComplexWarning, solutionWarnings, weakBufferingWarning } from './checks';
 export { ChemError, MESSAGES } from './errors';

@@ -6,20 +6,113 @@
  *   proton-ledger calc book.xlsx -o filled.xlsx
  *   proton-ledger calc book.csv -o filled.csv      (also .xlsx → .csv and .csv → .xlsx)
  *   proton-ledger calc book.xlsx -o sheet2.csv --sheet "Sheet 2"
+ *   proton-ledger calc book.xlsx -o filled.xlsx --force   (replace an existing filled.xlsx)
+ *
+ * Files: the output is never the input (compared by real path and by file identity, so
+ * `./book.xlsx`, a symbolic or a hard link are caught), an existing output is replaced only
+ * with --force, and every output is written to a temporary file in the same directory and
+ * then renamed over the name, so an interrupted run leaves the old file or the new one,
+ * never half of either.
  *
  * Reading: exceljs. Evaluating: HyperFormula with the PROTON functions (formulaEngine.ts).
  * Writing: values only; a spreadsheet error becomes the error value with its message in a
  * cell note. Text is always written as text: a value beginning with = + - @ never becomes
  * a formula (in CSV it is prefixed with an apostrophe, as spreadsheet programs expect).
  */
-import { readFileSync, writeFileSync } from 'fs';
-import { extname } from 'path';
+import { randomBytes } from 'crypto';
+import { closeSync, fsyncSync, linkSync, lstatSync, openSync, readFileSync, realpathSync, renameSync, statSync, Stats, unlinkSync, writeSync } from 'fs';
+import { basename, dirname, extname, join, resolve } from 'path';
 import ExcelJS from 'exceljs';
-import { DetailedCellError, HyperFormula } from 'hyperformula';
+import { AlwaysSparse, DetailedCellError, HyperFormula } from 'hyperformula';
 import { createFormulaEngine, toEngineFormula } from '../functions/formulaEngine';
 import { literal } from '../workbook/port';
+import { CALC_MESSAGES } from './calcMessages';
+import { InputRefused, MAX_CELL_CHARS, MAX_CELLS, MAX_COLUMNS, MAX_FILE_BYTES, MAX_ROWS, RangeBudget, checkFormula, checkWorkbookPackage } from './calcLimits';
 
-const USAGE = 'Usage: proton-ledger calc <input.xlsx|input.csv> -o <output.xlsx|output.csv> [--sheet NAME]';
+const USAGE = 'Usage: proton-ledger calc <input.xlsx|input.csv> -o <output.xlsx|output.csv> [--sheet NAME] [--force]';
+
+/** A refusal of calc, reported as a JSON error naming the argument at fault. */
+export class CalcFailure extends Error {
+  constructor(message: string, readonly field: 'input' | 'output' | 'sheet' | 'usage') {
+    super(message);
+  }
+}
+
+/** How calc may treat its output file. */
+export interface CalcOptions {
+  /** For CSV output from a workbook: which sheet (default the first). */
+  readonly sheetName?: string;
+  /** Replace an existing output file (never the input). */
+  readonly force?: boolean;
+}
+
+function statOrUndefined(path: string, follow: boolean): Stats | undefined {
+  try {
+    return follow ? statSync(path) : lstatSync(path);
+  } catch {
+    return undefined;
+  }
+}
+
+/**
+ * Refuses an output that is the input — the same real path (`./book.xlsx`, a symbolic link)
+ * or the same file (device and inode: a hard link) — a directory, and, without force, any
+ * existing file or link.
+ */
+export function checkOutput(input: string, output: string, force: boolean): void {
+  const inputStat = statOrUndefined(input, true);
+  if (!inputStat) throw new CalcFailure(CALC_MESSAGES.cannotRead(input, 'no such file'), 'input');
+  if (inputStat.isDirectory()) throw new CalcFailure(CALC_MESSAGES.cannotRead(input, 'it is a directory'), 'input');
+  const outputStat = statOrUndefined(output, true);
+  if (outputStat?.isDirectory()) throw new CalcFailure(CALC_MESSAGES.outputIsDirectory(output), 'output');
+  const sameFile = outputStat !== undefined && outputStat.dev === inputStat.dev && outputStat.ino === inputStat.ino;
+  if (sameFile || (outputStat && realpathSync(output) === realpathSync(input))) throw new CalcFailure(CALC_MESSAGES.outputIsInput(output, input), 'output');
+  if (!force && statOrUndefined(output, false)) throw new CalcFailure(CALC_MESSAGES.outputExists(output), 'output');
+}
+
+/**
+ * Writes a file through a temporary file in the same directory, flushed to disk, then moved
+ * onto the name in one step (a rename; without force a hard link, which fails rather than
+ * replace a file that appeared meanwhile). On any failure the temporary file is removed and
+ * whatever was at the name is left as it was.
+ */
+export function writeFileAtomically(output: string, data: string | Uint8Array, force: boolean): void {
+  const temp = join(dirname(resolve(output)), `.${basename(output)}.${process.pid}.${randomBytes(6).toString('hex')}.tmp`);
+  let created = false;
+  try {
+    const fd = openSync(temp, 'wx', 0o666);
+    created = true;
+    try {
+      const bytes = typeof data === 'string' ? Buffer.from(data, 'utf8') : data;
+      for (let offset = 0; offset < bytes.length; ) offset += writeSync(fd, bytes, offset, bytes.length - offset);
+      fsyncSync(fd);
+    } finally {
+      closeSync(fd);
+    }
+    if (force) renameSync(temp, output);
+    else {
+      try {
+        linkSync(temp, output);
+      } catch (e) {
+        if ((e as NodeJS.ErrnoException).code === 'EEXIST') throw new CalcFailure(CALC_MESSAGES.outputExists(output), 'output');
+        // A file system without hard links: the check before writing has to do.
+        if (statOrUndefined(output, false)) throw new CalcFailure(CALC_MESSAGES.outputExists(output), 'output');
+        renameSync(temp, output);
+      }
+    }
+  } catch (e) {
+    if (e instanceof CalcFailure) throw e;
+    throw new CalcFailure(CALC_MESSAGES.cannotWrite(output, (e as NodeJS.ErrnoException).code ?? (e as Error).message), 'output');
+  } finally {
+    if (created) {
+      try {
+        unlinkSync(temp);
+      } catch {
+        // Already renamed onto the output.
+      }
+    }
+  }
+}
 
 /** Error values a .xlsx cell can hold; others from the engine are written as #VALUE! with a note. */
 const XLSX_ERRORS = new Set(['#N/A', '#REF!', '#NAME?', '#DIV/0!', '#NULL!', '#VALUE!', '#NUM!']);
@@ -44,6 +137,13 @@ export interface CalcSummary {
 
 type Grid = unknown[][];
 
+/** A sheet's cells for the engine, and where its non-empty cells are (so nothing else is ever visited). */
+interface SheetInput {
+  /** Emptied once the engine holds the cells, so the two copies are never kept together longer than needed. */
+  grid: Grid;
+  readonly cells: readonly (readonly [number, number])[];
+}
+
 function columnLetters(col: number): string {
   let s = '';
   for (let n = col + 1; n > 0; n = Math.floor((n - 1) / 26)) s = String.fromCharCode(65 + ((n - 1) % 26)) + s;
@@ -55,7 +155,9 @@ function engineText(text: string): string {
   return `'${text}`;
 }
 
-function cellInput(cell: ExcelJS.Cell): unknown {
+function cellInput(cell: ExcelJS.Cell, where: string): unknown {
+  // A merged range holds its value in its first cell; the others are empty (exceljs reports the first cell's value for each).
+  if (cell.type === ExcelJS.ValueType.Merge) return null;
   const v = cell.value;
   if (v === null || v === undefined) return null;
   if (typeof v === 'number' || typeof v === 'boolean') return v;
@@ -64,7 +166,9 @@ function cellInput(cell: ExcelJS.Cell): unknown {
   if (typeof v === 'object') {
     if ('formula' in v || 'sharedFormula' in v) {
       const formula = cell.formula;
-      return formula ? `=${toEngineFormula(formula.replace(/^=/, ''))}` : null;
+      if (!formula) return null;
+      checkFormula(formula, where);
+      return `=${toEngineFormula(formula.replace(/^=/, ''))}`;
     }
     if ('richText' in v) return engineText(v.richText.map((r) => r.text).join(''));
     if ('error' in v) return v.error;
@@ -93,60 +197,132 @@ function arrayCovered(sheet: ExcelJS.Worksheet): Set<string> {
   return covered;
 }
 
-function gridOf(sheet: ExcelJS.Worksheet): Grid {
+function sheetInput(sheet: ExcelJS.Worksheet): SheetInput {
   const grid: Grid = [];
+  const cells: [number, number][] = [];
   const covered = arrayCovered(sheet);
   sheet.eachRow({ includeEmpty: false }, (row, rowNumber) => {
     row.eachCell({ includeEmpty: false }, (cell, colNumber) => {
       if (covered.has(`${rowNumber},${colNumber}`)) return;
-      const value = cellInput(cell);
+      const value = cellInput(cell, `${sheet.name}!${cell.address}`);
       if (value === null) return;
       (grid[rowNumber - 1] ??= [])[colNumber - 1] = value;
+      cells.push([rowNumber - 1, colNumber - 1]);
     });
   });
+  // The engine wants a row array for every row; rows stay sparse, so a value in the last cell costs one row array per row, not a grid.
   for (let r = 0; r < grid.length; r++) grid[r] ??= [];
-  return grid;
+  return { grid, cells };
 }
 
-/** Splits CSV text (RFC 4180: quotes, doubled quotes, CRLF) into rows of strings. */
+/** A CSV file's cells for the engine, each field within Excel's limits. */
+function csvSheetInput(text: string): SheetInput {
+  const rows = parseCsv(text);
+  const cells: [number, number][] = [];
+  const ranges = new RangeBudget();
+  const grid = rows.map((row, r) =>
+    row.map((field, c) => {
+      if (field === '') return null;
+      if (cells.length >= MAX_CELLS) throw new InputRefused(CALC_MESSAGES.tooManyFields(cells.length + 1, MAX_CELLS));
+      const where = `${columnLetters(c)}${r + 1} of the CSV file`;
+      if (field.length > MAX_CELL_CHARS) throw new InputRefused(CALC_MESSAGES.textTooLong(where, field.length, MAX_CELL_CHARS));
+      if (field.startsWith('=')) {
+        checkFormula(field, where);
+        ranges.count(field, where);
+      }
+      cells.push([r, c]);
+      return csvInput(field);
+    }),
+  );
+  return { grid, cells };
+}
+
+/**
+ * Every cell calc must read back: each non-empty input cell and each cell an array result
+ * spills into (found by walking from its formula along the spill), never the whole grid
+ * (a value in XFD1048576 would make that seventeen billion cells).
+ */
+function engineCells(hf: HyperFormula, sheet: number, input: SheetInput): [number, number][] {
+  const out: [number, number][] = [];
+  const spilled = (row: number, col: number) => hf.isCellPartOfArray({ sheet, row, col }) && !hf.doesCellHaveFormula({ sheet, row, col });
+  for (const [row, col] of input.cells) {
+    out.push([row, col]);
+    const address = { sheet, row, col };
+    if (!hf.doesCellHaveFormula(address) || !hf.isCellPartOfArray(address)) continue;
+    let width = 1;
+    while (col + width < MAX_COLUMNS && spilled(row, col + width)) width++;
+    let height = 1;
+    while (row + height < MAX_ROWS && spilled(row + height, col)) height++;
+    for (let r = row; r < row + height; r++) for (let c = col; c < col + width; c++) if (r !== row || c !== col) out.push([r, c]);
+  }
+  return out;
+}
+
+/**
+ * Splits CSV text (RFC 4180: quotes, doubled quotes, CRLF) into rows of strings. A quote
+ * opens quoted text wherever it stands; inside, a doubled quote is one quote. Fields are
+ * cut from the text in whole runs, never built a character at a time (that makes a chain of
+ * one small string per character: 19 MB of text took 770 MB).
+ */
 export function parseCsv(text: string): string[][] {
   const rows: string[][] = [];
   let row: string[] = [];
-  let field = '';
+  let pieces: string[] = [];
   let quoted = false;
-  for (let i = 0; i < text.length; i++) {
-    const ch = text[i];
+  const n = text.length;
+  let i = 0;
+  const endField = () => {
+    row.push(pieces.length === 1 ? pieces[0] : pieces.join(''));
+    pieces = [];
+  };
+  while (i < n) {
     if (quoted) {
-      if (ch === '"' && text[i + 1] === '"') {
-        field += '"';
-        i++;
-      } else if (ch === '"') quoted = false;
-      else field += ch;
-    } else if (ch === '"') quoted = true;
-    else if (ch === ',') {
-      row.push(field);
-      field = '';
-    } else if (ch === '\n' || ch === '\r') {
-      if (ch === '\r' && text[i + 1] === '\n') i++;
-      row.push(field);
-      rows.push(row);
-      row = [];
-      field = '';
-    } else field += ch;
+      const q = text.indexOf('"', i);
+      if (q < 0) {
+        pieces.push(text.slice(i));
+        i = n;
+      } else if (text.charCodeAt(q + 1) === 34) {
+        pieces.push(text.slice(i, q + 1));
+        i = q + 2;
+      } else {
+        pieces.push(text.slice(i, q));
+        quoted = false;
+        i = q + 1;
+      }
+      continue;
+    }
+    let j = i;
+    let c = 0;
+    while (j < n && (c = text.charCodeAt(j)) !== 44 && c !== 10 && c !== 13 && c !== 34) j++;
+    if (j > i) pieces.push(text.slice(i, j));
+    if (j >= n) break;
+    if (c === 34) quoted = true;
+    else {
+      endField();
+      if (c !== 44) {
+        if (c === 13 && text.charCodeAt(j + 1) === 10) j++;
+        rows.push(row);
+        row = [];
+      }
+    }
+    i = j + 1;
   }
-  if (field !== '' || row.length > 0) {
-    row.push(field);
+  if (pieces.join('') !== '' || row.length > 0) {
+    endField();
     rows.push(row);
   }
   return rows;
 }
+
+/** A plain number as CSV writes it; no two parts can match the same digits, so it reads in one pass (30,000 digits then a letter took 1.7 s with "\d+\.?\d*"). */
+const PLAIN_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
 
 /** A CSV field for the engine: "=…" is a formula, "'…" literal text, a plain number a number, anything else text. */
 function csvInput(field: string): unknown {
   if (field === '') return null;
   if (field.startsWith('=')) return `=${toEngineFormula(field.slice(1))}`;
   if (field.startsWith("'")) return engineText(field.slice(1));
-  if (/^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(field.trim())) return Number(field);
+  if (PLAIN_NUMBER.test(field.trim())) return Number(field);
   return engineText(field);
 }
 
@@ -161,76 +337,111 @@ function csvField(value: unknown): string {
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
-function recordErrors(hf: HyperFormula, sheetId: number, sheetName: string, errors: CalcError[]): number {
+function recordErrors(hf: HyperFormula, sheetId: number, sheetName: string, cells: readonly (readonly [number, number])[], errors: CalcError[]): number {
   let formulas = 0;
-  const values = hf.getSheetValues(sheetId);
-  values.forEach((row, r) =>
-    row.forEach((value, c) => {
-      const address = { sheet: sheetId, row: r, col: c };
-      if (hf.doesCellHaveFormula(address)) formulas++;
-      if (value instanceof DetailedCellError) errors.push({ cell: `${sheetName}!${columnLetters(c)}${r + 1}`, value: value.value, message: value.message });
-    }),
-  );
+  const found: { row: number; col: number; error: DetailedCellError }[] = [];
+  for (const [row, col] of cells) {
+    const address = { sheet: sheetId, row, col };
+    if (hf.doesCellHaveFormula(address)) formulas++;
+    const value = hf.getCellValue(address);
+    if (value instanceof DetailedCellError) found.push({ row, col, error: value });
+  }
+  // Row by row, as a reader scans the sheet.
+  found.sort((a, b) => a.row - b.row || a.col - b.col);
+  for (const { row, col, error } of found) errors.push({ cell: `${sheetName}!${columnLetters(col)}${row + 1}`, value: error.value, message: error.message });
   return formulas;
 }
 
 /** Writes computed values over formulas (and into spill ranges) of an exceljs sheet. */
-function fillSheet(hf: HyperFormula, sheetId: number, sheet: ExcelJS.Worksheet, everyCell: boolean): void {
-  const values = hf.getSheetValues(sheetId);
-  values.forEach((row, r) =>
-    row.forEach((value, c) => {
-      const address = { sheet: sheetId, row: r, col: c };
-      if (!everyCell && !hf.doesCellHaveFormula(address) && !hf.isCellPartOfArray(address)) return;
-      if (value === null && everyCell) return;
-      const cell = sheet.getCell(r + 1, c + 1);
-      if (value instanceof DetailedCellError) {
-        cell.value = { error: (XLSX_ERRORS.has(value.value) ? value.value : '#VALUE!') as ExcelJS.CellErrorValue['error'] };
-        cell.note = value.message ? `${value.value} ${value.message}` : value.value;
-      } else {
-        // A string is stored as text by exceljs, never as a formula, whatever its first character.
-        cell.value = value === null ? null : (value as number | string | boolean);
+function fillSheet(hf: HyperFormula, sheetId: number, sheet: ExcelJS.Worksheet, cells: readonly (readonly [number, number])[], everyCell: boolean): void {
+  for (const [r, c] of cells) {
+    const address = { sheet: sheetId, row: r, col: c };
+    if (!everyCell && !hf.doesCellHaveFormula(address) && !hf.isCellPartOfArray(address)) continue;
+    const value = hf.getCellValue(address);
+    if (value === null && everyCell) continue;
+    const cell = sheet.getCell(r + 1, c + 1);
+    if (value instanceof DetailedCellError) {
+      cell.value = { error: (XLSX_ERRORS.has(value.value) ? value.value : '#VALUE!') as ExcelJS.CellErrorValue['error'] };
+      cell.note = value.message ? `${value.value} ${value.message}` : value.value;
+    } else {
+      // A string is stored as text by exceljs, never as a formula, whatever its first character.
+      cell.value = value === null ? null : (value as number | string | boolean);
+    }
+  }
+}
+
+/**
+ * Reads the input within calc's limits: the file's size first, a workbook's package before
+ * the reader sees it (calcLimits.ts), a CSV file's fields as they are split.
+ */
+async function readInput(input: string, isWorkbook: boolean): Promise<{ workbook: ExcelJS.Workbook; sheets: Record<string, SheetInput> }> {
+  try {
+    const size = statSync(input).size;
+    if (size > MAX_FILE_BYTES) throw new InputRefused(CALC_MESSAGES.fileTooLarge(input, size, MAX_FILE_BYTES));
+    const workbook = new ExcelJS.Workbook();
+    const sheets: Record<string, SheetInput> = {};
+    if (isWorkbook) {
+      const buf = readFileSync(input);
+      const listed = checkWorkbookPackage(buf, input);
+      try {
+        await workbook.xlsx.load(buf as unknown as ArrayBuffer);
+      } catch (e) {
+        throw new InputRefused(CALC_MESSAGES.notAWorkbook(input, (e as Error).message));
       }
-    }),
-  );
+      if (workbook.worksheets.length === 0) throw new InputRefused(CALC_MESSAGES.noSheets(input));
+      const read = new Set(workbook.worksheets.map((ws) => ws.name));
+      const lost = listed.filter((name) => !read.has(name));
+      if (lost.length > 0) throw new InputRefused(CALC_MESSAGES.sheetNotRead(input, lost));
+      workbook.eachSheet((ws) => (sheets[ws.name] = sheetInput(ws)));
+    } else {
+      workbook.addWorksheet('Sheet1');
+      sheets.Sheet1 = csvSheetInput(readFileSync(input, 'utf8').replace(/^\uFEFF/, ''));
+    }
+    return { workbook, sheets };
+  } catch (e) {
+    if (e instanceof InputRefused) throw new CalcFailure(e.message, 'input');
+    if (e instanceof CalcFailure) throw e;
+    throw new CalcFailure(CALC_MESSAGES.cannotRead(input, (e as NodeJS.ErrnoException).code ?? (e as Error).message), 'input');
+  }
 }
 
 /**
  * Evaluates a workbook file and writes the result.
  *
  * @param input - .xlsx or .csv path
- * @param output - .xlsx or .csv path
- * @param sheetName - for CSV output from a workbook: which sheet (default the first)
+ * @param output - .xlsx or .csv path, never the input; an existing file only with `force`
+ * @param options - the sheet for CSV output, and whether to replace an existing output
  */
-export async function calcFile(input: string, output: string, sheetName?: string): Promise<CalcSummary> {
+export async function calcFile(input: string, output: string, options: CalcOptions = {}): Promise<CalcSummary> {
+  const { sheetName, force = false } = options;
   const inExt = extname(input).toLowerCase();
   const outExt = extname(output).toLowerCase();
-  if (!['.xlsx', '.csv'].includes(inExt) || !['.xlsx', '.csv'].includes(outExt)) throw new Error(`calc reads and writes .xlsx or .csv files.\n${USAGE}`);
-  let workbook: ExcelJS.Workbook;
-  if (inExt === '.xlsx') {
-    workbook = new ExcelJS.Workbook();
-    await workbook.xlsx.readFile(input);
-  } else {
-    workbook = new ExcelJS.Workbook();
-    workbook.addWorksheet('Sheet1');
-  }
-  const sheets: Record<string, Grid> = {};
-  if (inExt === '.xlsx') workbook.eachSheet((ws) => (sheets[ws.name] = gridOf(ws)));
-  else sheets.Sheet1 = parseCsv(readFileSync(input, 'utf8').replace(/^\uFEFF/, '')).map((row) => row.map(csvInput));
-  const hf = createFormulaEngine(sheets, { maxRows: 1048576, maxColumns: 16384 });
+  if (!['.xlsx', '.csv'].includes(inExt) || !['.xlsx', '.csv'].includes(outExt)) throw new CalcFailure(`calc reads and writes .xlsx or .csv files.\n${USAGE}`, ['.xlsx', '.csv'].includes(inExt) ? 'output' : 'input');
+  checkOutput(input, output, force);
+  const { workbook, sheets } = await readInput(input, inExt === '.xlsx');
+  const grids: Record<string, Grid> = {};
+  for (const [name, sheet] of Object.entries(sheets)) grids[name] = sheet.grid;
+  // Sparse address maps: the engine's dense maps take memory for the whole span of a sheet, so a value in XFD1048576 asked it for gigabytes.
+  const hf = createFormulaEngine(grids, { maxRows: MAX_ROWS, maxColumns: MAX_COLUMNS, chooseAddressMappingPolicy: new AlwaysSparse() });
+  for (const sheet of Object.values(sheets)) sheet.grid = [];
+  for (const name of Object.keys(grids)) delete grids[name];
   try {
     const errors: CalcError[] = [];
     let formulas = 0;
     const names = Object.keys(sheets);
-    for (const name of names) formulas += recordErrors(hf, hf.getSheetId(name)!, name, errors);
+    const cells = new Map(names.map((name) => [name, engineCells(hf, hf.getSheetId(name)!, sheets[name])]));
+    for (const name of names) formulas += recordErrors(hf, hf.getSheetId(name)!, name, cells.get(name)!, errors);
     if (outExt === '.xlsx') {
       // A workbook keeps its cells and styles, formulas replaced; CSV input has no cells yet, so every value is written.
-      for (const name of names) fillSheet(hf, hf.getSheetId(name)!, workbook.getWorksheet(name)!, inExt === '.csv');
-      await workbook.xlsx.writeFile(output);
+      for (const name of names) fillSheet(hf, hf.getSheetId(name)!, workbook.getWorksheet(name)!, cells.get(name)!, inExt === '.csv');
+      writeFileAtomically(output, new Uint8Array(await workbook.xlsx.writeBuffer()), force);
     } else {
       const name = sheetName ?? names[0];
       const id = hf.getSheetId(name);
-      if (id === undefined) throw new Error(`No sheet named "${name}"; the workbook has ${names.map((n) => `"${n}"`).join(', ')}.`);
-      writeFileSync(output, hf.getSheetValues(id).map((row) => row.map(csvField).join(',')).join('\r\n') + '\r\n');
+      if (id === undefined) throw new CalcFailure(`No sheet named "${name}"; the workbook has ${names.map((n) => `"${n}"`).join(', ')}.`, 'sheet');
+      const { width, height } = hf.getSheetDimensions(id);
+      if (width * height > MAX_CELLS) throw new CalcFailure(CALC_MESSAGES.csvTooLarge(name, height, width, MAX_CELLS), 'output');
+      writeFileAtomically(output, hf.getSheetValues(id).map((row) => row.map(csvField).join(',')).join('\r\n') + '\r\n', force);
     }
     return { output, sheets: names, formulas, errors };
   } finally {
@@ -249,11 +460,12 @@ export async function runCalc(args: string[], write: (text: string) => void): Pr
   const output = o >= 0 ? args[o + 1] : undefined;
   const input = args.find((a, i) => !a.startsWith('-') && !(o >= 0 && i === o + 1) && !(s >= 0 && i === s + 1));
   try {
-    if (!input || !output) throw new Error(USAGE);
-    write(JSON.stringify(await calcFile(input, output, s >= 0 ? args[s + 1] : undefined)) + '\n');
+    if (!input || !output) throw new CalcFailure(USAGE, 'usage');
+    write(JSON.stringify(await calcFile(input, output, { sheetName: s >= 0 ? args[s + 1] : undefined, force: args.includes('--force') })) + '\n');
     return 0;
   } catch (e) {
-    write(JSON.stringify({ error: { kind: 'invalid-input', message: e instanceof Error ? e.message : String(e) } }) + '\n');
+    const field = e instanceof CalcFailure ? e.field : undefined;
+    write(JSON.stringify({ error: { kind: 'invalid-input', message: e instanceof Error ? e.message : String(e), field } }) + '\n');
     return 2;
   }
 }

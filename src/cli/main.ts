@@ -39,7 +39,7 @@ Commands:
   recipe --batch <file.csv|.jsonl> [-o <out>]        a what-if table: one recipe row per input row (CSV, JSON lines or .xlsx out)
   substances [--json]                                list the substance library (a table, or JSON)
   demo [--pretty]                                    solve the demo composition (our QC lab's HEPES saline)
-  calc <book.xlsx|.csv> -o <filled.xlsx|.csv>        evaluate a workbook's formulas (PROTON functions included), write values
+  calc <book.xlsx|.csv> -o <filled.xlsx|.csv> [--force]  evaluate a workbook's formulas (PROTON functions included), write values
   help [command]                                     this text, or one command's fields
 
 Options: --help (any command), --version. Input JSON may also come on standard input.

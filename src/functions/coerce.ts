@@ -161,7 +161,7 @@ export function toChoice<T extends string>(argument: string, value: unknown, cho
  *
  * @returns the numbers; empty for a blank
  */
-export function toNumberList(argument: string, value: unknown): number[] {
+export function toNumberList(argument: string, value: unknown, maxItems?: number): number[] {
   if (isBlank(value)) return [];
-  return readQuantityList(argument, value, 'fraction');
+  return readQuantityList(argument, value, 'fraction', '', maxItems);
 }

@@ -20,6 +20,19 @@ export const COMPOSITION_ARGUMENT = 'composition';
 /** Most rows a composition range may have: far more than any buffer has ingredients, few enough to read in well under a millisecond. */
 export const MAX_COMPOSITION_ROWS = 1000;
 
+/**
+ * Refuses a range argument with more rows than a composition may have (a whole column
+ * passed by mistake), before anything in it is read; salts and user-substance ranges too.
+ *
+ * @param argument - the argument's name in the message
+ * @param value - the argument as given (a range, or a single value)
+ */
+export function checkRowLimit(argument: string, value: unknown): void {
+  if (Array.isArray(value) && value.length > MAX_COMPOSITION_ROWS) {
+    throw invalid('tooManyRows', argument, SHEET_MESSAGES.tooManyRows(argument, value.length, MAX_COMPOSITION_ROWS), `up to ${MAX_COMPOSITION_ROWS} rows`);
+  }
+}
+
 /** Largest amount accepted in a composition row, mM (the library's per-form limit). */
 export const MAX_AMOUNT_MM = MAX_FORM_CONCENTRATION_M * 1000;
 
@@ -103,11 +116,8 @@ function buildComposition(library: SubstanceLibrary, range: readonly (readonly u
  * @param activityModel - activity model
  */
 export function compositionFrom(library: SubstanceLibrary, value: unknown, temperatureC: number, activityModel: ActivityModel): Composition {
+  checkRowLimit(COMPOSITION_ARGUMENT, value);
   const range = toRange(value);
-  if (range.length > MAX_COMPOSITION_ROWS) {
-    // A whole column passed by mistake: refuse before reading it, whatever is in it.
-    throw invalid('tooManyRows', COMPOSITION_ARGUMENT, SHEET_MESSAGES.tooManyRows(COMPOSITION_ARGUMENT, range.length, MAX_COMPOSITION_ROWS));
-  }
   if (range.length > 0 && range.every((row) => row.length < 2) && !range.every((row) => row.every(isBlank))) {
     throw invalid('tooFewColumns', COMPOSITION_ARGUMENT, SHEET_MESSAGES.tooFewColumns(COMPOSITION_ARGUMENT, 1, 'two: a name and an amount in mM'));
   }

@@ -137,17 +137,58 @@ export function createFormulaEngine(sheets: Record<string, unknown[][]> = { Shee
 const SAVED_NAMES = new Map(CATALOG.map((fn) => [`${NAMESPACE}_${fn.id.replace(/\./g, '_')}`, engineName(fn)]));
 
 /**
+ * A saved custom-function name followed by its bracket. The name is bounded (Excel's names
+ * have at most 255 characters), so each occurrence costs at most that much to read and the
+ * whole scan is linear in the formula's length, however the text is made.
+ */
+const SAVED_CALL = /_xldudf_([A-Za-z0-9_]{1,255})(?=[ \t\r\n]{0,255}\()/g;
+
+function isPrefixChar(c: string): boolean {
+  return /[A-Za-z0-9_.]/.test(c);
+}
+
+/**
+ * Where an external reference before a saved name starts (`[1]!`, `'Other add-in.xlam'!`,
+ * `Other.xla!`), or `at` when there is none. Reads back from `at` no further than `floor`
+ * (the end of the text already written); each "!" is read back from once, so the reading
+ * back is linear over the whole formula too.
+ */
+function externalPrefixStart(text: string, at: number, floor: number): number {
+  const bang = at - 1;
+  if (bang - 1 < floor || text[bang] !== '!') return at;
+  const last = bang - 1;
+  if (text[last] === ']') {
+    let k = last - 1;
+    while (k >= floor && text[k] >= '0' && text[k] <= '9') k--;
+    return k < last - 1 && k >= floor && text[k] === '[' ? k : at;
+  }
+  if (text[last] === "'") {
+    const open = text.lastIndexOf("'", last - 1);
+    return open >= floor && open < last - 1 ? open : at;
+  }
+  let k = last;
+  while (k >= floor && isPrefixChar(text[k])) k--;
+  return k < last ? k + 1 : at;
+}
+
+/**
  * A formula as Excel saves it, made ready for the engine: Excel writes custom functions
  * as `_xldudf_PROTON_TITRANT_ML(` (dots become underscores), sometimes behind an external
  * reference that another add-in's registration left (`[1]!`, `Other.xla!`, `'Other add-in.xlam'!`;
  * reported in OfficeDev/office-js issues 2568 and 3872, not seen in a workbook of ours), and
- * newer built-ins as `_xlfn.NAME(`.
+ * newer built-ins as `_xlfn.NAME(`. Runs in time linear in the formula's length.
  *
  * @param formula - formula text, with or without the leading "="
  * @returns the formula with PROTON functions named as typed (`PROTON.TITRANT.ML(`)
  */
 export function toEngineFormula(formula: string): string {
-  return formula
-    .replace(/(?:\[\d+\]!|'[^']+'!|[A-Za-z0-9_.]+!)?_xldudf_([A-Za-z0-9_]+)(?=\s*\()/g, (whole, name: string) => SAVED_NAMES.get(name.toUpperCase()) ?? whole)
-    .replace(/_xl(?:fn|ws)\./gi, '');
+  let out = '';
+  let written = 0;
+  for (const m of formula.matchAll(SAVED_CALL)) {
+    const name = SAVED_NAMES.get(m[1].toUpperCase());
+    if (name === undefined || m.index! < written) continue;
+    out += formula.slice(written, externalPrefixStart(formula, m.index!, written)) + name;
+    written = m.index! + m[0].length;
+  }
+  return (out + formula.slice(written)).replace(/_xl(?:fn|ws)\./gi, '');
 }

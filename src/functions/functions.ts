@@ -17,7 +17,7 @@ import { recipeOptions } from './recipeOptions';
 import { RECIPE_ROW_HEADER, recipeRowValues } from './recipeRow';
 import { DEFAULT_PART_VOLUME_FRACTION, RecipeInput, RecipePlan, checkTitrantFits, planRecipe } from '../chem/planner';
 import { volumeText } from '../chem/planner/protocol';
-import { compositionFrom, MAX_COMPOSITION_ROWS } from './composition';
+import { checkRowLimit, compositionFrom } from './composition';
 import { invalid } from './errors';
 import { memoised } from './memo';
 import { SHEET_MESSAGES } from './messages';
@@ -84,6 +84,7 @@ export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, t
     const target = toField('targetPh', targetPh);
     const stockM = toField('titrantConcentrationM', titrantConcentrationM);
     // Without other components the composition is the form alone: built directly, it skips the range cache.
+    checkRowLimit('salts', salts);
     const composition = isBlankRange(salts)
       ? s.library.compositionFromForms([{ form: formName, concentrationM: mM / 1000 }], { temperatureC: s.temperatureC, activityModel: s.model })
       : compositionFrom(s.library, [[formName, mM], ...toRange(salts)], s.temperatureC, s.model);
@@ -353,9 +354,9 @@ function recipePlan(args: readonly any[], twoFormsAllowed: boolean): RecipePlan 
 function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC: any, salts: any, options: any, twoFormsAllowed: boolean): RecipeInput {
   const { input: chosen, written } = recipeOptions(options);
   if (!isBlank(useTemperatureC) && written.has('useTemperatureC')) throw new ChemError('invalid-input', 'givenTwice', MESSAGES.givenTwice('useTemperatureC'), 'useTemperatureC', 'the argument or the option, once');
+  checkRowLimit('salts', salts);
   const saltRows = isBlankRange(salts) ? [] : toRange(salts).filter((row) => !row.every(isBlank));
   if (saltRows.length > 0 && written.has('salts')) throw new ChemError('invalid-input', 'givenTwice', MESSAGES.givenTwice('salts'), 'salts', 'the argument or the option, once');
-  if (saltRows.length > MAX_COMPOSITION_ROWS) throw invalid('tooManyRows', 'salts', SHEET_MESSAGES.tooManyRows('salts', saltRows.length, MAX_COMPOSITION_ROWS), `up to ${MAX_COMPOSITION_ROWS} rows`);
   const input: RecipeInput = {
     ...chosen,
     buffer: toText('buffer', buffer),

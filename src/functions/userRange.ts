@@ -19,10 +19,11 @@
  * may be left blank below. Protons lost defaults to the value that makes the form neutral
  * with its counter-ions (no counter-ions: the neutral species). G or J is needed.
  */
-import { ChemError, findStrongIon } from '../chem';
+import { ChemError, MAX_STEPS, findStrongIon } from '../chem';
 import { SubstanceLibrary, createLibrary, defaultLibrary } from '../chem/library';
 import type { UserForm, UserSubstance } from '../chem/library';
 import { isBlank, toNumber, toNumberList, toRange, toText } from './coerce';
+import { checkRowLimit } from './composition';
 import { invalid, withContext } from './errors';
 import { Lru } from './memo';
 import { SHEET_MESSAGES } from './messages';
@@ -43,10 +44,17 @@ function cell(row: readonly unknown[], column: number): unknown {
   return column < row.length ? row[column] : null;
 }
 
+/**
+ * Longest counter-ion entry read ("2 Na+", "Mg2+ 0.5"): the pattern below may try each
+ * split of a long run of letters and digits, so a hostile entry is refused by length first.
+ */
+const MAX_COUNTER_ION_LENGTH = 40;
+
 /** Counter-ions as written: "Na+", "2 Na+", "Na+ 2", "K+; Cl-". */
 function parseCounterIons(text: string): Record<string, number> {
   const ions: Record<string, number> = {};
   for (const part of text.split(/[;,]/).map((p) => p.trim()).filter((p) => p !== '')) {
+    if (part.length > MAX_COUNTER_ION_LENGTH) throw invalid('badCounterIons', 'counter-ions', SHEET_MESSAGES.badCounterIons(text.length > 60 ? `${text.slice(0, 60)}…` : text));
     const m = /^(\d+(?:\.\d+)?)?\s*([A-Za-z][A-Za-z0-9]*\s*[+\-−]*)\s*(\d+(?:\.\d+)?)?$/.exec(part);
     if (!m || (m[1] && m[3])) throw invalid('badCounterIons', 'counter-ions', SHEET_MESSAGES.badCounterIons(text));
     const ion = findStrongIon('counter-ions', m[2].trim()).name;
@@ -78,9 +86,9 @@ function parseRows(range: readonly (readonly unknown[])[]): Parsed {
       const chargeCell = cell(row, 1);
       const pKaCell = cell(row, 2);
       const known = byName.get(key);
-      const pKa = toNumberList('pKa list', pKaCell);
-      const dH = toNumberList('ΔH list', cell(row, 3));
-      const dCp = toNumberList('ΔCp list', cell(row, 4));
+      const pKa = toNumberList('pKa list', pKaCell, MAX_STEPS);
+      const dH = toNumberList('ΔH list', cell(row, 3), MAX_STEPS);
+      const dCp = toNumberList('ΔCp list', cell(row, 4), MAX_STEPS);
       let substance: UserSubstance;
       if (known === undefined || !isBlank(chargeCell) || pKa.length > 0) {
         const charge = toNumber('charge of most protonated form', chargeCell, { min: -6, max: 6, integer: true, allowed: 'whole numbers -6 to 6' });
@@ -134,6 +142,7 @@ const libraries = new Lru<SubstanceLibrary>(16);
  * @returns a library; throws with the range row at fault on a bad definition
  */
 export function libraryFor(value: unknown): SubstanceLibrary {
+  checkRowLimit(USER_SUBSTANCES_ARGUMENT, value);
   const range = toRange(value);
   if (range.every((row) => row.every(isBlank))) return defaultLibrary();
   const key = JSON.stringify(range);

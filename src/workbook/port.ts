@@ -189,15 +189,27 @@ export function qualifiedAddress(sheet: string, range: RangeRef): string {
 }
 
 /**
+ * Characters a spreadsheet or a CSV reader may take as the start of a formula: = + - @, and
+ * their fullwidth forms (＝ ＋ － ＠), which some programs fold to the plain ones.
+ */
+const FORMULA_START = '=+\\-@\uFF1D\uFF0B\uFF0D\uFF20';
+/**
+ * Text that must get the text mark: starting with a formula character, a tab, a carriage
+ * return or a line feed (a CSV reader may drop them and see what follows), an apostrophe,
+ * or blanks followed by a formula character (some readers trim before they look).
+ * Anchored and without nested repetition, so it runs in time linear in the text.
+ */
+const NEEDS_TEXT_MARK = new RegExp(`^(?:[${FORMULA_START}\\t\\r\\n']|[ \\u00A0\\u3000]+[${FORMULA_START}\\t\\r\\n])`);
+
+/**
  * What to put in a cell for a literal value: text that a spreadsheet would read as a
- * formula (starting with = + − @, or a tab or carriage return) gets a leading apostrophe,
- * the spreadsheet's own mark for "this is text", so a name typed into the pane can never
- * run as a formula. Text that itself starts with an apostrophe (a quoted sheet name) gets
- * one more, or the spreadsheet would swallow its own. Numbers and booleans pass unchanged;
- * formulas are written separately.
+ * formula (see NEEDS_TEXT_MARK) gets a leading apostrophe, the spreadsheet's own mark for
+ * "this is text", so a name typed into the pane can never run as a formula. Text that
+ * itself starts with an apostrophe (a quoted sheet name) gets one more, or the spreadsheet
+ * would swallow its own. Numbers and booleans pass unchanged; formulas are written separately.
  */
 export function literal(value: CellValue): CellValue {
-  return typeof value === 'string' && /^[=+\-@\t\r']/.test(value) ? `'${value}` : value;
+  return typeof value === 'string' && NEEDS_TEXT_MARK.test(value) ? `'${value}` : value;
 }
 
 /** A sheet name as a formula reference needs it: quoted when it holds anything but letters, digits and underscores. */

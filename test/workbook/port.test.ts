@@ -3,16 +3,30 @@ import { PreviewWorkbook } from '../../src/preview/workbook';
 import { literal, parseRangeText, qualifiedAddress } from '../../src/workbook/port';
 import { PreviewAdapter } from '../../src/workbook/previewAdapter';
 
+/** Generous bound for two linear scans of a million characters (about 5 ms here); a quadratic scan takes minutes. */
+const LINEAR_BOUND_MS = 500;
+
 describe('text from user input is written as text, never as a formula', () => {
-  it.each(['=HYPERLINK("http://example.invalid","x")', '+1+1', '-2+3', '@SUM(A1)', '\t=1', "'My substances'!A2:J20"])('%p gets the text mark', (text) => {
+  it.each(['=HYPERLINK("http://example.invalid","x")', '+1+1', '-2+3', '@SUM(A1)', '\t=1', "'My substances'!A2:J20", '\n=1+1', '\r=1+1', '\tSUM(A1)', '＝1+1', '＋1', '－2', '＠SUM(A1)', ' =1+1', '   @SUM(A1)', '\u3000＝1', ' \t=1'])('%p gets the text mark', (text) => {
     expect(literal(text)).toBe(`'${text}`);
   });
 
   it('leaves ordinary text, numbers, booleans and blanks alone', () => {
     expect(literal('HEPES')).toBe('HEPES');
+    expect(literal(' HEPES')).toBe(' HEPES');
+    expect(literal('pH 7.4 = target')).toBe('pH 7.4 = target');
+    expect(literal('Na+')).toBe('Na+');
     expect(literal(-2)).toBe(-2);
     expect(literal(true)).toBe(true);
     expect(literal(null)).toBe(null);
+  });
+
+  it('looks at the start only, in time linear in the text (a million blanks then a letter)', () => {
+    const text = `${' '.repeat(1_000_000)}x`;
+    const start = performance.now();
+    expect(literal(text)).toBe(text);
+    expect(literal(`${' '.repeat(1_000_000)}=1`)).toBe(`' ${' '.repeat(999_999)}=1`);
+    expect(performance.now() - start).toBeLessThan(LINEAR_BOUND_MS);
   });
 
   it('the preview adapter stores such a value as the text typed, not its result', async () => {

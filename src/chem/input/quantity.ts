@@ -228,8 +228,8 @@ export function readQuantity(field: string, value: unknown, dimension: Dimension
  * @param text - what was typed
  * @returns the non-empty items, trimmed
  */
-export function splitList(field: string, text: string): string[] {
-  if (text.length > MAX_LIST_TEXT) throw new ChemError('invalid-input', 'listTooLong', MESSAGES.listTooLong(field, MAX_LIST_ITEMS), field, `up to ${MAX_LIST_ITEMS} items`);
+export function splitList(field: string, text: string, maxItems: number = MAX_LIST_ITEMS): string[] {
+  if (text.length > MAX_LIST_TEXT) throw new ChemError('invalid-input', 'listTooLong', MESSAGES.listTooLong(field, maxItems), field, `up to ${maxItems} items`);
   const items: string[] = [];
   let start = 0;
   for (let i = 0; i <= text.length; i++) {
@@ -237,7 +237,7 @@ export function splitList(field: string, text: string): string[] {
     if (c === ';' || c === '\n' || c === '\r') {
       const item = text.slice(start, i).trim();
       if (item !== '') items.push(item);
-      if (items.length > MAX_LIST_ITEMS) throw new ChemError('invalid-input', 'listTooLong', MESSAGES.listTooLong(field, MAX_LIST_ITEMS), field, `up to ${MAX_LIST_ITEMS} items`);
+      if (items.length > maxItems) throw new ChemError('invalid-input', 'listTooLong', MESSAGES.listTooLong(field, maxItems), field, `up to ${maxItems} items`);
       start = i + 1;
     }
   }
@@ -250,9 +250,9 @@ export function splitList(field: string, text: string): string[] {
  *
  * @example readQuantityList('targetPh', '7,4; 7.6', 'pH') //=> [7.4, 7.6]
  */
-export function readQuantityList(field: string, value: unknown, dimension: Dimension, unit: string = BASE_UNIT[dimension]): number[] {
+export function readQuantityList(field: string, value: unknown, dimension: Dimension, unit: string = BASE_UNIT[dimension], maxItems: number = MAX_LIST_ITEMS): number[] {
   if (value === undefined || value === null) return [];
   if (typeof value === 'number') return [readQuantity(field, value, dimension, unit)];
   if (typeof value !== 'string') throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value, EXAMPLE[dimension]), field, `numbers separated by ";"`);
-  return splitList(field, value).map((item) => readQuantity(field, item, dimension, unit));
+  return splitList(field, value, maxItems).map((item) => readQuantity(field, item, dimension, unit));
 }

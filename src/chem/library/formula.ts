@@ -39,6 +39,13 @@ export const ATOMIC_WEIGHTS_SOURCE = 'IUPAC standard atomic weights, conventiona
 /** Element counts of a formula (may be fractional for hemi-salts). */
 export type ElementCounts = Readonly<Record<string, number>>;
 
+/** Deepest nesting of brackets read in a formula: real salts need two or three; the bound keeps a hostile formula from exhausting the stack. */
+export const MAX_FORMULA_DEPTH = 16;
+
+/** A count after an element or a group (sticky: read at the reader's position, never copying the rest of the text). */
+const COUNT = /\d+(?:\.\d+)?/y;
+
+/** Reads a formula left to right, once: time linear in its length. */
 class Reader {
   pos = 0;
   constructor(readonly text: string, readonly field: string) {}
@@ -52,21 +59,23 @@ class Reader {
   }
 
   number(): number | undefined {
-    const m = /^\d+(?:\.\d+)?/.exec(this.text.slice(this.pos));
+    COUNT.lastIndex = this.pos;
+    const m = COUNT.exec(this.text);
     if (!m) return undefined;
     this.pos += m[0].length;
     return Number(m[0]);
   }
 
   /** A sequence of elements and groups up to a hydrate dot, a closing bracket or the end. */
-  sequence(counts: Map<string, number>, factor: number): void {
+  sequence(counts: Map<string, number>, factor: number, depth = 0): void {
     let any = false;
     for (;;) {
       const c = this.peek();
       if (c === '(' || c === '[') {
+        if (depth >= MAX_FORMULA_DEPTH) this.fail(`brackets nested more than ${MAX_FORMULA_DEPTH} deep at position ${this.pos + 1}`);
         this.pos++;
         const inner = new Map<string, number>();
-        this.sequence(inner, 1);
+        this.sequence(inner, 1, depth + 1);
         const close = this.peek();
         if (close !== (c === '(' ? ')' : ']')) this.fail(`unclosed "${c}" at position ${this.pos + 1}`);
         this.pos++;
