@@ -133,6 +133,8 @@ export interface CalcSummary {
   readonly sheets: readonly string[];
   readonly formulas: number;
   readonly errors: readonly CalcError[];
+  /** Cells holding #N/A by design (NA() in chart data: no message), listed apart from the errors. */
+  readonly notAvailable: readonly string[];
 }
 
 type Grid = unknown[][];
@@ -337,7 +339,7 @@ function csvField(value: unknown): string {
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 
-function recordErrors(hf: HyperFormula, sheetId: number, sheetName: string, cells: readonly (readonly [number, number])[], errors: CalcError[]): number {
+function recordErrors(hf: HyperFormula, sheetId: number, sheetName: string, cells: readonly (readonly [number, number])[], errors: CalcError[], notAvailable: string[]): number {
   let formulas = 0;
   const found: { row: number; col: number; error: DetailedCellError }[] = [];
   for (const [row, col] of cells) {
@@ -348,7 +350,12 @@ function recordErrors(hf: HyperFormula, sheetId: number, sheetName: string, cell
   }
   // Row by row, as a reader scans the sheet.
   found.sort((a, b) => a.row - b.row || a.col - b.col);
-  for (const { row, col, error } of found) errors.push({ cell: `${sheetName}!${columnLetters(col)}${row + 1}`, value: error.value, message: error.message });
+  for (const { row, col, error } of found) {
+    const cell = `${sheetName}!${columnLetters(col)}${row + 1}`;
+    // NA() (and IF(…, NA())) gives #N/A with no message: a gap by design, as chart data uses it; every PROTON #N/A says why.
+    if (error.value === '#N/A' && !error.message) notAvailable.push(cell);
+    else errors.push({ cell, value: error.value, message: error.message });
+  }
   return formulas;
 }
 
@@ -427,10 +434,11 @@ export async function calcFile(input: string, output: string, options: CalcOptio
   for (const name of Object.keys(grids)) delete grids[name];
   try {
     const errors: CalcError[] = [];
+    const notAvailable: string[] = [];
     let formulas = 0;
     const names = Object.keys(sheets);
     const cells = new Map(names.map((name) => [name, engineCells(hf, hf.getSheetId(name)!, sheets[name])]));
-    for (const name of names) formulas += recordErrors(hf, hf.getSheetId(name)!, name, cells.get(name)!, errors);
+    for (const name of names) formulas += recordErrors(hf, hf.getSheetId(name)!, name, cells.get(name)!, errors, notAvailable);
     if (outExt === '.xlsx') {
       // A workbook keeps its cells and styles, formulas replaced; CSV input has no cells yet, so every value is written.
       for (const name of names) fillSheet(hf, hf.getSheetId(name)!, workbook.getWorksheet(name)!, cells.get(name)!, inExt === '.csv');
@@ -443,7 +451,7 @@ export async function calcFile(input: string, output: string, options: CalcOptio
       if (width * height > MAX_CELLS) throw new CalcFailure(CALC_MESSAGES.csvTooLarge(name, height, width, MAX_CELLS), 'output');
       writeFileAtomically(output, hf.getSheetValues(id).map((row) => row.map(csvField).join(',')).join('\r\n') + '\r\n', force);
     }
-    return { output, sheets: names, formulas, errors };
+    return { output, sheets: names, formulas, errors, notAvailable };
   } finally {
     hf.destroy();
   }

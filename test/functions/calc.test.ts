@@ -36,6 +36,9 @@ describe('calc command', () => {
     ws.getCell('C6').value = { formula: 'PROTON.GRAMS("tris HCl",B1,250,"99%")' } as ExcelJS.CellFormulaValue;
     ws.getCell('C6').numFmt = '0.000';
     ws.getCell('E1').value = { formula: 'PROTON.SPECIES(A1:B2)' } as ExcelJS.CellFormulaValue;
+    // Chart data leaves gaps with NA() by design; a PROTON #N/A says why.
+    ws.getCell('C7').value = { formula: 'IF(B1>0,NA(),1)' } as ExcelJS.CellFormulaValue;
+    ws.getCell('C8').value = { formula: 'PROTON.PKA("unobtainium")' } as ExcelJS.CellFormulaValue;
     wb.addWorksheet('Other').getCell('A1').value = 1;
     await wb.xlsx.writeFile(input);
   });
@@ -44,8 +47,13 @@ describe('calc command', () => {
     const output = join(dir, 'filled.xlsx');
     const { code, out } = await run(['calc', input, '-o', output]);
     expect(code).toBe(0);
-    expect(out.formulas).toBe(6);
-    expect(out.errors).toEqual([{ cell: 'Prep!C5', value: '#VALUE!', message: 'temperatureC must be a number (typed, or as text such as "25" or "4 °C"); got "hot".' }]);
+    expect(out.formulas).toBe(8);
+    expect(out.errors).toEqual([
+      { cell: 'Prep!C5', value: '#VALUE!', message: 'temperatureC must be a number (typed, or as text such as "25" or "4 °C"); got "hot".' },
+      { cell: 'Prep!C8', value: '#N/A', message: expect.stringMatching(/"unobtainium" is not in the substance library/) },
+    ]);
+    // The deliberate gap is listed apart, never as an error with an empty message.
+    expect(out.notAvailable).toEqual(['Prep!C7']);
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.readFile(output);
     const ws = wb.getWorksheet('Prep')!;
