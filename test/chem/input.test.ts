@@ -159,3 +159,15 @@ describe('field declarations', () => {
     expect(caught?.message).toContain('useTemperatureC');
   });
 });
+
+describe('errors report the value in the unit the user gave', () => {
+  it('a concentration typed in M is named as typed, with the allowed range in the field’s unit', () => {
+    let caught: ChemError | undefined;
+    try {
+      readNumberField('concentrationMm', '9 M');
+    } catch (e) {
+      caught = e as ChemError;
+    }
+    expect(caught?.message).toBe('concentrationMm is "9 M"; allowed: 0.001 to 5000 mM.');
+  });
+});

@@ -213,9 +213,11 @@ export function isBlankValue(value: unknown): boolean {
   return value === undefined || value === null || (typeof value === 'string' && value.trim() === '');
 }
 
-function rangeError(f: NumberField | PurityField, asWritten: string, value: number): ChemError {
+/** An out-of-range error that shows the value as the user wrote it (text with its unit stays as typed). */
+function rangeError(f: NumberField | PurityField, asWritten: string, value: number, typed?: unknown): ChemError {
   const allowed = allowedOf(f);
-  return new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(asWritten, value, allowed), asWritten, allowed);
+  const shown = typeof typed === 'string' ? typed.trim() : value;
+  return new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(asWritten, shown, allowed), asWritten, allowed);
 }
 
 /**
@@ -235,7 +237,7 @@ export function readNumberField(name: string, value: unknown, asWritten: string 
     throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(asWritten, `a number, ${allowedOf(f)}`), asWritten, allowedOf(f));
   }
   const n = readQuantity(asWritten, value, f.dimension, f.unit || BASE_UNIT[f.dimension]);
-  if (n < f.min || n > f.max || (f.minExclusive && n === f.min)) throw rangeError(f, asWritten, n);
+  if (n < f.min || n > f.max || (f.minExclusive && n === f.min)) throw rangeError(f, asWritten, n, value);
   return n;
 }
 
@@ -304,7 +306,7 @@ export function readPurityField(name: string, value: unknown, asWritten: string 
   const isPercentText = typeof value === 'string' && value.trim().endsWith('%');
   const n = readQuantity(asWritten, value, 'percent', '%');
   const percent = !isPercentText && n > 0 && n <= 1 ? n * 100 : n;
-  if (percent < f.min || percent > f.max) throw rangeError(f, asWritten, n);
+  if (percent < f.min || percent > f.max) throw rangeError(f, asWritten, n, value);
   return percent;
 }
 
