@@ -9,6 +9,7 @@
 import { parse } from 'csv-parse/sync';
 import { stringify } from 'csv-stringify/sync';
 import { ChemError } from '../chem';
+import { setFieldPath } from '../chem/input';
 import { planRecipe, RecipePlan } from '../chem/planner';
 import { RECIPE_ROW_HEADER, recipeRowValues } from '../functions/recipeRow';
 import { toRecipeInput } from './recipeInput';
@@ -27,15 +28,6 @@ export interface BatchInput {
 /** The columns every output row starts with, then the command's own. */
 export const SOLVE_COLUMNS = ['pH', 'ionic strength (mM)', 'conductivity (mS/cm)', 'warnings'] as const;
 
-function setPath(target: Record<string, unknown>, path: string, value: unknown): void {
-  const parts = path.split('.');
-  let at = target;
-  for (const part of parts.slice(0, -1)) {
-    if (typeof at[part] !== 'object' || at[part] === null) at[part] = {};
-    at = at[part] as Record<string, unknown>;
-  }
-  at[parts[parts.length - 1]] = value;
-}
 
 /**
  * Reads batch inputs from text: JSON lines when the first non-blank character is "{",
@@ -75,7 +67,7 @@ export function readBatch(text: string): BatchInput[] {
     const fields: Record<string, unknown> = {};
     header.forEach((name, k) => {
       const value = cells[k];
-      if (name !== '' && value !== undefined && value !== '') setPath(fields, name, value);
+      if (name !== '' && value !== undefined && value !== '') setFieldPath(fields, name, value);
     });
     return { row: i + 1, fields };
   });

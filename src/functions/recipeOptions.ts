@@ -7,7 +7,7 @@
  */
 import { RecipeInput } from '../chem/planner';
 import { ChemError, MESSAGES } from '../chem';
-import { readChoiceField, readNumberField, readPurityField, readSaltsField, readTextField, recipeFieldOf } from '../chem/input';
+import { readChoiceField, readNumberField, readPurityField, readSaltsField, readTextField, recipeFieldOf, setFieldPath } from '../chem/input';
 import { isBlank, toRange, toText } from './coerce';
 import { invalid } from './errors';
 import { SHEET_MESSAGES } from './messages';
@@ -23,15 +23,6 @@ const POSITIONAL = new Set(['buffer', 'targetPh', 'concentrationMm', 'volumeMl']
 /** A recipe input built up field by field from dotted names (`titrant.form`). */
 type Loose = Record<string, unknown>;
 
-function setPath(target: Loose, path: string, value: unknown): void {
-  const parts = path.split('.');
-  let at = target;
-  for (const part of parts.slice(0, -1)) {
-    at[part] ??= {};
-    at = at[part] as Loose;
-  }
-  at[parts[parts.length - 1]] = value;
-}
 
 /**
  * Reads an options range into part of a planner input.
@@ -71,7 +62,7 @@ export function recipeOptions(range: unknown): { readonly input: Partial<RecipeI
         read = readSaltsField(value, name);
         break;
     }
-    if (read !== undefined) setPath(input, f.name, read);
+    if (read !== undefined) setFieldPath(input, f.name, read);
   }
   return { input: input as Partial<RecipeInput>, written };
 }

@@ -375,3 +375,18 @@ export function recipeFieldOf(written: string): Field {
   const suggestions = written.length > 60 ? [] : closestNames(optionKey(written), OPTION_NAMES);
   throw new ChemError('invalid-input', 'unknownField', MESSAGES.unknownField(written, suggestions, names.join(', ')), written, names.join(', '));
 }
+
+/**
+ * Sets a value at a field's path in a nested input object (`titrant.form` → `{titrant: {form}}`),
+ * as the command line's JSON holds it; hosts that read fields as flat names (an options range,
+ * a batch CSV header) build the planner's input with it.
+ */
+export function setFieldPath(target: Record<string, unknown>, path: string, value: unknown): void {
+  const parts = path.split('.');
+  let at = target;
+  for (const part of parts.slice(0, -1)) {
+    if (typeof at[part] !== 'object' || at[part] === null) at[part] = {};
+    at = at[part] as Record<string, unknown>;
+  }
+  at[parts[parts.length - 1]] = value;
+}
