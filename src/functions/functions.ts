@@ -27,10 +27,6 @@ import { libraryFor, userRowCount } from './userRange';
 export const SPECIES_TABLE_ROWS = 30;
 /** Columns of the SPECIES table. */
 export const SPECIES_TABLE_HEADER = ['species', 'mM', 'activity (mM)', 'charge'] as const;
-/** Largest dilution factor accepted (the core's limit). */
-const MAX_DILUTION = 1e6;
-/** Largest ionic strength accepted for an apparent pKa, mM (the core's concentration limit). */
-const MAX_IONIC_STRENGTH_MM = 20000;
 
 function setup(temperatureC: any, activityModel: any, userSubstances: any, temperatureRequired = false) {
   return {
@@ -130,7 +126,7 @@ export function capacityOf(composition: any[][], measure?: any, temperatureC?: a
  */
 export function phDiluted(composition: any[][], dilutionFactor: any, temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
   return memoised('PH.DILUTED', [composition, dilutionFactor, temperatureC, activityModel, userSubstances], () => {
-    const factor = toNumber('dilutionFactor', dilutionFactor, { min: 1, max: MAX_DILUTION, allowed: `1 to ${MAX_DILUTION}` });
+    const factor = toField('dilutionFactor', dilutionFactor);
     return afterDilution(solution(composition, temperatureC, activityModel, userSubstances), factor).pH;
   });
 }
@@ -170,7 +166,7 @@ export function pka(substance: any, step?: any, temperatureC?: any, ionicStrengt
     const record = s.library.findSystem(toText('substance', substance));
     if (record.steps.length === 0) throw invalid('noSuchStep', 'step', SHEET_MESSAGES.noSuchStep('step', record.name, 1, 0));
     const k = toNumber('step', step, { default: 1, min: 1, max: record.steps.length, integer: true, allowed: `whole numbers 1 to ${record.steps.length}` });
-    const ionicStrengthM = toNumber('ionicStrengthMm', ionicStrengthMm, { default: 0, min: 0, max: MAX_IONIC_STRENGTH_MM, allowed: `0 to ${MAX_IONIC_STRENGTH_MM} mM` }) / 1000;
+    const ionicStrengthM = toField('ionicStrengthMm', ionicStrengthMm) / 1000;
     const st = record.steps[k - 1];
     const pKa = pKaAt(st.pKa, st.deltaHkJ ?? 0, st.deltaCpJ ?? 0, s.temperatureC);
     return apparentPKa(s.model, pKa, record.chargeOfMostProtonated - (k - 1), ionicStrengthM, debyeHuckelA(s.temperatureC));

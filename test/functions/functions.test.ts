@@ -115,7 +115,7 @@ describe('PH.DILUTED and PH.AT.TEMPERATURE', () => {
     expect(Math.abs(slope + 0.028)).toBeLessThan(0.006);
   });
   test('errors: dilution factor below 1, temperature blank where required', () => {
-    expect(errorOf(() => phDiluted(TRIS_SALINE, 0.5)).message).toBe('dilutionFactor is 0.5; allowed: 1 to 1000000.');
+    expect(errorOf(() => phDiluted(TRIS_SALINE, 0.5))).toMatchObject({ kind: 'value', code: 'outOfRange', field: 'dilutionFactor', allowed: '1 to 1,000,000' });
     expect(errorOf(() => phAtTemperature(TRIS_SALINE, '')).message).toMatch(/temperatureC is blank/);
   });
 });

@@ -159,6 +159,10 @@ export const FIELDS: readonly Field[] = [
     kind: 'number', scope: 'argument', name: 'saltMm', required: true, label: 'Salt (mM)', dimension: 'concentration', unit: 'mM', min: 0, max: MAX_RECIPE_CONCENTRATION_MM,
     description: 'Concentration of a salt in a recipe’s final solution.', example: '150 mM',
   },
+  {
+    kind: 'number', scope: 'argument', name: 'ionicStrengthMm', label: 'Ionic strength (mM)', dimension: 'concentration', unit: 'mM', min: 0, max: MAX_FORM_CONCENTRATION_M * 1000, default: 0,
+    description: 'Ionic strength at which an apparent pKa′ is given.', example: '150 mM',
+  },
   { kind: 'number', scope: 'argument', name: 'dilutionFactor', required: true, label: 'Dilution (×)', dimension: 'count', unit: '×', min: 1, max: 1e6, description: 'Final volume over starting volume.', example: '10' },
   { kind: 'purity', scope: 'argument', name: 'purity', label: 'Purity', min: 1, max: 100, description: 'Purity (assay) of the form weighed.', example: '99.5%' },
 ];
