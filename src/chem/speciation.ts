@@ -15,10 +15,13 @@
  *
  * References: SCIENCE.md of this project; R. G. Bates, Determination of pH (1973), ch. 3–4.
  */
-import { ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES } from './activity';
+import { ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, PITZER_LIMIT_MOLAL } from './activity';
 import { Composition, PreparedComposition, prepare } from './composition';
 import { ChemError, MESSAGES } from './errors';
 import { selfConsistentIonicStrength } from './ionicStrength';
+import { PitzerEvaluation, pitzerEvaluate } from './pitzer/model';
+import { H_INDEX, OH_INDEX, PitzerLayout, STRONG_START, pitzerLayout } from './pitzer/prepared';
+import { waterKgPerLitre } from './pitzer/volumes';
 import { STRONG_IONS, findStrongIon } from './strongIons';
 import { pKw } from './water';
 
@@ -42,11 +45,13 @@ let evDI2 = 0;
 
 /**
  * Charge balance f, its derivative df/d ln a_H, and 2·I of all non-strong species, at a_H.
- * `kp` are the mixed constants at the current ionic strength; `g1` is γ of a 1-charge ion.
+ * `kp` are the mixed constants at the current activity coefficients; [H⁺] = a_H/gH and
+ * [OH⁻] = Kw/(a_H·gOH), so gH and gOH are the molar-scale γ of H⁺ and OH⁻ (γ₁ for the
+ * one-number models; γ/(kg water per L) for Pitzer, whose γ are molal).
  */
-function evaluate(p: PreparedComposition, kp: number[], aH: number, g1: number): void {
-  const hc = aH / g1;
-  const ohc = p.kw / (aH * g1);
+function evaluate(p: PreparedComposition, kp: number[], aH: number, gH: number, gOH: number): void {
+  const hc = aH / gH;
+  const ohc = p.kw / (aH * gOH);
   let f = p.strongCharge + hc - ohc;
   let d = hc + ohc;
   let i2 = hc + ohc;
@@ -104,7 +109,7 @@ function conditionalConstants(p: PreparedComposition, ionicStrengthM: number, kp
 }
 
 /** Solves f(x) = 0 at fixed constants from a warm start; returns x = ln a_H and counts iterations. */
-function solveChargeBalance(p: PreparedComposition, kp: number[], g1: number, x0: number, counter: { n: number }): number {
+function solveChargeBalance(p: PreparedComposition, kp: number[], gH: number, gOH: number, x0: number, counter: { n: number }): number {
   let lo = LN_AH_MIN;
   let hi = LN_AH_MAX;
   let loChecked = false;
@@ -112,7 +117,7 @@ function solveChargeBalance(p: PreparedComposition, kp: number[], g1: number, x0
   let x = x0;
   for (let it = 0; it < MAX_PH_ITERATIONS; it++) {
     counter.n++;
-    evaluate(p, kp, Math.exp(x), g1);
+    evaluate(p, kp, Math.exp(x), gH, gOH);
     const f = evF;
     if (f === 0) return x;
     if (f < 0) {
@@ -152,9 +157,141 @@ export interface EquilibriumState {
   readonly gamma1: number;
   /** Mixed constants K′ per step at that ionic strength (a_H·[A]/[HA]). */
   readonly mixedKa: readonly number[];
-  /** Charge-balance evaluations made, and ionic-strength updates made. */
+  /** Charge-balance evaluations made, and ionic-strength (or, for Pitzer, activity-coefficient) updates made. */
   readonly evaluations: number;
   readonly ionicStrengthIterations: number;
+  /** Pitzer only: ln γ (molal) of every species in the layout's order, kg of water per litre, molal ionic strength and osmotic coefficient. */
+  readonly pitzer?: PitzerState;
+}
+
+/** What the Pitzer solve leaves besides the pH. */
+export interface PitzerState {
+  readonly lnGamma: readonly number[];
+  readonly concentrations: readonly number[];
+  readonly waterKgPerL: number;
+  readonly ionicStrengthMolal: number;
+  readonly osmoticCoefficient: number;
+}
+
+/** Largest change of any ln γ at which the Pitzer iteration stops: moves a pH by under 1e-10. */
+const PITZER_TOLERANCE = 1e-10;
+/** Activity-coefficient updates allowed before giving up (it converges in 4–12). */
+const MAX_PITZER_ITERATIONS = 200;
+
+/**
+ * Puts the Pitzer activity coefficients on a pH convention. Single-ion γ are not
+ * measurable, so a pH needs a convention; we use MacInnes's: γ(Cl⁻) equals the mean
+ * activity coefficient of KCl at the same ionic strength (D. A. MacInnes, J. Am. Chem. Soc.
+ * 41 (1919) 1086), the choice of Pitzer-based speciation codes for pH (L. N. Plummer et al.,
+ * PHRQPITZ, USGS Water-Resources Investigations Report 88-4153 (1988) (memory)). Unlike the
+ * Bates–Guggenheim form that assigns the primary standards, it is defined at any ionic
+ * strength; at I ≤ 0.1 the two differ by under 0.005 in pH. Every ln γ_i moves by −z_i·k,
+ * with k the gap between that value and the Pitzer γ(Cl⁻) of the same solution (a
+ * zero-concentration probe when no chloride is present); mean activity coefficients of
+ * neutral combinations do not move.
+ */
+const macInnesLnGamma = [0, 0];
+const macInnesResult: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1 };
+function applyPhConvention(layout: PitzerLayout, ionicStrengthMolal: number, lnGamma: number[]): void {
+  pitzerEvaluate(layout.potassiumChloride, [ionicStrengthMolal, ionicStrengthMolal], macInnesLnGamma, macInnesResult);
+  const k = 0.5 * (macInnesLnGamma[0] + macInnesLnGamma[1]) - lnGamma[layout.chlorideIndex];
+  const charges = layout.system.charges;
+  for (let i = 0; i < lnGamma.length; i++) lnGamma[i] -= charges[i] * k;
+}
+
+/**
+ * Concentrations of every acid–base species at a_H with mixed constants kp, written into
+ * `conc` at the layout's positions; returns ½Σz²c of them (mol/L).
+ */
+function systemConcentrations(p: PreparedComposition, layout: PitzerLayout, kp: readonly number[], aH: number, conc: number[]): number {
+  let halfZ2 = 0;
+  for (let j = 0; j < p.totals.length; j++) {
+    const first = p.firstStep[j];
+    const steps = p.stepCount[j];
+    const start = layout.systemStart[j];
+    let t = 1;
+    let sum = 1;
+    conc[start] = 1;
+    for (let k = 1; k <= steps; k++) {
+      t *= kp[first + k - 1] / aH;
+      conc[start + k] = t;
+      sum += t;
+    }
+    const w = p.totals[j] / sum;
+    const z0 = p.z0[j];
+    for (let k = 0; k <= steps; k++) {
+      const c = conc[start + k] * w;
+      conc[start + k] = c;
+      halfZ2 += 0.5 * (z0 - k) * (z0 - k) * c;
+    }
+  }
+  return halfZ2;
+}
+
+/**
+ * The Pitzer solve: the pH at fixed activity coefficients (the same safeguarded Newton as
+ * the other models), then every ion's γ from the species found, repeated until no ln γ moves
+ * by more than PITZER_TOLERANCE. Each γ depends weakly on how the buffer is split between
+ * its forms, so plain substitution converges; a step is halved whenever the change grows.
+ */
+function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[], guessPh: number): EquilibriumState {
+  const n = layout.speciesCount;
+  const conc = new Array<number>(n).fill(0);
+  const m = new Array<number>(n).fill(0);
+  const lnGamma = new Array<number>(n).fill(0);
+  const next = new Array<number>(n).fill(0);
+  const strong = layout.strongConcentrations;
+  for (let i = 0; i < strong.length; i++) conc[STRONG_START + i] = strong[i];
+  const charges = layout.system.charges;
+  // Start from Bates–Guggenheim at the ionic strength of the composition as given: the first pH solve then starts close.
+  let start = p.strongIonicStrength;
+  for (let j = 0; j < p.totals.length; j++) start += 0.5 * p.totals[j] * p.z0[j] * p.z0[j];
+  const lnG0 = -p.a * ionicStrengthFactor('bates-guggenheim', start) * Math.LN10;
+  for (let i = 0; i < n; i++) lnGamma[i] = lnG0 * charges[i] * charges[i];
+  let w = waterKgPerLitre(p.waterDensity, conc, layout.volumes, p.strongIonicStrength);
+  const counter = { n: 0 };
+  const result: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1 };
+  let x = -guessPh * Math.LN10;
+  let previousDelta = Infinity;
+  let ionicStrengthM = 0;
+  for (let it = 1; it <= MAX_PITZER_ITERATIONS; it++) {
+    const gH = Math.exp(lnGamma[H_INDEX]) / w;
+    const gOH = Math.exp(lnGamma[OH_INDEX]) / w;
+    for (let j = 0; j < p.totals.length; j++) {
+      const first = p.firstStep[j];
+      const base = layout.systemStart[j];
+      for (let k = 0; k < p.stepCount[j]; k++) kp[first + k] = p.ka[first + k] * Math.exp(lnGamma[base + k] - lnGamma[base + k + 1]);
+    }
+    x = solveChargeBalance(p, kp, gH, gOH, x, counter);
+    const aH = Math.exp(x);
+    conc[H_INDEX] = aH / gH;
+    conc[OH_INDEX] = p.kw / (aH * gOH);
+    ionicStrengthM = p.strongIonicStrength + 0.5 * (conc[H_INDEX] + conc[OH_INDEX]) + systemConcentrations(p, layout, kp, aH, conc);
+    w = waterKgPerLitre(p.waterDensity, conc, layout.volumes, ionicStrengthM);
+    for (let i = 0; i < n; i++) m[i] = conc[i] / w;
+    pitzerEvaluate(layout.system, m, next, result);
+    applyPhConvention(layout, result.ionicStrength, next);
+    let delta = 0;
+    for (let i = 0; i < n; i++) {
+      const d = Math.abs(next[i] - lnGamma[i]);
+      if (d > delta) delta = d;
+    }
+    if (delta <= PITZER_TOLERANCE) {
+      return {
+        pH: -x / Math.LN10,
+        ionicStrengthM,
+        gamma1: Math.exp(lnGamma[H_INDEX]),
+        mixedKa: kp,
+        evaluations: counter.n,
+        ionicStrengthIterations: it,
+        pitzer: { lnGamma: next, concentrations: conc, waterKgPerL: w, ionicStrengthMolal: result.ionicStrength, osmoticCoefficient: result.osmoticCoefficient },
+      };
+    }
+    const damp = delta >= previousDelta ? 0.5 : 1;
+    for (let i = 0; i < n; i++) lnGamma[i] += damp * (next[i] - lnGamma[i]);
+    previousDelta = delta;
+  }
+  throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The activity-coefficient iteration', MAX_PITZER_ITERATIONS));
 }
 
 /**
@@ -163,6 +300,7 @@ export interface EquilibriumState {
  */
 export function solvePrepared(p: PreparedComposition, guessPh = 7): EquilibriumState {
   const kp: number[] = new Array<number>(p.ka.length).fill(0);
+  if (p.pitzer) return solvePitzer(p, p.pitzer, kp, guessPh);
   const counter = { n: 0 };
   let x = -guessPh * Math.LN10;
   let g1 = 1;
@@ -170,7 +308,7 @@ export function solvePrepared(p: PreparedComposition, guessPh = 7): EquilibriumS
   const speciesIonicStrength = (ionicStrengthM: number) => {
     outer++;
     g1 = conditionalConstants(p, ionicStrengthM, kp);
-    x = solveChargeBalance(p, kp, g1, x, counter);
+    x = solveChargeBalance(p, kp, g1, g1, x, counter);
     return p.strongIonicStrength + 0.5 * evI2;
   };
   let ionicStrength: number;
@@ -194,6 +332,9 @@ export interface SpeciesAmount {
   readonly protonsLost?: number;
   readonly charge: number;
   readonly concentrationM: number;
+  /** mol per kg of water. */
+  readonly molality: number;
+  /** Activity: molal (m·γ) with the Pitzer model, molar (c·γ) with the one-number models. */
   readonly activity: number;
 }
 
@@ -215,6 +356,14 @@ export interface SpeciationResult {
   readonly temperatureC: number;
   readonly activityModel: string;
   readonly ionicStrengthM: number;
+  /** Ionic strength on the molal scale, mol/kg. */
+  readonly ionicStrengthMolal: number;
+  /** kg of water per litre of solution (from apparent molar volumes; see pitzer/volumes.ts). */
+  readonly waterKgPerL: number;
+  /** Osmotic coefficient φ from the Pitzer equations at the species found (whatever model set the pH). */
+  readonly osmoticCoefficient: number;
+  /** Osmolality φ·Σm, mOsm/kg: what a freezing-point osmometer reads. */
+  readonly osmolalityMosmKg: number;
   readonly pKw: number;
   readonly debyeHuckelA: number;
   readonly species: readonly SpeciesAmount[];
@@ -249,39 +398,81 @@ export function speciate(composition: Composition): SpeciationResult {
   return report(p, state, composition);
 }
 
+/** Share of the ionic strength above which ions without Pitzer parameters earn a warning. */
+export const UNPARAMETERISED_SHARE_LIMIT = 0.25;
+/** Molal ionic strength above which that share matters (below it every ion is close to its Debye–Hückel limit). */
+export const UNPARAMETERISED_IONIC_STRENGTH_MOLAL = 0.5;
+/** Temperature distance from 25 °C (K) beyond which parameters without a published slope earn a warning in concentrated solution. */
+export const PITZER_TEMPERATURE_WINDOW_K = 10;
+
 /** Builds the full report from a solved state. */
 export function report(p: PreparedComposition, state: EquilibriumState, composition: Composition): SpeciationResult {
   const aH = Math.pow(10, -state.pH);
   const g1 = state.gamma1;
-  const gammaOf = (z: number) => Math.pow(g1, z * z);
-  const species: SpeciesAmount[] = [];
-  const hc = aH / g1;
-  const ohc = p.kw / (aH * g1);
-  species.push({ name: 'H+', charge: 1, concentrationM: hc, activity: aH });
-  species.push({ name: 'OH-', charge: -1, concentrationM: ohc, activity: ohc * g1 });
-  let residual = p.strongCharge + hc - ohc;
-  let totalCharge = hc + ohc;
-  for (const name of Object.keys(composition.strongIons ?? {})) {
-    const ion = findStrongIon('strongIons', name);
-    const c = composition.strongIons![name];
-    species.push({ name: ion.name, charge: ion.charge, concentrationM: c, activity: c * gammaOf(ion.charge) });
-    totalCharge += Math.abs(ion.charge) * c;
+  const ionNames = Object.keys(composition.strongIons ?? {});
+  const layout = p.pitzer ?? pitzerLayout(ionNames, ionNames.map((name) => composition.strongIons![name]), composition.systems, p.temperatureC, p.a);
+  const n = layout.speciesCount;
+  const charges = layout.system.charges;
+  let conc: readonly number[];
+  let waterKgPerL: number;
+  let ionicStrengthMolal: number;
+  let osmoticCoefficient: number;
+  const lnGamma = new Array<number>(n).fill(0);
+  if (state.pitzer) {
+    conc = state.pitzer.concentrations;
+    waterKgPerL = state.pitzer.waterKgPerL;
+    ionicStrengthMolal = state.pitzer.ionicStrengthMolal;
+    osmoticCoefficient = state.pitzer.osmoticCoefficient;
+    for (let i = 0; i < n; i++) lnGamma[i] = state.pitzer.lnGamma[i];
+  } else {
+    // The pH model is a one-number model; the osmotic coefficient still comes from the Pitzer equations at the species found.
+    const c = new Array<number>(n).fill(0);
+    c[H_INDEX] = aH / g1;
+    c[OH_INDEX] = p.kw / (aH * g1);
+    layout.strongConcentrations.forEach((v, i) => (c[STRONG_START + i] = v));
+    systemConcentrations(p, layout, state.mixedKa, aH, c);
+    conc = c;
+    waterKgPerL = waterKgPerLitre(p.waterDensity, c, layout.volumes, state.ionicStrengthM);
+    const evaluation: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1 };
+    pitzerEvaluate(layout.system, c.map((v) => v / waterKgPerL), new Array<number>(n).fill(0), evaluation);
+    ionicStrengthMolal = evaluation.ionicStrength;
+    osmoticCoefficient = evaluation.osmoticCoefficient;
+    const lnG1 = Math.log(g1);
+    for (let i = 0; i < n; i++) lnGamma[i] = lnG1 * charges[i] * charges[i];
   }
+  const molal = state.pitzer !== undefined;
+  const species: SpeciesAmount[] = [];
+  const push = (i: number, name: string, extra?: { system: string; protonsLost: number }) => {
+    const molality = conc[i] / waterKgPerL;
+    const gamma = Math.exp(lnGamma[i]);
+    species.push({ name, ...extra, charge: charges[i], concentrationM: conc[i], molality, activity: (molal ? molality : conc[i]) * gamma });
+  };
+  push(H_INDEX, 'H+');
+  push(OH_INDEX, 'OH-');
+  let residual = p.strongCharge + conc[H_INDEX] - conc[OH_INDEX];
+  let totalCharge = conc[H_INDEX] + conc[OH_INDEX];
+  ionNames.forEach((name, i) => {
+    const ion = findStrongIon('strongIons', name);
+    push(STRONG_START + i, ion.name);
+    totalCharge += Math.abs(ion.charge) * conc[STRONG_START + i];
+  });
+  let sumMolal = 0;
+  for (let i = 0; i < n; i++) sumMolal += conc[i] / waterKgPerL;
   const systems: SystemSpeciation[] = [];
   composition.systems.forEach((sys, j) => {
     const first = p.firstStep[j];
-    const n = p.stepCount[j];
+    const steps = p.stepCount[j];
+    const start = layout.systemStart[j];
     const weights = [1];
-    for (let k = 1; k <= n; k++) weights.push((weights[k - 1] * state.mixedKa[first + k - 1]) / aH);
+    for (let k = 1; k <= steps; k++) weights.push((weights[k - 1] * state.mixedKa[first + k - 1]) / aH);
     const sum = weights.reduce((a, b) => a + b, 0);
     const fractions = weights.map((w) => w / sum);
     let meanCharge = 0;
     fractions.forEach((fr, k) => {
       const z = sys.chargeOfMostProtonated - k;
-      const c = fr * sys.totalM;
       meanCharge += fr * z;
-      totalCharge += Math.abs(z) * c;
-      species.push({ name: `${sys.name} ${chargeLabel(z)}`, system: sys.name, protonsLost: k, charge: z, concentrationM: c, activity: c * gammaOf(z) });
+      totalCharge += Math.abs(z) * fr * sys.totalM;
+      push(start + k, `${sys.name} ${chargeLabel(z)}`, { system: sys.name, protonsLost: k });
     });
     residual += sys.totalM * meanCharge;
     systems.push({
@@ -289,18 +480,23 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
       totalM: sys.totalM,
       meanCharge,
       fractions,
-      apparentPKa: state.mixedKa.slice(first, first + n).map((k) => -Math.log10(k)),
+      apparentPKa: state.mixedKa.slice(first, first + steps).map((k) => -Math.log10(k)),
     });
   });
   const warnings = [...p.warnings];
-  if (p.model !== 'ideal' && state.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M) {
-    warnings.push(`Ionic strength ${state.ionicStrengthM.toPrecision(3)} M is above ${ACTIVITY_MODEL_LIMIT_M} M, beyond where the ${ACTIVITY_MODEL_NAMES[p.model]} activity model is reliable; the pH is an extrapolation.`);
+  if (p.model === 'pitzer') warnings.push(...pitzerWarnings(p, layout, conc, waterKgPerL, ionicStrengthMolal, composition));
+  else if (p.model !== 'ideal' && state.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M) {
+    warnings.push(`Ionic strength ${state.ionicStrengthM.toPrecision(3)} M is above ${ACTIVITY_MODEL_LIMIT_M} M, beyond where the ${ACTIVITY_MODEL_NAMES[p.model]} activity model is reliable; the pH is an extrapolation (the default Pitzer model holds here).`);
   }
   return {
     pH: state.pH,
     temperatureC: p.temperatureC,
     activityModel: p.model,
     ionicStrengthM: state.ionicStrengthM,
+    ionicStrengthMolal,
+    waterKgPerL,
+    osmoticCoefficient,
+    osmolalityMosmKg: osmoticCoefficient * sumMolal * 1000,
     pKw: pKw(p.temperatureC),
     debyeHuckelA: p.a,
     species,
@@ -313,6 +509,45 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     },
     warnings,
   };
+}
+
+/**
+ * The Pitzer model's own warnings: past its validated ionic strength; ions without
+ * parameters carrying much of a concentrated solution's ionic strength; parameters without
+ * a temperature slope used far from 25 °C in a concentrated solution.
+ */
+function pitzerWarnings(p: PreparedComposition, layout: PitzerLayout, conc: readonly number[], waterKgPerL: number, ionicStrengthMolal: number, composition: Composition): string[] {
+  const warnings: string[] = [];
+  if (ionicStrengthMolal > PITZER_LIMIT_MOLAL) {
+    warnings.push(`Ionic strength ${ionicStrengthMolal.toPrecision(3)} mol/kg is above ${PITZER_LIMIT_MOLAL} mol/kg, beyond the range most Pitzer parameters were fitted over; the pH is an extrapolation.`);
+  }
+  if (ionicStrengthMolal > UNPARAMETERISED_IONIC_STRENGTH_MOLAL) {
+    let share = 0;
+    const names = new Set<string>();
+    const charges = layout.system.charges;
+    layout.unparameterised.forEach((u, i) => {
+      if (!u || conc[i] <= 0) return;
+      const part = (0.5 * charges[i] * charges[i] * conc[i]) / waterKgPerL / ionicStrengthMolal;
+      share += part;
+      if (part > 0.01) names.add(speciesSystemName(composition, layout, i));
+    });
+    if (share > UNPARAMETERISED_SHARE_LIMIT) {
+      warnings.push(`Ions without published Pitzer parameters (${[...names].join(', ')}) carry ${(share * 100).toFixed(0)} % of the ionic strength (${ionicStrengthMolal.toPrecision(3)} mol/kg): their activity coefficients use a generic interaction, so the pH may be off by a few tenths.`);
+    }
+    if (layout.system.temperatureExtrapolated && Math.abs(p.temperatureC - 25) > PITZER_TEMPERATURE_WINDOW_K) {
+      warnings.push(`At ${p.temperatureC} °C some Pitzer parameters are used at their 25 °C values (no published temperature slope); in a solution this concentrated the pH is an estimate.`);
+    }
+  }
+  return warnings;
+}
+
+/** The system a species of the layout belongs to, for messages. */
+function speciesSystemName(composition: Composition, layout: PitzerLayout, index: number): string {
+  let name = 'an ion';
+  layout.systemStart.forEach((start, j) => {
+    if (index >= start) name = composition.systems[j].name;
+  });
+  return name;
 }
 
 /** pH of a composition (the lean call: no species report). */

@@ -128,7 +128,52 @@ function systemCharge(ka: readonly number[], zd: readonly number[], first: numbe
 export function titrantForPh(composition: Composition, titrant: Titrant, targetPh: number): TitrantAmount {
   requireNumber('targetPh', targetPh, MIN_TARGET_PH, MAX_TARGET_PH, `${MIN_TARGET_PH} to ${MAX_TARGET_PH}`);
   const p = prepare(composition);
-  return titrantForPhPrepared(p, prepareTitrant(titrant, p.temperatureC), titrant.name, targetPh);
+  const t = prepareTitrant(titrant, p.temperatureC);
+  if (!p.pitzer) return titrantForPhPrepared(p, t, titrant.name, targetPh);
+  // Pitzer: the one-number answer (Bates–Guggenheim, the Pitzer model's dilute limit) starts a secant on the amount with full solves.
+  const estimate = titrantForPhPrepared(oneNumberModel(p), t, titrant.name, targetPh);
+  const found = amountForPh((c) => withTitrant(composition, titrant, c), estimate.concentrationM, targetPh, false);
+  if (found.amount < 0) throw unreachable(p, titrant.name, targetPh, estimate.chargePerMole, found.amount);
+  return { concentrationM: found.amount, ionicStrengthM: found.ionicStrengthM, chargePerMole: estimate.chargePerMole, iterations: estimate.iterations + found.iterations };
+}
+
+/** Bisection-free secant steps allowed on an amount (it converges in 2–5 from the one-number estimate). */
+const MAX_AMOUNT_ITERATIONS = 50;
+/** pH agreement at which the amount is accepted: far below any reading. */
+const AMOUNT_PH_TOLERANCE = 1e-9;
+
+/** The same prepared composition under Bates–Guggenheim (for a starting estimate; every constant is shared). */
+function oneNumberModel(p: PreparedComposition): PreparedComposition {
+  return { ...p, model: 'bates-guggenheim', pitzer: undefined };
+}
+
+/**
+ * The amount c for which the composition `build(c)` solves to a target pH, by secant steps
+ * from an estimate; pH is monotonic in c, so the steps close in quickly. With `signed`,
+ * c may be negative (build then adds acid), else it is kept at or above zero until the end.
+ */
+function amountForPh(build: (c: number) => Composition, estimate: number, targetPh: number, signed: boolean): { amount: number; ionicStrengthM: number; iterations: number } {
+  const phAt = (c: number) => {
+    const q = prepare(build(c));
+    const state = solvePrepared(q, targetPh);
+    return { f: state.pH - targetPh, i: state.ionicStrengthM };
+  };
+  let c0 = estimate;
+  let r0 = phAt(c0);
+  if (Math.abs(r0.f) <= AMOUNT_PH_TOLERANCE) return { amount: c0, ionicStrengthM: r0.i, iterations: 1 };
+  let c1 = estimate === 0 ? 1e-6 : estimate * 1.01;
+  let r1 = phAt(c1);
+  for (let it = 2; it <= MAX_AMOUNT_ITERATIONS; it++) {
+    if (Math.abs(r1.f) <= AMOUNT_PH_TOLERANCE || r1.f === r0.f) return { amount: c1, ionicStrengthM: r1.i, iterations: it };
+    let next = c1 - (r1.f * (c1 - c0)) / (r1.f - r0.f);
+    if (!Number.isFinite(next) || Math.abs(next) > MAX_CONCENTRATION_M) next = 0.5 * (c1 + (next > 0 ? MAX_CONCENTRATION_M : signed ? -MAX_CONCENTRATION_M : 0));
+    if (!signed && next < 0) next = 0.5 * c1;
+    c0 = c1;
+    r0 = r1;
+    c1 = next;
+    r1 = phAt(c1);
+  }
+  throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The amount for the target pH', MAX_AMOUNT_ITERATIONS));
 }
 
 function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: string, targetPh: number): TitrantAmount {
@@ -163,6 +208,10 @@ function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: 
  * monovalent, so the ionic strength sees |c|. Used for capacity, where the pH moves both ways.
  */
 export function netStrongBaseForPh(p: PreparedComposition, pH: number): number {
+  if (p.pitzer) {
+    const estimate = netStrongBaseForPh(oneNumberModel(p), pH);
+    return amountForPh((c) => withTitrant(p.source, c >= 0 ? SODIUM_HYDROXIDE : HYDROCHLORIC_ACID, Math.abs(c)), estimate, pH, true).amount;
+  }
   const aH = Math.pow(10, -pH);
   let c = 0;
   const speciesIonicStrength = (ionicStrengthM: number) => {

@@ -60,6 +60,9 @@ describe('every warning together', () => {
     const result = speciate(c);
     expect(result.pH).toBeGreaterThan(7);
     const w = solutionWarnings(c, result);
-    expect(w.map((x) => x.slice(0, 12))).toEqual(['Temperature ', 'Ionic streng', expect.stringMatching(/^pH /), 'Ca2+ with su']);
+    // Default Pitzer model: at 70 °C and I ≈ 0.85 mol/kg it warns that some parameters have no temperature slope.
+    expect(w.map((x) => x.slice(0, 12))).toEqual(['Temperature ', 'At 70 °C som', expect.stringMatching(/^pH /), 'Ca2+ with su']);
+    const davies = speciate({ ...c, activityModel: 'davies' });
+    expect(solutionWarnings(c, davies).map((x) => x.slice(0, 12))).toEqual(['Temperature ', 'Ionic streng', expect.stringMatching(/^pH /), 'Ca2+ with su']);
   });
 });

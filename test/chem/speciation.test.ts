@@ -22,7 +22,7 @@ const PRIMARY_STANDARDS: { name: string; composition: Composition; pH: number }[
   { name: 'NaHCO3 + Na2CO3 0.025 + 0.025 mol/kg', pH: 10.012, composition: { systems: [{ ...CARBONATE, totalM: 0.05 }], strongIons: { 'Na+': 0.075 } } },
 ];
 
-describe('IUPAC 2002 primary pH standards at 25 °C (Buck et al. 2002), Davies + Goldberg 2002 constants, ±0.015', () => {
+describe('IUPAC 2002 primary pH standards at 25 °C (Buck et al. 2002), default (Pitzer) model + Goldberg 2002 constants, ±0.015', () => {
   it.each(PRIMARY_STANDARDS)('$name → pH $pH', ({ name, composition, pH }) => {
     expectClose(name, solvePh(composition), pH, PRIMARY_STANDARD_TOLERANCE);
   });
@@ -74,11 +74,14 @@ describe('speciate', () => {
     expectClose('HCl', solvePh({ systems: [], strongIons: { 'Cl-': 0.01 }, activityModel: 'ideal' }), 2, 1e-6);
   });
 
-  it('warns above 60 °C and above I = 0.5 M, but still solves', () => {
+  it('warns above 60 °C, above I = 0.5 M for Davies and above 4 mol/kg for Pitzer, but still solves', () => {
     const hot = speciate({ ...buffer, temperatureC: 80 });
     expect(hot.warnings.join(' ')).toMatch(/above 60 °C/);
-    const salty = speciate({ ...buffer, strongIons: { 'K+': 0.025, 'Na+': 1.05, 'Cl-': 1 } });
-    expect(salty.warnings.join(' ')).toMatch(/above 0.5 M/);
+    const salty = { ...buffer, strongIons: { 'K+': 0.025, 'Na+': 1.05, 'Cl-': 1 } };
+    expect(speciate({ ...salty, activityModel: 'davies' }).warnings.join(' ')).toMatch(/above 0.5 M/);
+    expect(speciate(salty).warnings).toEqual([]);
+    const brine = speciate({ ...buffer, strongIons: { 'K+': 0.025, 'Na+': 5.05, 'Cl-': 5 } });
+    expect(brine.warnings.join(' ')).toMatch(/above 4 mol\/kg/);
   });
 
   describe('bad input names the field, the value and what is allowed', () => {

@@ -1,0 +1,414 @@
+/**
+ * The Pitzer equations: activity coefficients of every ion and the osmotic coefficient of
+ * a mixed electrolyte solution, on the molal scale.
+ *
+ * Method (K. S. Pitzer, Activity Coefficients in Electrolyte Solutions, 2nd ed. 1991,
+ * ch. 3, eqs. for mixtures; the same form as Harvie, Møller & Weare 1984, eqs. 1–8):
+ *   ln γ_M = z_M² F + Σ_a m_a (2B_Ma + Z C_Ma) + Σ_c m_c (2Φ_Mc + Σ_a m_a ψ_Mca)
+ *            + Σ_{a<a'} m_a m_a' ψ_aa'M + |z_M| Σ_c Σ_a m_c m_a C_ca     (anions alike),
+ *   F = −A_φ [√I/(1 + b√I) + (2/b) ln(1 + b√I)] + Σ_c Σ_a m_c m_a B'_ca + Σ m m' Φ'
+ *   φ − 1 = (2/Σm)[−A_φ I^{3/2}/(1 + b√I) + Σ_c Σ_a m_c m_a (B^φ_ca + Z C_ca)
+ *            + Σ_{c<c'} m_c m_c' (Φ^φ_cc' + Σ_a m_a ψ_cc'a) + Σ_{a<a'} (anions alike)],
+ * with B = β⁰ + β¹ g(α₁√I) + β² g(α₂√I), g(x) = 2[1 − (1 + x)e^{−x}]/x², b = 1.2,
+ * A_φ = A·ln10/3 (A the log10 Debye–Hückel slope), and Φ = θ + Eθ(I), the
+ * unsymmetrical-mixing term from Pitzer's approximation of J(x) (K. S. Pitzer,
+ * J. Solution Chem. 4 (1975) 249, eq. 47: J = x/(4 + 4.581 x^{−0.7237} e^{−0.0120 x^{0.528}})).
+ * Neutral species have γ = 1 (ion–neutral λ terms are not modelled) but count in Σm.
+ *
+ * Parameters: ./parameters.ts. Ions with no parameters get the fallback there.
+ */
+import { PITZER_BINARY, PITZER_ION_CHARGE, PITZER_PSI, PITZER_THETA, PITZER_SLOPE_RANGE_C, PitzerIon, fallbackBeta1 } from './parameters';
+
+/** Pitzer's b, kg^½ mol^−½ (Pitzer 1991, ch. 3: the same for all salts). */
+const PITZER_B = 1.2;
+/** α₁ for all but 2:2 salts, kg^½ mol^−½ (Pitzer 1991, ch. 3). */
+const ALPHA1_DEFAULT = 2;
+/** α₂ for 2:2 salts, kg^½ mol^−½ (Pitzer & Mayorga 1974; HMW84). */
+const ALPHA2 = 12;
+/** Reference temperature of the tables, °C. */
+const TABLE_TEMPERATURE_C = 25;
+
+/** One solute species as the model sees it. */
+export interface PitzerSpecies {
+  readonly charge: number;
+  /** Its ion in the parameter tables, if any. */
+  readonly ion?: PitzerIon;
+}
+
+interface Triplet {
+  readonly i: number;
+  readonly j: number;
+  readonly k: number;
+  readonly psi: number;
+}
+interface LikePair {
+  readonly i: number;
+  readonly j: number;
+  readonly theta: number;
+  /** z_i·z_j when the charges differ (the pair then has an Eθ term), else 0. */
+  readonly zz: number;
+  readonly zi: number;
+  readonly zj: number;
+}
+
+/** The model reduced to numbers for one list of species at one temperature. */
+export interface PitzerSystem {
+  readonly charges: readonly number[];
+  readonly cations: readonly number[];
+  readonly anions: readonly number[];
+  /** Per cation–anion pair (cation-major): β⁰, β¹, β², C, α₁. */
+  readonly b0: readonly number[];
+  readonly b1: readonly number[];
+  readonly b2: readonly number[];
+  readonly c: readonly number[];
+  readonly alpha1: readonly number[];
+  readonly likePairs: readonly LikePair[];
+  readonly triplets: readonly Triplet[];
+  readonly aPhi: number;
+  /** Species that are charged but have no tabulated ion (they take the fallback). */
+  readonly unparameterised: readonly boolean[];
+  /** True when some pair with a tabulated value has no temperature slope and the temperature is not 25 °C. */
+  readonly temperatureExtrapolated: boolean;
+}
+
+const BINARY_BY_KEY = new Map<string, (typeof PITZER_BINARY)[number]>();
+for (const b of PITZER_BINARY) BINARY_BY_KEY.set(`${b.cation}|${b.anion}`, b);
+const THETA_BY_KEY = new Map<string, number>();
+for (const t of PITZER_THETA) {
+  THETA_BY_KEY.set(`${t.a}|${t.b}`, t.theta);
+  THETA_BY_KEY.set(`${t.b}|${t.a}`, t.theta);
+}
+const PSI_BY_KEY = new Map<string, number>();
+for (const p of PITZER_PSI) {
+  PSI_BY_KEY.set(`${p.a}|${p.b}|${p.other}`, p.psi);
+  PSI_BY_KEY.set(`${p.b}|${p.a}|${p.other}`, p.psi);
+}
+
+/**
+ * Builds the model for a list of species at a temperature.
+ *
+ * @param species - every solute species (neutral ones included; they only count in Σm)
+ * @param temperatureC - temperature, °C
+ * @param debyeHuckelA - the log10 Debye–Hückel slope A at that temperature
+ */
+export function pitzerSystem(species: readonly PitzerSpecies[], temperatureC: number, debyeHuckelA: number): PitzerSystem {
+  const charges = species.map((s) => s.charge);
+  const cations: number[] = [];
+  const anions: number[] = [];
+  species.forEach((s, i) => {
+    if (s.charge > 0) cations.push(i);
+    else if (s.charge < 0) anions.push(i);
+  });
+  const dT = temperatureC - TABLE_TEMPERATURE_C;
+  const slopeUsable = temperatureC >= PITZER_SLOPE_RANGE_C.min && temperatureC <= PITZER_SLOPE_RANGE_C.max;
+  let temperatureExtrapolated = false;
+  const b0: number[] = [];
+  const b1: number[] = [];
+  const b2: number[] = [];
+  const c: number[] = [];
+  const alpha1: number[] = [];
+  for (const ci of cations) {
+    for (const ai of anions) {
+      const zc = charges[ci];
+      const za = charges[ai];
+      const cat = species[ci].ion;
+      const an = species[ai].ion;
+      const p = cat && an ? BINARY_BY_KEY.get(`${cat}|${an}`) : undefined;
+      if (p) {
+        const slope = p.slope;
+        if (slope && slopeUsable) {
+          b0.push(p.beta0 + slope.beta0 * dT);
+          b1.push(p.beta1 + slope.beta1 * dT);
+          c.push(((p.cphi + (slope.cphi ?? 0) * dT) / 2) / Math.sqrt(Math.abs(zc * za)));
+        } else {
+          if (dT !== 0) temperatureExtrapolated = true;
+          b0.push(p.beta0);
+          b1.push(p.beta1);
+          c.push(p.cphi / 2 / Math.sqrt(Math.abs(zc * za)));
+        }
+        b2.push(p.beta2 ?? 0);
+        alpha1.push(p.alpha1 ?? ALPHA1_DEFAULT);
+      } else {
+        b0.push(0);
+        b1.push(fallbackBeta1(zc * za));
+        b2.push(0);
+        c.push(0);
+        alpha1.push(ALPHA1_DEFAULT);
+      }
+    }
+  }
+  const likePairs: LikePair[] = [];
+  const addLike = (list: readonly number[]) => {
+    for (let x = 0; x < list.length; x++) {
+      for (let y = x + 1; y < list.length; y++) {
+        const i = list[x];
+        const j = list[y];
+        const si = species[i].ion;
+        const sj = species[j].ion;
+        const theta = si && sj ? THETA_BY_KEY.get(`${si}|${sj}`) ?? 0 : 0;
+        const zi = Math.abs(charges[i]);
+        const zj = Math.abs(charges[j]);
+        if (theta !== 0 || zi !== zj) likePairs.push({ i, j, theta, zz: zi !== zj ? zi * zj : 0, zi, zj });
+      }
+    }
+  };
+  addLike(cations);
+  addLike(anions);
+  const triplets: Triplet[] = [];
+  const addTriplets = (like: readonly number[], other: readonly number[]) => {
+    for (let x = 0; x < like.length; x++) {
+      for (let y = x + 1; y < like.length; y++) {
+        const si = species[like[x]].ion;
+        const sj = species[like[y]].ion;
+        if (!si || !sj) continue;
+        for (const k of other) {
+          const sk = species[k].ion;
+          const psi = sk ? PSI_BY_KEY.get(`${si}|${sj}|${sk}`) : undefined;
+          if (psi) triplets.push({ i: like[x], j: like[y], k, psi });
+        }
+      }
+    }
+  };
+  addTriplets(cations, anions);
+  addTriplets(anions, cations);
+  return {
+    charges,
+    cations,
+    anions,
+    b0,
+    b1,
+    b2,
+    c,
+    alpha1,
+    likePairs,
+    triplets,
+    aPhi: (debyeHuckelA * Math.LN10) / 3,
+    unparameterised: species.map((s) => s.charge !== 0 && s.ion === undefined),
+    temperatureExtrapolated,
+  };
+}
+
+/** g(x) = 2[1 − (1 + x)e^{−x}]/x² (Pitzer 1991), with its series near 0. */
+function gFunction(x: number): number {
+  if (x < 1e-4) return 1 - (2 * x) / 3;
+  return (2 * (1 - (1 + x) * Math.exp(-x))) / (x * x);
+}
+
+/** g′(x) = −2[1 − (1 + x + x²/2)e^{−x}]/x² (Pitzer 1991), with its series near 0. */
+function gPrime(x: number): number {
+  if (x < 1e-4) return -x / 3;
+  return (-2 * (1 - (1 + x + (x * x) / 2) * Math.exp(-x))) / (x * x);
+}
+
+const J_C1 = 4.581;
+const J_C2 = 0.7237;
+const J_C3 = 0.012;
+const J_C4 = 0.528;
+
+/** Pitzer's J(x) and its derivative (J. Solution Chem. 4 (1975) 249, eq. 47). */
+function jFunction(x: number, out: { j: number; jp: number }): void {
+  if (x <= 0) {
+    out.j = 0;
+    out.jp = 0;
+    return;
+  }
+  const e = Math.exp(-J_C3 * Math.pow(x, J_C4));
+  const p = J_C1 * Math.pow(x, -J_C2) * e;
+  const d = 4 + p;
+  const dp = p * (-J_C2 / x - J_C3 * J_C4 * Math.pow(x, J_C4 - 1));
+  out.j = x / d;
+  out.jp = 1 / d - (x * dp) / (d * d);
+}
+
+const jA = { j: 0, jp: 0 };
+const jB = { j: 0, jp: 0 };
+const jC = { j: 0, jp: 0 };
+
+/**
+ * Eθ and Eθ′ for charges zi ≠ zj at ionic strength I (Pitzer 1975, eqs. 25–26).
+ * Writes into `out` (eth, ethp).
+ */
+function eTheta(zi: number, zj: number, aPhi: number, ionicStrength: number, sqrtI: number, out: { eth: number; ethp: number }): void {
+  const k = 6 * aPhi * sqrtI;
+  const xij = k * zi * zj;
+  const xii = k * zi * zi;
+  const xjj = k * zj * zj;
+  jFunction(xij, jA);
+  jFunction(xii, jB);
+  jFunction(xjj, jC);
+  const zz = zi * zj;
+  const eth = (zz / (4 * ionicStrength)) * (jA.j - 0.5 * jB.j - 0.5 * jC.j);
+  out.eth = eth;
+  out.ethp = -eth / ionicStrength + (zz / (8 * ionicStrength * ionicStrength)) * (xij * jA.jp - 0.5 * xii * jB.jp - 0.5 * xjj * jC.jp);
+}
+
+const eOut = { eth: 0, ethp: 0 };
+
+/** Result of one evaluation. */
+export interface PitzerEvaluation {
+  /** Molal ionic strength, mol/kg. */
+  ionicStrength: number;
+  /** Osmotic coefficient φ (NaN when Σm = 0). */
+  osmoticCoefficient: number;
+}
+
+/**
+ * ln γ of every species for the molalities given; also the molal ionic strength and φ.
+ *
+ * @param s - the prepared model
+ * @param m - molality of each species, mol/kg (same order as the species list)
+ * @param lnGamma - written: ln γ of each species (0 for neutral ones)
+ * @param result - written: ionic strength and osmotic coefficient
+ */
+export function pitzerEvaluate(s: PitzerSystem, m: readonly number[], lnGamma: number[], result: PitzerEvaluation): void {
+  const z = s.charges;
+  const n = z.length;
+  let i2 = 0;
+  let bigZ = 0;
+  let sumM = 0;
+  for (let q = 0; q < n; q++) {
+    const mq = m[q];
+    const zq = z[q];
+    i2 += mq * zq * zq;
+    bigZ += mq * Math.abs(zq);
+    sumM += mq;
+    lnGamma[q] = 0;
+  }
+  const ionicStrength = 0.5 * i2;
+  result.ionicStrength = ionicStrength;
+  if (ionicStrength <= 0) {
+    result.osmoticCoefficient = sumM > 0 ? 1 : NaN;
+    return;
+  }
+  const sqrtI = Math.sqrt(ionicStrength);
+  const bs = 1 + PITZER_B * sqrtI;
+  let bigF = -s.aPhi * (sqrtI / bs + (2 / PITZER_B) * Math.log(bs));
+  let phiSum = (-s.aPhi * ionicStrength * sqrtI) / bs;
+  let cSum = 0;
+
+  // g and g′ for the α values in use (2, 1.4 and 12 at most): computed once per evaluation.
+  const x2 = ALPHA1_DEFAULT * sqrtI;
+  const g2 = gFunction(x2);
+  const gp2 = gPrime(x2);
+  const e2 = Math.exp(-x2);
+  let g14 = 0;
+  let gp14 = 0;
+  let e14 = 0;
+  let g12 = 0;
+  let gp12 = 0;
+  let e12 = 0;
+  let have14 = false;
+
+  const cations = s.cations;
+  const anions = s.anions;
+  const nA = anions.length;
+  for (let x = 0; x < cations.length; x++) {
+    const ci = cations[x];
+    const mc = m[ci];
+    for (let y = 0; y < nA; y++) {
+      const ai = anions[y];
+      const ma = m[ai];
+      const p = x * nA + y;
+      const beta1 = s.b1[p];
+      const beta2 = s.b2[p];
+      let gA: number;
+      let gpA: number;
+      let eA: number;
+      if (s.alpha1[p] === ALPHA1_DEFAULT) {
+        gA = g2;
+        gpA = gp2;
+        eA = e2;
+      } else {
+        if (!have14) {
+          const x14 = 1.4 * sqrtI;
+          g14 = gFunction(x14);
+          gp14 = gPrime(x14);
+          e14 = Math.exp(-x14);
+          const x12 = ALPHA2 * sqrtI;
+          g12 = gFunction(x12);
+          gp12 = gPrime(x12);
+          e12 = Math.exp(-x12);
+          have14 = true;
+        }
+        gA = g14;
+        gpA = gp14;
+        eA = e14;
+      }
+      let bb = s.b0[p] + beta1 * gA;
+      let bp = beta1 * gpA;
+      let bphi = s.b0[p] + beta1 * eA;
+      if (beta2 !== 0) {
+        bb += beta2 * g12;
+        bp += beta2 * gp12;
+        bphi += beta2 * e12;
+      }
+      bp /= ionicStrength;
+      const cc = s.c[p];
+      const t = 2 * bb + bigZ * cc;
+      lnGamma[ci] += ma * t;
+      lnGamma[ai] += mc * t;
+      const mm = mc * ma;
+      bigF += mm * bp;
+      cSum += mm * cc;
+      phiSum += mm * (bphi + bigZ * cc);
+    }
+  }
+  const likePairs = s.likePairs;
+  for (let q = 0; q < likePairs.length; q++) {
+    const lp = likePairs[q];
+    const mi = m[lp.i];
+    const mj = m[lp.j];
+    let phi = lp.theta;
+    let phiPrime = 0;
+    if (lp.zz !== 0) {
+      eTheta(lp.zi, lp.zj, s.aPhi, ionicStrength, sqrtI, eOut);
+      phi += eOut.eth;
+      phiPrime = eOut.ethp;
+    }
+    lnGamma[lp.i] += 2 * mj * phi;
+    lnGamma[lp.j] += 2 * mi * phi;
+    const mm = mi * mj;
+    bigF += mm * phiPrime;
+    phiSum += mm * (phi + ionicStrength * phiPrime);
+  }
+  const triplets = s.triplets;
+  for (let q = 0; q < triplets.length; q++) {
+    const tr = triplets[q];
+    const mi = m[tr.i];
+    const mj = m[tr.j];
+    const mk = m[tr.k];
+    lnGamma[tr.i] += mj * mk * tr.psi;
+    lnGamma[tr.j] += mi * mk * tr.psi;
+    lnGamma[tr.k] += mi * mj * tr.psi;
+    phiSum += mi * mj * mk * tr.psi;
+  }
+  for (let q = 0; q < n; q++) {
+    const zq = z[q];
+    if (zq !== 0) lnGamma[q] += zq * zq * bigF + Math.abs(zq) * cSum;
+  }
+  result.osmoticCoefficient = sumM > 0 ? 1 + (2 / sumM) * phiSum : NaN;
+}
+
+/**
+ * Mean activity coefficient and osmotic coefficient of one salt M_νM X_νX at a molality,
+ * fully dissociated (the convention of the published tables).
+ *
+ * @param cation - the cation's tabulated name
+ * @param anion - the anion's tabulated name
+ * @param molality - molality of the salt, mol/kg
+ * @param temperatureC - °C
+ * @param debyeHuckelA - log10 Debye–Hückel slope at that temperature
+ * @returns γ± and φ
+ * @example saltCoefficients('Na+', 'Cl-', 1, 25, 0.5108).meanActivity // ≈ 0.657
+ */
+export function saltCoefficients(cation: PitzerIon, anion: PitzerIon, molality: number, temperatureC: number, debyeHuckelA: number): { meanActivity: number; osmotic: number } {
+  const zc = PITZER_ION_CHARGE[cation];
+  const za = PITZER_ION_CHARGE[anion];
+  const nuC = Math.abs(za);
+  const nuA = Math.abs(zc);
+  const system = pitzerSystem([{ charge: zc, ion: cation }, { charge: za, ion: anion }], temperatureC, debyeHuckelA);
+  const lnGamma = [0, 0];
+  const result: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 0 };
+  pitzerEvaluate(system, [nuC * molality, nuA * molality], lnGamma, result);
+  return { meanActivity: Math.exp((nuC * lnGamma[0] + nuA * lnGamma[1]) / (nuC + nuA)), osmotic: result.osmoticCoefficient };
+}

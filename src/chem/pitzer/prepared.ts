@@ -1,0 +1,78 @@
+/**
+ * The Pitzer model laid out over a composition's species, in a fixed order the solver
+ * iterates on: H⁺, OH⁻, the strong ions (in the order given), then every protonation state
+ * of every acid–base system (most protonated first).
+ */
+import type { AcidBaseChemistry } from '../composition';
+import { findStrongIon } from '../strongIons';
+import { PitzerSpecies, PitzerSystem, pitzerSystem } from './model';
+import { DEFAULT_SOLUTE_VOLUME_CM3, ION_VOLUME_CM3, NEUTRAL_VOLUME_CM3 } from './volumes';
+import { pitzerIonOfStrongIon, pitzerIonsOfSystem } from './species';
+
+/** Index of H⁺ and OH⁻ in the species list. */
+export const H_INDEX = 0;
+export const OH_INDEX = 1;
+/** Index of the first strong ion. */
+export const STRONG_START = 2;
+
+export interface PitzerLayout {
+  readonly system: PitzerSystem;
+  /** Partial molar volume of each species, cm³/mol. */
+  readonly volumes: readonly number[];
+  /** Index of the most protonated state of each acid–base system. */
+  readonly systemStart: readonly number[];
+  readonly speciesCount: number;
+  /** Concentration of each strong ion, mol/L, in species order from STRONG_START. */
+  readonly strongConcentrations: readonly number[];
+  /** Index of chloride: the strong ion if present, else a probe species at zero concentration (for the pH convention). */
+  readonly chlorideIndex: number;
+  /** Pure KCl at the temperature, for the MacInnes convention. */
+  readonly potassiumChloride: PitzerSystem;
+  /** True for charged species with no tabulated ion. */
+  readonly unparameterised: readonly boolean[];
+}
+
+function volumeOf(species: PitzerSpecies, systemName?: string): number {
+  if (species.ion) return ION_VOLUME_CM3[species.ion] ?? DEFAULT_SOLUTE_VOLUME_CM3;
+  if (species.charge === 0 && systemName) return NEUTRAL_VOLUME_CM3[systemName.trim().toLowerCase()] ?? DEFAULT_SOLUTE_VOLUME_CM3;
+  return DEFAULT_SOLUTE_VOLUME_CM3;
+}
+
+/**
+ * Lays out the species of a composition for the Pitzer equations.
+ *
+ * @param strongIonNames - the strong-ion keys as given (validated already)
+ * @param strongConcentrations - their concentrations, mol/L
+ * @param systems - the acid–base systems
+ * @param temperatureC - °C
+ * @param debyeHuckelA - log10 Debye–Hückel slope at the temperature
+ */
+export function pitzerLayout(strongIonNames: readonly string[], strongConcentrations: readonly number[], systems: readonly AcidBaseChemistry[], temperatureC: number, debyeHuckelA: number): PitzerLayout {
+  const species: PitzerSpecies[] = [{ charge: 1, ion: 'H+' }, { charge: -1, ion: 'OH-' }];
+  const volumes: number[] = [volumeOf(species[0]), volumeOf(species[1])];
+  for (const name of strongIonNames) {
+    const ion = findStrongIon('strongIons', name);
+    const s: PitzerSpecies = { charge: ion.charge, ion: pitzerIonOfStrongIon(ion.name) };
+    species.push(s);
+    volumes.push(volumeOf(s));
+  }
+  const systemStart: number[] = [];
+  for (const sys of systems) {
+    systemStart.push(species.length);
+    const ions = pitzerIonsOfSystem(sys);
+    for (let k = 0; k <= sys.steps.length; k++) {
+      const s: PitzerSpecies = { charge: sys.chargeOfMostProtonated - k, ion: ions[k] };
+      species.push(s);
+      volumes.push(volumeOf(s, sys.name));
+    }
+  }
+  let chlorideIndex = species.findIndex((s) => s.ion === 'Cl-');
+  if (chlorideIndex < 0) {
+    chlorideIndex = species.length;
+    species.push({ charge: -1, ion: 'Cl-' });
+    volumes.push(0);
+  }
+  const system = pitzerSystem(species, temperatureC, debyeHuckelA);
+  const potassiumChloride = pitzerSystem([{ charge: 1, ion: 'K+' }, { charge: -1, ion: 'Cl-' }], temperatureC, debyeHuckelA);
+  return { system, volumes, systemStart, speciesCount: species.length, strongConcentrations, chlorideIndex, potassiumChloride, unparameterised: system.unparameterised };
+}
