@@ -173,7 +173,7 @@ export interface PitzerState {
   readonly osmoticCoefficient: number;
 }
 
-/** Largest change of any ln γ at which the Pitzer iteration stops: moves a pH by under 1e-10. */
+/** Largest change of a pH-relevant ln γ (H⁺, OH⁻, buffer species weighted by their share) at which the Pitzer iteration stops: moves a pH by under 1e-10. */
 const PITZER_TOLERANCE = 1e-10;
 /** Activity-coefficient updates allowed before giving up (it converges in 4–12). */
 const MAX_PITZER_ITERATIONS = 200;
@@ -190,11 +190,8 @@ const MAX_PITZER_ITERATIONS = 200;
  * zero-concentration probe when no chloride is present); mean activity coefficients of
  * neutral combinations do not move.
  */
-const macInnesLnGamma = [0, 0];
-const macInnesResult: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1 };
-function applyPhConvention(layout: PitzerLayout, ionicStrengthMolal: number, lnGamma: number[]): void {
-  pitzerEvaluate(layout.potassiumChloride, [ionicStrengthMolal, ionicStrengthMolal], macInnesLnGamma, macInnesResult);
-  const k = 0.5 * (macInnesLnGamma[0] + macInnesLnGamma[1]) - lnGamma[layout.chlorideIndex];
+function applyPhConvention(layout: PitzerLayout, lnGammaKcl: number, lnGamma: number[]): void {
+  const k = lnGammaKcl - lnGamma[layout.chlorideIndex];
   const charges = layout.system.charges;
   for (let i = 0; i < lnGamma.length; i++) lnGamma[i] -= charges[i] * k;
 }
@@ -250,10 +247,11 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
   for (let i = 0; i < n; i++) lnGamma[i] = lnG0 * charges[i] * charges[i];
   let w = waterKgPerLitre(p.waterDensity, conc, layout.volumes, p.strongIonicStrength);
   const counter = { n: 0 };
-  const result: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1 };
+  const result: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
   let x = -guessPh * Math.LN10;
   let previousDelta = Infinity;
   let ionicStrengthM = 0;
+  let finalPass = false;
   for (let it = 1; it <= MAX_PITZER_ITERATIONS; it++) {
     const gH = Math.exp(lnGamma[H_INDEX]) / w;
     const gOH = Math.exp(lnGamma[OH_INDEX]) / w;
@@ -267,25 +265,40 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
     conc[H_INDEX] = aH / gH;
     conc[OH_INDEX] = p.kw / (aH * gOH);
     ionicStrengthM = p.strongIonicStrength + 0.5 * (conc[H_INDEX] + conc[OH_INDEX]) + systemConcentrations(p, layout, kp, aH, conc);
-    w = waterKgPerLitre(p.waterDensity, conc, layout.volumes, ionicStrengthM);
-    for (let i = 0; i < n; i++) m[i] = conc[i] / w;
-    pitzerEvaluate(layout.system, m, next, result);
-    applyPhConvention(layout, result.ionicStrength, next);
-    let delta = 0;
-    for (let i = 0; i < n; i++) {
-      const d = Math.abs(next[i] - lnGamma[i]);
-      if (d > delta) delta = d;
-    }
-    if (delta <= PITZER_TOLERANCE) {
+    if (finalPass) {
       return {
         pH: -x / Math.LN10,
         ionicStrengthM,
         gamma1: Math.exp(lnGamma[H_INDEX]),
         mixedKa: kp,
         evaluations: counter.n,
-        ionicStrengthIterations: it,
-        pitzer: { lnGamma: next, concentrations: conc, waterKgPerL: w, ionicStrengthMolal: result.ionicStrength, osmoticCoefficient: result.osmoticCoefficient },
+        ionicStrengthIterations: it - 1,
+        pitzer: { lnGamma, concentrations: conc, waterKgPerL: w, ionicStrengthMolal: result.ionicStrength, osmoticCoefficient: result.osmoticCoefficient },
       };
+    }
+    w = waterKgPerLitre(p.waterDensity, conc, layout.volumes, ionicStrengthM);
+    for (let i = 0; i < n; i++) m[i] = conc[i] / w;
+    pitzerEvaluate(layout.system, m, next, result);
+    applyPhConvention(layout, result.lnGammaKcl, next);
+    // What moves the pH: γ(H⁺), γ(OH⁻), and each buffer species' γ weighted by its share of its system
+    // (a trace form's γ hardly enters the charge balance); strong ions' γ do not enter it at all.
+    let delta = Math.max(Math.abs(next[H_INDEX] - lnGamma[H_INDEX]), Math.abs(next[OH_INDEX] - lnGamma[OH_INDEX]));
+    for (let j = 0; j < p.totals.length; j++) {
+      const total = p.totals[j];
+      if (total === 0) continue;
+      const base = layout.systemStart[j];
+      for (let k = 0; k <= p.stepCount[j]; k++) {
+        const d = (Math.abs(next[base + k] - lnGamma[base + k]) * conc[base + k]) / total;
+        if (d > delta) delta = d;
+      }
+    }
+    // The iteration contracts by the observed ratio r = δ_k/δ_{k−1} (about 1e-5 for buffers): the new γ are then
+    // within r·δ of the fixed point, and one last pH solve with them (a single Newton step from here) finishes.
+    const ratio = delta / previousDelta;
+    if (delta <= PITZER_TOLERANCE || (it > 1 && ratio < 0.5 && ratio * delta <= PITZER_TOLERANCE)) {
+      for (let i = 0; i < n; i++) lnGamma[i] = next[i];
+      finalPass = true;
+      continue;
     }
     const damp = delta >= previousDelta ? 0.5 : 1;
     for (let i = 0; i < n; i++) lnGamma[i] += damp * (next[i] - lnGamma[i]);
@@ -433,7 +446,7 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     systemConcentrations(p, layout, state.mixedKa, aH, c);
     conc = c;
     waterKgPerL = waterKgPerLitre(p.waterDensity, c, layout.volumes, state.ionicStrengthM);
-    const evaluation: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1 };
+    const evaluation: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
     pitzerEvaluate(layout.system, c.map((v) => v / waterKgPerL), new Array<number>(n).fill(0), evaluation);
     ionicStrengthMolal = evaluation.ionicStrength;
     osmoticCoefficient = evaluation.osmoticCoefficient;

@@ -69,6 +69,8 @@ export interface PitzerSystem {
   readonly unparameterised: readonly boolean[];
   /** True when some pair with a tabulated value has no temperature slope and the temperature is not 25 °C. */
   readonly temperatureExtrapolated: boolean;
+  /** KCl's β⁰, β¹ and C at the temperature (for the MacInnes pH convention). */
+  readonly kcl: { readonly b0: number; readonly b1: number; readonly c: number };
 }
 
 const BINARY_BY_KEY = new Map<string, (typeof PITZER_BINARY)[number]>();
@@ -171,7 +173,11 @@ export function pitzerSystem(species: readonly PitzerSpecies[], temperatureC: nu
   };
   addTriplets(cations, anions);
   addTriplets(anions, cations);
+  const kclParameters = BINARY_BY_KEY.get('K+|Cl-')!;
+  const kclSlope = slopeUsable ? kclParameters.slope! : { beta0: 0, beta1: 0, cphi: 0 };
+  const kcl = { b0: kclParameters.beta0 + kclSlope.beta0 * dT, b1: kclParameters.beta1 + kclSlope.beta1 * dT, c: (kclParameters.cphi + (kclSlope.cphi ?? 0) * dT) / 2 };
   return {
+    kcl,
     charges,
     cations,
     anions,
@@ -188,16 +194,16 @@ export function pitzerSystem(species: readonly PitzerSpecies[], temperatureC: nu
   };
 }
 
-/** g(x) = 2[1 − (1 + x)e^{−x}]/x² (Pitzer 1991), with its series near 0. */
-function gFunction(x: number): number {
+/** g(x) = 2[1 − (1 + x)e^{−x}]/x² (Pitzer 1991), given e = e^{−x}, with its series near 0. */
+function gFromExp(x: number, e: number): number {
   if (x < 1e-4) return 1 - (2 * x) / 3;
-  return (2 * (1 - (1 + x) * Math.exp(-x))) / (x * x);
+  return (2 * (1 - (1 + x) * e)) / (x * x);
 }
 
-/** g′(x) = −2[1 − (1 + x + x²/2)e^{−x}]/x² (Pitzer 1991), with its series near 0. */
-function gPrime(x: number): number {
+/** g′(x) = −2[1 − (1 + x + x²/2)e^{−x}]/x² (Pitzer 1991), given e = e^{−x}, with its series near 0. */
+function gPrimeFromExp(x: number, e: number): number {
   if (x < 1e-4) return -x / 3;
-  return (-2 * (1 - (1 + x + (x * x) / 2) * Math.exp(-x))) / (x * x);
+  return (-2 * (1 - (1 + x + (x * x) / 2) * e)) / (x * x);
 }
 
 const J_C1 = 4.581;
@@ -205,44 +211,57 @@ const J_C2 = 0.7237;
 const J_C3 = 0.012;
 const J_C4 = 0.528;
 
-/** Pitzer's J(x) and its derivative (J. Solution Chem. 4 (1975) 249, eq. 47). */
-function jFunction(x: number, out: { j: number; jp: number }): void {
-  if (x <= 0) {
-    out.j = 0;
-    out.jp = 0;
-    return;
-  }
-  const e = Math.exp(-J_C3 * Math.pow(x, J_C4));
-  const p = J_C1 * Math.pow(x, -J_C2) * e;
-  const d = 4 + p;
-  const dp = p * (-J_C2 / x - J_C3 * J_C4 * Math.pow(x, J_C4 - 1));
-  out.j = x / d;
-  out.jp = 1 / d - (x * dp) / (d * d);
-}
+/** k^{−C2} and k^{C4} for the multipliers k = zi·zj (1 to 9): with x = k·x₁₁, x^{−C2} = k^{−C2}·x₁₁^{−C2}, so one power of x₁₁ per evaluation serves every J. */
+const K_POW_C2 = Array.from({ length: 10 }, (_, k) => (k === 0 ? 0 : Math.pow(k, -J_C2)));
+const K_POW_C4 = Array.from({ length: 10 }, (_, k) => (k === 0 ? 0 : Math.pow(k, J_C4)));
 
-const jA = { j: 0, jp: 0 };
-const jB = { j: 0, jp: 0 };
-const jC = { j: 0, jp: 0 };
+/** J(x) and x·J′(x) at x = k·x₁₁ for the multipliers k that occur, filled once per evaluation. */
+const jValue = new Array<number>(10).fill(0);
+const jxPrime = new Array<number>(10).fill(0);
+const jStamp = new Array<number>(10).fill(-1);
+/** x₁₁^{−C2} and x₁₁^{C4} of the current evaluation. */
+let x11PowC2 = 0;
+let x11PowC4 = 0;
 
 /**
- * Eθ and Eθ′ for charges zi ≠ zj at ionic strength I (Pitzer 1975, eqs. 25–26).
- * Writes into `out` (eth, ethp).
+ * Pitzer's J(x) = x/(4 + C1 x^{−C2} e^{−C3 x^{C4}}) and x·J′(x) at x = k·x₁₁
+ * (J. Solution Chem. 4 (1975) 249, eq. 47), x₁₁ > 0.
  */
-function eTheta(zi: number, zj: number, aPhi: number, ionicStrength: number, sqrtI: number, out: { eth: number; ethp: number }): void {
-  const k = 6 * aPhi * sqrtI;
-  const xij = k * zi * zj;
-  const xii = k * zi * zi;
-  const xjj = k * zj * zj;
-  jFunction(xij, jA);
-  jFunction(xii, jB);
-  jFunction(xjj, jC);
-  const zz = zi * zj;
-  const eth = (zz / (4 * ionicStrength)) * (jA.j - 0.5 * jB.j - 0.5 * jC.j);
+function jAt(multiplier: number, x11: number, stamp: number): void {
+  if (jStamp[multiplier] === stamp) return;
+  const x = multiplier * x11;
+  const xc4 = K_POW_C4[multiplier] * x11PowC4;
+  const p = J_C1 * K_POW_C2[multiplier] * x11PowC2 * Math.exp(-J_C3 * xc4);
+  const d = 4 + p;
+  // x·dD/dx = p·(−C2 − C3·C4·x^{C4}), so x·J′ = x/D − x·(x·dD/dx)/D².
+  const xdp = p * (-J_C2 - J_C3 * J_C4 * xc4);
+  jValue[multiplier] = x / d;
+  jxPrime[multiplier] = x / d - (x * xdp) / (d * d);
+  jStamp[multiplier] = stamp;
+}
+
+/**
+ * Eθ and Eθ′ for charges zi ≠ zj at ionic strength I (Pitzer 1975, eqs. 25–26), with
+ * x_ij = 6 zi zj A_φ √I. Writes into `out` (eth, ethp).
+ */
+function eTheta(zi: number, zj: number, x11: number, ionicStrength: number, stamp: number, out: { eth: number; ethp: number }): void {
+  const ij = zi * zj;
+  const ii = zi * zi;
+  const jj = zj * zj;
+  jAt(ij, x11, stamp);
+  jAt(ii, x11, stamp);
+  jAt(jj, x11, stamp);
+  const eth = (ij / (4 * ionicStrength)) * (jValue[ij] - 0.5 * jValue[ii] - 0.5 * jValue[jj]);
   out.eth = eth;
-  out.ethp = -eth / ionicStrength + (zz / (8 * ionicStrength * ionicStrength)) * (xij * jA.jp - 0.5 * xii * jB.jp - 0.5 * xjj * jC.jp);
+  out.ethp = -eth / ionicStrength + (ij / (8 * ionicStrength * ionicStrength)) * (jxPrime[ij] - 0.5 * jxPrime[ii] - 0.5 * jxPrime[jj]);
 }
 
 const eOut = { eth: 0, ethp: 0 };
+/** Eθ and Eθ′ per charge pair (index zi·8 + zj), filled once per evaluation: they depend only on the charges and I. */
+const eThetaCache = new Array<number>(128).fill(0);
+const eThetaPrimeCache = new Array<number>(128).fill(0);
+const eThetaStamp = new Array<number>(128).fill(-1);
+let evaluationStamp = 0;
 
 /** Result of one evaluation. */
 export interface PitzerEvaluation {
@@ -250,6 +269,8 @@ export interface PitzerEvaluation {
   ionicStrength: number;
   /** Osmotic coefficient φ (NaN when Σm = 0). */
   osmoticCoefficient: number;
+  /** ln γ± of pure KCl at a molality equal to this ionic strength (the MacInnes convention's γ(Cl⁻)). */
+  lnGammaKcl: number;
 }
 
 /**
@@ -276,8 +297,10 @@ export function pitzerEvaluate(s: PitzerSystem, m: readonly number[], lnGamma: n
   }
   const ionicStrength = 0.5 * i2;
   result.ionicStrength = ionicStrength;
+  evaluationStamp++;
   if (ionicStrength <= 0) {
     result.osmoticCoefficient = sumM > 0 ? 1 : NaN;
+    result.lnGammaKcl = 0;
     return;
   }
   const sqrtI = Math.sqrt(ionicStrength);
@@ -288,9 +311,14 @@ export function pitzerEvaluate(s: PitzerSystem, m: readonly number[], lnGamma: n
 
   // g and g′ for the α values in use (2, 1.4 and 12 at most): computed once per evaluation.
   const x2 = ALPHA1_DEFAULT * sqrtI;
-  const g2 = gFunction(x2);
-  const gp2 = gPrime(x2);
   const e2 = Math.exp(-x2);
+  const g2 = gFromExp(x2, e2);
+  const gp2 = gPrimeFromExp(x2, e2);
+  {
+    // KCl at molality I: ln γ± = f^γ + I²B′ + 2I·B + 3I²C (the 1:1 case of the equations above).
+    const k = s.kcl;
+    result.lnGammaKcl = bigF + ionicStrength * k.b1 * gp2 + 2 * ionicStrength * (k.b0 + k.b1 * g2) + 3 * ionicStrength * ionicStrength * k.c;
+  }
   let g14 = 0;
   let gp14 = 0;
   let e14 = 0;
@@ -321,13 +349,13 @@ export function pitzerEvaluate(s: PitzerSystem, m: readonly number[], lnGamma: n
       } else {
         if (!have14) {
           const x14 = 1.4 * sqrtI;
-          g14 = gFunction(x14);
-          gp14 = gPrime(x14);
           e14 = Math.exp(-x14);
+          g14 = gFromExp(x14, e14);
+          gp14 = gPrimeFromExp(x14, e14);
           const x12 = ALPHA2 * sqrtI;
-          g12 = gFunction(x12);
-          gp12 = gPrime(x12);
           e12 = Math.exp(-x12);
+          g12 = gFromExp(x12, e12);
+          gp12 = gPrimeFromExp(x12, e12);
           have14 = true;
         }
         gA = g14;
@@ -354,6 +382,8 @@ export function pitzerEvaluate(s: PitzerSystem, m: readonly number[], lnGamma: n
     }
   }
   const likePairs = s.likePairs;
+  let x11Ready = false;
+  let x11 = 0;
   for (let q = 0; q < likePairs.length; q++) {
     const lp = likePairs[q];
     const mi = m[lp.i];
@@ -361,9 +391,21 @@ export function pitzerEvaluate(s: PitzerSystem, m: readonly number[], lnGamma: n
     let phi = lp.theta;
     let phiPrime = 0;
     if (lp.zz !== 0) {
-      eTheta(lp.zi, lp.zj, s.aPhi, ionicStrength, sqrtI, eOut);
-      phi += eOut.eth;
-      phiPrime = eOut.ethp;
+      const key = lp.zi * 8 + lp.zj;
+      if (eThetaStamp[key] !== evaluationStamp) {
+        if (!x11Ready) {
+          x11 = 6 * s.aPhi * sqrtI;
+          x11PowC2 = Math.pow(x11, -J_C2);
+          x11PowC4 = Math.pow(x11, J_C4);
+          x11Ready = true;
+        }
+        eTheta(lp.zi, lp.zj, x11, ionicStrength, evaluationStamp, eOut);
+        eThetaCache[key] = eOut.eth;
+        eThetaPrimeCache[key] = eOut.ethp;
+        eThetaStamp[key] = evaluationStamp;
+      }
+      phi += eThetaCache[key];
+      phiPrime = eThetaPrimeCache[key];
     }
     lnGamma[lp.i] += 2 * mj * phi;
     lnGamma[lp.j] += 2 * mi * phi;
@@ -408,7 +450,7 @@ export function saltCoefficients(cation: PitzerIon, anion: PitzerIon, molality: 
   const nuA = Math.abs(zc);
   const system = pitzerSystem([{ charge: zc, ion: cation }, { charge: za, ion: anion }], temperatureC, debyeHuckelA);
   const lnGamma = [0, 0];
-  const result: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 0 };
+  const result: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 0, lnGammaKcl: 0 };
   pitzerEvaluate(system, [nuC * molality, nuA * molality], lnGamma, result);
   return { meanActivity: Math.exp((nuC * lnGamma[0] + nuA * lnGamma[1]) / (nuC + nuA)), osmotic: result.osmoticCoefficient };
 }

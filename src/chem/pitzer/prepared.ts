@@ -26,8 +26,6 @@ export interface PitzerLayout {
   readonly strongConcentrations: readonly number[];
   /** Index of chloride: the strong ion if present, else a probe species at zero concentration (for the pH convention). */
   readonly chlorideIndex: number;
-  /** Pure KCl at the temperature, for the MacInnes convention. */
-  readonly potassiumChloride: PitzerSystem;
   /** True for charged species with no tabulated ion. */
   readonly unparameterised: readonly boolean[];
 }
@@ -48,6 +46,26 @@ function volumeOf(species: PitzerSpecies, systemName?: string): number {
  * @param debyeHuckelA - log10 Debye–Hückel slope at the temperature
  */
 export function pitzerLayout(strongIonNames: readonly string[], strongConcentrations: readonly number[], systems: readonly AcidBaseChemistry[], temperatureC: number, debyeHuckelA: number): PitzerLayout {
+  let key = `${temperatureC}|${strongIonNames.join(',')}`;
+  for (let j = 0; j < systems.length; j++) key += `|${systems[j].name}:${systems[j].chargeOfMostProtonated}:${systems[j].steps.length}`;
+  let shape = LAYOUT_CACHE.get(key);
+  if (!shape) {
+    if (LAYOUT_CACHE.size >= LAYOUT_CACHE_SIZE) LAYOUT_CACHE.clear();
+    shape = layoutShape(strongIonNames, systems, temperatureC, debyeHuckelA);
+    LAYOUT_CACHE.set(key, shape);
+  }
+  return { system: shape.system, volumes: shape.volumes, systemStart: shape.systemStart, speciesCount: shape.speciesCount, strongConcentrations, chlorideIndex: shape.chlorideIndex, unparameterised: shape.unparameterised };
+}
+
+/** Everything of a layout but the strong-ion amounts: the same for every solve of the same species at the same temperature. */
+type LayoutShape = Omit<PitzerLayout, 'strongConcentrations'>;
+
+/** Layouts already built, by temperature and species (a solve of the same kind of buffer reuses its layout; the table lookups cost more than the solve). */
+const LAYOUT_CACHE = new Map<string, LayoutShape>();
+/** Layouts kept before the cache is emptied: far more than one workbook's distinct buffers. */
+const LAYOUT_CACHE_SIZE = 256;
+
+function layoutShape(strongIonNames: readonly string[], systems: readonly AcidBaseChemistry[], temperatureC: number, debyeHuckelA: number): LayoutShape {
   const species: PitzerSpecies[] = [{ charge: 1, ion: 'H+' }, { charge: -1, ion: 'OH-' }];
   const volumes: number[] = [volumeOf(species[0]), volumeOf(species[1])];
   for (const name of strongIonNames) {
@@ -73,6 +91,5 @@ export function pitzerLayout(strongIonNames: readonly string[], strongConcentrat
     volumes.push(0);
   }
   const system = pitzerSystem(species, temperatureC, debyeHuckelA);
-  const potassiumChloride = pitzerSystem([{ charge: 1, ion: 'K+' }, { charge: -1, ion: 'Cl-' }], temperatureC, debyeHuckelA);
-  return { system, volumes, systemStart, speciesCount: species.length, strongConcentrations, chlorideIndex, potassiumChloride, unparameterised: system.unparameterised };
+  return { system, volumes, systemStart, speciesCount: species.length, chlorideIndex, unparameterised: system.unparameterised };
 }
