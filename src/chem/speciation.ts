@@ -377,6 +377,8 @@ export interface SpeciationResult {
   readonly osmoticCoefficient: number;
   /** Osmolality φ·Σm, mOsm/kg: what a freezing-point osmometer reads. */
   readonly osmolalityMosmKg: number;
+  /** Ideal osmolarity Σc over every particle, no osmotic coefficient, mOsm/L (see osmolarity.ts). */
+  readonly idealOsmolarityMosmL: number;
   readonly pKw: number;
   readonly debyeHuckelA: number;
   readonly species: readonly SpeciesAmount[];
@@ -470,7 +472,11 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     totalCharge += Math.abs(ion.charge) * conc[STRONG_START + i];
   });
   let sumMolal = 0;
-  for (let i = 0; i < n; i++) sumMolal += conc[i] / waterKgPerL;
+  let idealOsmolarityM = 0;
+  for (let i = 0; i < n; i++) {
+    sumMolal += conc[i] / waterKgPerL;
+    idealOsmolarityM += conc[i];
+  }
   const systems: SystemSpeciation[] = [];
   composition.systems.forEach((sys, j) => {
     const first = p.firstStep[j];
@@ -510,6 +516,7 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     waterKgPerL,
     osmoticCoefficient,
     osmolalityMosmKg: osmoticCoefficient * sumMolal * 1000,
+    idealOsmolarityMosmL: idealOsmolarityM * 1000,
     pKw: pKw(p.temperatureC),
     debyeHuckelA: p.a,
     species,

@@ -24,7 +24,7 @@ export const recipeInputSchema = z
     baseForm: z.string().optional(),
     stock: z.object({ fold: number, volumeMl: number.optional() }).strict().optional(),
     salts: z.array(z.object({ form: z.string().min(1), concentrationMm: number }).strict()).optional(),
-    saltTarget: z.object({ form: z.string().min(1), ionicStrengthM: number.optional(), idealOsmolarityMosm: number.optional() }).strict().optional(),
+    saltTarget: z.object({ form: z.string().min(1), ionicStrengthM: number.optional(), idealOsmolarityMosm: number.optional(), osmolalityMosmKg: number.optional() }).strict().optional(),
     benchTemperatureC: number.optional(),
     partVolumeFraction: number.optional(),
     purityPercent: z.record(z.string(), number).optional(),

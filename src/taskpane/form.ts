@@ -61,7 +61,7 @@ export type Checked = { readonly ok: true; readonly request: TableRequest } | { 
 export const MAX_TABLE_ROWS = 2000;
 /** Most pH values a start/stop/step series may produce before the row limit is checked. */
 const MAX_SERIES = 2000;
-export const ACTIVITY_MODELS: readonly PaneSettings['activityModel'][] = ['davies', 'ideal', 'bates-guggenheim'];
+export const ACTIVITY_MODELS: readonly PaneSettings['activityModel'][] = ['pitzer', 'davies', 'ideal', 'bates-guggenheim'];
 
 /** Limits for the numbers the pane accepts; the worksheet functions check the chemistry. */
 export const LIMITS = {
@@ -255,7 +255,7 @@ export function defaultInput(settings: Partial<PaneSettings> = {}): FormInput {
     saltMm: '150',
     volumeMl: '1000',
     benchTemperatureC: String(settings.benchTemperatureC ?? 22),
-    activityModel: settings.activityModel ?? 'davies',
+    activityModel: settings.activityModel ?? 'pitzer',
     partVolumeFraction: String(settings.partVolumeFraction ?? 0.8),
     userSubstances: '',
   };

@@ -120,6 +120,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
     pHAtBench: solvePh(withConditions(finished, s.benchT)),
     ionicStrengthM: result.ionicStrengthM,
     idealOsmolarityMosm: idealOsmolarity(result) * 1000,
+    osmolalityMosmKg: result.osmolalityMosmKg,
     baseMmPerTenthPh: cap.baseMmPerTenthPh,
     acidMmPerTenthPh: cap.acidMmPerTenthPh,
     betaMPerPh: cap.betaMPerPh,
@@ -366,20 +367,24 @@ function solveWithSaltTarget(s: Settled): RouteResult {
   if (!target) return routeResult(s, 0);
   s.library.findForm(target.form);
   const byIonicStrength = target.ionicStrengthM !== undefined;
-  if (byIonicStrength === (target.idealOsmolarityMosm !== undefined)) {
-    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('saltTarget', 'either ionicStrengthM or idealOsmolarityMosm'), 'saltTarget', 'ionicStrengthM or idealOsmolarityMosm');
+  const byOsmolality = target.osmolalityMosmKg !== undefined;
+  const given = [byIonicStrength, target.idealOsmolarityMosm !== undefined, byOsmolality].filter(Boolean).length;
+  if (given !== 1) {
+    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('saltTarget', 'one of ionicStrengthM, idealOsmolarityMosm or osmolalityMosmKg'), 'saltTarget', 'ionicStrengthM, idealOsmolarityMosm or osmolalityMosmKg');
   }
   const goal = byIonicStrength
     ? requireNumber('saltTarget.ionicStrengthM', target.ionicStrengthM, 0, 5, '0 to 5 mol/L')
-    : requireNumber('saltTarget.idealOsmolarityMosm', target.idealOsmolarityMosm, 0, 10000, '0 to 10,000 mOsm/L') / 1000;
+    : byOsmolality
+      ? requireNumber('saltTarget.osmolalityMosmKg', target.osmolalityMosmKg, 0, 10000, '0 to 10,000 mOsm/kg') / 1000
+      : requireNumber('saltTarget.idealOsmolarityMosm', target.idealOsmolarityMosm, 0, 10000, '0 to 10,000 mOsm/L') / 1000;
   const measure = (r: RouteResult) => {
     const sp = speciate(r.composition);
-    return byIonicStrength ? sp.ionicStrengthM : idealOsmolarity(sp);
+    return byIonicStrength ? sp.ionicStrengthM : byOsmolality ? sp.osmolalityMosmKg / 1000 : idealOsmolarity(sp);
   };
   const none = routeResult(s, 0);
   const reached = measure(none);
   if (reached > goal) {
-    const what = byIonicStrength ? 'ionic strength (mol/L)' : 'ideal osmolarity (mOsm/L)';
+    const what = byIonicStrength ? 'ionic strength (mol/L)' : byOsmolality ? 'osmolality (mOsm/kg)' : 'ideal osmolarity (mOsm/L)';
     const shown = byIonicStrength ? Number(reached.toPrecision(4)) : Number((reached * 1000).toPrecision(4));
     throw new ChemError('infeasible-target', 'saltTargetUnreachable', MESSAGES.saltTargetUnreachable(what, byIonicStrength ? goal : goal * 1000, shown), 'saltTarget', `a target above ${shown}`);
   }

@@ -154,6 +154,7 @@ export function formatRecipe(plan: RecipePlan): string {
   lines.push(`  pH at use               ${formatPh(p.pHAtUse)} at ${p.useTemperatureC} °C${atBench}`);
   lines.push(`  ionic strength          ${(p.ionicStrengthM * 1000).toFixed(1)} mM`);
   lines.push(`  ideal osmolarity        ${p.idealOsmolarityMosm.toFixed(0)} mOsm/L`);
+  lines.push(`  osmolality              ${p.osmolalityMosmKg.toFixed(0)} mOsm/kg (Pitzer osmotic coefficient)`);
   lines.push(`  capacity                ${p.baseMmPerTenthPh.toFixed(2)} mM base or ${p.acidMmPerTenthPh.toFixed(2)} mM acid per 0.1 pH`);
   lines.push(`  temperature             ${p.pHPerDegreeC.toFixed(4)} pH per °C`);
   lines.push(`  tenfold dilution        pH ${formatPh(p.pHAfterTenfoldDilution)}`);

@@ -32,10 +32,12 @@ export interface SaltAmount {
 /** Add a salt until the final buffer reaches an ionic strength or an ideal osmolarity. */
 export interface SaltTarget {
   readonly form: string;
-  /** Target ionic strength, mol/L. Give this or `idealOsmolarityMosm`. */
+  /** Target ionic strength, mol/L. Give exactly one of this, `idealOsmolarityMosm` and `osmolalityMosmKg`. */
   readonly ionicStrengthM?: number;
   /** Target ideal osmolarity, mOsm/L. */
   readonly idealOsmolarityMosm?: number;
+  /** Target osmolality (what an osmometer reads), mOsm/kg. */
+  readonly osmolalityMosmKg?: number;
 }
 
 /** Everything the planner needs. Units are in the names. */
@@ -133,6 +135,8 @@ export interface RecipePredictions {
   readonly ionicStrengthM: number;
   /** Ideal osmolarity (every particle counted once, no osmotic coefficient), mOsm/L. */
   readonly idealOsmolarityMosm: number;
+  /** Osmolality φ·Σm, mOsm/kg (φ from the Pitzer equations): what a freezing-point osmometer reads. */
+  readonly osmolalityMosmKg: number;
   /** mM of strong base that raises the pH by 0.1, and of strong acid that lowers it by 0.1. */
   readonly baseMmPerTenthPh: number;
   readonly acidMmPerTenthPh: number;

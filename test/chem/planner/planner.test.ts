@@ -62,6 +62,15 @@ describe('recipe planner: round trips (within 0.001 pH)', () => {
     expect(plan.components.some((c) => c.name === 'sodium chloride' && c.grams! > 7)).toBe(true);
   });
 
+  it('salt target by osmolality: HEPES saline to 290 mOsm/kg on the osmometer, within 0.01 mOsm/kg, needing more NaCl than the same ideal osmolarity', () => {
+    const input = { buffer: 'HEPES', targetPh: 7.2, concentrationMm: 10, volumeMl: 1000, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, saltTarget: { form: 'NaCl', osmolalityMosmKg: 290 } };
+    const plan = planRecipe(input);
+    expect(Math.abs(plan.predictions.osmolalityMosmKg - 290)).toBeLessThan(0.01);
+    const grams = (p: typeof plan) => p.components.find((c) => c.name === 'sodium chloride')!.grams!;
+    expect(grams(plan)).toBeGreaterThan(grams(planRecipe(RECIPES[7][1])));
+    expect(formatRecipe(plan)).toMatch(/osmolality +290 mOsm\/kg/);
+  });
+
   it('salt target by ionic strength: 0.15 M reached within 1e-6 M', () => {
     const plan = planRecipe({ buffer: 'MOPS', targetPh: 7.2, concentrationMm: 20, volumeMl: 1000, form: 'MOPS free acid', titrant: { form: 'KOH', concentrationM: 1 }, saltTarget: { form: 'KCl', ionicStrengthM: 0.15 } });
     expect(Math.abs(plan.predictions.ionicStrengthM - 0.15)).toBeLessThan(1e-6);
@@ -238,7 +247,7 @@ describe('recipe planner: bad input names the field and what is allowed', () => 
     ['a purity of 0 %', { purityPercent: { 'HEPES free acid': 0 } }, /purityPercent\.HEPES free acid is 0/, 'invalid-input'],
     ['a form purity of 120 %', { formPurityPercent: 120 }, /formPurityPercent is 120; allowed: 1 to 100 %/, 'invalid-input'],
     ['a salt target already passed', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 10 } }, /already gives/, 'infeasible-target'],
-    ['a salt target with both goals', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 300, ionicStrengthM: 0.1 } }, /either ionicStrengthM or idealOsmolarityMosm/, 'invalid-input'],
+    ['a salt target with both goals', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 300, ionicStrengthM: 0.1 } }, /one of ionicStrengthM, idealOsmolarityMosm or osmolalityMosmKg/, 'invalid-input'],
   ];
   it.each(cases)('given %s', (_label, change, message, kind) => {
     let caught: unknown;
