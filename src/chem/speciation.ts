@@ -363,6 +363,14 @@ export interface SystemSpeciation {
   readonly apparentPKa: readonly number[];
 }
 
+/** How much of a solution the Pitzer parameters cover. */
+export interface PitzerCoverage {
+  /** Fraction (0–1) of the molal ionic strength carried by ions without published parameters. */
+  readonly unparameterisedShare: number;
+  /** Acid–base systems whose ions carry more than 1 % of the ionic strength without parameters. */
+  readonly unparameterisedSystems: readonly string[];
+}
+
 /** The full answer for a composition. */
 export interface SpeciationResult {
   readonly pH: number;
@@ -379,6 +387,8 @@ export interface SpeciationResult {
   readonly osmolalityMosmKg: number;
   /** Ideal osmolarity Σc over every particle, no osmotic coefficient, mOsm/L (see osmolarity.ts). */
   readonly idealOsmolarityMosmL: number;
+  /** Share of the molal ionic strength carried by ions the Pitzer tables do not hold (they take the generic fallback), and the systems they belong to. */
+  readonly pitzerCoverage: PitzerCoverage;
   readonly pKw: number;
   readonly debyeHuckelA: number;
   readonly species: readonly SpeciesAmount[];
@@ -503,7 +513,8 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     });
   });
   const warnings = [...p.warnings];
-  if (p.model === 'pitzer') warnings.push(...pitzerWarnings(p, layout, conc, waterKgPerL, ionicStrengthMolal, composition));
+  const coverage = pitzerCoverage(layout, conc, waterKgPerL, ionicStrengthMolal, composition);
+  if (p.model === 'pitzer') warnings.push(...pitzerWarnings(p, layout, coverage, ionicStrengthMolal));
   else if (p.model !== 'ideal' && state.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M) {
     warnings.push(`Ionic strength ${state.ionicStrengthM.toPrecision(3)} M is above ${ACTIVITY_MODEL_LIMIT_M} M, beyond where the ${ACTIVITY_MODEL_NAMES[p.model]} activity model is reliable; the pH is an extrapolation (the default Pitzer model holds here).`);
   }
@@ -517,6 +528,7 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     osmoticCoefficient,
     osmolalityMosmKg: osmoticCoefficient * sumMolal * 1000,
     idealOsmolarityMosmL: idealOsmolarityM * 1000,
+    pitzerCoverage: coverage,
     pKw: pKw(p.temperatureC),
     debyeHuckelA: p.a,
     species,
@@ -536,29 +548,34 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
  * parameters carrying much of a concentrated solution's ionic strength; parameters without
  * a temperature slope used far from 25 °C in a concentrated solution.
  */
-function pitzerWarnings(p: PreparedComposition, layout: PitzerLayout, conc: readonly number[], waterKgPerL: number, ionicStrengthMolal: number, composition: Composition): string[] {
+function pitzerWarnings(p: PreparedComposition, layout: PitzerLayout, coverage: PitzerCoverage, ionicStrengthMolal: number): string[] {
   const warnings: string[] = [];
   if (ionicStrengthMolal > PITZER_LIMIT_MOLAL) {
     warnings.push(`Ionic strength ${ionicStrengthMolal.toPrecision(3)} mol/kg is above ${PITZER_LIMIT_MOLAL} mol/kg, beyond the range most Pitzer parameters were fitted over; the pH is an extrapolation.`);
   }
   if (ionicStrengthMolal > UNPARAMETERISED_IONIC_STRENGTH_MOLAL) {
-    let share = 0;
-    const names = new Set<string>();
-    const charges = layout.system.charges;
-    layout.unparameterised.forEach((u, i) => {
-      if (!u || conc[i] <= 0) return;
-      const part = (0.5 * charges[i] * charges[i] * conc[i]) / waterKgPerL / ionicStrengthMolal;
-      share += part;
-      if (part > 0.01) names.add(speciesSystemName(composition, layout, i));
-    });
-    if (share > UNPARAMETERISED_SHARE_LIMIT) {
-      warnings.push(`Ions without published Pitzer parameters (${[...names].join(', ')}) carry ${(share * 100).toFixed(0)} % of the ionic strength (${ionicStrengthMolal.toPrecision(3)} mol/kg): their activity coefficients use a generic interaction, so the pH may be off by a few tenths.`);
+    if (coverage.unparameterisedShare > UNPARAMETERISED_SHARE_LIMIT) {
+      warnings.push(`Ions without published Pitzer parameters (${coverage.unparameterisedSystems.join(', ')}) carry ${(coverage.unparameterisedShare * 100).toFixed(0)} % of the ionic strength (${ionicStrengthMolal.toPrecision(3)} mol/kg): their activity coefficients use a generic interaction, so the pH may be off by a few tenths.`);
     }
     if (layout.system.temperatureExtrapolated && Math.abs(p.temperatureC - 25) > PITZER_TEMPERATURE_WINDOW_K) {
       warnings.push(`At ${p.temperatureC} °C some Pitzer parameters are used at their 25 °C values (no published temperature slope); in a solution this concentrated the pH is an estimate.`);
     }
   }
   return warnings;
+}
+
+/** How much of the molal ionic strength ions without Pitzer parameters carry, and whose they are. */
+function pitzerCoverage(layout: PitzerLayout, conc: readonly number[], waterKgPerL: number, ionicStrengthMolal: number, composition: Composition): PitzerCoverage {
+  let share = 0;
+  const names = new Set<string>();
+  const charges = layout.system.charges;
+  layout.unparameterised.forEach((u, i) => {
+    if (!u || conc[i] <= 0 || ionicStrengthMolal <= 0) return;
+    const part = (0.5 * charges[i] * charges[i] * conc[i]) / waterKgPerL / ionicStrengthMolal;
+    share += part;
+    if (part > 0.01) names.add(speciesSystemName(composition, layout, i));
+  });
+  return { unparameterisedShare: share, unparameterisedSystems: [...names] };
 }
 
 /** The system a species of the layout belongs to, for messages. */

@@ -120,6 +120,9 @@ describe('concentrated stocks (default Pitzer model)', () => {
     const hepes = { name: 'HEPES', chargeOfMostProtonated: 0, steps: [{ pKa: 7.564 }] };
     const r = speciate({ systems: [{ ...hepes, totalM: 2 }], strongIons: { 'Na+': 1 } });
     expect(r.warnings.join(' ')).toMatch(/without published Pitzer parameters \(HEPES\)/);
+    expect(r.pitzerCoverage.unparameterisedSystems).toEqual(['HEPES']);
+    expect(r.pitzerCoverage.unparameterisedShare).toBeGreaterThan(0.4);
+    expect(speciate(salinePhosphate(10)).pitzerCoverage.unparameterisedShare).toBe(0);
   });
 });
 
