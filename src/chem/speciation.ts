@@ -225,6 +225,11 @@ function systemConcentrations(p: PreparedComposition, layout: PitzerLayout, kp: 
   return halfZ2;
 }
 
+let scratchMolality: number[] = [];
+const pitzerCounter = { n: 0 };
+const pitzerResult: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
+let scratchNext: number[] = [];
+
 /**
  * The Pitzer solve: the pH at fixed activity coefficients (the same safeguarded Newton as
  * the other models), then every ion's γ from the species found, repeated until no ln γ moves
@@ -234,9 +239,14 @@ function systemConcentrations(p: PreparedComposition, layout: PitzerLayout, kp: 
 function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[], guessPh: number): EquilibriumState {
   const n = layout.speciesCount;
   const conc = new Array<number>(n).fill(0);
-  const m = new Array<number>(n).fill(0);
   const lnGamma = new Array<number>(n).fill(0);
-  const next = new Array<number>(n).fill(0);
+  // Scratch shared by every solve (the solver is synchronous); conc and lnGamma are returned, so they are the solve's own.
+  if (scratchMolality.length < n) {
+    scratchMolality = new Array<number>(n).fill(0);
+    scratchNext = new Array<number>(n).fill(0);
+  }
+  const m = scratchMolality;
+  const next = scratchNext;
   const strong = layout.strongConcentrations;
   for (let i = 0; i < strong.length; i++) conc[STRONG_START + i] = strong[i];
   const charges = layout.system.charges;
@@ -246,8 +256,9 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
   const lnG0 = -p.a * ionicStrengthFactor('bates-guggenheim', start) * Math.LN10;
   for (let i = 0; i < n; i++) lnGamma[i] = lnG0 * charges[i] * charges[i];
   let w = waterKgPerLitre(p.waterDensity, conc, layout.volumes, p.strongIonicStrength);
-  const counter = { n: 0 };
-  const result: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
+  const counter = pitzerCounter;
+  counter.n = 0;
+  const result = pitzerResult;
   let x = -guessPh * Math.LN10;
   let previousDelta = Infinity;
   let ionicStrengthM = 0;

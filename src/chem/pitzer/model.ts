@@ -35,20 +35,21 @@ export interface PitzerSpecies {
   readonly ion?: PitzerIon;
 }
 
-interface Triplet {
-  readonly i: number;
-  readonly j: number;
-  readonly k: number;
-  readonly psi: number;
+/** Like-charged pairs as parallel arrays (faster to walk than objects): species i and j, θ, |z_i|, |z_j|, and whether the pair has an Eθ term (charges differ). */
+interface LikePairs {
+  readonly i: readonly number[];
+  readonly j: readonly number[];
+  readonly theta: readonly number[];
+  readonly zi: readonly number[];
+  readonly zj: readonly number[];
+  readonly unsymmetric: readonly boolean[];
 }
-interface LikePair {
-  readonly i: number;
-  readonly j: number;
-  readonly theta: number;
-  /** z_i·z_j when the charges differ (the pair then has an Eθ term), else 0. */
-  readonly zz: number;
-  readonly zi: number;
-  readonly zj: number;
+/** Triplets (two like-charged ions and one of the other sign) as parallel arrays, with their ψ. */
+interface Triplets {
+  readonly i: readonly number[];
+  readonly j: readonly number[];
+  readonly k: readonly number[];
+  readonly psi: readonly number[];
 }
 
 /** The model reduced to numbers for one list of species at one temperature. */
@@ -62,8 +63,8 @@ export interface PitzerSystem {
   readonly b2: readonly number[];
   readonly c: readonly number[];
   readonly alpha1: readonly number[];
-  readonly likePairs: readonly LikePair[];
-  readonly triplets: readonly Triplet[];
+  readonly likePairs: LikePairs;
+  readonly triplets: Triplets;
   readonly aPhi: number;
   /** Species that are charged but have no tabulated ion (they take the fallback). */
   readonly unparameterised: readonly boolean[];
@@ -139,7 +140,7 @@ export function pitzerSystem(species: readonly PitzerSpecies[], temperatureC: nu
       }
     }
   }
-  const likePairs: LikePair[] = [];
+  const likePairs = { i: [] as number[], j: [] as number[], theta: [] as number[], zi: [] as number[], zj: [] as number[], unsymmetric: [] as boolean[] };
   const addLike = (list: readonly number[]) => {
     for (let x = 0; x < list.length; x++) {
       for (let y = x + 1; y < list.length; y++) {
@@ -150,13 +151,20 @@ export function pitzerSystem(species: readonly PitzerSpecies[], temperatureC: nu
         const theta = si && sj ? THETA_BY_KEY.get(`${si}|${sj}`) ?? 0 : 0;
         const zi = Math.abs(charges[i]);
         const zj = Math.abs(charges[j]);
-        if (theta !== 0 || zi !== zj) likePairs.push({ i, j, theta, zz: zi !== zj ? zi * zj : 0, zi, zj });
+        if (theta !== 0 || zi !== zj) {
+          likePairs.i.push(i);
+          likePairs.j.push(j);
+          likePairs.theta.push(theta);
+          likePairs.zi.push(zi);
+          likePairs.zj.push(zj);
+          likePairs.unsymmetric.push(zi !== zj);
+        }
       }
     }
   };
   addLike(cations);
   addLike(anions);
-  const triplets: Triplet[] = [];
+  const triplets = { i: [] as number[], j: [] as number[], k: [] as number[], psi: [] as number[] };
   const addTriplets = (like: readonly number[], other: readonly number[]) => {
     for (let x = 0; x < like.length; x++) {
       for (let y = x + 1; y < like.length; y++) {
@@ -166,7 +174,12 @@ export function pitzerSystem(species: readonly PitzerSpecies[], temperatureC: nu
         for (const k of other) {
           const sk = species[k].ion;
           const psi = sk ? PSI_BY_KEY.get(`${si}|${sj}|${sk}`) : undefined;
-          if (psi) triplets.push({ i: like[x], j: like[y], k, psi });
+          if (psi) {
+            triplets.i.push(like[x]);
+            triplets.j.push(like[y]);
+            triplets.k.push(k);
+            triplets.psi.push(psi);
+          }
         }
       }
     }
@@ -381,17 +394,22 @@ export function pitzerEvaluate(s: PitzerSystem, m: readonly number[], lnGamma: n
       phiSum += mm * (bphi + bigZ * cc);
     }
   }
-  const likePairs = s.likePairs;
+  const lp = s.likePairs;
+  const lpI = lp.i;
+  const lpJ = lp.j;
   let x11Ready = false;
   let x11 = 0;
-  for (let q = 0; q < likePairs.length; q++) {
-    const lp = likePairs[q];
-    const mi = m[lp.i];
-    const mj = m[lp.j];
-    let phi = lp.theta;
+  for (let q = 0; q < lpI.length; q++) {
+    const i = lpI[q];
+    const j = lpJ[q];
+    const mi = m[i];
+    const mj = m[j];
+    let phi = lp.theta[q];
     let phiPrime = 0;
-    if (lp.zz !== 0) {
-      const key = lp.zi * 8 + lp.zj;
+    if (lp.unsymmetric[q]) {
+      const zi = lp.zi[q];
+      const zj = lp.zj[q];
+      const key = zi * 8 + zj;
       if (eThetaStamp[key] !== evaluationStamp) {
         if (!x11Ready) {
           x11 = 6 * s.aPhi * sqrtI;
@@ -399,7 +417,7 @@ export function pitzerEvaluate(s: PitzerSystem, m: readonly number[], lnGamma: n
           x11PowC4 = Math.pow(x11, J_C4);
           x11Ready = true;
         }
-        eTheta(lp.zi, lp.zj, x11, ionicStrength, evaluationStamp, eOut);
+        eTheta(zi, zj, x11, ionicStrength, evaluationStamp, eOut);
         eThetaCache[key] = eOut.eth;
         eThetaPrimeCache[key] = eOut.ethp;
         eThetaStamp[key] = evaluationStamp;
@@ -407,22 +425,26 @@ export function pitzerEvaluate(s: PitzerSystem, m: readonly number[], lnGamma: n
       phi += eThetaCache[key];
       phiPrime = eThetaPrimeCache[key];
     }
-    lnGamma[lp.i] += 2 * mj * phi;
-    lnGamma[lp.j] += 2 * mi * phi;
+    lnGamma[i] += 2 * mj * phi;
+    lnGamma[j] += 2 * mi * phi;
     const mm = mi * mj;
     bigF += mm * phiPrime;
     phiSum += mm * (phi + ionicStrength * phiPrime);
   }
-  const triplets = s.triplets;
-  for (let q = 0; q < triplets.length; q++) {
-    const tr = triplets[q];
-    const mi = m[tr.i];
-    const mj = m[tr.j];
-    const mk = m[tr.k];
-    lnGamma[tr.i] += mj * mk * tr.psi;
-    lnGamma[tr.j] += mi * mk * tr.psi;
-    lnGamma[tr.k] += mi * mj * tr.psi;
-    phiSum += mi * mj * mk * tr.psi;
+  const tr = s.triplets;
+  const trI = tr.i;
+  for (let q = 0; q < trI.length; q++) {
+    const i = trI[q];
+    const j = tr.j[q];
+    const k = tr.k[q];
+    const psi = tr.psi[q];
+    const mi = m[i];
+    const mj = m[j];
+    const mk = m[k];
+    lnGamma[i] += mj * mk * psi;
+    lnGamma[j] += mi * mk * psi;
+    lnGamma[k] += mi * mj * psi;
+    phiSum += mi * mj * mk * psi;
   }
   for (let q = 0; q < n; q++) {
     const zq = z[q];

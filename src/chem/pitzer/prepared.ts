@@ -46,13 +46,20 @@ function volumeOf(species: PitzerSpecies, systemName?: string): number {
  * @param debyeHuckelA - log10 Debye–Hückel slope at the temperature
  */
 export function pitzerLayout(strongIonNames: readonly string[], strongConcentrations: readonly number[], systems: readonly AcidBaseChemistry[], temperatureC: number, debyeHuckelA: number): PitzerLayout {
-  let key = `${temperatureC}|${strongIonNames.join(',')}`;
-  for (let j = 0; j < systems.length; j++) key += `|${systems[j].name}:${systems[j].chargeOfMostProtonated}:${systems[j].steps.length}`;
-  let shape = LAYOUT_CACHE.get(key);
-  if (!shape) {
+  let key = '';
+  for (let i = 0; i < strongIonNames.length; i++) key += strongIonNames[i] + ',';
+  for (let j = 0; j < systems.length; j++) key += '|' + systems[j].name + ':' + systems[j].chargeOfMostProtonated + ':' + systems[j].steps.length;
+  let atTemperature = LAYOUT_CACHE.get(temperatureC);
+  if (!atTemperature) {
     if (LAYOUT_CACHE.size >= LAYOUT_CACHE_SIZE) LAYOUT_CACHE.clear();
+    atTemperature = new Map<string, LayoutShape>();
+    LAYOUT_CACHE.set(temperatureC, atTemperature);
+  }
+  let shape = atTemperature.get(key);
+  if (!shape) {
+    if (atTemperature.size >= LAYOUT_CACHE_SIZE) atTemperature.clear();
     shape = layoutShape(strongIonNames, systems, temperatureC, debyeHuckelA);
-    LAYOUT_CACHE.set(key, shape);
+    atTemperature.set(key, shape);
   }
   return { system: shape.system, volumes: shape.volumes, systemStart: shape.systemStart, speciesCount: shape.speciesCount, strongConcentrations, chlorideIndex: shape.chlorideIndex, unparameterised: shape.unparameterised };
 }
@@ -61,8 +68,8 @@ export function pitzerLayout(strongIonNames: readonly string[], strongConcentrat
 type LayoutShape = Omit<PitzerLayout, 'strongConcentrations'>;
 
 /** Layouts already built, by temperature and species (a solve of the same kind of buffer reuses its layout; the table lookups cost more than the solve). */
-const LAYOUT_CACHE = new Map<string, LayoutShape>();
-/** Layouts kept before the cache is emptied: far more than one workbook's distinct buffers. */
+const LAYOUT_CACHE = new Map<number, Map<string, LayoutShape>>();
+/** Temperatures, and layouts per temperature, kept before a cache level is emptied: far more than one workbook's distinct buffers. */
 const LAYOUT_CACHE_SIZE = 256;
 
 function layoutShape(strongIonNames: readonly string[], systems: readonly AcidBaseChemistry[], temperatureC: number, debyeHuckelA: number): LayoutShape {
