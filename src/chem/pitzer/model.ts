@@ -413,8 +413,10 @@ export function pitzerEvaluate(s: PitzerSystem, m: readonly number[], lnGamma: n
       if (eThetaStamp[key] !== evaluationStamp) {
         if (!x11Ready) {
           x11 = 6 * s.aPhi * sqrtI;
-          x11PowC2 = Math.pow(x11, -J_C2);
-          x11PowC4 = Math.pow(x11, J_C4);
+          // exp(c·ln x) costs about half of Math.pow with a fractional exponent in V8.
+          const lnX11 = Math.log(x11);
+          x11PowC2 = Math.exp(-J_C2 * lnX11);
+          x11PowC4 = Math.exp(J_C4 * lnX11);
           x11Ready = true;
         }
         eTheta(zi, zj, x11, ionicStrength, evaluationStamp, eOut);
