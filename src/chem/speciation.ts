@@ -238,8 +238,13 @@ let scratchNext: number[] = [];
  */
 function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[], guessPh: number): EquilibriumState {
   const n = layout.speciesCount;
-  const conc = new Array<number>(n).fill(0);
-  const lnGamma = new Array<number>(n).fill(0);
+  // Filled by push: a packed array of doubles from the start (new Array(n).fill(0) costs more than this whole loop).
+  const conc: number[] = [];
+  const lnGamma: number[] = [];
+  for (let i = 0; i < n; i++) {
+    conc.push(0);
+    lnGamma.push(0);
+  }
   // Scratch shared by every solve (the solver is synchronous); conc and lnGamma are returned, so they are the solve's own.
   if (scratchMolality.length < n) {
     scratchMolality = new Array<number>(n).fill(0);

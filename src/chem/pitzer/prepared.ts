@@ -46,31 +46,54 @@ function volumeOf(species: PitzerSpecies, systemName?: string): number {
  * @param debyeHuckelA - log10 Debye–Hückel slope at the temperature
  */
 export function pitzerLayout(strongIonNames: readonly string[], strongConcentrations: readonly number[], systems: readonly AcidBaseChemistry[], temperatureC: number, debyeHuckelA: number): PitzerLayout {
-  let key = '';
-  for (let i = 0; i < strongIonNames.length; i++) key += strongIonNames[i] + ',';
-  for (let j = 0; j < systems.length; j++) key += '|' + systems[j].name + ':' + systems[j].chargeOfMostProtonated + ':' + systems[j].steps.length;
-  let atTemperature = LAYOUT_CACHE.get(temperatureC);
-  if (!atTemperature) {
-    if (LAYOUT_CACHE.size >= LAYOUT_CACHE_SIZE) LAYOUT_CACHE.clear();
-    atTemperature = new Map<string, LayoutShape>();
-    LAYOUT_CACHE.set(temperatureC, atTemperature);
+  // Layouts are found by the first system's steps array (library systems share it between compositions),
+  // then compared field by field: no key string to build and hash on every solve.
+  const anchor: object = systems.length > 0 ? systems[0].steps : NO_SYSTEMS;
+  let entries = LAYOUT_CACHE.get(anchor);
+  if (!entries) {
+    entries = [];
+    LAYOUT_CACHE.set(anchor, entries);
   }
-  let shape = atTemperature.get(key);
+  let shape: LayoutShape | undefined;
+  for (let e = 0; e < entries.length && !shape; e++) {
+    if (sameLayout(entries[e], strongIonNames, systems, temperatureC)) shape = entries[e].shape;
+  }
   if (!shape) {
-    if (atTemperature.size >= LAYOUT_CACHE_SIZE) atTemperature.clear();
+    if (entries.length >= LAYOUT_ENTRIES_PER_ANCHOR) entries.length = 0;
     shape = layoutShape(strongIonNames, systems, temperatureC, debyeHuckelA);
-    atTemperature.set(key, shape);
+    entries.push({ temperatureC, names: [...strongIonNames], systems: systems.map((sys) => ({ steps: sys.steps, name: sys.name, z0: sys.chargeOfMostProtonated })), shape });
   }
   return { system: shape.system, volumes: shape.volumes, systemStart: shape.systemStart, speciesCount: shape.speciesCount, strongConcentrations, chlorideIndex: shape.chlorideIndex, unparameterised: shape.unparameterised };
 }
 
+interface LayoutEntry {
+  readonly temperatureC: number;
+  readonly names: readonly string[];
+  readonly systems: readonly { readonly steps: object; readonly name: string; readonly z0: number }[];
+  readonly shape: LayoutShape;
+}
+
+function sameLayout(entry: LayoutEntry, names: readonly string[], systems: readonly AcidBaseChemistry[], temperatureC: number): boolean {
+  if (entry.temperatureC !== temperatureC || entry.names.length !== names.length || entry.systems.length !== systems.length) return false;
+  for (let i = 0; i < names.length; i++) if (entry.names[i] !== names[i]) return false;
+  for (let j = 0; j < systems.length; j++) {
+    const a = entry.systems[j];
+    const b = systems[j];
+    if (a.steps !== b.steps || a.name !== b.name || a.z0 !== b.chargeOfMostProtonated) return false;
+  }
+  return true;
+}
+
+/** Anchor for compositions of strong ions only. */
+const NO_SYSTEMS = {};
+
 /** Everything of a layout but the strong-ion amounts: the same for every solve of the same species at the same temperature. */
 type LayoutShape = Omit<PitzerLayout, 'strongConcentrations'>;
 
-/** Layouts already built, by temperature and species (a solve of the same kind of buffer reuses its layout; the table lookups cost more than the solve). */
-const LAYOUT_CACHE = new Map<number, Map<string, LayoutShape>>();
-/** Temperatures, and layouts per temperature, kept before a cache level is emptied: far more than one workbook's distinct buffers. */
-const LAYOUT_CACHE_SIZE = 256;
+/** Layouts already built (a solve of the same kind of buffer reuses its layout; the table lookups cost more than the solve), by the first system's steps array; weakly held, so a user's discarded substances take theirs with them. */
+const LAYOUT_CACHE = new WeakMap<object, LayoutEntry[]>();
+/** Layouts kept per anchor (temperatures × salt sets × companion systems) before that list is emptied: far more than one workbook uses. */
+const LAYOUT_ENTRIES_PER_ANCHOR = 64;
 
 function layoutShape(strongIonNames: readonly string[], systems: readonly AcidBaseChemistry[], temperatureC: number, debyeHuckelA: number): LayoutShape {
   const species: PitzerSpecies[] = [{ charge: 1, ion: 'H+' }, { charge: -1, ion: 'OH-' }];
