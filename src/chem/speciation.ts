@@ -174,9 +174,9 @@ export interface PitzerState {
 }
 
 /** Largest change of a pH-relevant ln γ (H⁺, OH⁻, buffer species weighted by their share) at which the Pitzer iteration stops: moves a pH by under 1e-10. */
-const PITZER_TOLERANCE = 1e-10;
+export const PITZER_TOLERANCE = 1e-10;
 /** Activity-coefficient updates allowed before giving up (it converges in 4–12). */
-const MAX_PITZER_ITERATIONS = 200;
+export const MAX_PITZER_ITERATIONS = 200;
 
 /**
  * Puts the Pitzer activity coefficients on a pH convention. Single-ion γ are not
@@ -190,7 +190,7 @@ const MAX_PITZER_ITERATIONS = 200;
  * zero-concentration probe when no chloride is present); mean activity coefficients of
  * neutral combinations do not move.
  */
-function applyPhConvention(layout: PitzerLayout, lnGammaKcl: number, lnGamma: number[]): void {
+export function applyPhConvention(layout: PitzerLayout, lnGammaKcl: number, lnGamma: number[]): void {
   const k = lnGammaKcl - lnGamma[layout.chlorideIndex];
   const charges = layout.system.charges;
   for (let i = 0; i < lnGamma.length; i++) lnGamma[i] -= charges[i] * k;

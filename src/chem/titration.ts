@@ -16,6 +16,7 @@ import { selfConsistentIonicStrength } from './ionicStrength';
 import { findStrongIon } from './strongIons';
 import { solvePrepared } from './speciation';
 import { vantHoffTerms } from './vantHoff';
+import { AmountIncrements, pitzerAmountAtPh } from './pitzer/amount';
 
 /** A titrant: what one mole of it adds to the solution. */
 export interface Titrant {
@@ -130,50 +131,30 @@ export function titrantForPh(composition: Composition, titrant: Titrant, targetP
   const p = prepare(composition);
   const t = prepareTitrant(titrant, p.temperatureC);
   if (!p.pitzer) return titrantForPhPrepared(p, t, titrant.name, targetPh);
-  // Pitzer: the one-number answer (Bates–Guggenheim, the Pitzer model's dilute limit) starts a secant on the amount with full solves.
-  const estimate = titrantForPhPrepared(oneNumberModel(p), t, titrant.name, targetPh);
-  const found = amountForPh((c) => withTitrant(composition, titrant, c), estimate.concentrationM, targetPh, false);
-  if (found.amount < 0) throw unreachable(p, titrant.name, targetPh, estimate.chargePerMole, found.amount);
-  return { concentrationM: found.amount, ionicStrengthM: found.ionicStrengthM, chargePerMole: estimate.chargePerMole, iterations: estimate.iterations + found.iterations };
+  // Pitzer: the composition with the titrant's species present, the amount entering linearly; started from the
+  // Bates–Guggenheim answer (the Pitzer model's dilute limit), or from none where that finds the target out of reach.
+  const zero = withTitrant(composition, titrant, 0);
+  const unit = withTitrant(composition, titrant, 1);
+  const strongUp = Object.keys(zero.strongIons ?? {}).map((key) => unit.strongIons![key] - zero.strongIons![key]);
+  const totalsUp = zero.systems.map((sys, j) => unit.systems[j].totalM - sys.totalM);
+  const inc: AmountIncrements = { strongUp, strongDown: strongUp.map((v) => -v), totalsUp, totalsDown: totalsUp.map((v) => -v) };
+  let estimate = 0;
+  let iterations = 0;
+  try {
+    const oneNumber = titrantForPhPrepared(oneNumberModel(p), t, titrant.name, targetPh);
+    estimate = oneNumber.concentrationM;
+    iterations = oneNumber.iterations;
+  } catch (e) {
+    if (!(e instanceof ChemError) || e.kind !== 'infeasible-target') throw e;
+  }
+  const found = pitzerAmountAtPh(prepare(zero), inc, targetPh, estimate);
+  if (!Number.isFinite(found.amount) || found.amount < 0 || found.amount > MAX_CONCENTRATION_M) throw unreachable(p, titrant.name, targetPh, found.chargePerMole, found.amount);
+  return { concentrationM: found.amount, ionicStrengthM: found.ionicStrengthM, chargePerMole: found.chargePerMole, iterations: iterations + found.iterations };
 }
-
-/** Bisection-free secant steps allowed on an amount (it converges in 2–5 from the one-number estimate). */
-const MAX_AMOUNT_ITERATIONS = 50;
-/** pH agreement at which the amount is accepted: far below any reading. */
-const AMOUNT_PH_TOLERANCE = 1e-9;
 
 /** The same prepared composition under Bates–Guggenheim (for a starting estimate; every constant is shared). */
 function oneNumberModel(p: PreparedComposition): PreparedComposition {
   return { ...p, model: 'bates-guggenheim', pitzer: undefined };
-}
-
-/**
- * The amount c for which the composition `build(c)` solves to a target pH, by secant steps
- * from an estimate; pH is monotonic in c, so the steps close in quickly. With `signed`,
- * c may be negative (build then adds acid), else it is kept at or above zero until the end.
- */
-function amountForPh(build: (c: number) => Composition, estimate: number, targetPh: number, signed: boolean): { amount: number; ionicStrengthM: number; iterations: number } {
-  const phAt = (c: number) => {
-    const q = prepare(build(c));
-    const state = solvePrepared(q, targetPh);
-    return { f: state.pH - targetPh, i: state.ionicStrengthM };
-  };
-  let c0 = estimate;
-  let r0 = phAt(c0);
-  if (Math.abs(r0.f) <= AMOUNT_PH_TOLERANCE) return { amount: c0, ionicStrengthM: r0.i, iterations: 1 };
-  let c1 = estimate === 0 ? 1e-6 : estimate * 1.01;
-  let r1 = phAt(c1);
-  for (let it = 2; it <= MAX_AMOUNT_ITERATIONS; it++) {
-    if (Math.abs(r1.f) <= AMOUNT_PH_TOLERANCE || r1.f === r0.f) return { amount: c1, ionicStrengthM: r1.i, iterations: it };
-    let next = c1 - (r1.f * (c1 - c0)) / (r1.f - r0.f);
-    if (!Number.isFinite(next) || Math.abs(next) > MAX_CONCENTRATION_M) next = 0.5 * (c1 + (next > 0 ? MAX_CONCENTRATION_M : signed ? -MAX_CONCENTRATION_M : 0));
-    if (!signed && next < 0) next = 0.5 * c1;
-    c0 = c1;
-    r0 = r1;
-    c1 = next;
-    r1 = phAt(c1);
-  }
-  throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The amount for the target pH', MAX_AMOUNT_ITERATIONS));
 }
 
 function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: string, targetPh: number): TitrantAmount {
@@ -209,8 +190,8 @@ function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: 
  */
 export function netStrongBaseForPh(p: PreparedComposition, pH: number): number {
   if (p.pitzer) {
-    const estimate = netStrongBaseForPh(oneNumberModel(p), pH);
-    return amountForPh((c) => withTitrant(p.source, c >= 0 ? SODIUM_HYDROXIDE : HYDROCHLORIC_ACID, Math.abs(c)), estimate, pH, true).amount;
+    const setup = strongBaseSetup(p);
+    return pitzerAmountAtPh(setup.prepared, setup.increments, pH, netStrongBaseForPh(oneNumberModel(p), pH)).amount;
   }
   const aH = Math.pow(10, -pH);
   let c = 0;
@@ -222,6 +203,30 @@ export function netStrongBaseForPh(p: PreparedComposition, pH: number): number {
   if (p.model === 'ideal') speciesIonicStrength(0);
   else selfConsistentIonicStrength(p.strongIonicStrength, speciesIonicStrength, p.ionicStrengthScale + 1, 'The strong-base equivalent');
   return c;
+}
+
+/** The composition with Na⁺ and Cl⁻ slots for a signed strong-base amount (Na⁺ up, Cl⁻ down), kept per prepared composition: capacity asks five times. */
+const STRONG_BASE_SETUPS = new WeakMap<PreparedComposition, { prepared: PreparedComposition; increments: AmountIncrements }>();
+
+function strongBaseSetup(p: PreparedComposition): { prepared: PreparedComposition; increments: AmountIncrements } {
+  let setup = STRONG_BASE_SETUPS.get(p);
+  if (!setup) {
+    const zero = withTitrant(withTitrant(p.source, SODIUM_HYDROXIDE, 0), HYDROCHLORIC_ACID, 0);
+    const keys = Object.keys(zero.strongIons ?? {});
+    const canonical = keys.map((key) => findStrongIon('strongIons', key).name);
+    const nSystems = zero.systems.length;
+    setup = {
+      prepared: prepare(zero),
+      increments: {
+        strongUp: canonical.map((_, i) => (i === canonical.indexOf('Na+') ? 1 : 0)),
+        strongDown: canonical.map((_, i) => (i === canonical.indexOf('Cl-') ? 1 : 0)),
+        totalsUp: new Array<number>(nSystems).fill(0),
+        totalsDown: new Array<number>(nSystems).fill(0),
+      },
+    };
+    STRONG_BASE_SETUPS.set(p, setup);
+  }
+  return setup;
 }
 
 function unreachable(p: PreparedComposition, name: string, targetPh: number, q: number, c: number): ChemError {
