@@ -56,6 +56,17 @@ describe('recipe planner: round trips (within 0.001 pH)', () => {
     expect(plan.stock!.waterPerBatchMl).toBeCloseTo(900, 10);
   });
 
+  it('stock route with the default Pitzer model: a 10× saline phosphate stock is adjusted to a meter reading several tenths below the 1× target (common practice: 10× stocks read 0.2–0.6 lower)', () => {
+    const input: RecipeInput = { buffer: 'phosphate', targetPh: 7.4, concentrationMm: 11.8, volumeMl: 1000, route: 'stock', stock: { fold: 10, volumeMl: 500 }, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 5 }, salts: [{ form: 'NaCl', concentrationMm: 137 }, { form: 'KCl', concentrationMm: 2.7 }], partVolumeFraction: 1 };
+    const stock = planRecipe(input);
+    const shift = stock.meter.pH - 7.4;
+    expect(shift).toBeLessThan(-0.2);
+    expect(shift).toBeGreaterThan(-0.6);
+    expect(stock.warnings.join(' ')).not.toMatch(/Ionic strength/);
+    // Davies put the stock above the target, the wrong way.
+    expect(planRecipe({ ...input, activityModel: 'davies' }).meter.pH).toBeGreaterThan(7.4);
+  });
+
   it('salt target: the finished buffer has the asked ideal osmolarity within 0.01 mOsm/L', () => {
     const plan = planRecipe(RECIPES[7][1]);
     expect(Math.abs(plan.predictions.idealOsmolarityMosm - 290)).toBeLessThan(0.01);
