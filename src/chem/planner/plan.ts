@@ -106,14 +106,17 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const madeVolumeL = stockVolumeL;
   const finished = base.composition;
 
-  const meterPh = solvePh(withConditions(scaleComposition(made.composition, 1 / s.partFraction), s.benchT));
+  const atMeter = withConditions(scaleComposition(made.composition, 1 / s.partFraction), s.benchT);
+  // A stock's own activity warnings (past the model's range, ions without Pitzer parameters) bear on the meter reading.
+  const stockWarnings = fold === 1 ? [] : speciate(atMeter).warnings.filter((w) => /Pitzer|activity model/.test(w)).map((w) => `Stock (${fold}×) at the meter: ${w}`);
+  const meterPh = solvePh(atMeter);
   const titration = made.titrant ? titrationPlan(s, made, madeVolumeL) : undefined;
 
   const prepared = prepare(finished);
   const state = solvePrepared(prepared, s.targetPh);
   const result = report(prepared, state, finished);
   const cap = capacityOfPrepared(prepared, state.pH);
-  const warnings = [...result.warnings];
+  const warnings = [...result.warnings, ...stockWarnings];
   const predictions = {
     useTemperatureC: s.useT,
     pHAtUse: result.pH,

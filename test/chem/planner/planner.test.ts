@@ -67,6 +67,12 @@ describe('recipe planner: round trips (within 0.001 pH)', () => {
     expect(planRecipe({ ...input, activityModel: 'davies' }).meter.pH).toBeGreaterThan(7.4);
   });
 
+  it('stock route: a concentrated HEPES stock warns that HEPES has no Pitzer parameters, for the meter reading', () => {
+    const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 200, volumeMl: 1000, route: 'stock', stock: { fold: 10, volumeMl: 500 }, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 10 } });
+    expect(plan.warnings.join(' ')).toMatch(/^Stock \(10×\) at the meter: Ions without published Pitzer parameters \(HEPES\)/);
+    expect(planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 20, volumeMl: 1000, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } }).warnings.join(' ')).not.toMatch(/Pitzer/);
+  });
+
   it('salt target: the finished buffer has the asked ideal osmolarity within 0.01 mOsm/L', () => {
     const plan = planRecipe(RECIPES[7][1]);
     expect(Math.abs(plan.predictions.idealOsmolarityMosm - 290)).toBeLessThan(0.01);
