@@ -36,6 +36,7 @@ run('pH only, saline phosphate 1×, Pitzer', () => solvePh(salinePhosphate(1, 'p
 run('pH only, saline phosphate 10× stock, Davies', () => solvePh(salinePhosphate(10, 'davies')));
 run('pH only, saline phosphate 10× stock, Pitzer', () => solvePh(salinePhosphate(10, 'pitzer')));
 run('pH only, 2 systems + salts (4 °C), Davies', () => solvePh({ ...twoSystems, activityModel: 'davies' }));
+run('pH only, 3 systems + salts (37 °C), Davies', () => solvePh({ ...threeSystems, activityModel: 'davies' }));
 run('pH only, 1 system + salts (acetate, NaCl, 20 °C)', () => solvePh(oneSystem));
 run('pH only, 2 systems + salts (phosphate, tris, 4 °C)', () => solvePh(twoSystems));
 run('pH only, 3 systems + salts (citrate, phosphate, tris)', () => solvePh(threeSystems));

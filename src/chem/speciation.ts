@@ -266,8 +266,11 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
   const result = pitzerResult;
   let x = -guessPh * Math.LN10;
   let previousDelta = Infinity;
+  let contraction = 1;
   let ionicStrengthM = 0;
   let finalPass = false;
+  const previousL: number[] = lnGamma.slice();
+  const previousG: number[] = lnGamma.slice();
   for (let it = 1; it <= MAX_PITZER_ITERATIONS; it++) {
     const gH = Math.exp(lnGamma[H_INDEX]) / w;
     const gOH = Math.exp(lnGamma[OH_INDEX]) / w;
@@ -308,16 +311,42 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
         if (d > delta) delta = d;
       }
     }
-    // The iteration contracts by the observed ratio r = δ_k/δ_{k−1} (about 1e-5 for buffers): the new γ are then
-    // within r·δ of the fixed point, and one last pH solve with them (a single Newton step from here) finishes.
-    const ratio = delta / previousDelta;
-    if (delta <= PITZER_TOLERANCE || (it > 1 && ratio < 0.5 && ratio * delta <= PITZER_TOLERANCE)) {
+    // The map contracts by r = δ₂/δ₁, read off the first plain step (about 1e-5 for a buffer in saline, 1e-3 where
+    // the buffers' charge moves the ionic strength): the new γ are then within r·δ of the fixed point, and one
+    // last pH solve with them (a single Newton step from here) finishes.
+    if (it === 2) contraction = delta / previousDelta;
+    if (delta <= PITZER_TOLERANCE || (it > 1 && contraction < 0.5 && contraction * delta <= PITZER_TOLERANCE)) {
       for (let i = 0; i < n; i++) lnGamma[i] = next[i];
       finalPass = true;
       continue;
     }
-    const damp = delta >= previousDelta ? 0.5 : 1;
-    for (let i = 0; i < n; i++) lnGamma[i] += damp * (next[i] - lnGamma[i]);
+    if (delta >= previousDelta) {
+      for (let i = 0; i < n; i++) lnGamma[i] += 0.5 * (next[i] - lnGamma[i]);
+    } else if (it > 1) {
+      // Anderson mixing of depth one: the residual is nearly one mode (the ionic strength), so a secant step
+      // along it removes most of what is left: L ← G_k − θ(G_k − G_{k−1}), θ = F_k·ΔF/|ΔF|².
+      let num = 0;
+      let den = 0;
+      for (let i = 0; i < n; i++) {
+        const f = next[i] - lnGamma[i];
+        const df = f - (previousG[i] - previousL[i]);
+        num += f * df;
+        den += df * df;
+      }
+      const theta = den > 0 ? num / den : 0;
+      for (let i = 0; i < n; i++) {
+        const g = next[i];
+        previousL[i] = lnGamma[i];
+        lnGamma[i] = g - theta * (g - previousG[i]);
+        previousG[i] = g;
+      }
+    } else {
+      for (let i = 0; i < n; i++) {
+        previousL[i] = lnGamma[i];
+        previousG[i] = next[i];
+        lnGamma[i] = next[i];
+      }
+    }
     previousDelta = delta;
   }
   throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The activity-coefficient iteration', MAX_PITZER_ITERATIONS));

@@ -133,7 +133,7 @@ export function pitzerSystem(species: readonly PitzerSpecies[], temperatureC: nu
         alpha1.push(p.alpha1 ?? ALPHA1_DEFAULT);
       } else {
         b0.push(0);
-        b1.push(fallbackBeta1(zc * za));
+        b1.push(fallbackBeta1(zc, za));
         b2.push(0);
         c.push(0);
         alpha1.push(ALPHA1_DEFAULT);

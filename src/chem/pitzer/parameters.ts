@@ -328,14 +328,23 @@ export const PITZER_PSI: readonly PitzerPsi[] = [
 
 /**
  * Fallback for a cation–anion pair with no published parameters (zwitterionic buffer
- * anions, citrate, user substances): β⁽⁰⁾ = 0, C^φ = 0 and β⁽¹⁾ = 0.25·|z_M z_X|^{5/2}.
- * Our own rule, not a literature constant: β⁽¹⁾ depends mostly on the charge type, and this
- * gives 0.25 (1:1), 1.41 (1:2), 3.9 (1:3), near the middle of the values in PM73 Tables I,
- * VI and VIII; β⁽⁰⁾, the salt-specific short-range term, has either sign and is left at 0.
+ * anions, citrate, user substances): β⁽⁰⁾ = 0, C^φ = 0 and a β⁽¹⁾ by charge type. Our own
+ * rule, not a literature constant: β⁽¹⁾ depends mostly on the charge type. For a singly
+ * charged partner, β⁽¹⁾ = 0.25·|z_M z_X|^{5/2}: 0.25 (1:1), 1.41 (1:2), 3.9 (1:3), 8 (1:4),
+ * near the middle of PM73 Tables I, VI, VIII and IX for each type. When both ions are
+ * multiply charged (2:2, 2:3 …), 3.3, the 2:2 sulfates' value (HMW84 MgSO4 3.343), since
+ * the rule would run away there; β⁽⁰⁾, the salt-specific short-range term, has either sign
+ * and is left at 0.
  */
-export function fallbackBeta1(chargeProduct: number): number {
-  return 0.25 * Math.pow(Math.abs(chargeProduct), 2.5);
+export function fallbackBeta1(cationCharge: number, anionCharge: number): number {
+  const zc = Math.abs(cationCharge);
+  const za = Math.abs(anionCharge);
+  if (zc >= 2 && za >= 2) return FALLBACK_BETA1_MULTIPLY_CHARGED;
+  return 0.25 * Math.pow(zc * za, 2.5);
 }
+
+/** β⁽¹⁾ of the fallback when both ions are multiply charged: MgSO4's, HMW84 Table 1 (memory, 3.343), rounded. */
+const FALLBACK_BETA1_MULTIPLY_CHARGED = 3.3;
 
 /** Temperatures over which the tabulated slopes hold (P91 Tables 12–13 give first derivatives at 25 °C; Pitzer states them fit for about 0–50 °C), °C. */
 export const PITZER_SLOPE_RANGE_C = { min: 0, max: 50 } as const;
