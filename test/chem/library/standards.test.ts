@@ -1,6 +1,6 @@
 /**
  * The IUPAC 2002 primary pH standards at 25 °C, made from library forms by name and
- * solved with Davies activities.
+ * solved with Davies activities and with the Pitzer model (the default).
  *
  * Source of the expected values: R. P. Buck et al., "Measurement of pH. Definition,
  * standards, and procedures (IUPAC Recommendations 2002)", Pure Appl. Chem. 74 (2002)
@@ -29,11 +29,11 @@ const STANDARDS: readonly { name: string; forms: readonly [string, number][]; pH
   { name: 'NaHCO3 + Na2CO3 0.025 + 0.025 mol/kg', forms: [['NaHCO3', 0.025], ['Na2CO3', 0.025]], pH: 10.012 },
 ];
 
-describe('IUPAC 2002 primary pH standards at 25 °C (Buck et al., Pure Appl. Chem. 74 (2002) 2169), from forms by name, Davies, ±0.015', () => {
-  it.each(STANDARDS.map((s) => [s.name, s] as const))('%s', (_name, standard) => {
+describe('IUPAC 2002 primary pH standards at 25 °C (Buck et al., Pure Appl. Chem. 74 (2002) 2169), from forms by name, Davies and Pitzer (the default), ±0.015', () => {
+  it.each(STANDARDS.flatMap((s) => (['davies', 'pitzer'] as const).map((model) => [`${s.name}, ${model}`, s, model] as const)))('%s', (_name, standard, activityModel) => {
     const composition = compositionFromForms(
       standard.forms.map(([form, molality]) => ({ form, concentrationM: molality })),
-      { temperatureC: 25, activityModel: 'davies' },
+      { temperatureC: 25, activityModel },
     );
     const pH = speciate(composition).pH;
     const difference = pH - standard.pH;
