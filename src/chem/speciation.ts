@@ -603,7 +603,7 @@ function pitzerWarnings(p: PreparedComposition, layout: PitzerLayout, coverage: 
       warnings.push(`Ions without published Pitzer parameters (${coverage.unparameterisedSystems.join(', ')}) carry ${(coverage.unparameterisedShare * 100).toFixed(0)} % of the ionic strength (${ionicStrengthMolal.toPrecision(3)} mol/kg): their activity coefficients use a generic interaction, so the pH may be off by a few tenths.`);
     }
     if (layout.system.temperatureExtrapolated && Math.abs(p.temperatureC - 25) > PITZER_TEMPERATURE_WINDOW_K) {
-      warnings.push(`At ${p.temperatureC} °C some Pitzer parameters are used at their 25 °C values (no published temperature slope); in a solution this concentrated the pH is an estimate.`);
+      warnings.push(`At ${p.temperatureC} °C some Pitzer parameters are used at their 25 °C values (no published temperature slope) or past the 0–50 °C of their slopes; in a solution this concentrated the pH is an estimate.`);
     }
   }
   return warnings;

@@ -102,9 +102,10 @@ export function pitzerSystem(species: readonly PitzerSpecies[], temperatureC: nu
     if (s.charge > 0) cations.push(i);
     else if (s.charge < 0) anions.push(i);
   });
-  const dT = temperatureC - TABLE_TEMPERATURE_C;
-  const slopeUsable = temperatureC >= PITZER_SLOPE_RANGE_C.min && temperatureC <= PITZER_SLOPE_RANGE_C.max;
-  let temperatureExtrapolated = false;
+  // Slopes move parameters over their range only; beyond it they stay at the range's end (continuous in T), flagged.
+  const inRange = temperatureC >= PITZER_SLOPE_RANGE_C.min && temperatureC <= PITZER_SLOPE_RANGE_C.max;
+  const dT = Math.min(Math.max(temperatureC, PITZER_SLOPE_RANGE_C.min), PITZER_SLOPE_RANGE_C.max) - TABLE_TEMPERATURE_C;
+  let temperatureExtrapolated = !inRange;
   const b0: number[] = [];
   const b1: number[] = [];
   const b2: number[] = [];
@@ -119,12 +120,12 @@ export function pitzerSystem(species: readonly PitzerSpecies[], temperatureC: nu
       const p = cat && an ? BINARY_BY_KEY.get(`${cat}|${an}`) : undefined;
       if (p) {
         const slope = p.slope;
-        if (slope && slopeUsable) {
+        if (slope) {
           b0.push(p.beta0 + slope.beta0 * dT);
           b1.push(p.beta1 + slope.beta1 * dT);
           c.push(((p.cphi + (slope.cphi ?? 0) * dT) / 2) / Math.sqrt(Math.abs(zc * za)));
         } else {
-          if (dT !== 0) temperatureExtrapolated = true;
+          if (temperatureC !== TABLE_TEMPERATURE_C) temperatureExtrapolated = true;
           b0.push(p.beta0);
           b1.push(p.beta1);
           c.push(p.cphi / 2 / Math.sqrt(Math.abs(zc * za)));
@@ -187,7 +188,7 @@ export function pitzerSystem(species: readonly PitzerSpecies[], temperatureC: nu
   addTriplets(cations, anions);
   addTriplets(anions, cations);
   const kclParameters = BINARY_BY_KEY.get('K+|Cl-')!;
-  const kclSlope = slopeUsable ? kclParameters.slope! : { beta0: 0, beta1: 0, cphi: 0 };
+  const kclSlope = kclParameters.slope!;
   const kcl = { b0: kclParameters.beta0 + kclSlope.beta0 * dT, b1: kclParameters.beta1 + kclSlope.beta1 * dT, c: (kclParameters.cphi + (kclSlope.cphi ?? 0) * dT) / 2 };
   return {
     kcl,

@@ -34,6 +34,19 @@ describe('osmotic coefficient of NaCl at 25 °C against Robinson & Stokes 1959, 
   });
 });
 
+describe('temperature (Pitzer 1991, Tables 12–13 slopes, used over 0–50 °C)', () => {
+  it('NaCl γ± at 1 mol/kg moves with the published slopes between 0 and 50 °C and holds at its 50 °C value beyond, without a jump', () => {
+    const at = (t: number) => saltCoefficients('Na+', 'Cl-', 1, t, debyeHuckelA(t)).meanActivity;
+    expect(Math.abs(at(50) - at(25))).toBeGreaterThan(1e-3);
+    expect(Math.abs(at(50.001) - at(50))).toBeLessThan(1e-5);
+  });
+  it('flags a concentrated solution far from 25 °C whose parameters lack a slope', () => {
+    const acetateSaline = { systems: [{ name: 'acetate', chargeOfMostProtonated: 0, steps: [{ pKa: 4.756 }] , totalM: 1 }], strongIons: { 'Na+': 0.5 } };
+    expect(speciate({ ...acetateSaline, temperatureC: 45 }).warnings.join(' ')).toMatch(/no published temperature slope/);
+    expect(speciate({ ...acetateSaline, temperatureC: 30 }).warnings.join(' ')).not.toMatch(/temperature slope/);
+  });
+});
+
 describe('thermodynamic consistency of the mixture equations (an identity, no outside source)', () => {
   /** ln γ_i = ∂(G^ex/RT w)/∂m_i with G^ex/(RT w) = Σ m_i (1 − φ + ln γ_i); central differences agree to this. */
   const DERIVATIVE_TOLERANCE = 1e-6;
