@@ -13,9 +13,10 @@
  *   (1991), ch. 3, Tables 12 and 13: first temperature derivatives at 25 °C. Read in the
  *   same pytzer transcription (P91_Ch3_T12, P91_Ch3_T13_I).
  * - HMW84: C. E. Harvie, N. Møller, J. H. Weare, Geochim. Cosmochim. Acta 48 (1984) 723,
- *   Tables 1–3. Read in the copy carried by PHREEQC's pitzer.dat (TonyAppelo/phreeqc3,
- *   database/pitzer.dat), where it keeps the 1984 value; values pitzer.dat has since
- *   refitted are marked (memory) with the refit noted.
+ *   Tables 1–3. Read in PHREEQC's pitzer.dat (TonyAppelo/phreeqc3, database/pitzer.dat),
+ *   whose constant lines carry the 1984 values (that they are HMW84's is from memory of the
+ *   paper; pitzer.dat does not say so line by line); values pitzer.dat has since refitted
+ *   are marked (memory) with the refit noted.
  * - GT17: D. Gallego-Urrea, D. R. Turner, Mar. Chem. 195 (2017), Supp. Info. Table S6
  *   ("simultaneous optimisation"): trisH⁺ parameters. Read in pytzer (bC_trisH_Cl_GT17simopt).
  */
