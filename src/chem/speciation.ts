@@ -193,7 +193,7 @@ export const MAX_PITZER_ITERATIONS = 200;
 export function applyPhConvention(layout: PitzerLayout, lnGammaKcl: number, lnGamma: number[]): void {
   const k = lnGammaKcl - lnGamma[layout.chlorideIndex];
   const charges = layout.system.charges;
-  for (let i = 0; i < lnGamma.length; i++) lnGamma[i] -= charges[i] * k;
+  for (let i = 0; i < charges.length; i++) lnGamma[i] -= charges[i] * k;
 }
 
 /**

@@ -9,7 +9,7 @@
  * iterated only on the ionic strength (which the titrant itself raises). No nested root
  * finding (SCIENCE.md, "Amount of a titrant for a known target pH").
  */
-import { ionicStrengthFactor } from './activity';
+import { ionicStrengthFactor, parseActivityModel } from './activity';
 import { AcidBaseChemistry, Composition, MAX_CONCENTRATION_M, PreparedComposition, appendStepConstants, prepare, systemAt, validateChemistry } from './composition';
 import { ChemError, MESSAGES, requireNumber } from './errors';
 import { selfConsistentIonicStrength } from './ionicStrength';
@@ -128,15 +128,22 @@ function systemCharge(ka: readonly number[], zd: readonly number[], first: numbe
  */
 export function titrantForPh(composition: Composition, titrant: Titrant, targetPh: number): TitrantAmount {
   requireNumber('targetPh', targetPh, MIN_TARGET_PH, MAX_TARGET_PH, `${MIN_TARGET_PH} to ${MAX_TARGET_PH}`);
-  const p = prepare(composition);
-  const t = prepareTitrant(titrant, p.temperatureC);
-  if (!p.pitzer) return titrantForPhPrepared(p, t, titrant.name, targetPh);
-  // Pitzer: the composition with the titrant's species present, the amount entering linearly; started from the
-  // Bates–Guggenheim answer (the Pitzer model's dilute limit), or from none where that finds the target out of reach.
+  if (composition === null || typeof composition !== 'object' || parseActivityModel('activityModel', composition.activityModel) !== 'pitzer') {
+    const p = prepare(composition);
+    return titrantForPhPrepared(p, prepareTitrant(titrant, p.temperatureC), titrant.name, targetPh);
+  }
+  // Pitzer: the composition prepared once with the titrant's species present at zero amount, the amount entering
+  // linearly; started from the Bates–Guggenheim answer (the Pitzer model's dilute limit), or from none where that
+  // finds the target out of reach.
   const zero = withTitrant(composition, titrant, 0);
-  const unit = withTitrant(composition, titrant, 1);
-  const strongUp = Object.keys(zero.strongIons ?? {}).map((key) => unit.strongIons![key] - zero.strongIons![key]);
-  const totalsUp = zero.systems.map((sys, j) => unit.systems[j].totalM - sys.totalM);
+  const p = prepare(zero);
+  const t = prepareTitrant(titrant, p.temperatureC);
+  const keys = Object.keys(zero.strongIons ?? {});
+  const canonical = keys.map((key) => findStrongIon('strongIons', key).name);
+  const strongUp = new Array<number>(keys.length).fill(0);
+  for (const [name, perMole] of Object.entries(titrant.strongIons ?? {})) strongUp[canonical.indexOf(findStrongIon('titrant.strongIons', name).name)] += perMole;
+  const totalsUp = new Array<number>(zero.systems.length).fill(0);
+  if (titrant.system) totalsUp[totalsUp.length - 1] = titrant.systemPerMole ?? 1;
   const inc: AmountIncrements = { strongUp, strongDown: strongUp.map((v) => -v), totalsUp, totalsDown: totalsUp.map((v) => -v) };
   let estimate = 0;
   let iterations = 0;
@@ -147,7 +154,7 @@ export function titrantForPh(composition: Composition, titrant: Titrant, targetP
   } catch (e) {
     if (!(e instanceof ChemError) || e.kind !== 'infeasible-target') throw e;
   }
-  const found = pitzerAmountAtPh(prepare(zero), inc, targetPh, estimate);
+  const found = pitzerAmountAtPh(p, inc, targetPh, estimate);
   if (!Number.isFinite(found.amount) || found.amount < 0 || found.amount > MAX_CONCENTRATION_M) throw unreachable(p, titrant.name, targetPh, found.chargePerMole, found.amount);
   return { concentrationM: found.amount, ionicStrengthM: found.ionicStrengthM, chargePerMole: found.chargePerMole, iterations: iterations + found.iterations };
 }

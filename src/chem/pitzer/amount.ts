@@ -28,6 +28,13 @@ export interface AmountIncrements {
   readonly totalsDown: readonly number[];
 }
 
+const scratch = { conc: [] as number[], lnGamma: [] as number[], next: [] as number[], m: [] as number[], totals: [] as number[], meanCharge: [] as number[], kp: [] as number[] };
+/** Lengthens a scratch array with zeros to at least n entries. */
+function grow(a: number[], n: number): void {
+  while (a.length < n) a.push(0);
+}
+const scratchResult: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
+
 /** The amount found. */
 export interface PitzerAmount {
   readonly amount: number;
@@ -55,25 +62,23 @@ export function pitzerAmountAtPh(p: PreparedComposition, inc: AmountIncrements, 
   const totals0 = p.totals;
   const nSystems = totals0.length;
   const aH = Math.pow(10, -pH);
-  const conc: number[] = [];
-  const lnGamma: number[] = [];
-  const next: number[] = [];
-  const m: number[] = [];
-  for (let i = 0; i < n; i++) {
-    conc.push(0);
-    lnGamma.push(0);
-    next.push(0);
-    m.push(0);
-  }
-  const totals: number[] = totals0.slice();
-  const meanCharge: number[] = new Array<number>(nSystems).fill(0);
-  const kp: number[] = new Array<number>(p.ka.length).fill(0);
+  // Scratch shared by every call (synchronous, nothing returned from it), grown as needed.
+  grow(scratch.conc, n);
+  grow(scratch.lnGamma, n);
+  grow(scratch.next, n);
+  grow(scratch.m, n);
+  grow(scratch.totals, nSystems);
+  grow(scratch.meanCharge, nSystems);
+  grow(scratch.kp, p.ka.length);
+  const { conc, lnGamma, next, m, totals, meanCharge, kp } = scratch;
+  // The chloride probe (a zero-concentration species, see prepared.ts) is never written below: clear every slot.
+  for (let i = 0; i < n; i++) conc[i] = 0;
   // Start from Bates–Guggenheim at the ionic strength the composition has with the estimate.
   let start = p.strongIonicStrength + 0.5 * Math.abs(estimate);
   for (let j = 0; j < nSystems; j++) start += 0.5 * totals0[j] * p.z0[j] * p.z0[j];
   const lnG0 = -p.a * ionicStrengthFactor('bates-guggenheim', start) * Math.LN10;
   for (let i = 0; i < n; i++) lnGamma[i] = lnG0 * charges[i] * charges[i];
-  const result: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
+  const result = scratchResult;
   let w = p.waterDensity;
   let c = estimate;
   let q = 0;

@@ -59,8 +59,18 @@ export function pitzerLayout(strongIonNames: readonly string[], strongConcentrat
     if (sameLayout(entries[e], strongIonNames, systems, temperatureC)) shape = entries[e].shape;
   }
   if (!shape) {
+    // Hosts that rebuild a system's steps on every call (a fresh array each time) miss the anchor: the same
+    // species at the same temperature are then found by a key string, and only new ones are built.
+    let key = `${temperatureC}|`;
+    for (let i = 0; i < strongIonNames.length; i++) key += strongIonNames[i] + ',';
+    for (let j = 0; j < systems.length; j++) key += '|' + systems[j].name + ':' + systems[j].chargeOfMostProtonated + ':' + systems[j].steps.length;
+    shape = LAYOUT_BY_KEY.get(key);
+    if (!shape) {
+      if (LAYOUT_BY_KEY.size >= LAYOUT_KEYS) LAYOUT_BY_KEY.clear();
+      shape = layoutShape(strongIonNames, systems, temperatureC, debyeHuckelA);
+      LAYOUT_BY_KEY.set(key, shape);
+    }
     if (entries.length >= LAYOUT_ENTRIES_PER_ANCHOR) entries.length = 0;
-    shape = layoutShape(strongIonNames, systems, temperatureC, debyeHuckelA);
     entries.push({ temperatureC, names: [...strongIonNames], systems: systems.map((sys) => ({ steps: sys.steps, name: sys.name, z0: sys.chargeOfMostProtonated })), shape });
   }
   return { system: shape.system, volumes: shape.volumes, systemStart: shape.systemStart, speciesCount: shape.speciesCount, strongConcentrations, chlorideIndex: shape.chlorideIndex, unparameterised: shape.unparameterised };
@@ -93,7 +103,11 @@ type LayoutShape = Omit<PitzerLayout, 'strongConcentrations'>;
 /** Layouts already built (a solve of the same kind of buffer reuses its layout; the table lookups cost more than the solve), by the first system's steps array; weakly held, so a user's discarded substances take theirs with them. */
 const LAYOUT_CACHE = new WeakMap<object, LayoutEntry[]>();
 /** Layouts kept per anchor (temperatures × salt sets × companion systems) before that list is emptied: far more than one workbook uses. */
-const LAYOUT_ENTRIES_PER_ANCHOR = 64;
+const LAYOUT_ENTRIES_PER_ANCHOR = 1024;
+/** The same layouts by key string (temperature, strong ions, systems' names, charges and step counts). */
+const LAYOUT_BY_KEY = new Map<string, LayoutShape>();
+/** Key strings kept before that map is emptied. */
+const LAYOUT_KEYS = 4096;
 
 function layoutShape(strongIonNames: readonly string[], systems: readonly AcidBaseChemistry[], temperatureC: number, debyeHuckelA: number): LayoutShape {
   const species: PitzerSpecies[] = [{ charge: 1, ion: 'H+' }, { charge: -1, ion: 'OH-' }];

@@ -45,13 +45,14 @@ export const DEFAULT_SOLUTE_VOLUME_CM3 = 120;
  * Kilograms of water in one litre of solution.
  *
  * @param waterDensity - density of pure water at the temperature, g/cm³
- * @param concentrations - every species, mol/L
+ * @param concentrations - every species, mol/L (at least as many entries as volumes)
  * @param volumes - their partial molar volumes, cm³/mol
  * @param ionicStrengthM - ionic strength, mol/L
  * @returns kg of water per litre (never below 0.05: beyond any solution the solver accepts)
  */
 export function waterKgPerLitre(waterDensity: number, concentrations: readonly number[], volumes: readonly number[], ionicStrengthM: number): number {
   let v = VOLUME_LIMITING_SLOPE * ionicStrengthM * Math.sqrt(ionicStrengthM);
-  for (let i = 0; i < concentrations.length; i++) v += concentrations[i] * volumes[i];
+  // Over the species of the layout (volumes); a scratch array of concentrations may be longer.
+  for (let i = 0; i < volumes.length; i++) v += concentrations[i] * volumes[i];
   return Math.max(0.05, (waterDensity * (1000 - v)) / 1000);
 }

@@ -2,7 +2,7 @@
  * The Pitzer model against published tables, its thermodynamic consistency, and what it
  * changes for concentrated stocks.
  */
-import { speciate, debyeHuckelA } from '../../../src/chem';
+import { SODIUM_HYDROXIDE, debyeHuckelA, speciate, titrantForPh, withTitrant } from '../../../src/chem';
 import { compositionFromForms } from '../../../src/chem/library/lookup';
 import { pitzerEvaluate, pitzerSystem, saltCoefficients } from '../../../src/chem/pitzer/model';
 import { mismatch } from '../fixtures';
@@ -136,6 +136,17 @@ describe('concentrated stocks (default Pitzer model)', () => {
     expect(r.pitzerCoverage.unparameterisedSystems).toEqual(['HEPES']);
     expect(r.pitzerCoverage.unparameterisedShare).toBeGreaterThan(0.4);
     expect(speciate(salinePhosphate(10)).pitzerCoverage.unparameterisedShare).toBe(0);
+  });
+});
+
+describe('titrant amounts with the Pitzer model', () => {
+  it('do not depend on what was solved before (shared scratch is cleared): chloride-free phosphate with NaOH, before and after a larger citrate–phosphate saline titration', () => {
+    const phosphate = compositionFromForms([{ form: 'NaH2PO4', concentrationM: 0.1 }], { temperatureC: 25 });
+    const larger = compositionFromForms([{ form: 'citric acid', concentrationM: 0.05 }, { form: 'Na2HPO4', concentrationM: 0.1 }, { form: 'NaCl', concentrationM: 0.15 }, { form: 'KCl', concentrationM: 0.003 }], { temperatureC: 25 });
+    const first = titrantForPh(phosphate, SODIUM_HYDROXIDE, 7.2).concentrationM;
+    titrantForPh(larger, SODIUM_HYDROXIDE, 6);
+    expect(titrantForPh(phosphate, SODIUM_HYDROXIDE, 7.2).concentrationM).toBe(first);
+    expect(speciate(withTitrant(phosphate, SODIUM_HYDROXIDE, first)).pH).toBeCloseTo(7.2, 9);
   });
 });
 
