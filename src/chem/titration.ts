@@ -133,11 +133,10 @@ export function titrantForPh(composition: Composition, titrant: Titrant, targetP
     return titrantForPhPrepared(p, prepareTitrant(titrant, p.temperatureC), titrant.name, targetPh);
   }
   // Pitzer: the composition prepared once with the titrant's species present at zero amount, the amount entering
-  // linearly; started from the Bates–Guggenheim answer (the Pitzer model's dilute limit), or from none where that
-  // finds the target out of reach.
+  // linearly (src/chem/pitzer/amount.ts).
   const zero = withTitrant(composition, titrant, 0);
   const p = prepare(zero);
-  const t = prepareTitrant(titrant, p.temperatureC);
+  prepareTitrant(titrant, p.temperatureC); // validates the titrant as the one-number path does
   const keys = Object.keys(zero.strongIons ?? {});
   const canonical = keys.map((key) => findStrongIon('strongIons', key).name);
   const strongUp = new Array<number>(keys.length).fill(0);
@@ -145,24 +144,12 @@ export function titrantForPh(composition: Composition, titrant: Titrant, targetP
   const totalsUp = new Array<number>(zero.systems.length).fill(0);
   if (titrant.system) totalsUp[totalsUp.length - 1] = titrant.systemPerMole ?? 1;
   const inc: AmountIncrements = { strongUp, strongDown: strongUp.map((v) => -v), totalsUp, totalsDown: totalsUp.map((v) => -v) };
-  let estimate = 0;
-  let iterations = 0;
-  try {
-    const oneNumber = titrantForPhPrepared(oneNumberModel(p), t, titrant.name, targetPh);
-    estimate = oneNumber.concentrationM;
-    iterations = oneNumber.iterations;
-  } catch (e) {
-    if (!(e instanceof ChemError) || e.kind !== 'infeasible-target') throw e;
-  }
-  const found = pitzerAmountAtPh(p, inc, targetPh, estimate);
+  // No starting estimate is needed: at fixed γ the first step already lands on the amount.
+  const found = pitzerAmountAtPh(p, inc, targetPh, 0);
   if (!Number.isFinite(found.amount) || found.amount < 0 || found.amount > MAX_CONCENTRATION_M) throw unreachable(p, titrant.name, targetPh, found.chargePerMole, found.amount);
-  return { concentrationM: found.amount, ionicStrengthM: found.ionicStrengthM, chargePerMole: found.chargePerMole, iterations: iterations + found.iterations };
+  return { concentrationM: found.amount, ionicStrengthM: found.ionicStrengthM, chargePerMole: found.chargePerMole, iterations: found.iterations };
 }
 
-/** The same prepared composition under Bates–Guggenheim (for a starting estimate; every constant is shared). */
-function oneNumberModel(p: PreparedComposition): PreparedComposition {
-  return { ...p, model: 'bates-guggenheim', pitzer: undefined };
-}
 
 function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: string, targetPh: number): TitrantAmount {
   const aH = Math.pow(10, -targetPh);
@@ -198,7 +185,7 @@ function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: 
 export function netStrongBaseForPh(p: PreparedComposition, pH: number): number {
   if (p.pitzer) {
     const setup = strongBaseSetup(p);
-    return pitzerAmountAtPh(setup.prepared, setup.increments, pH, netStrongBaseForPh(oneNumberModel(p), pH)).amount;
+    return pitzerAmountAtPh(setup.prepared, setup.increments, pH, 0).amount;
   }
   const aH = Math.pow(10, -pH);
   let c = 0;

@@ -50,13 +50,11 @@ export function pitzerLayout(strongIonNames: readonly string[], strongConcentrat
   // then compared field by field: no key string to build and hash on every solve.
   const anchor: object = systems.length > 0 ? systems[0].steps : NO_SYSTEMS;
   let entries = LAYOUT_CACHE.get(anchor);
-  if (!entries) {
-    entries = [];
-    LAYOUT_CACHE.set(anchor, entries);
-  }
   let shape: LayoutShape | undefined;
-  for (let e = 0; e < entries.length && !shape; e++) {
-    if (sameLayout(entries[e], strongIonNames, systems, temperatureC)) shape = entries[e].shape;
+  if (entries) {
+    for (let e = 0; e < entries.length && !shape; e++) {
+      if (sameLayout(entries[e], strongIonNames, systems, temperatureC)) shape = entries[e].shape;
+    }
   }
   if (!shape) {
     // Hosts that rebuild a system's steps on every call (a fresh array each time) miss the anchor: the same
@@ -65,13 +63,22 @@ export function pitzerLayout(strongIonNames: readonly string[], strongConcentrat
     for (let i = 0; i < strongIonNames.length; i++) key += strongIonNames[i] + ',';
     for (let j = 0; j < systems.length; j++) key += '|' + systems[j].name + ':' + systems[j].chargeOfMostProtonated + ':' + systems[j].steps.length;
     shape = LAYOUT_BY_KEY.get(key);
+    const built = !shape;
     if (!shape) {
       if (LAYOUT_BY_KEY.size >= LAYOUT_KEYS) LAYOUT_BY_KEY.clear();
       shape = layoutShape(strongIonNames, systems, temperatureC, debyeHuckelA);
       LAYOUT_BY_KEY.set(key, shape);
     }
-    if (entries.length >= LAYOUT_ENTRIES_PER_ANCHOR) entries.length = 0;
-    entries.push({ temperatureC, names: [...strongIonNames], systems: systems.map((sys) => ({ steps: sys.steps, name: sys.name, z0: sys.chargeOfMostProtonated })), shape });
+    // An anchor seen for the first time whose layout was already known is most likely a fresh array of a host
+    // that rebuilds them: not worth an entry. New layouts and recurring anchors get one.
+    if (built || entries) {
+      if (!entries) {
+        entries = [];
+        LAYOUT_CACHE.set(anchor, entries);
+      }
+      if (entries.length >= LAYOUT_ENTRIES_PER_ANCHOR) entries.length = 0;
+      entries.push({ temperatureC, names: [...strongIonNames], systems: systems.map((sys) => ({ steps: sys.steps, name: sys.name, z0: sys.chargeOfMostProtonated })), shape });
+    }
   }
   return { system: shape.system, volumes: shape.volumes, systemStart: shape.systemStart, speciesCount: shape.speciesCount, strongConcentrations, chlorideIndex: shape.chlorideIndex, unparameterised: shape.unparameterised };
 }
