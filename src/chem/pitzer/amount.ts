@@ -28,7 +28,7 @@ export interface AmountIncrements {
   readonly totalsDown: readonly number[];
 }
 
-const scratch = { conc: [] as number[], lnGamma: [] as number[], next: [] as number[], m: [] as number[], totals: [] as number[], meanCharge: [] as number[], kp: [] as number[] };
+const scratch = { conc: [] as number[], lnGamma: [] as number[], next: [] as number[], m: [] as number[], previousL: [] as number[], previousG: [] as number[], totals: [] as number[], meanCharge: [] as number[], kp: [] as number[] };
 /** Lengthens a scratch array with zeros to at least n entries. */
 function grow(a: number[], n: number): void {
   while (a.length < n) a.push(0);
@@ -67,6 +67,8 @@ export function pitzerAmountAtPh(p: PreparedComposition, inc: AmountIncrements, 
   grow(scratch.lnGamma, n);
   grow(scratch.next, n);
   grow(scratch.m, n);
+  grow(scratch.previousL, n);
+  grow(scratch.previousG, n);
   grow(scratch.totals, nSystems);
   grow(scratch.meanCharge, nSystems);
   grow(scratch.kp, p.ka.length);
@@ -84,7 +86,10 @@ export function pitzerAmountAtPh(p: PreparedComposition, inc: AmountIncrements, 
   let q = 0;
   let ionicStrengthM = 0;
   let previousDelta = Infinity;
+  let contraction = 1;
   let finalPass = false;
+  const previousL = scratch.previousL;
+  const previousG = scratch.previousG;
 
   /** Fills conc (strong ions and systems, at the current kp) for amount x; returns the molar ionic strength. */
   const fill = (x: number, gH: number, gOH: number): number => {
@@ -164,14 +169,39 @@ export function pitzerAmountAtPh(p: PreparedComposition, inc: AmountIncrements, 
         if (d > delta) delta = d;
       }
     }
-    const ratio = delta / previousDelta;
-    if (delta <= PITZER_TOLERANCE || (it > 1 && ratio < 0.5 && ratio * delta <= PITZER_TOLERANCE)) {
+    // As in the pH solve (speciation.ts): the contraction read off the first plain step decides when the new γ are
+    // close enough for a last linear step; Anderson (depth one) steps remove the ionic-strength mode the amount drives.
+    if (it === 2) contraction = delta / previousDelta;
+    if (delta <= PITZER_TOLERANCE || (it > 1 && contraction < 0.5 && contraction * delta <= PITZER_TOLERANCE)) {
       for (let i = 0; i < n; i++) lnGamma[i] = next[i];
       finalPass = true;
       continue;
     }
-    const damp = delta >= previousDelta ? 0.5 : 1;
-    for (let i = 0; i < n; i++) lnGamma[i] += damp * (next[i] - lnGamma[i]);
+    if (delta >= previousDelta) {
+      for (let i = 0; i < n; i++) lnGamma[i] += 0.5 * (next[i] - lnGamma[i]);
+    } else if (it > 1) {
+      let num = 0;
+      let den = 0;
+      for (let i = 0; i < n; i++) {
+        const f = next[i] - lnGamma[i];
+        const df = f - (previousG[i] - previousL[i]);
+        num += f * df;
+        den += df * df;
+      }
+      const theta = den > 0 ? num / den : 0;
+      for (let i = 0; i < n; i++) {
+        const g = next[i];
+        previousL[i] = lnGamma[i];
+        lnGamma[i] = g - theta * (g - previousG[i]);
+        previousG[i] = g;
+      }
+    } else {
+      for (let i = 0; i < n; i++) {
+        previousL[i] = lnGamma[i];
+        previousG[i] = next[i];
+        lnGamma[i] = next[i];
+      }
+    }
     previousDelta = delta;
   }
   throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The titrant amount', MAX_PITZER_ITERATIONS));
