@@ -6,8 +6,11 @@
  * is strictly increasing in x at fixed ionic strength (its derivative is
  * [H⁺] + [OH⁻] + Σ C·var(n) > 0), so a Newton iteration safeguarded by a bracket in
  * pH [−2, 16] (bisection whenever Newton would leave it) always converges. Mixed constants
- * K′ = Ka·γ(HA)/γ(A) follow from the activity model; the ionic strength is iterated to
- * self-consistency around the pH solve (each pH solve warm-starts from the last).
+ * K′ = Ka·γ(HA)/γ(A) follow from the activity model. With the one-number models the
+ * ionic strength is iterated to self-consistency around the pH solve (each pH solve
+ * warm-starts from the last); with the Pitzer model (the default) every species' γ is
+ * re-evaluated from the species found, on the molal scale and the MacInnes convention,
+ * until the γ that move the pH settle (see solvePitzer and docs/activity.md).
  * pH = −log10 a(H⁺) (Buck et al., IUPAC 2002).
  *
  * Special cases: the ideal model needs a single pH solve; an all-strong composition still
