@@ -22,7 +22,21 @@ const oneSystem: Composition = { systems: [{ ...acetate, totalM: 0.05 }], strong
 const twoSystems: Composition = { systems: [{ ...phosphate, totalM: 0.02 }, { ...tris, totalM: 0.025 }], strongIons: { 'Na+': 0.18, 'Cl-': 0.15, 'K+': 0.005 }, temperatureC: 4 };
 const threeSystems: Composition = { systems: [{ ...citrate, totalM: 0.01 }, { ...phosphate, totalM: 0.02 }, { ...tris, totalM: 0.02 }], strongIons: { 'Na+': 0.2, 'Cl-': 0.15, 'Mg2+': 0.002 }, temperatureC: 37 };
 
+/** 1× phosphate-buffered saline (our own recipe: 137 mM NaCl, 2.7 mM KCl, 10 mM Na2HPO4, 1.8 mM KH2PO4), and its 10× stock. */
+const salinePhosphate = (fold: number, activityModel: 'pitzer' | 'davies'): Composition => ({
+  systems: [{ ...phosphate, totalM: 0.0118 * fold }],
+  strongIons: { 'Na+': 0.157 * fold, 'K+': 0.0045 * fold, 'Cl-': 0.1397 * fold },
+  temperatureC: 25,
+  activityModel,
+});
+
 console.log(`Proton Ledger solver bench — node ${process.version}, ${new Date().toISOString()}`);
+run('pH only, saline phosphate 1×, Davies', () => solvePh(salinePhosphate(1, 'davies')));
+run('pH only, saline phosphate 1×, Pitzer', () => solvePh(salinePhosphate(1, 'pitzer')));
+run('pH only, saline phosphate 10× stock, Davies', () => solvePh(salinePhosphate(10, 'davies')));
+run('pH only, saline phosphate 10× stock, Pitzer', () => solvePh(salinePhosphate(10, 'pitzer')));
+run('pH only, 2 systems + salts (4 °C), Davies', () => solvePh({ ...twoSystems, activityModel: 'davies' }));
+run('pH only, 3 systems + salts (37 °C), Davies', () => solvePh({ ...threeSystems, activityModel: 'davies' }));
 run('pH only, 1 system + salts (acetate, NaCl, 20 °C)', () => solvePh(oneSystem));
 run('pH only, 2 systems + salts (phosphate, tris, 4 °C)', () => solvePh(twoSystems));
 run('pH only, 3 systems + salts (citrate, phosphate, tris)', () => solvePh(threeSystems));

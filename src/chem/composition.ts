@@ -7,7 +7,8 @@ import { ChemError, MESSAGES, requireInteger, requireNumber } from './errors';
 import { ChemWarning, warning } from './warnings';
 import { findStrongIon } from './strongIons';
 import { VantHoffTerms, lnKaAt, vantHoffTerms } from './vantHoff';
-import { debyeHuckelA, pKw } from './water';
+import { PitzerLayout, pitzerLayout } from './pitzer/prepared';
+import { debyeHuckelA, pKw, waterDensity } from './water';
 
 /** One proton-dissociation step of an acid–base system, constants at 25 °C and I = 0. */
 export interface AcidBaseStep {
@@ -43,7 +44,7 @@ export interface Composition {
   readonly strongIons?: Readonly<Record<string, number>>;
   /** Temperature in °C (default 25). */
   readonly temperatureC?: number;
-  /** Activity model (default `davies`). */
+  /** Activity model (default `pitzer`). */
   readonly activityModel?: ActivityModel;
 }
 
@@ -94,6 +95,12 @@ export interface PreparedComposition {
   /** Largest ionic strength the composition could reach (every system in its most charged state), mol/L; scales rounding floors. */
   readonly ionicStrengthScale: number;
   readonly warnings: ChemWarning[];
+  /** The composition as given (the Pitzer paths rebuild it with titrant added). */
+  readonly source: Composition;
+  /** Density of pure water at the temperature, g/cm³. */
+  readonly waterDensity: number;
+  /** The Pitzer model over this composition's species (model `pitzer` only). */
+  readonly pitzer?: PitzerLayout;
 }
 
 /** True when `v` is a number within [min, max] (NaN fails): the cheap test made before any message is built. */
@@ -201,6 +208,7 @@ export function prepare(composition: Composition): PreparedComposition {
     strongIonicStrength += 0.5 * ion.charge * ion.charge * c;
   }
 
+  const a = debyeHuckelA(temperatureC);
   const warnings: ChemWarning[] = [];
   if (temperatureC > FITTED_RANGE_MAX_C) {
     warnings.push(warning('aboveFittedRange', MESSAGES.aboveFittedRange(temperatureC, FITTED_RANGE_MAX_C), 'temperatureC'));
@@ -208,7 +216,7 @@ export function prepare(composition: Composition): PreparedComposition {
   return {
     temperatureC,
     model,
-    a: debyeHuckelA(temperatureC),
+    a,
     kw: Math.pow(10, -pKw(temperatureC)),
     totals,
     z0,
@@ -220,5 +228,8 @@ export function prepare(composition: Composition): PreparedComposition {
     strongIonicStrength,
     ionicStrengthScale: ionicStrengthScale + strongIonicStrength,
     warnings,
+    source: composition,
+    waterDensity: waterDensity(temperatureC),
+    pitzer: model === 'pitzer' ? pitzerLayout(ionNames, ionNames.map((name) => ions[name]), systems, temperatureC, a) : undefined,
   };
 }

@@ -89,6 +89,14 @@ export const MESSAGES = {
     `Temperature ${temperatureC} °C is outside ${lowC}–${highC} °C, the range of the conductivity model; the conductivity is an extrapolation.`,
   conductivityIonicStrength: (ionicStrengthM: number, limitM: number) =>
     `Ionic strength ${ionicStrengthM.toPrecision(3)} M is above ${limitM} M, beyond where the conductivity model was checked; the conductivity is an extrapolation.`,
+  beyondPitzerRange: (ionicStrengthMolal: number, limitMolal: number) =>
+    `Ionic strength ${ionicStrengthMolal.toPrecision(3)} mol/kg is above ${limitMolal} mol/kg, beyond the range most Pitzer parameters were fitted over; the pH is an extrapolation.`,
+  pitzerFallback: (systems: string, sharePercent: number, ionicStrengthMolal: number) =>
+    `Ions without published Pitzer parameters (${systems}) carry ${sharePercent.toFixed(0)} % of the ionic strength (${ionicStrengthMolal.toPrecision(3)} mol/kg): their activity coefficients use a generic interaction, so the pH may be off by a few tenths.`,
+  pitzerTemperature: (temperatureC: number) =>
+    `At ${temperatureC} °C some Pitzer parameters are used at their 25 °C values (no published temperature slope) or past the 0–50 °C of their slopes; in a solution this concentrated the pH is an estimate.`,
+  stockAtMeter: (fold: number, message: string) =>
+    `Stock (${fold}×) at the meter: ${message}`,
   ofTheStock: (message: string) =>
     `The stock: ${message}`,
   titrantOverHalf: (titrantMl: number, totalMl: number) =>

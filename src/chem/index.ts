@@ -2,7 +2,8 @@
  * The chemistry core's public face: everything hosts (worksheet functions, task pane,
  * command line) may call. Pure TypeScript; no Office, DOM or I/O.
  */
-export { ACTIVITY_MODELS, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, apparentPKa, ionicStrengthFactor, log10Gamma } from './activity';
+export { ACTIVITY_MODELS, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, DEFAULT_ACTIVITY_MODEL, PITZER_LIMIT_MOLAL, apparentPKa, ionicStrengthFactor, log10Gamma } from './activity';
+export { saltCoefficients } from './pitzer/model';
 export type { ActivityModel } from './activity';
 export { MAX_CONCENTRATION_M, MAX_STEPS, MAX_TEMPERATURE_C, MIN_TEMPERATURE_C, FITTED_RANGE_MAX_C, prepare, systemAt, withConditions } from './composition';
 export type { AcidBaseChemistry, AcidBaseStep, AcidBaseSystem, Composition } from './composition';
@@ -13,7 +14,7 @@ export type { ChemWarning } from './warnings';
 export type { ChemErrorKind } from './errors';
 export { STRONG_IONS, findStrongIon } from './strongIons';
 export { chargeLabel, report, solvePh, solvePrepared, speciate } from './speciation';
-export type { SpeciationResult, SpeciesAmount, SystemSpeciation } from './speciation';
+export type { PitzerCoverage, SpeciationResult, SpeciesAmount, SystemSpeciation } from './speciation';
 export { HYDROCHLORIC_ACID, SODIUM_HYDROXIDE, titrantForPh, withTitrant, netStrongBaseForPh } from './titration';
 export type { Titrant, TitrantAmount } from './titration';
 export { afterDilution, afterLoad, atTemperature, capacity, capacityOfPrepared, idealCapacityAt, scaleComposition } from './capacity';

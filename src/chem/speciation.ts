@@ -6,8 +6,11 @@
  * is strictly increasing in x at fixed ionic strength (its derivative is
  * [H⁺] + [OH⁻] + Σ C·var(n) > 0), so a Newton iteration safeguarded by a bracket in
  * pH [−2, 16] (bisection whenever Newton would leave it) always converges. Mixed constants
- * K′ = Ka·γ(HA)/γ(A) follow from the activity model; the ionic strength is iterated to
- * self-consistency around the pH solve (each pH solve warm-starts from the last).
+ * K′ = Ka·γ(HA)/γ(A) follow from the activity model. With the one-number models the
+ * ionic strength is iterated to self-consistency around the pH solve (each pH solve
+ * warm-starts from the last); with the Pitzer model (the default) every species' γ is
+ * re-evaluated from the species found, on the molal scale and the MacInnes convention,
+ * until the γ that move the pH settle (see solvePitzer and docs/activity.md).
  * pH = −log10 a(H⁺) (Buck et al., IUPAC 2002).
  *
  * Special cases: the ideal model needs a single pH solve; an all-strong composition still
@@ -15,11 +18,14 @@
  *
  * References: docs/science.md (methods and conventions); R. G. Bates, Determination of pH (1973), ch. 3–4.
  */
-import { ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES } from './activity';
+import { ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, PITZER_LIMIT_MOLAL } from './activity';
 import { Composition, PreparedComposition, prepare } from './composition';
 import { ChemError, MESSAGES } from './errors';
 import { ChemWarning, warning } from './warnings';
 import { selfConsistentIonicStrength } from './ionicStrength';
+import { PitzerEvaluation, pitzerEvaluate } from './pitzer/model';
+import { H_INDEX, OH_INDEX, PitzerLayout, STRONG_START, pitzerLayout } from './pitzer/prepared';
+import { waterKgPerLitre } from './pitzer/volumes';
 import { STRONG_IONS, findStrongIon } from './strongIons';
 import { pKw } from './water';
 
@@ -43,11 +49,13 @@ let evDI2 = 0;
 
 /**
  * Charge balance f, its derivative df/d ln a_H, and 2·I of all non-strong species, at a_H.
- * `kp` are the mixed constants at the current ionic strength; `g1` is γ of a 1-charge ion.
+ * `kp` are the mixed constants at the current activity coefficients; [H⁺] = a_H/gH and
+ * [OH⁻] = Kw/(a_H·gOH), so gH and gOH are the molar-scale γ of H⁺ and OH⁻ (γ₁ for the
+ * one-number models; γ/(kg water per L) for Pitzer, whose γ are molal).
  */
-function evaluate(p: PreparedComposition, kp: number[], aH: number, g1: number): void {
-  const hc = aH / g1;
-  const ohc = p.kw / (aH * g1);
+function evaluate(p: PreparedComposition, kp: number[], aH: number, gH: number, gOH: number): void {
+  const hc = aH / gH;
+  const ohc = p.kw / (aH * gOH);
   let f = p.strongCharge + hc - ohc;
   let d = hc + ohc;
   let i2 = hc + ohc;
@@ -105,7 +113,7 @@ function conditionalConstants(p: PreparedComposition, ionicStrengthM: number, kp
 }
 
 /** Solves f(x) = 0 at fixed constants from a warm start; returns x = ln a_H and counts iterations. */
-function solveChargeBalance(p: PreparedComposition, kp: number[], g1: number, x0: number, counter: { n: number }): number {
+function solveChargeBalance(p: PreparedComposition, kp: number[], gH: number, gOH: number, x0: number, counter: { n: number }): number {
   let lo = LN_AH_MIN;
   let hi = LN_AH_MAX;
   let loChecked = false;
@@ -113,7 +121,7 @@ function solveChargeBalance(p: PreparedComposition, kp: number[], g1: number, x0
   let x = x0;
   for (let it = 0; it < MAX_PH_ITERATIONS; it++) {
     counter.n++;
-    evaluate(p, kp, Math.exp(x), g1);
+    evaluate(p, kp, Math.exp(x), gH, gOH);
     const f = evF;
     if (f === 0) return x;
     if (f < 0) {
@@ -153,9 +161,199 @@ export interface EquilibriumState {
   readonly gamma1: number;
   /** Mixed constants K′ per step at that ionic strength (a_H·[A]/[HA]). */
   readonly mixedKa: readonly number[];
-  /** Charge-balance evaluations made, and ionic-strength updates made. */
+  /** Charge-balance evaluations made, and ionic-strength (or, for Pitzer, activity-coefficient) updates made. */
   readonly evaluations: number;
   readonly ionicStrengthIterations: number;
+  /** Pitzer only: ln γ (molal) of every species in the layout's order, kg of water per litre, molal ionic strength and osmotic coefficient. */
+  readonly pitzer?: PitzerState;
+}
+
+/** What the Pitzer solve leaves besides the pH. */
+export interface PitzerState {
+  readonly lnGamma: readonly number[];
+  readonly concentrations: readonly number[];
+  readonly waterKgPerL: number;
+  readonly ionicStrengthMolal: number;
+  readonly osmoticCoefficient: number;
+}
+
+/** Largest change of a pH-relevant ln γ (H⁺, OH⁻, buffer species weighted by their share) at which the Pitzer iteration stops: moves a pH by under 1e-10. */
+export const PITZER_TOLERANCE = 1e-10;
+/** Activity-coefficient updates allowed before giving up (it converges in 4–12). */
+export const MAX_PITZER_ITERATIONS = 200;
+
+/**
+ * Puts the Pitzer activity coefficients on a pH convention. Single-ion γ are not
+ * measurable, so a pH needs a convention; we use MacInnes's: γ(Cl⁻) equals the mean
+ * activity coefficient of KCl at the same ionic strength (D. A. MacInnes, J. Am. Chem. Soc.
+ * 41 (1919) 1086), the choice of Pitzer-based speciation codes for pH (L. N. Plummer et al.,
+ * PHRQPITZ, USGS Water-Resources Investigations Report 88-4153 (1988) (memory)). Unlike the
+ * Bates–Guggenheim form that assigns the primary standards, it is defined at any ionic
+ * strength; at I ≤ 0.1 the two differ by under 0.005 in pH. Every ln γ_i moves by −z_i·k,
+ * with k the gap between that value and the Pitzer γ(Cl⁻) of the same solution (a
+ * zero-concentration probe when no chloride is present); mean activity coefficients of
+ * neutral combinations do not move.
+ */
+export function applyPhConvention(layout: PitzerLayout, lnGammaKcl: number, lnGamma: number[]): void {
+  const k = lnGammaKcl - lnGamma[layout.chlorideIndex];
+  const charges = layout.system.charges;
+  for (let i = 0; i < charges.length; i++) lnGamma[i] -= charges[i] * k;
+}
+
+/**
+ * Concentrations of every acid–base species at a_H with mixed constants kp, written into
+ * `conc` at the layout's positions; returns ½Σz²c of them (mol/L).
+ */
+function systemConcentrations(p: PreparedComposition, layout: PitzerLayout, kp: readonly number[], aH: number, conc: number[]): number {
+  let halfZ2 = 0;
+  for (let j = 0; j < p.totals.length; j++) {
+    const first = p.firstStep[j];
+    const steps = p.stepCount[j];
+    const start = layout.systemStart[j];
+    let t = 1;
+    let sum = 1;
+    conc[start] = 1;
+    for (let k = 1; k <= steps; k++) {
+      t *= kp[first + k - 1] / aH;
+      conc[start + k] = t;
+      sum += t;
+    }
+    const w = p.totals[j] / sum;
+    const z0 = p.z0[j];
+    for (let k = 0; k <= steps; k++) {
+      const c = conc[start + k] * w;
+      conc[start + k] = c;
+      halfZ2 += 0.5 * (z0 - k) * (z0 - k) * c;
+    }
+  }
+  return halfZ2;
+}
+
+let scratchMolality: number[] = [];
+const pitzerCounter = { n: 0 };
+const pitzerResult: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
+let scratchNext: number[] = [];
+
+/**
+ * The Pitzer solve: the pH at fixed activity coefficients (the same safeguarded Newton as
+ * the other models), then every ion's γ from the species found, repeated until no ln γ moves
+ * by more than PITZER_TOLERANCE. Each γ depends weakly on how the buffer is split between
+ * its forms, so plain substitution converges; a step is halved whenever the change grows.
+ */
+function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[], guessPh: number): EquilibriumState {
+  const n = layout.speciesCount;
+  // Filled by push: a packed array of doubles from the start (new Array(n).fill(0) costs more than this whole loop).
+  const conc: number[] = [];
+  const lnGamma: number[] = [];
+  for (let i = 0; i < n; i++) {
+    conc.push(0);
+    lnGamma.push(0);
+  }
+  // Scratch shared by every solve (the solver is synchronous); conc and lnGamma are returned, so they are the solve's own.
+  if (scratchMolality.length < n) {
+    scratchMolality = new Array<number>(n).fill(0);
+    scratchNext = new Array<number>(n).fill(0);
+  }
+  const m = scratchMolality;
+  const next = scratchNext;
+  const strong = layout.strongConcentrations;
+  for (let i = 0; i < strong.length; i++) conc[STRONG_START + i] = strong[i];
+  const charges = layout.system.charges;
+  // Start from Bates–Guggenheim at the ionic strength of the composition as given: the first pH solve then starts close.
+  let start = p.strongIonicStrength;
+  for (let j = 0; j < p.totals.length; j++) start += 0.5 * p.totals[j] * p.z0[j] * p.z0[j];
+  const lnG0 = -p.a * ionicStrengthFactor('bates-guggenheim', start) * Math.LN10;
+  for (let i = 0; i < n; i++) lnGamma[i] = lnG0 * charges[i] * charges[i];
+  let w = waterKgPerLitre(p.waterDensity, conc, layout.volumes, p.strongIonicStrength);
+  const counter = pitzerCounter;
+  counter.n = 0;
+  const result = pitzerResult;
+  let x = -guessPh * Math.LN10;
+  let previousDelta = Infinity;
+  let contraction = 1;
+  let ionicStrengthM = 0;
+  let finalPass = false;
+  const previousL: number[] = lnGamma.slice();
+  const previousG: number[] = lnGamma.slice();
+  for (let it = 1; it <= MAX_PITZER_ITERATIONS; it++) {
+    const gH = Math.exp(lnGamma[H_INDEX]) / w;
+    const gOH = Math.exp(lnGamma[OH_INDEX]) / w;
+    for (let j = 0; j < p.totals.length; j++) {
+      const first = p.firstStep[j];
+      const base = layout.systemStart[j];
+      for (let k = 0; k < p.stepCount[j]; k++) kp[first + k] = p.ka[first + k] * Math.exp(lnGamma[base + k] - lnGamma[base + k + 1]);
+    }
+    x = solveChargeBalance(p, kp, gH, gOH, x, counter);
+    const aH = Math.exp(x);
+    conc[H_INDEX] = aH / gH;
+    conc[OH_INDEX] = p.kw / (aH * gOH);
+    ionicStrengthM = p.strongIonicStrength + 0.5 * (conc[H_INDEX] + conc[OH_INDEX]) + systemConcentrations(p, layout, kp, aH, conc);
+    if (finalPass) {
+      return {
+        pH: -x / Math.LN10,
+        ionicStrengthM,
+        gamma1: Math.exp(lnGamma[H_INDEX]),
+        mixedKa: kp,
+        evaluations: counter.n,
+        ionicStrengthIterations: it - 1,
+        pitzer: { lnGamma, concentrations: conc, waterKgPerL: w, ionicStrengthMolal: result.ionicStrength, osmoticCoefficient: result.osmoticCoefficient },
+      };
+    }
+    w = waterKgPerLitre(p.waterDensity, conc, layout.volumes, ionicStrengthM);
+    for (let i = 0; i < n; i++) m[i] = conc[i] / w;
+    pitzerEvaluate(layout.system, m, next, result);
+    applyPhConvention(layout, result.lnGammaKcl, next);
+    // What moves the pH: γ(H⁺), γ(OH⁻), and each buffer species' γ weighted by its share of its system
+    // (a trace form's γ hardly enters the charge balance); strong ions' γ do not enter it at all.
+    let delta = Math.max(Math.abs(next[H_INDEX] - lnGamma[H_INDEX]), Math.abs(next[OH_INDEX] - lnGamma[OH_INDEX]));
+    for (let j = 0; j < p.totals.length; j++) {
+      const total = p.totals[j];
+      if (total === 0) continue;
+      const base = layout.systemStart[j];
+      for (let k = 0; k <= p.stepCount[j]; k++) {
+        const d = (Math.abs(next[base + k] - lnGamma[base + k]) * conc[base + k]) / total;
+        if (d > delta) delta = d;
+      }
+    }
+    // The map contracts by r = δ₂/δ₁, read off the first plain step (about 1e-5 for a buffer in saline, 1e-3 where
+    // the buffers' charge moves the ionic strength): the new γ are then within r·δ of the fixed point, and one
+    // last pH solve with them (a single Newton step from here) finishes.
+    if (it === 2) contraction = delta / previousDelta;
+    if (delta <= PITZER_TOLERANCE || (it > 1 && contraction < 0.5 && contraction * delta <= PITZER_TOLERANCE)) {
+      for (let i = 0; i < n; i++) lnGamma[i] = next[i];
+      finalPass = true;
+      continue;
+    }
+    if (delta >= previousDelta) {
+      for (let i = 0; i < n; i++) lnGamma[i] += 0.5 * (next[i] - lnGamma[i]);
+    } else if (it > 1) {
+      // Anderson mixing of depth one: the residual is nearly one mode (the ionic strength), so a secant step
+      // along it removes most of what is left: L ← G_k − θ(G_k − G_{k−1}), θ = F_k·ΔF/|ΔF|².
+      let num = 0;
+      let den = 0;
+      for (let i = 0; i < n; i++) {
+        const f = next[i] - lnGamma[i];
+        const df = f - (previousG[i] - previousL[i]);
+        num += f * df;
+        den += df * df;
+      }
+      const theta = den > 0 ? num / den : 0;
+      for (let i = 0; i < n; i++) {
+        const g = next[i];
+        previousL[i] = lnGamma[i];
+        lnGamma[i] = g - theta * (g - previousG[i]);
+        previousG[i] = g;
+      }
+    } else {
+      for (let i = 0; i < n; i++) {
+        previousL[i] = lnGamma[i];
+        previousG[i] = next[i];
+        lnGamma[i] = next[i];
+      }
+    }
+    previousDelta = delta;
+  }
+  throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The activity-coefficient iteration', MAX_PITZER_ITERATIONS));
 }
 
 /**
@@ -164,6 +362,7 @@ export interface EquilibriumState {
  */
 export function solvePrepared(p: PreparedComposition, guessPh = 7): EquilibriumState {
   const kp: number[] = new Array<number>(p.ka.length).fill(0);
+  if (p.pitzer) return solvePitzer(p, p.pitzer, kp, guessPh);
   const counter = { n: 0 };
   let x = -guessPh * Math.LN10;
   let g1 = 1;
@@ -171,7 +370,7 @@ export function solvePrepared(p: PreparedComposition, guessPh = 7): EquilibriumS
   const speciesIonicStrength = (ionicStrengthM: number) => {
     outer++;
     g1 = conditionalConstants(p, ionicStrengthM, kp);
-    x = solveChargeBalance(p, kp, g1, x, counter);
+    x = solveChargeBalance(p, kp, g1, g1, x, counter);
     return p.strongIonicStrength + 0.5 * evI2;
   };
   let ionicStrength: number;
@@ -195,6 +394,9 @@ export interface SpeciesAmount {
   readonly protonsLost?: number;
   readonly charge: number;
   readonly concentrationM: number;
+  /** mol per kg of water. */
+  readonly molality: number;
+  /** Activity: molal (m·γ) with the Pitzer model, molar (c·γ) with the one-number models. */
   readonly activity: number;
 }
 
@@ -210,12 +412,32 @@ export interface SystemSpeciation {
   readonly apparentPKa: readonly number[];
 }
 
+/** How much of a solution the Pitzer parameters cover. */
+export interface PitzerCoverage {
+  /** Fraction (0–1) of the molal ionic strength carried by ions without published parameters. */
+  readonly unparameterisedShare: number;
+  /** Acid–base systems whose ions carry more than 1 % of the ionic strength without parameters. */
+  readonly unparameterisedSystems: readonly string[];
+}
+
 /** The full answer for a composition. */
 export interface SpeciationResult {
   readonly pH: number;
   readonly temperatureC: number;
   readonly activityModel: string;
   readonly ionicStrengthM: number;
+  /** Ionic strength on the molal scale, mol/kg. */
+  readonly ionicStrengthMolal: number;
+  /** kg of water per litre of solution (from apparent molar volumes; see pitzer/volumes.ts). */
+  readonly waterKgPerL: number;
+  /** Osmotic coefficient φ from the Pitzer equations at the species found (whatever model set the pH). */
+  readonly osmoticCoefficient: number;
+  /** Osmolality φ·Σm, mOsm/kg: what a freezing-point osmometer reads. */
+  readonly osmolalityMosmKg: number;
+  /** Ideal osmolarity Σc over every particle, no osmotic coefficient, mOsm/L (see osmolarity.ts). */
+  readonly idealOsmolarityMosmL: number;
+  /** Share of the molal ionic strength carried by ions the Pitzer tables do not hold (they take the generic fallback), and the systems they belong to. */
+  readonly pitzerCoverage: PitzerCoverage;
   readonly pKw: number;
   readonly debyeHuckelA: number;
   readonly species: readonly SpeciesAmount[];
@@ -250,39 +472,85 @@ export function speciate(composition: Composition): SpeciationResult {
   return report(p, state, composition);
 }
 
+/** Share of the ionic strength above which ions without Pitzer parameters earn a warning. */
+export const UNPARAMETERISED_SHARE_LIMIT = 0.25;
+/** Molal ionic strength above which that share matters (below it every ion is close to its Debye–Hückel limit). */
+export const UNPARAMETERISED_IONIC_STRENGTH_MOLAL = 0.5;
+/** Temperature distance from 25 °C (K) beyond which parameters without a published slope earn a warning in concentrated solution. */
+export const PITZER_TEMPERATURE_WINDOW_K = 10;
+
 /** Builds the full report from a solved state. */
 export function report(p: PreparedComposition, state: EquilibriumState, composition: Composition): SpeciationResult {
   const aH = Math.pow(10, -state.pH);
   const g1 = state.gamma1;
-  const gammaOf = (z: number) => Math.pow(g1, z * z);
+  const ionNames = Object.keys(composition.strongIons ?? {});
+  const layout = p.pitzer ?? pitzerLayout(ionNames, ionNames.map((name) => composition.strongIons![name]), composition.systems, p.temperatureC, p.a);
+  const n = layout.speciesCount;
+  const charges = layout.system.charges;
+  let conc: readonly number[];
+  let waterKgPerL: number;
+  let ionicStrengthMolal: number;
+  let osmoticCoefficient: number;
+  const lnGamma = new Array<number>(n).fill(0);
+  if (state.pitzer) {
+    conc = state.pitzer.concentrations;
+    waterKgPerL = state.pitzer.waterKgPerL;
+    ionicStrengthMolal = state.pitzer.ionicStrengthMolal;
+    osmoticCoefficient = state.pitzer.osmoticCoefficient;
+    for (let i = 0; i < n; i++) lnGamma[i] = state.pitzer.lnGamma[i];
+  } else {
+    // The pH model is a one-number model; the osmotic coefficient still comes from the Pitzer equations at the species found.
+    const c = new Array<number>(n).fill(0);
+    c[H_INDEX] = aH / g1;
+    c[OH_INDEX] = p.kw / (aH * g1);
+    layout.strongConcentrations.forEach((v, i) => (c[STRONG_START + i] = v));
+    systemConcentrations(p, layout, state.mixedKa, aH, c);
+    conc = c;
+    waterKgPerL = waterKgPerLitre(p.waterDensity, c, layout.volumes, state.ionicStrengthM);
+    const evaluation: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
+    pitzerEvaluate(layout.system, c.map((v) => v / waterKgPerL), new Array<number>(n).fill(0), evaluation);
+    ionicStrengthMolal = evaluation.ionicStrength;
+    osmoticCoefficient = evaluation.osmoticCoefficient;
+    const lnG1 = Math.log(g1);
+    for (let i = 0; i < n; i++) lnGamma[i] = lnG1 * charges[i] * charges[i];
+  }
+  const molal = state.pitzer !== undefined;
   const species: SpeciesAmount[] = [];
-  const hc = aH / g1;
-  const ohc = p.kw / (aH * g1);
-  species.push({ name: 'H+', charge: 1, concentrationM: hc, activity: aH });
-  species.push({ name: 'OH-', charge: -1, concentrationM: ohc, activity: ohc * g1 });
-  let residual = p.strongCharge + hc - ohc;
-  let totalCharge = hc + ohc;
-  for (const name of Object.keys(composition.strongIons ?? {})) {
+  const push = (i: number, name: string, extra?: { system: string; protonsLost: number }) => {
+    const molality = conc[i] / waterKgPerL;
+    const gamma = Math.exp(lnGamma[i]);
+    species.push({ name, ...extra, charge: charges[i], concentrationM: conc[i], molality, activity: (molal ? molality : conc[i]) * gamma });
+  };
+  push(H_INDEX, 'H+');
+  push(OH_INDEX, 'OH-');
+  let residual = p.strongCharge + conc[H_INDEX] - conc[OH_INDEX];
+  let totalCharge = conc[H_INDEX] + conc[OH_INDEX];
+  ionNames.forEach((name, i) => {
     const ion = findStrongIon('strongIons', name);
-    const c = composition.strongIons![name];
-    species.push({ name: ion.name, charge: ion.charge, concentrationM: c, activity: c * gammaOf(ion.charge) });
-    totalCharge += Math.abs(ion.charge) * c;
+    push(STRONG_START + i, ion.name);
+    totalCharge += Math.abs(ion.charge) * conc[STRONG_START + i];
+  });
+  let sumMolal = 0;
+  let idealOsmolarityM = 0;
+  for (let i = 0; i < n; i++) {
+    sumMolal += conc[i] / waterKgPerL;
+    idealOsmolarityM += conc[i];
   }
   const systems: SystemSpeciation[] = [];
   composition.systems.forEach((sys, j) => {
     const first = p.firstStep[j];
-    const n = p.stepCount[j];
+    const steps = p.stepCount[j];
+    const start = layout.systemStart[j];
     const weights = [1];
-    for (let k = 1; k <= n; k++) weights.push((weights[k - 1] * state.mixedKa[first + k - 1]) / aH);
+    for (let k = 1; k <= steps; k++) weights.push((weights[k - 1] * state.mixedKa[first + k - 1]) / aH);
     const sum = weights.reduce((a, b) => a + b, 0);
     const fractions = weights.map((w) => w / sum);
     let meanCharge = 0;
     fractions.forEach((fr, k) => {
       const z = sys.chargeOfMostProtonated - k;
-      const c = fr * sys.totalM;
       meanCharge += fr * z;
-      totalCharge += Math.abs(z) * c;
-      species.push({ name: `${sys.name} ${chargeLabel(z)}`, system: sys.name, protonsLost: k, charge: z, concentrationM: c, activity: c * gammaOf(z) });
+      totalCharge += Math.abs(z) * fr * sys.totalM;
+      push(start + k, `${sys.name} ${chargeLabel(z)}`, { system: sys.name, protonsLost: k });
     });
     residual += sys.totalM * meanCharge;
     systems.push({
@@ -290,11 +558,13 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
       totalM: sys.totalM,
       meanCharge,
       fractions,
-      apparentPKa: state.mixedKa.slice(first, first + n).map((k) => -Math.log10(k)),
+      apparentPKa: state.mixedKa.slice(first, first + steps).map((k) => -Math.log10(k)),
     });
   });
   const warnings = [...p.warnings];
-  if (p.model !== 'ideal' && state.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M) {
+  const coverage = pitzerCoverage(layout, conc, waterKgPerL, ionicStrengthMolal, composition);
+  if (p.model === 'pitzer') warnings.push(...pitzerWarnings(p, layout, coverage, ionicStrengthMolal));
+  else if (p.model !== 'ideal' && state.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M) {
     warnings.push(warning('beyondActivityModel', MESSAGES.beyondActivityModel(state.ionicStrengthM, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES[p.model]), 'activityModel'));
   }
   return {
@@ -302,6 +572,12 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     temperatureC: p.temperatureC,
     activityModel: p.model,
     ionicStrengthM: state.ionicStrengthM,
+    ionicStrengthMolal,
+    waterKgPerL,
+    osmoticCoefficient,
+    osmolalityMosmKg: osmoticCoefficient * sumMolal * 1000,
+    idealOsmolarityMosmL: idealOsmolarityM * 1000,
+    pitzerCoverage: coverage,
     pKw: pKw(p.temperatureC),
     debyeHuckelA: p.a,
     species,
@@ -314,6 +590,50 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     },
     warnings,
   };
+}
+
+/**
+ * The Pitzer model's own warnings: past its validated ionic strength; ions without
+ * parameters carrying much of a concentrated solution's ionic strength; parameters without
+ * a temperature slope used far from 25 °C in a concentrated solution.
+ */
+function pitzerWarnings(p: PreparedComposition, layout: PitzerLayout, coverage: PitzerCoverage, ionicStrengthMolal: number): ChemWarning[] {
+  const warnings: ChemWarning[] = [];
+  if (ionicStrengthMolal > PITZER_LIMIT_MOLAL) {
+    warnings.push(warning('beyondPitzerRange', MESSAGES.beyondPitzerRange(ionicStrengthMolal, PITZER_LIMIT_MOLAL), 'activityModel'));
+  }
+  if (ionicStrengthMolal > UNPARAMETERISED_IONIC_STRENGTH_MOLAL) {
+    if (coverage.unparameterisedShare > UNPARAMETERISED_SHARE_LIMIT) {
+      warnings.push(warning('pitzerFallback', MESSAGES.pitzerFallback(coverage.unparameterisedSystems.join(', '), coverage.unparameterisedShare * 100, ionicStrengthMolal), 'activityModel'));
+    }
+    if (layout.system.temperatureExtrapolated && Math.abs(p.temperatureC - 25) > PITZER_TEMPERATURE_WINDOW_K) {
+      warnings.push(warning('pitzerTemperature', MESSAGES.pitzerTemperature(p.temperatureC), 'temperatureC'));
+    }
+  }
+  return warnings;
+}
+
+/** How much of the molal ionic strength ions without Pitzer parameters carry, and whose they are. */
+function pitzerCoverage(layout: PitzerLayout, conc: readonly number[], waterKgPerL: number, ionicStrengthMolal: number, composition: Composition): PitzerCoverage {
+  let share = 0;
+  const names = new Set<string>();
+  const charges = layout.system.charges;
+  layout.unparameterised.forEach((u, i) => {
+    if (!u || conc[i] <= 0 || ionicStrengthMolal <= 0) return;
+    const part = (0.5 * charges[i] * charges[i] * conc[i]) / waterKgPerL / ionicStrengthMolal;
+    share += part;
+    if (part > 0.01) names.add(speciesSystemName(composition, layout, i));
+  });
+  return { unparameterisedShare: share, unparameterisedSystems: [...names] };
+}
+
+/** The system a species of the layout belongs to, for messages. */
+function speciesSystemName(composition: Composition, layout: PitzerLayout, index: number): string {
+  let name = 'an ion';
+  layout.systemStart.forEach((start, j) => {
+    if (index >= start) name = composition.systems[j].name;
+  });
+  return name;
 }
 
 /** pH of a composition (the lean call: no species report). */

@@ -9,13 +9,14 @@
  * iterated only on the ionic strength (which the titrant itself raises). No nested root
  * finding (docs/science.md, Methods: "Titrant for a known target pH").
  */
-import { ionicStrengthFactor } from './activity';
+import { ionicStrengthFactor, parseActivityModel } from './activity';
 import { AcidBaseChemistry, Composition, MAX_CONCENTRATION_M, PreparedComposition, appendStepConstants, prepare, systemAt, validateChemistry } from './composition';
 import { ChemError, MESSAGES, requireNumber } from './errors';
 import { selfConsistentIonicStrength } from './ionicStrength';
 import { findStrongIon } from './strongIons';
 import { solvePrepared } from './speciation';
 import { vantHoffTerms } from './vantHoff';
+import { AmountIncrements, pitzerAmountAtPh } from './pitzer/amount';
 
 /** A titrant: what one mole of it adds to the solution. */
 export interface Titrant {
@@ -127,9 +128,28 @@ function systemCharge(ka: readonly number[], zd: readonly number[], first: numbe
  */
 export function titrantForPh(composition: Composition, titrant: Titrant, targetPh: number): TitrantAmount {
   requireNumber('targetPh', targetPh, MIN_TARGET_PH, MAX_TARGET_PH, `${MIN_TARGET_PH} to ${MAX_TARGET_PH}`);
-  const p = prepare(composition);
-  return titrantForPhPrepared(p, prepareTitrant(titrant, p.temperatureC), titrant.name, targetPh);
+  if (composition === null || typeof composition !== 'object' || parseActivityModel('activityModel', composition.activityModel) !== 'pitzer') {
+    const p = prepare(composition);
+    return titrantForPhPrepared(p, prepareTitrant(titrant, p.temperatureC), titrant.name, targetPh);
+  }
+  // Pitzer: the composition prepared once with the titrant's species present at zero amount, the amount entering
+  // linearly (src/chem/pitzer/amount.ts).
+  const zero = withTitrant(composition, titrant, 0);
+  const p = prepare(zero);
+  prepareTitrant(titrant, p.temperatureC); // validates the titrant as the one-number path does
+  const keys = Object.keys(zero.strongIons ?? {});
+  const canonical = keys.map((key) => findStrongIon('strongIons', key).name);
+  const strongUp = new Array<number>(keys.length).fill(0);
+  for (const [name, perMole] of Object.entries(titrant.strongIons ?? {})) strongUp[canonical.indexOf(findStrongIon('titrant.strongIons', name).name)] += perMole;
+  const totalsUp = new Array<number>(zero.systems.length).fill(0);
+  if (titrant.system) totalsUp[totalsUp.length - 1] = titrant.systemPerMole ?? 1;
+  const inc: AmountIncrements = { strongUp, strongDown: strongUp.map((v) => -v), totalsUp, totalsDown: totalsUp.map((v) => -v) };
+  // No starting estimate is needed: at fixed γ the first step already lands on the amount.
+  const found = pitzerAmountAtPh(p, inc, targetPh, 0);
+  if (!Number.isFinite(found.amount) || found.amount < 0 || found.amount > MAX_CONCENTRATION_M) throw unreachable(p, titrant.name, targetPh, found.chargePerMole, found.amount);
+  return { concentrationM: found.amount, ionicStrengthM: found.ionicStrengthM, chargePerMole: found.chargePerMole, iterations: found.iterations };
 }
+
 
 function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: string, targetPh: number): TitrantAmount {
   const aH = Math.pow(10, -targetPh);
@@ -163,6 +183,10 @@ function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: 
  * monovalent, so the ionic strength sees |c|. Used for capacity, where the pH moves both ways.
  */
 export function netStrongBaseForPh(p: PreparedComposition, pH: number): number {
+  if (p.pitzer) {
+    const setup = strongBaseSetup(p);
+    return pitzerAmountAtPh(setup.prepared, setup.increments, pH, 0).amount;
+  }
   const aH = Math.pow(10, -pH);
   let c = 0;
   const speciesIonicStrength = (ionicStrengthM: number) => {
@@ -173,6 +197,30 @@ export function netStrongBaseForPh(p: PreparedComposition, pH: number): number {
   if (p.model === 'ideal') speciesIonicStrength(0);
   else selfConsistentIonicStrength(p.strongIonicStrength, speciesIonicStrength, p.ionicStrengthScale + 1, 'The strong-base equivalent');
   return c;
+}
+
+/** The composition with Na⁺ and Cl⁻ slots for a signed strong-base amount (Na⁺ up, Cl⁻ down), kept per prepared composition: capacity asks five times. */
+const STRONG_BASE_SETUPS = new WeakMap<PreparedComposition, { prepared: PreparedComposition; increments: AmountIncrements }>();
+
+function strongBaseSetup(p: PreparedComposition): { prepared: PreparedComposition; increments: AmountIncrements } {
+  let setup = STRONG_BASE_SETUPS.get(p);
+  if (!setup) {
+    const zero = withTitrant(withTitrant(p.source, SODIUM_HYDROXIDE, 0), HYDROCHLORIC_ACID, 0);
+    const keys = Object.keys(zero.strongIons ?? {});
+    const canonical = keys.map((key) => findStrongIon('strongIons', key).name);
+    const nSystems = zero.systems.length;
+    setup = {
+      prepared: prepare(zero),
+      increments: {
+        strongUp: canonical.map((_, i) => (i === canonical.indexOf('Na+') ? 1 : 0)),
+        strongDown: canonical.map((_, i) => (i === canonical.indexOf('Cl-') ? 1 : 0)),
+        totalsUp: new Array<number>(nSystems).fill(0),
+        totalsDown: new Array<number>(nSystems).fill(0),
+      },
+    };
+    STRONG_BASE_SETUPS.set(p, setup);
+  }
+  return setup;
 }
 
 function unreachable(p: PreparedComposition, name: string, targetPh: number, q: number, c: number): ChemError {

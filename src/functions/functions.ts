@@ -47,7 +47,7 @@ function solution(composition: any, temperatureC: any, activityModel: any, userS
  * @helpurl https://localhost:3000/help/functions.html#ph-of
  * @param composition Two columns: substance or form name (e.g. "tris base", "Na2HPO4·7H2O", "NaCl"), then amount in mM. Blank rows are ignored.
  * @param [temperatureC] Temperature in °C (blank: 25).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances (see the help page for its columns).
  * @returns pH, as a calibrated meter would read it at that temperature.
  */
@@ -66,7 +66,7 @@ export function ph(composition: any[][], temperatureC?: any, activityModel?: any
  * @param titrant Titrant form (e.g. "NaOH", "HCl", "KOH", or a weak base or acid such as "tris base").
  * @param titrantConcentrationM Concentration of the titrant stock, mol/L.
  * @param [temperatureC] Temperature at which the pH is adjusted, °C (blank: 25).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim".
  * @param [salts] Two columns: other forms in the final solution and their mM (e.g. "NaCl", 150); they shift the pH, so the titrant too.
  * @param [userSubstances] Range of your own substances.
  * @returns Titrant stock to add, mL.
@@ -99,7 +99,7 @@ export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, t
  * @param composition Two columns: substance or form name, then amount in mM.
  * @param [measure] "base" (blank): mM of strong base that raises the pH by 0.1; "acid": mM of strong acid that lowers it by 0.1; "beta": mol/L per pH unit.
  * @param [temperatureC] Temperature in °C (blank: 25).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns Capacity in the measure chosen.
  */
@@ -120,7 +120,7 @@ export function capacityOf(composition: any[][], measure?: any, temperatureC?: a
  * @param composition Two columns: substance or form name, then amount in mM (before dilution).
  * @param dilutionFactor Final volume over starting volume (10 for one part plus nine of water); 1 or more.
  * @param [temperatureC] Temperature in °C (blank: 25).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns pH after dilution.
  */
@@ -137,7 +137,7 @@ export function phDiluted(composition: any[][], dilutionFactor: any, temperature
  * @helpurl https://localhost:3000/help/functions.html#ph-at-temperature
  * @param composition Two columns: substance or form name, then amount in mM.
  * @param temperatureC Temperature of use, °C (0 to 100).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns pH at that temperature.
  */
@@ -156,7 +156,7 @@ export function phAtTemperature(composition: any[][], temperatureC: any, activit
  * @param [step] Which proton-loss step, 1 for the first (blank: 1).
  * @param [temperatureC] Temperature in °C (blank: 25).
  * @param [ionicStrengthMm] Ionic strength in mM (blank: 0, the thermodynamic pKa).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns pKa′, to be used with pH = −log a(H+).
  */
@@ -199,7 +199,7 @@ export function grams(form: any, concentrationMm: any, volumeMl: any, purity?: a
  * @helpurl https://localhost:3000/help/functions.html#ionic-strength-mm
  * @param composition Two columns: substance or form name, then amount in mM.
  * @param [temperatureC] Temperature in °C (blank: 25).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns Ionic strength, mM.
  */
@@ -213,7 +213,7 @@ export function ionicStrengthMm(composition: any[][], temperatureC?: any, activi
  * @helpurl https://localhost:3000/help/functions.html#osmolarity-ideal
  * @param composition Two columns: substance or form name, then amount in mM.
  * @param [temperatureC] Temperature in °C (blank: 25).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns Ideal osmolarity, mOsm/L.
  */
@@ -227,7 +227,7 @@ export function osmolarityIdeal(composition: any[][], temperatureC?: any, activi
  * @helpurl https://localhost:3000/help/functions.html#conductivity
  * @param composition Two columns: substance or form name, then amount in mM.
  * @param [temperatureC] Temperature of the reading in °C, 0 to 60 (blank: 25).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim" (for the speciation; the conductivity model is the same).
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim" (for the speciation; the conductivity model is the same).
  * @param [userSubstances] Range of your own substances.
  * @returns Conductivity, mS/cm.
  */
@@ -239,6 +239,19 @@ export function conductivity(composition: any[][], temperatureC?: any, activityM
   });
 }
 
+/**
+ * Osmolality, in mOsm/kg: what a freezing-point osmometer reads, φ·Σm with the osmotic coefficient φ from the Pitzer equations.
+ * @customfunction OSMOLALITY OSMOLALITY
+ * @helpurl https://localhost:3000/help/functions.html#osmolality
+ * @param composition Two columns: substance or form name, then amount in mM.
+ * @param [temperatureC] Temperature in °C (blank: 25).
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim" (sets the pH and so the species; φ is always Pitzer's).
+ * @param [userSubstances] Range of your own substances.
+ * @returns Osmolality, mOsm/kg.
+ */
+export function osmolality(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
+  return memoised('OSMOLALITY', [composition, temperatureC, activityModel, userSubstances], () => speciate(solution(composition, temperatureC, activityModel, userSubstances)).osmolalityMosmKg);
+}
 
 /**
  * Warnings about a solution's prediction, as one cell of text: "none", or how many and each in turn. Put it beside a PH.OF cell: single-value results cannot carry their warnings.
@@ -246,7 +259,7 @@ export function conductivity(composition: any[][], temperatureC?: any, activityM
  * @helpurl https://localhost:3000/help/functions.html#warnings
  * @param composition Two columns: substance or form name, then amount in mM.
  * @param [temperatureC] Temperature in °C (blank: 25).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns "none", or the number of warnings followed by each.
  */
@@ -268,7 +281,7 @@ export function warnings(composition: any[][], temperatureC?: any, activityModel
  * @helpurl https://localhost:3000/help/functions.html#species
  * @param composition Two columns: substance or form name, then amount in mM.
  * @param [temperatureC] Temperature in °C (blank: 25).
- * @param [activityModel] "davies" (blank), "ideal" or "bates-guggenheim".
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns Table of species.
  */

@@ -225,7 +225,7 @@ export function defaultInput(settings: Partial<PaneSettings> = {}): FormInput {
     saltMm: '150',
     volumeMl: '1000',
     benchTemperatureC: String(settings.benchTemperatureC ?? 22),
-    activityModel: settings.activityModel ?? 'davies',
+    activityModel: settings.activityModel ?? 'pitzer',
     partVolumeFraction: String(settings.partVolumeFraction ?? 0.8),
     userSubstances: '',
   };

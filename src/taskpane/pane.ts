@@ -59,7 +59,7 @@ const GROUPS: readonly { legend: string; fields: readonly FieldSpec[]; id?: stri
         name: 'activityModel',
         label: 'Activity model',
         kind: 'select',
-        options: [['davies', 'Davies (default)'], ['bates-guggenheim', 'Debye–Hückel, Bates–Guggenheim'], ['ideal', 'Ideal (no activity correction)']],
+        options: [['pitzer', 'Pitzer (default, stocks too)'], ['davies', 'Davies (dilute only)'], ['bates-guggenheim', 'Debye–Hückel, Bates–Guggenheim'], ['ideal', 'Ideal (no activity correction)']],
       },
       { name: 'userSubstances', label: 'Your substances (range, optional)', hint: "e.g. 'My substances'!A2:J20" },
     ],

@@ -236,7 +236,7 @@ export async function valuesCopy(port: WorkbookPort, options: { version: string;
 /** Settings merged over defaults, for the form. */
 export function mergedSettings(saved: Partial<PaneSettings>): Partial<PaneSettings> {
   const out: Partial<Record<keyof PaneSettings, unknown>> = {};
-  if (saved.activityModel && ['davies', 'ideal', 'bates-guggenheim'].includes(saved.activityModel)) out.activityModel = saved.activityModel;
+  if (saved.activityModel && ['pitzer', 'davies', 'ideal', 'bates-guggenheim'].includes(saved.activityModel)) out.activityModel = saved.activityModel;
   if (typeof saved.benchTemperatureC === 'number') out.benchTemperatureC = saved.benchTemperatureC;
   if (typeof saved.titrant === 'string' && saved.titrant) out.titrant = saved.titrant;
   if (typeof saved.titrantStockM === 'number') out.titrantStockM = saved.titrantStockM;

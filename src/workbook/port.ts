@@ -70,7 +70,7 @@ export interface Selection {
 
 /** Settings the pane keeps in the document (so they travel with the workbook). */
 export interface PaneSettings {
-  readonly activityModel: 'davies' | 'ideal' | 'bates-guggenheim';
+  readonly activityModel: 'pitzer' | 'davies' | 'ideal' | 'bates-guggenheim';
   /** Temperature at which the pH is adjusted on the bench, °C. */
   readonly benchTemperatureC: number;
   /** Default titrant form and its stock concentration, mol/L. */

@@ -19,10 +19,11 @@ describe('activity models', () => {
     expect(ionicStrengthFactor('ideal', 0.3)).toBe(0);
     expect(log10Gamma('davies', 0, 0.3, 0.51)).toBeCloseTo(0, 15);
   });
-  it('parses names case-insensitively, defaults to davies, and refuses unknown models naming the allowed ones', () => {
-    expect(parseActivityModel('m', undefined)).toBe('davies');
+  it('parses names case-insensitively, defaults to pitzer, and refuses unknown models naming the allowed ones', () => {
+    expect(parseActivityModel('m', undefined)).toBe('pitzer');
     expect(parseActivityModel('m', ' Ideal ')).toBe('ideal');
-    expect(() => parseActivityModel('activityModel', 'pitzer')).toThrow(ChemError);
-    expect(() => parseActivityModel('activityModel', 'pitzer')).toThrow(/davies, ideal, bates-guggenheim/);
+    expect(parseActivityModel('m', 'Pitzer')).toBe('pitzer');
+    expect(() => parseActivityModel('activityModel', 'sit')).toThrow(ChemError);
+    expect(() => parseActivityModel('activityModel', 'sit')).toThrow(/pitzer, davies, ideal, bates-guggenheim/);
   });
 });

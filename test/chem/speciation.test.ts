@@ -27,7 +27,7 @@ const PRIMARY_STANDARDS: { name: string; composition: Composition; pH: number }[
   { name: 'NaHCO3 + Na2CO3 0.025 + 0.025 mol/kg', pH: pHSAt25('carbonate'), composition: { systems: [{ ...CARBONATE, totalM: 0.05 }], strongIons: { 'Na+': 0.075 } } },
 ];
 
-describe('IUPAC 2002 primary pH standards at 25 °C (Buck et al. 2002), Davies + Goldberg 2002 constants, ±0.015', () => {
+describe('IUPAC 2002 primary pH standards at 25 °C (Buck et al. 2002), default (Pitzer) model + Goldberg 2002 constants, ±0.015', () => {
   it.each(PRIMARY_STANDARDS)('$name → pH $pH', ({ name, composition, pH }) => {
     expectClose(name, solvePh(composition), pH, PRIMARY_STANDARD_TOLERANCE);
   });
@@ -79,11 +79,14 @@ describe('speciate', () => {
     expectClose('HCl', solvePh({ systems: [], strongIons: { 'Cl-': 0.01 }, activityModel: 'ideal' }), 2, 1e-6);
   });
 
-  it('warns above 60 °C and above I = 0.5 M, but still solves', () => {
+  it('warns above 60 °C, above I = 0.5 M for Davies and above 4 mol/kg for Pitzer, but still solves', () => {
     const hot = speciate({ ...buffer, temperatureC: 80 });
     expect(codes(hot.warnings)).toContain('aboveFittedRange');
-    const salty = speciate({ ...buffer, strongIons: { 'K+': 0.025, 'Na+': 1.05, 'Cl-': 1 } });
-    expect(codes(salty.warnings)).toContain('beyondActivityModel');
+    const salty = { ...buffer, strongIons: { 'K+': 0.025, 'Na+': 1.05, 'Cl-': 1 } };
+    expect(codes(speciate({ ...salty, activityModel: 'davies' }).warnings)).toContain('beyondActivityModel');
+    expect(speciate(salty).warnings).toEqual([]);
+    const brine = speciate({ ...buffer, strongIons: { 'K+': 0.025, 'Na+': 5.05, 'Cl-': 5 } });
+    expect(codes(brine.warnings)).toContain('beyondPitzerRange');
   });
 
   describe('bad input names the field, the value and what is allowed', () => {

@@ -28,7 +28,7 @@ describe('formula engine', () => {
   test('formulas as typed in Excel (any case) give the catalog\'s values; ordinary formulas mix in', () => {
     const hf = createFormulaEngine({
       Prep: [
-        ['tris base', 50, '=PROTON.PH.OF(A1:B2)', '=proton.ph.of(A1:B2, "25", "Davies")', '=ROUND(C1, 2)'],
+        ['tris base', 50, '=PROTON.PH.OF(A1:B2)', '=proton.ph.of(A1:B2, "25", "Pitzer")', '=ROUND(C1, 2)'],
         ['NaCl', 150, '=PROTON.GRAMS("tris HCl", 50, 1000, 99%)', '=PROTON.GRAMS("tris HCl", 50, 1000, "99%")', '=PROTON.PH.OF({"tris base",50;"NaCl",150})'],
       ],
     });
@@ -110,7 +110,7 @@ describe('formula engine', () => {
     let compared = 0;
     targets.forEach((target, i) =>
       temperatures.forEach((temperatureC, j) => {
-        const composition = lib.compositionFromForms([{ form: 'tris base', concentrationM: 0.05 }], { temperatureC, activityModel: 'davies' });
+        const composition = lib.compositionFromForms([{ form: 'tris base', concentrationM: 0.05 }], { temperatureC, activityModel: 'pitzer' });
         const expected = (titrantForPh(composition, { name: 'hydrochloric acid', strongIons: { 'Cl-': 1 } }, target).concentrationM * 1000) / 1;
         const got = values[i + 1][j + 1] as number;
         if (Math.abs(got - expected) > GRID_RELATIVE_TOLERANCE * expected) throw new Error(`pH ${target}, ${temperatureC} °C: engine ${got}, core ${expected}, difference ${got - expected}, tolerance ${GRID_RELATIVE_TOLERANCE} relative`);

@@ -5,7 +5,7 @@
  */
 import { ACTIVITY_MODELS, afterDilution, capacity, conductivityAt, idealOsmolarity, pKaAt, solvePh, speciate, titrantForPh, HYDROCHLORIC_ACID } from '../../src/chem';
 import { defaultLibrary } from '../../src/chem/library';
-import { capacityOf, conductivity, forms, grams, ionicStrengthMm, osmolarityIdeal, ph, phAtTemperature, phDiluted, pka, species, spillShape, substances, titrantMl, warnings, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
+import { capacityOf, conductivity, forms, grams, ionicStrengthMm, osmolality, osmolarityIdeal, ph, phAtTemperature, phDiluted, pka, species, spillShape, substances, titrantMl, warnings, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
 import { errorOf } from './errorOf';
 import { pHSAt25 } from '../chem/iupacStandards';
 import { clearCallCache } from '../../src/functions/memo';
@@ -17,7 +17,7 @@ const SCALED_DIGITS = 9;
 
 const lib = defaultLibrary();
 const TRIS_SALINE = [['tris base', 50], ['NaCl', 150]];
-const trisSaline = (temperatureC = 25, activityModel: 'davies' | 'ideal' | 'bates-guggenheim' = 'davies') =>
+const trisSaline = (temperatureC = 25, activityModel: 'pitzer' | 'davies' | 'ideal' | 'bates-guggenheim' = 'pitzer') =>
   lib.compositionFromForms([{ form: 'tris base', concentrationM: 0.05 }, { form: 'NaCl', concentrationM: 0.15 }], { temperatureC, activityModel });
 
 beforeEach(() => clearCallCache());
@@ -30,7 +30,7 @@ describe('PH.OF', () => {
   test('accepts numbers as text, blank temperature and model, mixed-case names and blank rows', () => {
     const expected = solvePh(trisSaline());
     expect(ph([['TRIS BASE', '50'], ['', ''], [' nacl ', ' 150 '], [null, null]], '', null)).toBeCloseTo(expected, SAME_DIGITS);
-    expect(ph(TRIS_SALINE, '25', 'Davies')).toBeCloseTo(expected, SAME_DIGITS);
+    expect(ph(TRIS_SALINE, '25', 'Pitzer')).toBeCloseTo(expected, SAME_DIGITS);
   });
   test('a system name means the system with no counter-ions; a strong-ion name adds the ion', () => {
     const direct = solvePh({ systems: [{ ...lib.compositionFromForms([{ form: 'HEPES free acid', concentrationM: 0.02 }]).systems[0] }], strongIons: { 'Na+': 0.01 } });
@@ -131,9 +131,10 @@ describe('PKA', () => {
     expect(pka('phosphate', 2, 25, 150)).toBeLessThan(pka('phosphate', 2, 25, 0));
     expect(pka('phosphate', 2, 25, 150, 'ideal')).toBeCloseTo(pka('phosphate', 2, 25, 0), SAME_DIGITS);
   });
-  test('agrees with the solver\'s apparent pKa′ at the ionic strength it finds', () => {
-    const result = speciate(lib.compositionFromForms([{ form: 'KH2PO4', concentrationM: 0.025 }, { form: 'Na2HPO4', concentrationM: 0.025 }]));
-    expect(pka('phosphate', 2, 25, result.ionicStrengthM * 1000)).toBeCloseTo(result.systems[0].apparentPKa[1], SCALED_DIGITS);
+  test('agrees with the solver\'s apparent pKa′ at the ionic strength it finds (one-number models; Pitzer needs the composition, and with an ionic strength alone takes the Bates–Guggenheim form)', () => {
+    const result = speciate(lib.compositionFromForms([{ form: 'KH2PO4', concentrationM: 0.025 }, { form: 'Na2HPO4', concentrationM: 0.025 }], { activityModel: 'davies' }));
+    expect(pka('phosphate', 2, 25, result.ionicStrengthM * 1000, 'davies')).toBeCloseTo(result.systems[0].apparentPKa[1], SCALED_DIGITS);
+    expect(pka('phosphate', 2, 25, 100)).toBeCloseTo(pka('phosphate', 2, 25, 100, 'bates-guggenheim'), SAME_DIGITS);
   });
   test('errors: a step the substance lacks, a strong electrolyte, an unknown name', () => {
     expect(errorOf(() => pka('tris', 2)).message).toBe('step is 2; allowed: whole numbers 1 to 1.');
@@ -172,6 +173,20 @@ describe('IONIC.STRENGTH.MM and OSMOLARITY.IDEAL', () => {
   });
 });
 
+describe('OSMOLALITY', () => {
+  test('matches the core in mOsm/kg, whatever model sets the pH', () => {
+    expect(osmolality(TRIS_SALINE)).toBeCloseTo(speciate(trisSaline()).osmolalityMosmKg, SCALED_DIGITS);
+    expect(osmolality(TRIS_SALINE, 25, 'davies')).toBeCloseTo(speciate(trisSaline(25, 'davies')).osmolalityMosmKg, SCALED_DIGITS);
+  });
+  test('0.9 % saline (154 mM NaCl) reads about 286 mOsm/kg on an osmometer (common practice), within 1 %, below its ideal osmolarity', () => {
+    expect(Math.abs(osmolality([['NaCl', 154]]) - 286)).toBeLessThan(2.86);
+    expect(osmolality([['NaCl', 154]])).toBeLessThan(osmolarityIdeal([['NaCl', 154]]));
+  });
+  test('errors as the other composition functions do', () => {
+    expect(errorOf(() => osmolality([['nacll', 154]])).kind).toBe('na');
+  });
+});
+
 describe('WARNINGS', () => {
   test('says "none" for a phosphate buffer near its pKa at room temperature', () => {
     expect(warnings([['Na2HPO4', 30], ['NaH2PO4·H2O', 20]])).toBe('none');
@@ -182,7 +197,8 @@ describe('WARNINGS', () => {
   });
   test('passes on the solver warnings (temperature, ionic strength) that a PH.OF cell cannot show', () => {
     expect(warnings(TRIS_SALINE.concat([['HCl', 25]]), 80)).toMatch(/^2 warnings: \(1\) Temperature 80 °C is above 60 °C.* \(2\) Temperature 80 °C lies outside 0–50 °C, the temperatures the data for tris/);
-    expect(warnings([['NaCl', 2000], ['sodium acetate trihydrate', 50], ['acetic acid', 50]])).toMatch(/Ionic strength 2\.\d+ M is above 0\.5 M/);
+    expect(warnings([['NaCl', 2000], ['sodium acetate trihydrate', 50], ['acetic acid', 50]], 25, 'davies')).toMatch(/Ionic strength 2\.\d+ M is above 0\.5 M/);
+    expect(warnings([['NaCl', 5000], ['sodium acetate trihydrate', 50], ['acetic acid', 50]])).toMatch(/Ionic strength 5\.\d+ mol\/kg is above 4 mol\/kg/);
   });
   test('warns when a system without ΔH° (malate) is used away from 25 ± 2 °C, not at 25 °C', () => {
     expect(warnings([['malic acid', 10], ['NaOH', 10]], 4)).toMatch(/malate has no ΔH° for steps 1, 2: its pKa is held at the 25 °C value/);

@@ -161,7 +161,7 @@ describe('recipe table in the preview workbook', () => {
     expect(copy.sheet).toBe(`${built.sheet} values`);
     const text = (r: number, c: number) => book.value(copy.sheet, r, c);
     expect(text(1, 1)).toBe('Proton Ledger 0.1.0');
-    expect(text(2, 1)).toBe('davies');
+    expect(text(2, 1)).toBe('pitzer');
     expect(text(4, 1)).toBe('4; 25');
     expect(String(text(5, 1))).toMatch(/HEPES: HEPES \(goldberg2002/);
     const gramsCopy = book.value(copy.sheet, 9 + LAYOUT.firstDataRow, COL.formGrams);

@@ -170,7 +170,7 @@ describe('ExcelAdapter on office-addin-mock', () => {
     expect(calls[0]).toEqual({ what: 'worksheets.add', args: ['HEPES 25 mM pH 7–7.6'] });
     expect(calls.filter((c) => c.what === 'charts.add')).toHaveLength(2);
     expect(calls[calls.length - 1]).toEqual({ what: 'activate', args: ['HEPES 25 mM pH 7–7.6'] });
-    expect(JSON.parse(String(stored.get(SETTINGS_KEY)))).toEqual({ activityModel: 'davies', benchTemperatureC: 22, titrant: 'NaOH', titrantStockM: 1, partVolumeFraction: 0.8 });
+    expect(JSON.parse(String(stored.get(SETTINGS_KEY)))).toEqual({ activityModel: 'pitzer', benchTemperatureC: 22, titrant: 'NaOH', titrantStockM: 1, partVolumeFraction: 0.8 });
   });
 
   test('a values copy: reads the used range values and writes them, with provenance, on a new sheet', async () => {

@@ -123,6 +123,10 @@ export const FIELDS: readonly Field[] = [
     description: 'Ideal osmolarity the salt target reaches.', example: '300 mOsm/L',
   },
   {
+    kind: 'number', scope: 'recipe', name: 'saltTarget.osmolalityMosmKg', label: 'Target osmolality (mOsm/kg)', dimension: 'osmolality', unit: 'mOsm/kg', min: 0, max: 10000,
+    description: 'Osmolality (what a freezing-point osmometer reads) the salt target reaches.', example: '290 mOsm/kg',
+  },
+  {
     kind: 'number', scope: 'recipe', name: 'saltTarget.conductivityMsPerCm', label: 'Target conductivity (mS/cm)', dimension: 'conductivity', unit: 'mS/cm', min: 0, max: 1000,
     description: 'Conductivity the salt target reaches, read at the conductivity temperature.', example: '15 mS/cm',
   },
@@ -220,7 +224,8 @@ export function isBlankValue(value: unknown): boolean {
 /** An out-of-range error that shows the value as the user wrote it (text with its unit stays as typed). */
 function rangeError(f: NumberField | PurityField, asWritten: string, value: number, typed?: unknown): ChemError {
   const allowed = allowedOf(f);
-  const shown = typeof typed === 'string' ? typed.trim() : value;
+  // Text with a unit or a decimal comma is quoted as typed ("9 M"); a plain number is shown as the number.
+  const shown = typeof typed === 'string' && !/^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(typed.trim()) ? typed.trim() : value;
   return new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(asWritten, shown, allowed), asWritten, allowed);
 }
 

@@ -18,7 +18,7 @@
 import { ChemError, MESSAGES } from '../errors';
 
 /** What a number measures; each dimension has its own units. */
-export type Dimension = 'pH' | 'temperature' | 'concentration' | 'volume' | 'fraction' | 'percent' | 'osmolarity' | 'conductivity' | 'count';
+export type Dimension = 'pH' | 'temperature' | 'concentration' | 'volume' | 'fraction' | 'percent' | 'osmolarity' | 'osmolality' | 'conductivity' | 'count';
 
 /** Longest text read as one number with its unit: no real entry needs more, and it bounds the work. */
 export const MAX_NUMBER_TEXT = 64;
@@ -52,6 +52,7 @@ const UNITS: Readonly<Record<Dimension, Readonly<Record<string, number>>>> = {
   fraction: {},
   percent: { '%': 1 },
   osmolarity: { 'mOsm/L': 1, 'Osm/L': 1000 },
+  osmolality: { 'mOsm/kg': 1, 'Osm/kg': 1000 },
   conductivity: { 'mS/cm': 1, 'µS/cm': 1e-3, 'μS/cm': 1e-3, 'uS/cm': 1e-3, 'S/m': 10, 'mS/m': 0.01 },
   count: { '×': 1, x: 1 },
 };
@@ -65,6 +66,7 @@ export const BASE_UNIT: Readonly<Record<Dimension, string>> = {
   fraction: '',
   percent: '%',
   osmolarity: 'mOsm/L',
+  osmolality: 'mOsm/kg',
   conductivity: 'mS/cm',
   count: '×',
 };
@@ -83,6 +85,7 @@ const SHOWN_UNITS: Readonly<Record<Dimension, readonly string[]>> = {
   fraction: [],
   percent: ['%'],
   osmolarity: ['mOsm/L', 'Osm/L'],
+  osmolality: ['mOsm/kg', 'Osm/kg'],
   conductivity: ['mS/cm', 'µS/cm', 'S/m'],
   count: ['×'],
 };
@@ -96,6 +99,7 @@ const EXAMPLE: Readonly<Record<Dimension, string>> = {
   fraction: '"0.8" or "0,8"',
   percent: '"99.5" or "99.5%"',
   osmolarity: '"300 mOsm/L"',
+  osmolality: '"290 mOsm/kg"',
   conductivity: '"15 mS/cm"',
   count: '"10"',
 };

@@ -63,6 +63,20 @@ const SALT_TARGET_STEPS = 60;
 /** Step for dpH/dT by central difference, °C. */
 const DPH_DT_STEP_C = 0.5;
 
+/** How each salt-target goal is named in messages, with its unit. */
+const SALT_TARGET_WHAT: Readonly<Record<SaltGoal, (readAtC: number) => string>> = {
+  ionicStrength: () => 'ionic strength (mol/L)',
+  osmolarity: () => 'ideal osmolarity (mOsm/L)',
+  osmolality: () => 'osmolality (mOsm/kg)',
+  conductivity: (readAtC) => `conductivity (mS/cm at ${readAtC} °C)`,
+};
+
+/** What a salt target reaches. */
+type SaltGoal = 'ionicStrength' | 'osmolarity' | 'osmolality' | 'conductivity';
+
+/** Warnings about the activity model's range: a stock's own bear on its meter reading. */
+const ACTIVITY_RANGE_CODES: ReadonlySet<string> = new Set(['beyondActivityModel', 'beyondPitzerRange', 'pitzerFallback', 'pitzerTemperature']);
+
 /** The numbers a route fixes: the finished buffer and how it was put together. */
 interface RouteResult {
   readonly composition: Composition;
@@ -98,7 +112,7 @@ interface Settled {
   readonly titrant?: { readonly form?: string; readonly concentrationM: number; readonly tolerancePercent: number };
   readonly stock?: { readonly fold: number; readonly volumeMl?: number };
   /** The salt added to a target: its form, what it reaches (mol/L of ionic strength, mOsm/L, or mS/cm read at readAtC °C). */
-  readonly saltTarget?: { readonly form: LibraryForm; readonly kind: 'ionicStrength' | 'osmolarity' | 'conductivity'; readonly goal: number; readonly readAtC: number };
+  readonly saltTarget?: { readonly form: LibraryForm; readonly kind: SaltGoal; readonly goal: number; readonly readAtC: number };
   readonly pKaUncertainty?: number;
   readonly formPurityPercent?: number;
   readonly purityPercent: readonly { readonly key: string; readonly percent: number }[];
@@ -124,7 +138,10 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const madeVolumeL = stockVolumeL;
   const finished = base.composition;
 
-  const meterPh = solvePh(withConditions(scaleComposition(made.composition, 1 / s.partFraction), s.benchT));
+  const atMeter = withConditions(scaleComposition(made.composition, 1 / s.partFraction), s.benchT);
+  // A stock's own activity warnings (past the model's range, ions without Pitzer parameters) bear on the meter reading.
+  const stockWarnings = fold === 1 ? [] : speciate(atMeter).warnings.filter((w) => ACTIVITY_RANGE_CODES.has(w.code)).map((w) => warning(w.code, MESSAGES.stockAtMeter(fold, w.message), w.field));
+  const meterPh = solvePh(atMeter);
   const titration = made.titrant ? titrationPlan(s, made, madeVolumeL) : undefined;
   if (titration) checkTitrantFits(titration.volumeMl, madeVolumeL * 1000, s.partFraction, titration.stockM);
 
@@ -134,7 +151,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const cap = capacityOfPrepared(prepared, state.pH);
   // One criterion for weak buffering everywhere: the apparent pKa′ of the finished buffer at its own ionic strength and temperature (checks.ts).
   const weak = weakBufferingWarning(result);
-  const warnings: ChemWarning[] = [...result.warnings, ...(weak ? [weak] : [])];
+  const warnings: ChemWarning[] = [...result.warnings, ...(weak ? [weak] : []), ...stockWarnings];
   const conductivity = conductivityOf(result);
   warnings.push(...conductivity.warnings);
   const predictions = {
@@ -143,6 +160,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
     pHAtBench: solvePh(withConditions(finished, s.benchT)),
     ionicStrengthM: result.ionicStrengthM,
     idealOsmolarityMosm: idealOsmolarity(result) * 1000,
+    osmolalityMosmKg: result.osmolalityMosmKg,
     baseMmPerTenthPh: cap.baseMmPerTenthPh,
     acidMmPerTenthPh: cap.acidMmPerTenthPh,
     betaMPerPh: cap.betaMPerPh,
@@ -291,10 +309,11 @@ function settleSaltTarget(t: RecipeInput['saltTarget'], library: SubstanceLibrar
   const goals = [
     { kind: 'ionicStrength' as const, goal: readNumberField('saltTarget.ionicStrengthM', t.ionicStrengthM) },
     { kind: 'osmolarity' as const, goal: readNumberField('saltTarget.idealOsmolarityMosm', t.idealOsmolarityMosm) },
+    { kind: 'osmolality' as const, goal: readNumberField('saltTarget.osmolalityMosmKg', t.osmolalityMosmKg) },
     { kind: 'conductivity' as const, goal: readNumberField('saltTarget.conductivityMsPerCm', t.conductivityMsPerCm) },
-  ].filter((g): g is { kind: 'ionicStrength' | 'osmolarity' | 'conductivity'; goal: number } => g.goal !== undefined);
+  ].filter((g): g is { kind: SaltGoal; goal: number } => g.goal !== undefined);
   if (goals.length !== 1) {
-    const allowed = 'one of ionicStrengthM, idealOsmolarityMosm, conductivityMsPerCm';
+    const allowed = 'one of ionicStrengthM, idealOsmolarityMosm, osmolalityMosmKg, conductivityMsPerCm';
     throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('saltTarget', `one goal only: ${allowed}`), 'saltTarget', allowed);
   }
   const readAtC = readNumberField('saltTarget.conductivityTemperatureC', t.conductivityTemperatureC) ?? Math.min(Math.max(useT, CONDUCTIVITY_MIN_C), CONDUCTIVITY_MAX_C);
@@ -445,10 +464,10 @@ function solveWithSaltTarget(s: Settled): RouteResult {
     const c = routeResult(s, saltM).composition;
     if (target.kind === 'conductivity') return conductivityAt(c, target.readAtC).conductivityMsPerCm;
     const sp = speciate(c);
+    if (target.kind === 'osmolality') return sp.osmolalityMosmKg;
     return target.kind === 'ionicStrength' ? sp.ionicStrengthM : idealOsmolarity(sp) * 1000;
   };
-  const what =
-    target.kind === 'conductivity' ? `conductivity (mS/cm at ${target.readAtC} °C)` : target.kind === 'ionicStrength' ? 'ionic strength (mol/L)' : 'ideal osmolarity (mOsm/L)';
+  const what = SALT_TARGET_WHAT[target.kind](target.readAtC);
   const shown = (x: number) => Number(x.toPrecision(4));
   const reached = measure(0);
   if (reached > target.goal) {

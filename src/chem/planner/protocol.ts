@@ -159,6 +159,7 @@ export function formatRecipe(plan: RecipePlan): string {
   lines.push(`  pH at use               ${formatPh(p.pHAtUse)} at ${p.useTemperatureC} °C${atBench}`);
   lines.push(`  ionic strength          ${(p.ionicStrengthM * 1000).toFixed(1)} mM`);
   lines.push(`  ideal osmolarity        ${p.idealOsmolarityMosm.toFixed(0)} mOsm/L`);
+  lines.push(`  osmolality              ${p.osmolalityMosmKg.toFixed(0)} mOsm/kg (Pitzer osmotic coefficient)`);
   const at25 = p.useTemperatureC === 25 ? '' : `; ${conductivityText(p.conductivity25MsPerCm)} at 25 °C`;
   lines.push(`  conductivity            ${conductivityText(p.conductivityMsPerCm)} at ${p.useTemperatureC} °C${at25}`);
   if (plan.stock) lines.push(`  stock conductivity      ${conductivityText(plan.stock.stockConductivityMsPerCm)} at ${p.useTemperatureC} °C; ${conductivityText(plan.stock.stockConductivity25MsPerCm)} at 25 °C`);

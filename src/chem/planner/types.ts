@@ -44,7 +44,9 @@ export interface SaltTarget {
   readonly ionicStrengthM?: Amount;
   /** Target ideal osmolarity, mOsm/L. */
   readonly idealOsmolarityMosm?: Amount;
-  /** Target conductivity, mS/cm (instead of the two above), read at `conductivityTemperatureC`. */
+  /** Target osmolality (what an osmometer reads), mOsm/kg. */
+  readonly osmolalityMosmKg?: Amount;
+  /** Target conductivity, mS/cm (instead of the others), read at `conductivityTemperatureC`. */
   readonly conductivityMsPerCm?: Amount;
   /** Temperature at which the conductivity target is read, °C, 0–60 (default: the temperature of use). */
   readonly conductivityTemperatureC?: Amount;
@@ -145,6 +147,8 @@ export interface RecipePredictions {
   readonly ionicStrengthM: number;
   /** Ideal osmolarity (every particle counted once, no osmotic coefficient), mOsm/L. */
   readonly idealOsmolarityMosm: number;
+  /** Osmolality φ·Σm, mOsm/kg (φ from the Pitzer equations): what a freezing-point osmometer reads. */
+  readonly osmolalityMosmKg: number;
   /** mM of strong base that raises the pH by 0.1, and of strong acid that lowers it by 0.1. */
   readonly baseMmPerTenthPh: number;
   readonly acidMmPerTenthPh: number;

@@ -1,6 +1,7 @@
 /**
  * The IUPAC 2002 primary pH standards, made from library forms by name: pH(PS) at every
  * tabulated temperature 0–50 °C, their dilution values ΔpH½ and buffer values β at 25 °C.
+ * At 25 °C they are also solved with the Pitzer model (the default) and with Davies.
  *
  * Source of every expected value: test/chem/iupacStandards.ts (R. P. Buck et al., Pure
  * Appl. Chem. 74 (2002) 2169, with where each number was read). The standards are defined
@@ -78,10 +79,10 @@ describe('IUPAC 2002 primary pH standards 0–50 °C (Buck et al., Pure Appl. Ch
   });
 });
 
-describe('IUPAC 2002 primary pH standards at 25 °C under Davies (the default model), ±0.015', () => {
-  it.each(PRIMARY_STANDARDS.map((s) => [s.name, s] as const))('%s', (name, standard) => {
-    const pH = speciate(compositionOf(standard, 25, 'davies')).pH;
-    expectClose(`${name}, Davies`, pH, standard.pHS[STANDARD_TEMPERATURES_C.indexOf(25)], DAVIES_25_TOLERANCE_PH);
+describe('IUPAC 2002 primary pH standards at 25 °C under Pitzer (the default model) and Davies, ±0.015', () => {
+  it.each(PRIMARY_STANDARDS.flatMap((s) => (['pitzer', 'davies'] as const).map((model) => [`${s.name}, ${model}`, s, model] as const)))('%s', (name, standard, model) => {
+    const pH = speciate(compositionOf(standard, 25, model)).pH;
+    expectClose(name, pH, standard.pHS[STANDARD_TEMPERATURES_C.indexOf(25)], DAVIES_25_TOLERANCE_PH);
   });
 });
 

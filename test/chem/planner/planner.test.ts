@@ -60,10 +60,37 @@ describe('recipe planner: round trips (within 0.001 pH)', () => {
     expect(plan.stock!.waterPerBatchMl).toBeCloseTo(900, 10);
   });
 
+  it('stock route with the default Pitzer model: a 10× saline phosphate stock is adjusted to a meter reading several tenths below the 1× target (common practice: 10× stocks read 0.2–0.6 lower)', () => {
+    const input: RecipeInput = { buffer: 'phosphate', targetPh: 7.4, concentrationMm: 11.8, volumeMl: 1000, route: 'stock', stock: { fold: 10, volumeMl: 500 }, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 5 }, salts: [{ form: 'NaCl', concentrationMm: 137 }, { form: 'KCl', concentrationMm: 2.7 }], partVolumeFraction: 1 };
+    const stock = planRecipe(input);
+    const shift = stock.meter.pH - 7.4;
+    expect(shift).toBeLessThan(-0.2);
+    expect(shift).toBeGreaterThan(-0.6);
+    expect(codes(stock.warnings)).not.toContain('beyondActivityModel');
+    expect(codes(stock.warnings)).not.toContain('beyondPitzerRange');
+    // Davies put the stock above the target, the wrong way.
+    expect(planRecipe({ ...input, activityModel: 'davies' }).meter.pH).toBeGreaterThan(7.4);
+  });
+
+  it('stock route: a concentrated HEPES stock warns that HEPES has no Pitzer parameters, for the meter reading', () => {
+    const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 200, volumeMl: 1000, route: 'stock', stock: { fold: 10, volumeMl: 500 }, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 10 } });
+    expect(plan.warnings).toContainEqual(expect.objectContaining({ code: 'pitzerFallback', message: expect.stringMatching(/^Stock \(10×\) at the meter: Ions without published Pitzer parameters \(HEPES\)/) }));
+    expect(codes(planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 20, volumeMl: 1000, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } }).warnings)).not.toContain('pitzerFallback');
+  });
+
   it('salt target: the finished buffer has the asked ideal osmolarity within 0.01 mOsm/L', () => {
     const plan = planRecipe(RECIPES[7][1]);
     expect(Math.abs(plan.predictions.idealOsmolarityMosm - 290)).toBeLessThan(0.01);
     expect(plan.components.some((c) => c.name === 'sodium chloride' && c.grams! > 7)).toBe(true);
+  });
+
+  it('salt target by osmolality: HEPES saline to 290 mOsm/kg on the osmometer, within 0.01 mOsm/kg, needing more NaCl than the same ideal osmolarity', () => {
+    const input = { buffer: 'HEPES', targetPh: 7.2, concentrationMm: 10, volumeMl: 1000, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, saltTarget: { form: 'NaCl', osmolalityMosmKg: 290 } };
+    const plan = planRecipe(input);
+    expect(Math.abs(plan.predictions.osmolalityMosmKg - 290)).toBeLessThan(0.01);
+    const grams = (p: typeof plan) => p.components.find((c) => c.name === 'sodium chloride')!.grams!;
+    expect(grams(plan)).toBeGreaterThan(grams(planRecipe(RECIPES[7][1])));
+    expect(formatRecipe(plan)).toMatch(/osmolality +290 mOsm\/kg/);
   });
 
   it('salt target by ionic strength: 0.15 M reached within 1e-6 M', () => {
@@ -169,9 +196,11 @@ describe('recipe planner: warnings', () => {
     expect(codes(p.warnings)).toContain('weakBuffering');
   });
 
-  it('warns when the ionic strength is beyond the activity model', () => {
-    const p = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 20, volumeMl: 100, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'NaCl', concentrationMm: 1000 }] });
-    expect(codes(p.warnings)).toContain('beyondActivityModel');
+  it('warns when the ionic strength is beyond the activity model (Davies past 0.5 M; Pitzer holds there)', () => {
+    const input = { buffer: 'HEPES', targetPh: 7.4, concentrationMm: 20, volumeMl: 100, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'NaCl', concentrationMm: 1000 }] };
+    expect(codes(planRecipe({ ...input, activityModel: 'davies' }).warnings)).toContain('beyondActivityModel');
+    expect(codes(planRecipe(input).warnings)).not.toContain('beyondActivityModel');
+    expect(codes(planRecipe(input).warnings)).not.toContain('beyondPitzerRange');
   });
 
   it('warns when the titrant is more than half the volume', () => {
@@ -290,6 +319,8 @@ describe('recipe planner: bad input names the field and what is allowed', () => 
     ['a salt list text with no amount', { salts: 'NaCl' }, 'invalid-input', 'notANumber', 'salts'],
     ['a salt target already passed', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 10 } }, 'infeasible-target', 'saltTargetUnreachable', 'saltTarget'],
     ['a salt target with both goals', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 300, ionicStrengthM: 0.1 } }, 'invalid-input', 'missingValue', 'saltTarget'],
+    ['an osmolality target already passed', { saltTarget: { form: 'NaCl', osmolalityMosmKg: 10 } }, 'infeasible-target', 'saltTargetUnreachable', 'saltTarget'],
+    ['an osmolality target in a unit of another kind', { saltTarget: { form: 'NaCl', osmolalityMosmKg: '290 mOsm/L' } }, 'invalid-input', 'wrongUnit', 'saltTarget.osmolalityMosmKg'],
     ['a conductivity target already passed', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 0.1 } }, 'infeasible-target', 'saltTargetUnreachable', 'saltTarget'],
     ['a conductivity target beyond the most salt tried', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 900 } }, 'infeasible-target', 'saltTargetBeyondSalt', 'saltTarget'],
     ['an ionic-strength target a zwitterion cannot reach', { targetPh: 6.0, saltTarget: { form: 'glycine', ionicStrengthM: 0.15 } }, 'infeasible-target', 'saltTargetBeyondSalt', 'saltTarget'],
