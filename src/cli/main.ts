@@ -50,7 +50,7 @@ const SOLVE_HELP = `Usage: proton-ledger solve [--json '<composition JSON>'] [--
 
 A composition (JSON object):
   temperatureC      °C, 0 to 100 (default 25)
-  activityModel     davies (default), ideal, bates-guggenheim
+  activityModel     pitzer (default), davies, ideal, bates-guggenheim
   forms             [{"form": "<library name>", "mM": <amount>} or {"form", "grams", "volumeMl"}]
   systems           [{"name", "chargeOfMostProtonated", "pKa": [..], "deltaHkJ": [..], "deltaCpJ": [..], "totalMm"}]
   strongIonsMm      {"Na+": <mM>, "Cl-": <mM>, ...}
