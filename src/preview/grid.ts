@@ -29,9 +29,10 @@ export class Grid {
   private readonly status: HTMLElement;
   private table: HTMLTableElement | null = null;
   private renderQueued = false;
+  private unsubscribe: () => void = () => undefined;
 
   constructor(
-    private readonly book: PreviewWorkbook,
+    private book: PreviewWorkbook,
     root: HTMLElement,
   ) {
     this.sheet = book.sheetNames()[0];
@@ -47,8 +48,16 @@ export class Grid {
       if (td) this.select(Number(td.dataset.row), Number(td.dataset.col));
     });
     this.scroller.addEventListener('dblclick', () => this.input.focus());
-    book.onChange(() => this.queueRender());
+    this.unsubscribe = book.onChange(() => this.queueRender());
     this.render();
+  }
+
+  /** Shows another workbook (a new one, or one opened from a file). */
+  setBook(book: PreviewWorkbook): void {
+    this.unsubscribe();
+    this.book = book;
+    this.unsubscribe = book.onChange(() => this.queueRender());
+    this.showSheet(book.sheetNames()[0]);
   }
 
   /** The sheet shown. */

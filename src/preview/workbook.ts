@@ -4,6 +4,7 @@
  * number formats, cell styles, column widths, charts and the pane's settings.
  */
 import type { HyperFormula, RawCellContent } from 'hyperformula';
+import { MAX_SHEET_NAME_LENGTH } from '../workbook/port';
 import type { CellStyle, CellValue, ChartSpec, PaneSettings, RangeRef } from '../workbook/port';
 
 /** What a computed cell shows: a value, or a spreadsheet error with its message. */
@@ -24,6 +25,44 @@ type Listener = () => void;
 
 const key = (row: number, col: number) => `${row},${col}`;
 
+/** The title a new workbook gets. */
+export const DEFAULT_TITLE = 'Proton Ledger workbook';
+
+/** One sheet as the browser's storage keeps it. */
+export interface SavedSheet {
+  readonly name: string;
+  /** Raw contents: numbers, text (an apostrophe in front keeps text that looks like a formula), `=formulas`; cells a result spills into are left empty. */
+  readonly cells: RawCellContent[][];
+  readonly meta: readonly (readonly [string, CellMeta])[];
+  readonly widths: readonly (number | null)[];
+  readonly charts: readonly ChartSpec[];
+}
+
+/** The whole workbook as the browser's storage keeps it (JSON). */
+export interface SavedWorkbook {
+  readonly format: typeof SAVED_FORMAT;
+  readonly title: string;
+  readonly sheets: readonly SavedSheet[];
+  readonly settings: Partial<PaneSettings>;
+}
+
+/** Marks a saved workbook and its layout's version. */
+export const SAVED_FORMAT = 'proton-ledger-preview-1';
+
+/** True when `value` has the layout of a saved workbook (checked before it is trusted). */
+export function isSavedWorkbook(value: unknown): value is SavedWorkbook {
+  const v = value as SavedWorkbook | null;
+  return (
+    typeof v === 'object' &&
+    v !== null &&
+    v.format === SAVED_FORMAT &&
+    typeof v.title === 'string' &&
+    Array.isArray(v.sheets) &&
+    v.sheets.length > 0 &&
+    v.sheets.every((s) => typeof s?.name === 'string' && Array.isArray(s.cells) && s.cells.every((row: unknown) => Array.isArray(row)) && Array.isArray(s.meta) && Array.isArray(s.widths) && Array.isArray(s.charts))
+  );
+}
+
 export class PreviewWorkbook {
   private readonly extras = new Map<string, SheetExtras>();
   private readonly listeners = new Set<Listener>();
@@ -31,9 +70,20 @@ export class PreviewWorkbook {
   private batchDepth = 0;
   private pendingNotify = false;
 
+  /** The workbook's title: the name of the downloaded file. */
+  private titleText = DEFAULT_TITLE;
+
   constructor(readonly engine: HyperFormula) {
-    engine.on('valuesUpdated', () => this.notify());
-    engine.on('sheetAdded', () => this.notify());
+    for (const event of ['valuesUpdated', 'sheetAdded', 'sheetRemoved', 'sheetRenamed'] as const) engine.on(event, () => this.notify());
+  }
+
+  title(): string {
+    return this.titleText;
+  }
+
+  setTitle(title: string): void {
+    this.titleText = title.trim() || DEFAULT_TITLE;
+    this.notify();
   }
 
   /** Calls `listener` after every change (values, sheets, charts). Returns an unsubscribe function. */
@@ -77,6 +127,53 @@ export class PreviewWorkbook {
     this.engine.addSheet(name);
     this.extras.set(name, { meta: new Map(), widths: [], charts: [] });
     this.notify();
+  }
+
+  /** Renames a sheet (its formats, widths and charts go with it); references to it in formulas follow. */
+  renameSheet(from: string, to: string): void {
+    const name = to.trim();
+    if (name === from) return;
+    if (name === '') throw new Error('A sheet needs a name.');
+    if (/[\\/?*[\]:]/.test(name) || name.length > MAX_SHEET_NAME_LENGTH) throw new Error(`A sheet name has at most ${MAX_SHEET_NAME_LENGTH} characters and none of \\ / ? * [ ] :`);
+    if (this.sheetNames().some((n) => n.toLowerCase() === name.toLowerCase() && n !== from)) throw new Error(`A sheet named "${name}" exists already.`);
+    this.engine.renameSheet(this.sheetId(from), name);
+    const e = this.extras.get(from);
+    if (e) {
+      this.extras.delete(from);
+      this.extras.set(name, e);
+    }
+    this.notify();
+  }
+
+  /** The workbook as plain data for the browser's storage. */
+  toSaved(): SavedWorkbook {
+    const sheets = this.sheetNames().map((name): SavedSheet => {
+      const id = this.sheetId(name);
+      const cells = this.engine.getSheetSerialized(id).map((row, r) =>
+        row.map((content, c) => (this.engine.isCellPartOfArray({ sheet: id, row: r, col: c }) && !this.engine.doesCellHaveFormula({ sheet: id, row: r, col: c }) ? null : content)),
+      );
+      const e = this.extras.get(name);
+      return { name, cells, meta: e ? [...e.meta.entries()] : [], widths: e ? Array.from(e.widths, (w) => w ?? null) : [], charts: e ? e.charts : [] };
+    });
+    return { format: SAVED_FORMAT, title: this.titleText, sheets, settings: { ...this.settings } };
+  }
+
+  /**
+   * A workbook from saved data.
+   *
+   * @param saved - what toSaved gave
+   * @param createEngine - builds the engine from sheet name → rows (createFormulaEngine)
+   */
+  static fromSaved(saved: SavedWorkbook, createEngine: (sheets: Record<string, RawCellContent[][]>) => HyperFormula): PreviewWorkbook {
+    const sheets: Record<string, RawCellContent[][]> = {};
+    for (const s of saved.sheets) sheets[s.name] = s.cells;
+    const book = new PreviewWorkbook(createEngine(sheets));
+    for (const s of saved.sheets) {
+      book.extras.set(s.name, { meta: new Map(s.meta.map(([k, m]) => [k, m])), widths: s.widths.map((w) => w ?? 10), charts: [...s.charts] });
+    }
+    book.titleText = saved.title || DEFAULT_TITLE;
+    book.settings = { ...saved.settings };
+    return book;
   }
 
   private sheetId(name: string): number {
@@ -186,5 +283,6 @@ export class PreviewWorkbook {
 
   saveSettings(settings: PaneSettings): void {
     this.settings = { ...settings };
+    this.notify();
   }
 }

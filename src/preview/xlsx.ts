@@ -31,6 +31,17 @@ export function loadExcelJs(): Promise<ExcelJSModule> {
   return loaded;
 }
 
+/** A file name from the workbook's title: characters file systems refuse dropped, at most 80 characters, .xlsx added. */
+export function xlsxFileName(title: string): string {
+  const base = title
+    .replace(/[\\/:*?"<>|\u0000-\u001f]/g, ' ')
+    .replace(/\s+/g, ' ')
+    .replace(/^[ .]+|[ .]+$/g, '')
+    .slice(0, 80)
+    .trim();
+  return `${base || 'workbook'}.xlsx`;
+}
+
 const BOLD_STYLES = new Set(['title', 'subtitle', 'header', 'caution']);
 
 /** Builds the .xlsx bytes of the whole preview workbook. */
