@@ -102,6 +102,17 @@ function start(): void {
     autosave.follow(next);
   };
 
+  const buttons: Record<string, () => void> = {
+    'edit-undo': () => grid.undo(),
+    'edit-redo': () => grid.redo(),
+    'edit-fill-down': () => grid.fill('down'),
+    'edit-fill-right': () => grid.fill('right'),
+    'edit-insert-rows': () => grid.shiftRows(true),
+    'edit-delete-rows': () => grid.shiftRows(false),
+    'edit-rename-sheet': () => grid.renameSheet(),
+  };
+  for (const [id, action] of Object.entries(buttons)) document.getElementById(id)!.addEventListener('click', action);
+
   document.getElementById('new-workbook')!.addEventListener('click', () => {
     if (!window.confirm('Start a new, empty workbook? The workbook in this page (and kept in this browser) will be replaced; download it first to keep a copy.')) return;
     const refused = clearSaved();

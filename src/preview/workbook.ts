@@ -145,6 +145,95 @@ export class PreviewWorkbook {
     this.notify();
   }
 
+  private range(sheet: string, r: RangeRef) {
+    const id = this.sheetId(sheet);
+    return { start: { sheet: id, row: r.row, col: r.col }, end: { sheet: id, row: r.row + r.rowCount - 1, col: r.col + r.colCount - 1 } };
+  }
+
+  /** True when a cell only shows part of another cell's array result. */
+  private isSpilled(sheet: string, row: number, col: number): boolean {
+    const address = { sheet: this.sheetId(sheet), row, col };
+    return this.engine.isCellPartOfArray(address) && !this.engine.doesCellHaveFormula(address);
+  }
+
+  /**
+   * Fills `target` from `source` (repeated over it), relative references shifting as in a
+   * spreadsheet's fill or paste (the engine's own fill data); formats go with the cells.
+   * One step to undo. Cells that only show part of an array result are copied as empty:
+   * the formula they come from fills them again.
+   *
+   * @param sheet - the target sheet
+   * @param source - the cells copied (on `sourceSheet`, default the same sheet)
+   */
+  fill(sheet: string, source: RangeRef, target: RangeRef, sourceSheet = sheet): void {
+    const data = this.engine.getFillRangeData(this.range(sourceSheet, source), this.range(sheet, target), true);
+    const contents = data.map((line, i) =>
+      line.map((content, j) => (this.isSpilled(sourceSheet, source.row + (i % source.rowCount), source.col + (j % source.colCount)) ? null : content)),
+    );
+    this.engine.setCellContents({ sheet: this.sheetId(sheet), row: target.row, col: target.col }, contents);
+    for (let i = 0; i < target.rowCount; i++) {
+      for (let j = 0; j < target.colCount; j++) {
+        const meta = this.meta(sourceSheet, source.row + (i % source.rowCount), source.col + (j % source.colCount));
+        const at = key(target.row + i, target.col + j);
+        if (meta) this.extra(sheet).meta.set(at, meta);
+        else this.extras.get(sheet)?.meta.delete(at);
+      }
+    }
+  }
+
+  /** Empties a range (one step to undo); formats stay, as in a spreadsheet's Delete. */
+  clear(sheet: string, range: RangeRef): void {
+    const empty = Array.from({ length: range.rowCount }, () => new Array<null>(range.colCount).fill(null));
+    this.engine.setCellContents({ sheet: this.sheetId(sheet), row: range.row, col: range.col }, empty);
+  }
+
+  /** Moves cells (cut and paste): formulas that read them follow them. */
+  move(sheet: string, source: RangeRef, row: number, col: number): void {
+    this.engine.moveCells(this.range(sheet, source), { sheet: this.sheetId(sheet), row, col });
+    const e = this.extras.get(sheet);
+    if (!e) return;
+    const moved: [string, CellMeta][] = [];
+    for (let i = 0; i < source.rowCount; i++) {
+      for (let j = 0; j < source.colCount; j++) {
+        const from = key(source.row + i, source.col + j);
+        const m = e.meta.get(from);
+        e.meta.delete(from);
+        if (m) moved.push([key(row + i, col + j), m]);
+      }
+    }
+    for (const [k, m] of moved) e.meta.set(k, m);
+  }
+
+  /** Inserts (count > 0) or deletes (count < 0) whole rows at `row`; formulas follow, formats shift with their rows. */
+  shiftRows(sheet: string, row: number, count: number): void {
+    const id = this.sheetId(sheet);
+    if (count > 0) this.engine.addRows(id, [row, count]);
+    else if (count < 0) this.engine.removeRows(id, [row, -count]);
+    const e = this.extras.get(sheet);
+    if (!e || count === 0) return;
+    const shifted = new Map<string, CellMeta>();
+    for (const [k, m] of e.meta) {
+      const [r, c] = k.split(',').map(Number);
+      if (r < row) shifted.set(k, m);
+      else if (count > 0) shifted.set(key(r + count, c), m);
+      else if (r >= row - count) shifted.set(key(r + count, c), m);
+    }
+    e.meta = shifted;
+  }
+
+  /** Undoes the last change of cells, rows or sheets; false when there is none. */
+  undo(): boolean {
+    if (!this.engine.isThereSomethingToUndo()) return false;
+    this.engine.undo();
+    return true;
+  }
+
+  redo(): boolean {
+    if (!this.engine.isThereSomethingToRedo()) return false;
+    this.engine.redo();
+    return true;
+  }
+
   /** The workbook as plain data for the browser's storage. */
   toSaved(): SavedWorkbook {
     const sheets = this.sheetNames().map((name): SavedSheet => {
