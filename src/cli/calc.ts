@@ -16,7 +16,8 @@ import { readFileSync, writeFileSync } from 'fs';
 import { extname } from 'path';
 import ExcelJS from 'exceljs';
 import { DetailedCellError, HyperFormula } from 'hyperformula';
-import { createFormulaEngine, toEngineFormula } from '../functions/formulaEngine';
+import { createFormulaEngine } from '../functions/formulaEngine';
+import { engineFormula } from '../functions/formulaText';
 import { literal } from '../workbook/port';
 
 const USAGE = 'Usage: proton-ledger calc <input.xlsx|input.csv> -o <output.xlsx|output.csv> [--sheet NAME]';
@@ -64,7 +65,7 @@ function cellInput(cell: ExcelJS.Cell): unknown {
   if (typeof v === 'object') {
     if ('formula' in v || 'sharedFormula' in v) {
       const formula = cell.formula;
-      return formula ? `=${toEngineFormula(formula.replace(/^=/, ''))}` : null;
+      return formula ? `=${engineFormula(formula.replace(/^=/, ''))}` : null;
     }
     if ('richText' in v) return engineText(v.richText.map((r) => r.text).join(''));
     if ('error' in v) return v.error;
@@ -144,7 +145,7 @@ export function parseCsv(text: string): string[][] {
 /** A CSV field for the engine: "=…" is a formula, "'…" literal text, a plain number a number, anything else text. */
 function csvInput(field: string): unknown {
   if (field === '') return null;
-  if (field.startsWith('=')) return `=${toEngineFormula(field.slice(1))}`;
+  if (field.startsWith('=')) return `=${engineFormula(field.slice(1))}`;
   if (field.startsWith("'")) return engineText(field.slice(1));
   if (/^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(field.trim())) return Number(field);
   return engineText(field);

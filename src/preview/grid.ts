@@ -9,6 +9,8 @@
  * goes in with textContent only.
  */
 import type { RawCellContent } from 'hyperformula';
+import { FORMULA_MESSAGES } from '../functions/messages';
+import { engineFormula, formulaBeyondLimits, formulaProblem } from '../functions/formulaText';
 import { parseDelimited, toTabSeparated } from '../workbook/delimited';
 import { cellAddress, columnLetters, RangeRef, Selection } from '../workbook/port';
 import { drawChart } from './chart';
@@ -150,7 +152,14 @@ export class Grid {
 
   private showStatus(): void {
     const v = this.book.value(this.sheet, this.row, this.col);
-    this.status.textContent = v !== null && typeof v === 'object' ? `${v.error} ${v.message}` : '';
+    if (v === null || typeof v !== 'object') {
+      this.status.textContent = '';
+      return;
+    }
+    // A formula the engine could not read, or a name it does not know: said in our words, with where.
+    const formula = this.book.formula(this.sheet, this.row, this.col);
+    const problem = formula !== undefined && (v.error === '#ERROR!' || v.error === '#NAME?') ? formulaProblem(formula, this.book.functionNames()) : undefined;
+    this.status.textContent = problem ? `${v.error} ${problem.message}` : v.error === '#ERROR!' && /^Parsing error/.test(v.message) ? `${v.error} ${FORMULA_MESSAGES.unreadable()}` : `${v.error} ${v.message}`;
   }
 
   private cellElement(row: number, col: number): HTMLElement | null {
@@ -158,12 +167,20 @@ export class Grid {
   }
 
   /** Writes what the user typed: a number, TRUE/FALSE, a formula or text. */
-  commit(text: string): void {
+  commit(text: string): boolean {
     try {
+      // A formula that cannot be read is refused, as a spreadsheet does, with what and where; a name the engine does not know is written (it shows #NAME? and a did-you-mean).
+      const problem = text.trim().startsWith('=') ? formulaProblem(text.trim(), this.book.functionNames()) : undefined;
+      if (problem && problem.code !== 'unknownFunction') {
+        this.status.textContent = `Not written: ${problem.message}`;
+        return false;
+      }
       this.book.setContents(this.sheet, this.row, this.col, [[typedContent(text)]]);
       this.render();
+      return true;
     } catch (error) {
       this.status.textContent = `Not written: ${(error as Error).message}`;
+      return false;
     }
   }
 
@@ -289,7 +306,7 @@ export class Grid {
   private onInputKey(e: KeyboardEvent): void {
     if (e.key === 'Enter') {
       e.preventDefault();
-      this.commit(this.input.value);
+      if (!this.commit(this.input.value)) return;
       this.select(this.row + 1, this.col);
       this.scroller.focus();
     } else if (e.key === 'Escape') {
@@ -298,7 +315,7 @@ export class Grid {
       this.scroller.focus();
     } else if (e.key === 'Tab' && !e.shiftKey && this.input.value !== this.book.rawText(this.sheet, this.row, this.col)) {
       e.preventDefault();
-      this.commit(this.input.value);
+      if (!this.commit(this.input.value)) return;
       this.select(this.row, this.col + 1);
       this.scroller.focus();
     }
@@ -485,10 +502,18 @@ export class Grid {
   }
 }
 
-/** What the user typed, as the engine takes it: empty, a number, or text and formulas as typed. */
+/**
+ * What the user typed or pasted, as the engine takes it: empty, a number, a formula in the
+ * engine's forms (engineFormula), or text. A formula past the limits is refused (thrown).
+ */
 export function typedContent(text: string): RawCellContent {
   const trimmed = text.trim();
   if (trimmed === '') return null;
-  if (!trimmed.startsWith('=') && /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(trimmed)) return Number(trimmed);
+  if (trimmed.startsWith('=')) {
+    const beyond = formulaBeyondLimits(trimmed);
+    if (beyond) throw new Error(beyond.message);
+    return engineFormula(trimmed);
+  }
+  if (/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(trimmed)) return Number(trimmed);
   return text;
 }

@@ -72,6 +72,7 @@ export class PreviewWorkbook {
 
   /** The workbook's title: the name of the downloaded file. */
   private titleText = DEFAULT_TITLE;
+  private knownFunctions: ReadonlySet<string> | undefined;
 
   constructor(readonly engine: HyperFormula) {
     for (const event of ['valuesUpdated', 'sheetAdded', 'sheetRemoved', 'sheetRenamed'] as const) engine.on(event, () => this.notify());
@@ -112,6 +113,12 @@ export class PreviewWorkbook {
       this.pendingNotify = false;
       this.notify();
     }
+  }
+
+  /** Every function name the engine knows (upper case): the built-in ones and the PROTON catalog. */
+  functionNames(): ReadonlySet<string> {
+    this.knownFunctions ??= new Set(this.engine.getRegisteredFunctionNames().map((n) => n.toUpperCase()));
+    return this.knownFunctions;
   }
 
   sheetNames(): string[] {

@@ -118,6 +118,24 @@ describeBrowser('editing the preview workbook (Chromium)', () => {
     expect(await cell('C1').textContent()).toBe('');
   });
 
+  test('formula messages in plain words; Excel\'s exponent and doubled quotes accepted', async () => {
+    await cell('G1').click();
+    await page.fill('#formula-input', '=SUM(1,2');
+    await page.press('#formula-input', 'Enter');
+    expect(await page.textContent('#grid-status')).toMatch(/^Not written: A bracket is opened but not closed \(the last one opened at character 5\): add "\)"\.$/);
+    expect(await cell('G1').textContent()).toBe('');
+    await page.fill('#formula-input', '=PROTON.PKAA("tris", 1, 25)');
+    await page.press('#formula-input', 'Enter');
+    expect(await cell('G1').textContent()).toBe('#NAME?');
+    await cell('G1').click();
+    expect(await page.textContent('#grid-status')).toMatch(/There is no function PROTON\.PKAA .*did you mean PROTON\.PKA/);
+    await page.screenshot({ path: join(ARTIFACTS, 'preview-formula-message.png') });
+    await type('G2', '=6.022E+23/1E+23');
+    expect(await cell('G2').textContent()).toBe('6.022');
+    await type('G3', '=LEN("a""b")');
+    expect(await cell('G3').textContent()).toBe('3');
+  });
+
   test('insert and delete rows: formulas follow their cells; Delete empties the selection', async () => {
     await cell('A1').click();
     await page.click('#edit-insert-rows');
