@@ -17,16 +17,13 @@ import { extname } from 'path';
 import ExcelJS from 'exceljs';
 import { DetailedCellError, HyperFormula } from 'hyperformula';
 import { createFormulaEngine } from '../functions/formulaEngine';
-import { engineFormula } from '../functions/formulaText';
+import { csvRows, worksheetRows } from '../workbook/fileCells';
 import { literal } from '../workbook/port';
 
 const USAGE = 'Usage: proton-ledger calc <input.xlsx|input.csv> -o <output.xlsx|output.csv> [--sheet NAME]';
 
 /** Error values a .xlsx cell can hold; others from the engine are written as #VALUE! with a note. */
 const XLSX_ERRORS = new Set(['#N/A', '#REF!', '#NAME?', '#DIV/0!', '#NULL!', '#VALUE!', '#NUM!']);
-/** Day 0 of Excel's 1900 date system (serial 1 = 1900-01-01, with Excel's 1900 leap-year quirk folded in). */
-const EXCEL_EPOCH_MS = Date.UTC(1899, 11, 30);
-const MS_PER_DAY = 86400000;
 
 /** A formula error found while calculating. */
 export interface CalcError {
@@ -51,105 +48,8 @@ function columnLetters(col: number): string {
   return s;
 }
 
-/** Text for the engine: an apostrophe keeps it text even if it looks like a formula or number. */
-function engineText(text: string): string {
-  return `'${text}`;
-}
-
-function cellInput(cell: ExcelJS.Cell): unknown {
-  const v = cell.value;
-  if (v === null || v === undefined) return null;
-  if (typeof v === 'number' || typeof v === 'boolean') return v;
-  if (typeof v === 'string') return engineText(v);
-  if (v instanceof Date) return (v.getTime() - EXCEL_EPOCH_MS) / MS_PER_DAY;
-  if (typeof v === 'object') {
-    if ('formula' in v || 'sharedFormula' in v) {
-      const formula = cell.formula;
-      return formula ? `=${engineFormula(formula.replace(/^=/, ''))}` : null;
-    }
-    if ('richText' in v) return engineText(v.richText.map((r) => r.text).join(''));
-    if ('error' in v) return v.error;
-    if ('text' in v) return engineText(String(v.text));
-  }
-  return null;
-}
-
-/** Cells of an array formula's range other than its first: Excel stores cached values there; the engine spills into them. */
-function arrayCovered(sheet: ExcelJS.Worksheet): Set<string> {
-  const covered = new Set<string>();
-  sheet.eachRow({ includeEmpty: false }, (row) => {
-    row.eachCell({ includeEmpty: false }, (cell) => {
-      const v = cell.value as { shareType?: string; ref?: string } | null;
-      if (v && typeof v === 'object' && v.shareType === 'array' && v.ref) {
-        const [a, b] = v.ref.split(':');
-        if (!b) return;
-        const start = sheet.getCell(a);
-        const end = sheet.getCell(b);
-        for (let r = Number(start.row); r <= Number(end.row); r++) {
-          for (let c = Number(start.col); c <= Number(end.col); c++) if (r !== Number(start.row) || c !== Number(start.col)) covered.add(`${r},${c}`);
-        }
-      }
-    });
-  });
-  return covered;
-}
-
-function gridOf(sheet: ExcelJS.Worksheet): Grid {
-  const grid: Grid = [];
-  const covered = arrayCovered(sheet);
-  sheet.eachRow({ includeEmpty: false }, (row, rowNumber) => {
-    row.eachCell({ includeEmpty: false }, (cell, colNumber) => {
-      if (covered.has(`${rowNumber},${colNumber}`)) return;
-      const value = cellInput(cell);
-      if (value === null) return;
-      (grid[rowNumber - 1] ??= [])[colNumber - 1] = value;
-    });
-  });
-  for (let r = 0; r < grid.length; r++) grid[r] ??= [];
-  return grid;
-}
-
 /** Splits CSV text (RFC 4180: quotes, doubled quotes, CRLF) into rows of strings. */
-export function parseCsv(text: string): string[][] {
-  const rows: string[][] = [];
-  let row: string[] = [];
-  let field = '';
-  let quoted = false;
-  for (let i = 0; i < text.length; i++) {
-    const ch = text[i];
-    if (quoted) {
-      if (ch === '"' && text[i + 1] === '"') {
-        field += '"';
-        i++;
-      } else if (ch === '"') quoted = false;
-      else field += ch;
-    } else if (ch === '"') quoted = true;
-    else if (ch === ',') {
-      row.push(field);
-      field = '';
-    } else if (ch === '\n' || ch === '\r') {
-      if (ch === '\r' && text[i + 1] === '\n') i++;
-      row.push(field);
-      rows.push(row);
-      row = [];
-      field = '';
-    } else field += ch;
-  }
-  if (field !== '' || row.length > 0) {
-    row.push(field);
-    rows.push(row);
-  }
-  return rows;
-}
-
-/** A CSV field for the engine: "=…" is a formula, "'…" literal text, a plain number a number, anything else text. */
-function csvInput(field: string): unknown {
-  if (field === '') return null;
-  if (field.startsWith('=')) return `=${engineFormula(field.slice(1))}`;
-  if (field.startsWith("'")) return engineText(field.slice(1));
-  if (/^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(field.trim())) return Number(field);
-  return engineText(field);
-}
+export { parseCsv } from '../workbook/delimited';
 
 /** A value as one CSV field; text that a spreadsheet would read as a formula gets an apostrophe. */
 function csvField(value: unknown): string {
@@ -215,8 +115,8 @@ export async function calcFile(input: string, output: string, sheetName?: string
     workbook.addWorksheet('Sheet1');
   }
   const sheets: Record<string, Grid> = {};
-  if (inExt === '.xlsx') workbook.eachSheet((ws) => (sheets[ws.name] = gridOf(ws)));
-  else sheets.Sheet1 = parseCsv(readFileSync(input, 'utf8').replace(/^\uFEFF/, '')).map((row) => row.map(csvInput));
+  if (inExt === '.xlsx') workbook.eachSheet((ws) => (sheets[ws.name] = worksheetRows(ws)));
+  else sheets.Sheet1 = csvRows(readFileSync(input, 'utf8'));
   const hf = createFormulaEngine(sheets, { maxRows: 1048576, maxColumns: 16384 });
   try {
     const errors: CalcError[] = [];

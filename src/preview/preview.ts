@@ -12,6 +12,7 @@ import { VERSION } from '../taskpane/version';
 import { PreviewAdapter } from '../workbook/previewAdapter';
 import { DEMO_CELLS, DEMO_COLUMN_WIDTHS, DEMO_SHEET } from './demo';
 import { Grid } from './grid';
+import { openWorkbookFile, OpenRefused } from './openFile';
 import { Autosave, clearSaved, readSaved, SaveState } from './storage';
 import { PreviewWorkbook } from './workbook';
 import { workbookToXlsx, xlsxFileName } from './xlsx';
@@ -118,6 +119,27 @@ function start(): void {
     const refused = clearSaved();
     replaceBook(emptyWorkbook());
     status.textContent = refused ? `New workbook started, but the old one could not be removed from the browser: ${refused}.` : 'New workbook started.';
+  });
+
+  const openInput = document.getElementById('open-file-input') as HTMLInputElement;
+  document.getElementById('open-file')!.addEventListener('click', () => openInput.click());
+  openInput.addEventListener('change', () => {
+    const file = openInput.files?.[0];
+    openInput.value = '';
+    if (!file) return;
+    if (!window.confirm(`Open "${file.name}"? It replaces the workbook in this page (and kept in this browser); download that first to keep a copy.`)) return;
+    status.textContent = `Opening "${file.name}"…`;
+    document.body.dataset.opened = 'pending';
+    openWorkbookFile(file, previewEngine)
+      .then((next) => {
+        replaceBook(next);
+        status.textContent = `Opened "${file.name}": ${next.sheetNames().length} sheet${next.sheetNames().length === 1 ? '' : 's'}.`;
+        document.body.dataset.opened = 'done';
+      })
+      .catch((error: unknown) => {
+        status.textContent = error instanceof OpenRefused ? error.message : `"${file.name}" was not opened: ${(error as Error).message}`;
+        document.body.dataset.opened = 'refused';
+      });
   });
 
   const download = document.getElementById('download-xlsx') as HTMLButtonElement;
