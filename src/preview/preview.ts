@@ -148,7 +148,7 @@ function start(): void {
     status.textContent = 'Preparing the .xlsx file…';
     workbookToXlsx(book, VERSION)
       .then((bytes) => {
-        const blob = new Blob([bytes], { type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet' });
+        const blob = new Blob([bytes as Uint8Array<ArrayBuffer>], { type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet' });
         const url = URL.createObjectURL(blob);
         const a = document.createElement('a');
         a.href = url;

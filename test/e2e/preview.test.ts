@@ -7,11 +7,12 @@
  * where a missing browser is a failure.
  */
 import { ChildProcess, spawn } from 'child_process';
-import { existsSync, mkdirSync, mkdtempSync, rmSync, statSync } from 'fs';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, statSync } from 'fs';
 import { tmpdir } from 'os';
 import { join } from 'path';
 import type { BrowserContext, Page } from 'playwright-core';
 import ExcelJS from 'exceljs';
+import JSZip from 'jszip';
 import { ensureBuild } from '../support/build';
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
@@ -168,5 +169,20 @@ describeBrowser('preview workbook in Chromium', () => {
     expect(g21.ref).toBe('G21:Q21');
     expect(Number(recipe.getCell('H21').value)).toBeCloseTo(Number(await cell('H21').textContent()), 2);
     expect(recipe.getCell('A21').value).toBe(7.2);
+    // The file is named from the workbook's title and names Proton Ledger as its application.
+    expect(download.suggestedFilename()).toBe('Proton Ledger workbook.xlsx');
+    const zip = await JSZip.loadAsync(readFileSync(file));
+    const app = await zip.file('docProps/app.xml')!.async('string');
+    expect(app).toContain('<Application>Proton Ledger</Application>');
+    expect(app).not.toMatch(/Microsoft/);
+    // The table's header row (sheet row 20) is frozen and printed on every page; pages fit the paper's width.
+    expect(recipe.views[0]).toMatchObject({ state: 'frozen', ySplit: 20 });
+    expect(recipe.pageSetup).toMatchObject({ fitToPage: true, fitToWidth: 1, fitToHeight: 0, printTitlesRow: '20:20' });
+    expect(recipe.getCell('A20').alignment).toMatchObject({ wrapText: true });
+    // Charts cannot be written: a note row under the sheet says so.
+    const notes: string[] = [];
+    recipe.eachRow((row) => row.eachCell((c) => typeof c.value === 'string' && c.value.startsWith('Charts in the preview') && notes.push(c.value)));
+    expect(notes).toHaveLength(1);
+    expect(notes[0]).toMatch(/not in this file: the \.xlsx writer cannot write charts/);
   });
 });
