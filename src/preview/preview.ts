@@ -12,6 +12,7 @@ import { VERSION } from '../taskpane/version';
 import { PreviewAdapter } from '../workbook/previewAdapter';
 import { DEMO_CELLS, DEMO_COLUMN_WIDTHS, DEMO_SHEET } from './demo';
 import { Grid } from './grid';
+import { buildPrintView } from './printView';
 import { openWorkbookFile, OpenRefused } from './openFile';
 import { Autosave, clearSaved, readSaved, SaveState } from './storage';
 import { PreviewWorkbook } from './workbook';
@@ -140,6 +141,17 @@ function start(): void {
         status.textContent = error instanceof OpenRefused ? error.message : `"${file.name}" was not opened: ${(error as Error).message}`;
         document.body.dataset.opened = 'refused';
       });
+  });
+
+  const printView = document.getElementById('print-view') as HTMLElement;
+  document.getElementById('print-protocol')!.addEventListener('click', () => {
+    if (!buildPrintView(book, grid.activeSheet(), printView)) {
+      status.textContent = 'Show a recipe-table sheet made by the pane (it holds a bench protocol) to print its protocol.';
+      return;
+    }
+    status.textContent = '';
+    document.body.dataset.printView = 'ready';
+    window.print();
   });
 
   const download = document.getElementById('download-xlsx') as HTMLButtonElement;

@@ -7,7 +7,7 @@
  * where a missing browser is a failure.
  */
 import { ChildProcess, spawn } from 'child_process';
-import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, statSync } from 'fs';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, statSync, writeFileSync } from 'fs';
 import { tmpdir } from 'os';
 import { join } from 'path';
 import type { BrowserContext, Page } from 'playwright-core';
@@ -147,6 +147,29 @@ describeBrowser('preview workbook in Chromium', () => {
     await page.locator('figure.chart').first().scrollIntoViewIfNeeded();
     await page.locator('#grid-scroll').screenshot({ path: join(ARTIFACTS, 'preview-charts.png') });
     expect(pageErrors).toEqual([]);
+  });
+
+  test('the bench protocol of the recipe sheet prints on one A4 page (print stylesheet)', async () => {
+    await page.evaluate(() => {
+      window.print = () => {
+        document.body.dataset.printed = 'true';
+      };
+    });
+    await page.click('#print-protocol');
+    await page.waitForSelector('body[data-printed="true"]');
+    await expect(page.textContent('#print-view h2')).resolves.toMatch(/^Bench protocol, table row \d+: pH /);
+    expect(await page.locator('#print-view .print-steps li').count()).toBeGreaterThanOrEqual(4);
+    await expect(page.locator('#print-view .print-amounts dt').allTextContents()).resolves.toContain('Form to weigh (g)');
+    expect(await page.isVisible('#print-view')).toBe(false);
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.isVisible('#print-view')).toBe(true);
+    expect(await page.isVisible('#grid-scroll')).toBe(false);
+    await page.screenshot({ path: join(ARTIFACTS, 'preview-print-protocol.png'), fullPage: true });
+    const pdf = await page.pdf({ format: 'A4', preferCSSPageSize: true });
+    writeFileSync(join(ARTIFACTS, 'preview-print-protocol.pdf'), pdf);
+    const pages = pdf.toString('latin1').match(/\/Type\s*\/Page(?!s)/g) ?? [];
+    expect(pages).toHaveLength(1);
+    await page.emulateMedia({ media: 'screen' });
   });
 
   test('the workbook downloads as .xlsx with formulas and their values', async () => {
