@@ -181,8 +181,6 @@ function start(): void {
   }
   document.body.dataset.restoreMs = String(Math.round(restoreMs));
   document.body.dataset.ready = 'true';
-  // A test or a user may ask what the page holds; nothing else is exposed.
-  (window as unknown as { protonPreview?: unknown }).protonPreview = { saveNow: () => autosave.saveNow() };
 }
 
 if (document.readyState === 'loading') document.addEventListener('DOMContentLoaded', start);

@@ -38,8 +38,8 @@ export function loadExcelJs(): Promise<ExcelJSModule> {
 
 /** A file name from the workbook's title: characters file systems refuse dropped, at most 80 characters, .xlsx added. */
 export function xlsxFileName(title: string): string {
-  const base = title
-    .replace(/[\\/:*?"<>|\u0000-\u001f]/g, ' ')
+  const base = Array.from(title, (ch) => (ch.charCodeAt(0) < 32 || '\\/:*?"<>|'.includes(ch) ? ' ' : ch))
+    .join('')
     .replace(/\s+/g, ' ')
     .replace(/^[ .]+|[ .]+$/g, '')
     .slice(0, 80)
