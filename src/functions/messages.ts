@@ -44,3 +44,21 @@ function describe(value: unknown): string {
   if (Array.isArray(value)) return 'a range';
   return typeof value;
 }
+
+/** Messages about a formula's text: what a host says when a formula cannot be read, in plain words. */
+export const FORMULA_MESSAGES = {
+  unclosedText: (at: number) => `The text that opens with the quote at character ${at} is never closed: add a closing ".`,
+  unclosedBracket: (at: number, open: number) =>
+    `${open === 1 ? 'A bracket is' : `${open} brackets are`} opened but not closed (the last one opened at character ${at}): add ")".`,
+  strayBracket: (at: number) => `The ")" at character ${at} closes a bracket that was never opened.`,
+  nothingAfter: (operator: string, at: number) => `The "${operator}" at character ${at} has nothing after it: give a value, a cell or a function there.`,
+  nothingBefore: (operator: string, at: number) => `The "${operator}" at character ${at} has nothing before it: give a value, a cell or a function there.`,
+  unknownFunction: (name: string, at: number, suggestions: readonly string[]) =>
+    `There is no function ${name} (character ${at})${suggestions.length > 0 ? `; did you mean ${suggestions.join(' or ')}?` : '; see the function reference for the names.'}`,
+  emptyFormula: () => 'The formula is empty: write something after "=".',
+  unreadable: () => 'This formula cannot be read: check its brackets, quotes, the operators between values and the commas between arguments.',
+  tooLong: (length: number, limit: number) => `The formula has ${length.toLocaleString('en-US')} characters; a formula may have up to ${limit.toLocaleString('en-US')}.`,
+  tooDeep: (depth: number, limit: number) => `The formula nests brackets ${depth} levels deep; a formula may nest up to ${limit} levels.`,
+  tooManyOperators: (operators: number, limit: number) =>
+    `The formula has ${operators.toLocaleString('en-US')} operators; up to ${limit} can be computed in one formula (split it over several cells).`,
+} as const;

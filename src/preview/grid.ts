@@ -1,11 +1,18 @@
 /**
  * The preview page's worksheet grid: sheet tabs, a formula bar and a table of cells that
- * shows the engine's values. Users select a cell, type a value or a formula (=PROTON.…) in
- * the formula bar or straight into the grid, and press Enter. Charts sit over the sheet at
- * their anchors, as in Excel. Text goes in with textContent only.
+ * shows the engine's values. Users select a cell or a range (mouse drag, Shift+arrows),
+ * type a value or a formula (=PROTON.…) in the formula bar or straight into the grid, and
+ * press Enter; copy, cut and paste go through the clipboard as tab-separated text (to and
+ * from other programs; within the page, relative references shift as in a spreadsheet);
+ * Ctrl+D and Ctrl+R fill down and right; Delete empties; Ctrl+Z and Ctrl+Y undo and redo
+ * (the engine's own undo). Charts sit over the sheet at their anchors, as in Excel. Text
+ * goes in with textContent only.
  */
 import type { RawCellContent } from 'hyperformula';
-import { cellAddress, columnLetters, Selection } from '../workbook/port';
+import { FORMULA_MESSAGES } from '../functions/messages';
+import { engineFormula, formulaBeyondLimits, formulaProblem } from '../functions/formulaText';
+import { parseDelimited, toTabSeparated } from '../workbook/delimited';
+import { cellAddress, columnLetters, RangeRef, Selection } from '../workbook/port';
 import { drawChart } from './chart';
 import { formatValue } from './format';
 import type { PreviewWorkbook } from './workbook';
@@ -22,6 +29,12 @@ export class Grid {
   private sheet: string;
   private row = 0;
   private col = 0;
+  /** The other corner of the selected range (the active cell is one corner). */
+  private anchorRow = 0;
+  private anchorCol = 0;
+  private dragging = false;
+  /** What this page last put on the clipboard: its text, and the cells it came from (to paste formulas with shifted references). */
+  private clip: { text: string; sheet: string; range: RangeRef; cut: boolean } | null = null;
   private readonly nameBox: HTMLElement;
   private readonly input: HTMLInputElement;
   private readonly tabs: HTMLElement;
@@ -29,9 +42,10 @@ export class Grid {
   private readonly status: HTMLElement;
   private table: HTMLTableElement | null = null;
   private renderQueued = false;
+  private unsubscribe: () => void = () => undefined;
 
   constructor(
-    private readonly book: PreviewWorkbook,
+    private book: PreviewWorkbook,
     root: HTMLElement,
   ) {
     this.sheet = book.sheetNames()[0];
@@ -42,13 +56,34 @@ export class Grid {
     this.status = root.querySelector('#grid-status') as HTMLElement;
     this.input.addEventListener('keydown', (e) => this.onInputKey(e));
     this.scroller.addEventListener('keydown', (e) => this.onGridKey(e));
-    this.scroller.addEventListener('click', (e) => {
+    this.scroller.addEventListener('mousedown', (e) => {
       const td = (e.target as HTMLElement).closest('td[data-cell]') as HTMLElement | null;
-      if (td) this.select(Number(td.dataset.row), Number(td.dataset.col));
+      if (!td || e.button !== 0) return;
+      const [r, c] = [Number(td.dataset.row), Number(td.dataset.col)];
+      if (e.shiftKey) this.extend(r, c);
+      else this.select(r, c);
+      this.dragging = true;
     });
+    this.scroller.addEventListener('mouseover', (e) => {
+      if (!this.dragging) return;
+      const td = (e.target as HTMLElement).closest('td[data-cell]') as HTMLElement | null;
+      if (td) this.extend(Number(td.dataset.row), Number(td.dataset.col));
+    });
+    window.addEventListener('mouseup', () => (this.dragging = false));
     this.scroller.addEventListener('dblclick', () => this.input.focus());
-    book.onChange(() => this.queueRender());
+    document.addEventListener('copy', (e) => this.onCopy(e, false));
+    document.addEventListener('cut', (e) => this.onCopy(e, true));
+    document.addEventListener('paste', (e) => this.onPaste(e));
+    this.unsubscribe = book.onChange(() => this.queueRender());
     this.render();
+  }
+
+  /** Shows another workbook (a new one, or one opened from a file). */
+  setBook(book: PreviewWorkbook): void {
+    this.unsubscribe();
+    this.book = book;
+    this.unsubscribe = book.onChange(() => this.queueRender());
+    this.showSheet(book.sheetNames()[0]);
   }
 
   /** The sheet shown. */
@@ -57,36 +92,74 @@ export class Grid {
   }
 
   selection(): Selection {
-    return { sheet: this.sheet, range: { row: this.row, col: this.col, rowCount: 1, colCount: 1 } };
+    return { sheet: this.sheet, range: this.selectedRange() };
+  }
+
+  /** The selected range (a single cell when nothing is extended). */
+  selectedRange(): RangeRef {
+    const row = Math.min(this.row, this.anchorRow);
+    const col = Math.min(this.col, this.anchorCol);
+    return { row, col, rowCount: Math.abs(this.row - this.anchorRow) + 1, colCount: Math.abs(this.col - this.anchorCol) + 1 };
+  }
+
+  /** Says what happened (or why not) under the grid. */
+  tell(text: string): void {
+    this.status.textContent = text;
   }
 
   showSheet(name: string): void {
     this.sheet = name;
     this.row = 0;
     this.col = 0;
+    this.anchorRow = 0;
+    this.anchorCol = 0;
     this.render();
     this.scroller.scrollTop = 0;
     this.scroller.scrollLeft = 0;
   }
 
   select(row: number, col: number): void {
+    this.anchorRow = Math.max(0, row);
+    this.anchorCol = Math.max(0, col);
+    this.extend(row, col);
+  }
+
+  /** Moves the active cell, keeping the anchor: the range between them is selected. */
+  extend(row: number, col: number): void {
     this.row = Math.max(0, row);
     this.col = Math.max(0, col);
-    this.table?.querySelectorAll('td.selected').forEach((td) => td.classList.remove('selected'));
     const td = this.cellElement(this.row, this.col);
     if (!td && this.table) this.render();
+    this.markSelection();
     const current = this.cellElement(this.row, this.col);
-    current?.classList.add('selected');
     current?.scrollIntoView({ block: 'nearest', inline: 'nearest' });
     if (current) this.scroller.setAttribute('aria-activedescendant', current.id);
-    this.nameBox.textContent = cellAddress(this.row, this.col);
     this.input.value = this.book.rawText(this.sheet, this.row, this.col);
     this.showStatus();
   }
 
+  private markSelection(): void {
+    this.table?.querySelectorAll('td.selected, td.in-range').forEach((td) => td.classList.remove('selected', 'in-range'));
+    const range = this.selectedRange();
+    if (range.rowCount * range.colCount > 1) {
+      for (let r = range.row; r < range.row + range.rowCount; r++) {
+        for (let c = range.col; c < range.col + range.colCount; c++) this.cellElement(r, c)?.classList.add('in-range');
+      }
+    }
+    this.cellElement(this.row, this.col)?.classList.add('selected');
+    this.nameBox.textContent = range.rowCount * range.colCount > 1 ? `${cellAddress(range.row, range.col)}:${cellAddress(range.row + range.rowCount - 1, range.col + range.colCount - 1)}` : cellAddress(this.row, this.col);
+  }
+
   private showStatus(): void {
     const v = this.book.value(this.sheet, this.row, this.col);
-    this.status.textContent = v !== null && typeof v === 'object' ? `${v.error} ${v.message}` : '';
+    if (v === null || typeof v !== 'object') {
+      this.status.textContent = '';
+      return;
+    }
+    // A formula the engine could not read, or a name it does not know: said in our words, with where.
+    const formula = this.book.formula(this.sheet, this.row, this.col);
+    const problem = formula !== undefined && (v.error === '#ERROR!' || v.error === '#NAME?') ? formulaProblem(formula, this.book.functionNames()) : undefined;
+    this.status.textContent = problem ? `${v.error} ${problem.message}` : v.error === '#ERROR!' && /^Parsing error/.test(v.message) ? `${v.error} ${FORMULA_MESSAGES.unreadable()}` : `${v.error} ${v.message}`;
   }
 
   private cellElement(row: number, col: number): HTMLElement | null {
@@ -94,23 +167,146 @@ export class Grid {
   }
 
   /** Writes what the user typed: a number, TRUE/FALSE, a formula or text. */
-  commit(text: string): void {
-    let content: RawCellContent = text;
-    const trimmed = text.trim();
-    if (trimmed === '') content = null;
-    else if (!trimmed.startsWith('=') && /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(trimmed)) content = Number(trimmed);
+  commit(text: string): boolean {
     try {
-      this.book.setContents(this.sheet, this.row, this.col, [[content]]);
+      // A formula that cannot be read is refused, as a spreadsheet does, with what and where; a name the engine does not know is written (it shows #NAME? and a did-you-mean).
+      const problem = text.trim().startsWith('=') ? formulaProblem(text.trim(), this.book.functionNames()) : undefined;
+      if (problem && problem.code !== 'unknownFunction') {
+        this.status.textContent = `Not written: ${problem.message}`;
+        return false;
+      }
+      this.book.setContents(this.sheet, this.row, this.col, [[typedContent(text)]]);
       this.render();
+      return true;
     } catch (error) {
       this.status.textContent = `Not written: ${(error as Error).message}`;
+      return false;
     }
+  }
+
+  /** Runs a change of the workbook, reporting a refusal under the grid instead of throwing. */
+  private change(what: string, work: () => void): void {
+    try {
+      work();
+      this.render();
+    } catch (error) {
+      this.status.textContent = `${what}: ${(error as Error).message}`;
+    }
+  }
+
+  /** Copies the first row of the selection into the rows below it (Ctrl+D), or the first column rightwards (Ctrl+R). */
+  fill(direction: 'down' | 'right'): void {
+    const r = this.selectedRange();
+    if (direction === 'down' ? r.rowCount < 2 : r.colCount < 2) return this.tell(`Select the cells to fill: the first ${direction === 'down' ? 'row' : 'column'} of the selection is copied into the rest.`);
+    const source = direction === 'down' ? { ...r, rowCount: 1 } : { ...r, colCount: 1 };
+    const target = direction === 'down' ? { ...r, row: r.row + 1, rowCount: r.rowCount - 1 } : { ...r, col: r.col + 1, colCount: r.colCount - 1 };
+    this.change('Not filled', () => this.book.fill(this.sheet, source, target));
+  }
+
+  /** Empties the selected cells. */
+  clearSelection(): void {
+    this.change('Not deleted', () => this.book.clear(this.sheet, this.selectedRange()));
+  }
+
+  /** Inserts as many rows as are selected, above the selection; or deletes the selected rows. */
+  shiftRows(insert: boolean): void {
+    const r = this.selectedRange();
+    this.change(insert ? 'Rows not inserted' : 'Rows not deleted', () => this.book.shiftRows(this.sheet, r.row, insert ? r.rowCount : -r.rowCount));
+  }
+
+  undo(): void {
+    this.change('Not undone', () => {
+      if (!this.book.undo()) this.tell('Nothing to undo.');
+    });
+    this.select(this.row, this.col);
+  }
+
+  redo(): void {
+    this.change('Not redone', () => {
+      if (!this.book.redo()) this.tell('Nothing to redo.');
+    });
+    this.select(this.row, this.col);
+  }
+
+  /** Adds an empty sheet after the others and shows it. */
+  newSheet(): void {
+    const taken = new Set(this.book.sheetNames().map((n) => n.toLowerCase()));
+    let n = taken.size + 1;
+    while (taken.has(`sheet${n}`)) n++;
+    this.change('No sheet added', () => {
+      this.book.addSheet(`Sheet${n}`);
+      this.showSheet(this.book.sheetNames()[this.book.sheetNames().length - 1]);
+    });
+  }
+
+  /** Renames the sheet shown, asking for the new name. */
+  renameSheet(): void {
+    const name = window.prompt(`New name for the sheet "${this.sheet}":`, this.sheet);
+    if (name === null) return;
+    this.change('Not renamed', () => {
+      this.book.renameSheet(this.sheet, name);
+      this.sheet = name.trim();
+    });
+  }
+
+  /** True when the grid (not the formula bar or the pane) has the keyboard. */
+  private gridHasFocus(): boolean {
+    return document.activeElement === this.scroller;
+  }
+
+  private onCopy(e: ClipboardEvent, cut: boolean): void {
+    if (!this.gridHasFocus() || !e.clipboardData) return;
+    e.preventDefault();
+    const range = this.selectedRange();
+    const rows: string[][] = [];
+    for (let r = range.row; r < range.row + range.rowCount; r++) {
+      const line: string[] = [];
+      for (let c = range.col; c < range.col + range.colCount; c++) line.push(formatValue(this.book.value(this.sheet, r, c), this.book.meta(this.sheet, r, c)?.numberFormat));
+      rows.push(line);
+    }
+    const text = toTabSeparated(rows);
+    e.clipboardData.setData('text/plain', text);
+    this.clip = { text, sheet: this.sheet, range, cut };
+    this.tell(`${cut ? 'Cut' : 'Copied'} ${range.rowCount * range.colCount} cell${range.rowCount * range.colCount === 1 ? '' : 's'}: paste with Ctrl+V.`);
+  }
+
+  private onPaste(e: ClipboardEvent): void {
+    if (!this.gridHasFocus() || !e.clipboardData) return;
+    e.preventDefault();
+    const text = e.clipboardData.getData('text/plain');
+    const at = this.selectedRange();
+    const clip = this.clip;
+    if (clip && clip.text === text && this.book.hasSheet(clip.sheet)) {
+      // Our own cells: formulas come with their references shifted (moved, after a cut).
+      if (clip.cut && clip.sheet === this.sheet) {
+        this.change('Not pasted', () => this.book.move(this.sheet, clip.range, at.row, at.col));
+        this.clip = null;
+      } else {
+        // A selection larger than the copy, by whole copies, is filled with repeats, as in a spreadsheet.
+        const rows = at.rowCount % clip.range.rowCount === 0 ? at.rowCount : clip.range.rowCount;
+        const cols = at.colCount % clip.range.colCount === 0 ? at.colCount : clip.range.colCount;
+        this.change('Not pasted', () => this.book.fill(this.sheet, clip.range, { row: at.row, col: at.col, rowCount: rows, colCount: cols }, clip.sheet));
+        if (clip.cut) {
+          this.change('Not cut', () => this.book.clear(clip.sheet, clip.range));
+          this.clip = null;
+        }
+      }
+      return;
+    }
+    const rows = parseDelimited(text, '\t');
+    if (rows.length === 0) return;
+    const width = Math.max(...rows.map((r) => r.length));
+    const contents = rows.map((r) => [...r, ...new Array<string>(width - r.length).fill('')].map(typedContent));
+    this.change('Not pasted', () => this.book.setContents(this.sheet, at.row, at.col, contents));
+    this.anchorRow = at.row;
+    this.anchorCol = at.col;
+    this.extend(at.row + rows.length - 1, at.col + width - 1);
   }
 
   private onInputKey(e: KeyboardEvent): void {
     if (e.key === 'Enter') {
       e.preventDefault();
-      this.commit(this.input.value);
+      if (!this.commit(this.input.value)) return;
       this.select(this.row + 1, this.col);
       this.scroller.focus();
     } else if (e.key === 'Escape') {
@@ -119,7 +315,7 @@ export class Grid {
       this.scroller.focus();
     } else if (e.key === 'Tab' && !e.shiftKey && this.input.value !== this.book.rawText(this.sheet, this.row, this.col)) {
       e.preventDefault();
-      this.commit(this.input.value);
+      if (!this.commit(this.input.value)) return;
       this.select(this.row, this.col + 1);
       this.scroller.focus();
     }
@@ -128,17 +324,24 @@ export class Grid {
   private onGridKey(e: KeyboardEvent): void {
     const moves: Record<string, [number, number]> = { ArrowUp: [-1, 0], ArrowDown: [1, 0], ArrowLeft: [0, -1], ArrowRight: [0, 1] };
     const move = moves[e.key];
+    const ctrl = e.ctrlKey || e.metaKey;
+    const letter = e.key.toLowerCase();
     if (move) {
       e.preventDefault();
-      this.select(this.row + move[0], this.col + move[1]);
+      if (e.shiftKey) this.extend(this.row + move[0], this.col + move[1]);
+      else this.select(this.row + move[0], this.col + move[1]);
+    } else if (ctrl && !e.altKey && (letter === 'z' || letter === 'y' || letter === 'd' || letter === 'r')) {
+      e.preventDefault();
+      if (letter === 'z' && !e.shiftKey) this.undo();
+      else if (letter === 'y' || letter === 'z') this.redo();
+      else this.fill(letter === 'd' ? 'down' : 'right');
     } else if (e.key === 'Enter' || e.key === 'F2') {
       e.preventDefault();
       this.input.focus();
       this.input.setSelectionRange(this.input.value.length, this.input.value.length);
     } else if (e.key === 'Delete' || e.key === 'Backspace') {
       e.preventDefault();
-      this.commit('');
-      this.select(this.row, this.col);
+      this.clearSelection();
     } else if (e.key.length === 1 && !e.ctrlKey && !e.metaKey && !e.altKey) {
       e.preventDefault();
       this.input.value = e.key;
@@ -195,6 +398,7 @@ export class Grid {
     thead.appendChild(hr);
     table.appendChild(thead);
     const tbody = document.createElement('tbody');
+    const sel = this.selectedRange();
     for (let r = 0; r < rows; r++) {
       const tr = document.createElement('tr');
       const th = document.createElement('th');
@@ -238,6 +442,7 @@ export class Grid {
           if (this.book.formula(this.sheet, r, c) !== undefined) td.classList.add('has-formula');
         }
         if (r === this.row && c === this.col) td.classList.add('selected');
+        else if (r >= sel.row && r < sel.row + sel.rowCount && c >= sel.col && c < sel.col + sel.colCount) td.classList.add('in-range');
         tr.appendChild(td);
       }
       tbody.appendChild(tr);
@@ -267,7 +472,7 @@ export class Grid {
     this.table = table;
     const current = this.cellElement(this.row, this.col);
     if (current) this.scroller.setAttribute('aria-activedescendant', current.id);
-    this.nameBox.textContent = cellAddress(this.row, this.col);
+    this.markSelection();
     if (document.activeElement !== this.input) this.input.value = this.book.rawText(this.sheet, this.row, this.col);
     this.showStatus();
   }
@@ -282,8 +487,33 @@ export class Grid {
       b.className = name === this.sheet ? 'tab active' : 'tab';
       b.textContent = name;
       b.addEventListener('click', () => this.showSheet(name));
+      b.addEventListener('dblclick', () => this.renameSheet());
       return b;
     });
-    this.tabs.replaceChildren(...buttons);
+    const add = document.createElement('button');
+    add.type = 'button';
+    add.className = 'tab-add';
+    add.id = 'add-sheet';
+    add.title = 'New sheet';
+    add.setAttribute('aria-label', 'New sheet');
+    add.textContent = '+';
+    add.addEventListener('click', () => this.newSheet());
+    this.tabs.replaceChildren(...buttons, add);
   }
+}
+
+/**
+ * What the user typed or pasted, as the engine takes it: empty, a number, a formula in the
+ * engine's forms (engineFormula), or text. A formula past the limits is refused (thrown).
+ */
+export function typedContent(text: string): RawCellContent {
+  const trimmed = text.trim();
+  if (trimmed === '') return null;
+  if (trimmed.startsWith('=')) {
+    const beyond = formulaBeyondLimits(trimmed);
+    if (beyond) throw new Error(beyond.message);
+    return engineFormula(trimmed);
+  }
+  if (/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(trimmed)) return Number(trimmed);
+  return text;
 }

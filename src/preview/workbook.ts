@@ -4,6 +4,7 @@
  * number formats, cell styles, column widths, charts and the pane's settings.
  */
 import type { HyperFormula, RawCellContent } from 'hyperformula';
+import { MAX_SHEET_NAME_LENGTH } from '../workbook/port';
 import type { CellStyle, CellValue, ChartSpec, PaneSettings, RangeRef } from '../workbook/port';
 
 /** What a computed cell shows: a value, or a spreadsheet error with its message. */
@@ -24,6 +25,44 @@ type Listener = () => void;
 
 const key = (row: number, col: number) => `${row},${col}`;
 
+/** The title a new workbook gets. */
+export const DEFAULT_TITLE = 'Proton Ledger workbook';
+
+/** One sheet as the browser's storage keeps it. */
+export interface SavedSheet {
+  readonly name: string;
+  /** Raw contents: numbers, text (an apostrophe in front keeps text that looks like a formula), `=formulas`; cells a result spills into are left empty. */
+  readonly cells: RawCellContent[][];
+  readonly meta: readonly (readonly [string, CellMeta])[];
+  readonly widths: readonly (number | null)[];
+  readonly charts: readonly ChartSpec[];
+}
+
+/** The whole workbook as the browser's storage keeps it (JSON). */
+export interface SavedWorkbook {
+  readonly format: typeof SAVED_FORMAT;
+  readonly title: string;
+  readonly sheets: readonly SavedSheet[];
+  readonly settings: Partial<PaneSettings>;
+}
+
+/** Marks a saved workbook and its layout's version. */
+export const SAVED_FORMAT = 'proton-ledger-preview-1';
+
+/** True when `value` has the layout of a saved workbook (checked before it is trusted). */
+export function isSavedWorkbook(value: unknown): value is SavedWorkbook {
+  const v = value as SavedWorkbook | null;
+  return (
+    typeof v === 'object' &&
+    v !== null &&
+    v.format === SAVED_FORMAT &&
+    typeof v.title === 'string' &&
+    Array.isArray(v.sheets) &&
+    v.sheets.length > 0 &&
+    v.sheets.every((s) => typeof s?.name === 'string' && Array.isArray(s.cells) && s.cells.every((row: unknown) => Array.isArray(row)) && Array.isArray(s.meta) && Array.isArray(s.widths) && Array.isArray(s.charts))
+  );
+}
+
 export class PreviewWorkbook {
   private readonly extras = new Map<string, SheetExtras>();
   private readonly listeners = new Set<Listener>();
@@ -31,9 +70,21 @@ export class PreviewWorkbook {
   private batchDepth = 0;
   private pendingNotify = false;
 
+  /** The workbook's title: the name of the downloaded file. */
+  private titleText = DEFAULT_TITLE;
+  private knownFunctions: ReadonlySet<string> | undefined;
+
   constructor(readonly engine: HyperFormula) {
-    engine.on('valuesUpdated', () => this.notify());
-    engine.on('sheetAdded', () => this.notify());
+    for (const event of ['valuesUpdated', 'sheetAdded', 'sheetRemoved', 'sheetRenamed'] as const) engine.on(event, () => this.notify());
+  }
+
+  title(): string {
+    return this.titleText;
+  }
+
+  setTitle(title: string): void {
+    this.titleText = title.trim() || DEFAULT_TITLE;
+    this.notify();
   }
 
   /** Calls `listener` after every change (values, sheets, charts). Returns an unsubscribe function. */
@@ -64,6 +115,12 @@ export class PreviewWorkbook {
     }
   }
 
+  /** Every function name the engine knows (upper case): the built-in ones and the PROTON catalog. */
+  functionNames(): ReadonlySet<string> {
+    this.knownFunctions ??= new Set(this.engine.getRegisteredFunctionNames().map((n) => n.toUpperCase()));
+    return this.knownFunctions;
+  }
+
   sheetNames(): string[] {
     return this.engine.getSheetNames();
   }
@@ -77,6 +134,142 @@ export class PreviewWorkbook {
     this.engine.addSheet(name);
     this.extras.set(name, { meta: new Map(), widths: [], charts: [] });
     this.notify();
+  }
+
+  /** Renames a sheet (its formats, widths and charts go with it); references to it in formulas follow. */
+  renameSheet(from: string, to: string): void {
+    const name = to.trim();
+    if (name === from) return;
+    if (name === '') throw new Error('A sheet needs a name.');
+    if (/[\\/?*[\]:]/.test(name) || name.length > MAX_SHEET_NAME_LENGTH) throw new Error(`A sheet name has at most ${MAX_SHEET_NAME_LENGTH} characters and none of \\ / ? * [ ] :`);
+    if (this.sheetNames().some((n) => n.toLowerCase() === name.toLowerCase() && n !== from)) throw new Error(`A sheet named "${name}" exists already.`);
+    this.engine.renameSheet(this.sheetId(from), name);
+    const e = this.extras.get(from);
+    if (e) {
+      this.extras.delete(from);
+      this.extras.set(name, e);
+    }
+    this.notify();
+  }
+
+  private range(sheet: string, r: RangeRef) {
+    const id = this.sheetId(sheet);
+    return { start: { sheet: id, row: r.row, col: r.col }, end: { sheet: id, row: r.row + r.rowCount - 1, col: r.col + r.colCount - 1 } };
+  }
+
+  /** True when a cell only shows part of another cell's array result. */
+  private isSpilled(sheet: string, row: number, col: number): boolean {
+    const address = { sheet: this.sheetId(sheet), row, col };
+    return this.engine.isCellPartOfArray(address) && !this.engine.doesCellHaveFormula(address);
+  }
+
+  /**
+   * Fills `target` from `source` (repeated over it), relative references shifting as in a
+   * spreadsheet's fill or paste (the engine's own fill data); formats go with the cells.
+   * One step to undo. Cells that only show part of an array result are copied as empty:
+   * the formula they come from fills them again.
+   *
+   * @param sheet - the target sheet
+   * @param source - the cells copied (on `sourceSheet`, default the same sheet)
+   */
+  fill(sheet: string, source: RangeRef, target: RangeRef, sourceSheet = sheet): void {
+    const data = this.engine.getFillRangeData(this.range(sourceSheet, source), this.range(sheet, target), true);
+    const contents = data.map((line, i) =>
+      line.map((content, j) => (this.isSpilled(sourceSheet, source.row + (i % source.rowCount), source.col + (j % source.colCount)) ? null : content)),
+    );
+    this.engine.setCellContents({ sheet: this.sheetId(sheet), row: target.row, col: target.col }, contents);
+    for (let i = 0; i < target.rowCount; i++) {
+      for (let j = 0; j < target.colCount; j++) {
+        const meta = this.meta(sourceSheet, source.row + (i % source.rowCount), source.col + (j % source.colCount));
+        const at = key(target.row + i, target.col + j);
+        if (meta) this.extra(sheet).meta.set(at, meta);
+        else this.extras.get(sheet)?.meta.delete(at);
+      }
+    }
+  }
+
+  /** Empties a range (one step to undo); formats stay, as in a spreadsheet's Delete. */
+  clear(sheet: string, range: RangeRef): void {
+    const empty = Array.from({ length: range.rowCount }, () => new Array<null>(range.colCount).fill(null));
+    this.engine.setCellContents({ sheet: this.sheetId(sheet), row: range.row, col: range.col }, empty);
+  }
+
+  /** Moves cells (cut and paste): formulas that read them follow them. */
+  move(sheet: string, source: RangeRef, row: number, col: number): void {
+    this.engine.moveCells(this.range(sheet, source), { sheet: this.sheetId(sheet), row, col });
+    const e = this.extras.get(sheet);
+    if (!e) return;
+    const moved: [string, CellMeta][] = [];
+    for (let i = 0; i < source.rowCount; i++) {
+      for (let j = 0; j < source.colCount; j++) {
+        const from = key(source.row + i, source.col + j);
+        const m = e.meta.get(from);
+        e.meta.delete(from);
+        if (m) moved.push([key(row + i, col + j), m]);
+      }
+    }
+    for (const [k, m] of moved) e.meta.set(k, m);
+  }
+
+  /** Inserts (count > 0) or deletes (count < 0) whole rows at `row`; formulas follow, formats shift with their rows. */
+  shiftRows(sheet: string, row: number, count: number): void {
+    const id = this.sheetId(sheet);
+    if (count > 0) this.engine.addRows(id, [row, count]);
+    else if (count < 0) this.engine.removeRows(id, [row, -count]);
+    const e = this.extras.get(sheet);
+    if (!e || count === 0) return;
+    const shifted = new Map<string, CellMeta>();
+    for (const [k, m] of e.meta) {
+      const [r, c] = k.split(',').map(Number);
+      if (r < row) shifted.set(k, m);
+      else if (count > 0) shifted.set(key(r + count, c), m);
+      else if (r >= row - count) shifted.set(key(r + count, c), m);
+    }
+    e.meta = shifted;
+  }
+
+  /** Undoes the last change of cells, rows or sheets; false when there is none. */
+  undo(): boolean {
+    if (!this.engine.isThereSomethingToUndo()) return false;
+    this.engine.undo();
+    return true;
+  }
+
+  redo(): boolean {
+    if (!this.engine.isThereSomethingToRedo()) return false;
+    this.engine.redo();
+    return true;
+  }
+
+  /** The workbook as plain data for the browser's storage. */
+  toSaved(): SavedWorkbook {
+    const sheets = this.sheetNames().map((name): SavedSheet => {
+      const id = this.sheetId(name);
+      const cells = this.engine.getSheetSerialized(id).map((row, r) =>
+        row.map((content, c) => (this.engine.isCellPartOfArray({ sheet: id, row: r, col: c }) && !this.engine.doesCellHaveFormula({ sheet: id, row: r, col: c }) ? null : content)),
+      );
+      const e = this.extras.get(name);
+      return { name, cells, meta: e ? [...e.meta.entries()] : [], widths: e ? Array.from(e.widths, (w) => w ?? null) : [], charts: e ? e.charts : [] };
+    });
+    return { format: SAVED_FORMAT, title: this.titleText, sheets, settings: { ...this.settings } };
+  }
+
+  /**
+   * A workbook from saved data.
+   *
+   * @param saved - what toSaved gave
+   * @param createEngine - builds the engine from sheet name → rows (createFormulaEngine)
+   */
+  static fromSaved(saved: SavedWorkbook, createEngine: (sheets: Record<string, RawCellContent[][]>) => HyperFormula): PreviewWorkbook {
+    const sheets: Record<string, RawCellContent[][]> = {};
+    for (const s of saved.sheets) sheets[s.name] = s.cells;
+    const book = new PreviewWorkbook(createEngine(sheets));
+    for (const s of saved.sheets) {
+      book.extras.set(s.name, { meta: new Map(s.meta.map(([k, m]) => [k, m])), widths: s.widths.map((w) => w ?? 10), charts: [...s.charts] });
+    }
+    book.titleText = saved.title || DEFAULT_TITLE;
+    book.settings = { ...saved.settings };
+    return book;
   }
 
   private sheetId(name: string): number {
@@ -186,5 +379,6 @@ export class PreviewWorkbook {
 
   saveSettings(settings: PaneSettings): void {
     this.settings = { ...settings };
+    this.notify();
   }
 }

@@ -10,10 +10,15 @@ export type SelectionSource = () => Selection;
 
 export class PreviewAdapter implements WorkbookPort {
   constructor(
-    private readonly book: PreviewWorkbook,
+    private book: PreviewWorkbook,
     private readonly selection: SelectionSource,
     private readonly activate: (sheet: string) => void,
   ) {}
+
+  /** Works on another workbook from now on (the page opened a file or started a new one). */
+  useBook(book: PreviewWorkbook): void {
+    this.book = book;
+  }
 
   async sheetNames(): Promise<string[]> {
     return this.book.sheetNames();

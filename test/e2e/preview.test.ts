@@ -7,11 +7,12 @@
  * where a missing browser is a failure.
  */
 import { ChildProcess, spawn } from 'child_process';
-import { existsSync, mkdirSync, mkdtempSync, rmSync, statSync } from 'fs';
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, rmSync, statSync, writeFileSync } from 'fs';
 import { tmpdir } from 'os';
 import { join } from 'path';
 import type { BrowserContext, Page } from 'playwright-core';
 import ExcelJS from 'exceljs';
+import JSZip from 'jszip';
 import { ensureBuild } from '../support/build';
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
@@ -148,6 +149,29 @@ describeBrowser('preview workbook in Chromium', () => {
     expect(pageErrors).toEqual([]);
   });
 
+  test('the bench protocol of the recipe sheet prints on one A4 page (print stylesheet)', async () => {
+    await page.evaluate(() => {
+      window.print = () => {
+        document.body.dataset.printed = 'true';
+      };
+    });
+    await page.click('#print-protocol');
+    await page.waitForSelector('body[data-printed="true"]');
+    await expect(page.textContent('#print-view h2')).resolves.toMatch(/^Bench protocol, table row \d+: pH /);
+    expect(await page.locator('#print-view .print-steps li').count()).toBeGreaterThanOrEqual(4);
+    await expect(page.locator('#print-view .print-amounts dt').allTextContents()).resolves.toContain('Form to weigh (g)');
+    expect(await page.isVisible('#print-view')).toBe(false);
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.isVisible('#print-view')).toBe(true);
+    expect(await page.isVisible('#grid-scroll')).toBe(false);
+    await page.screenshot({ path: join(ARTIFACTS, 'preview-print-protocol.png'), fullPage: true });
+    const pdf = await page.pdf({ format: 'A4', preferCSSPageSize: true });
+    writeFileSync(join(ARTIFACTS, 'preview-print-protocol.pdf'), pdf);
+    const pages = pdf.toString('latin1').match(/\/Type\s*\/Page(?!s)/g) ?? [];
+    expect(pages).toHaveLength(1);
+    await page.emulateMedia({ media: 'screen' });
+  });
+
   test('the workbook downloads as .xlsx with formulas and their values', async () => {
     const [download] = await Promise.all([page.waitForEvent('download'), page.click('#download-xlsx')]);
     const file = join(ARTIFACTS, 'preview-download.xlsx');
@@ -168,5 +192,20 @@ describeBrowser('preview workbook in Chromium', () => {
     expect(g21.ref).toBe('G21:Q21');
     expect(Number(recipe.getCell('H21').value)).toBeCloseTo(Number(await cell('H21').textContent()), 2);
     expect(recipe.getCell('A21').value).toBe(7.2);
+    // The file is named from the workbook's title and names Proton Ledger as its application.
+    expect(download.suggestedFilename()).toBe('Proton Ledger workbook.xlsx');
+    const zip = await JSZip.loadAsync(readFileSync(file));
+    const app = await zip.file('docProps/app.xml')!.async('string');
+    expect(app).toContain('<Application>Proton Ledger</Application>');
+    expect(app).not.toMatch(/Microsoft/);
+    // The table's header row (sheet row 20) is frozen and printed on every page; pages fit the paper's width.
+    expect(recipe.views[0]).toMatchObject({ state: 'frozen', ySplit: 20 });
+    expect(recipe.pageSetup).toMatchObject({ fitToPage: true, fitToWidth: 1, fitToHeight: 0, printTitlesRow: '20:20' });
+    expect(recipe.getCell('A20').alignment).toMatchObject({ wrapText: true });
+    // Charts cannot be written: a note row under the sheet says so.
+    const notes: string[] = [];
+    recipe.eachRow((row) => row.eachCell((c) => typeof c.value === 'string' && c.value.startsWith('Charts in the preview') && notes.push(c.value)));
+    expect(notes).toHaveLength(1);
+    expect(notes[0]).toMatch(/not in this file: the \.xlsx writer cannot write charts/);
   });
 });

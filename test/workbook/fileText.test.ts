@@ -1,0 +1,58 @@
+/**
+ * The shared pieces of reading and writing workbook files: delimited text as spreadsheets
+ * exchange it (RFC 4180 quoting, the clipboard's tab-separated form), the cells of a CSV
+ * file for the engine with their limits, and the application a written .xlsx names.
+ */
+import ExcelJS from 'exceljs';
+import JSZip from 'jszip';
+import { parseDelimited, toTabSeparated } from '../../src/workbook/delimited';
+import { CellBudget, csvRows, FileRefused } from '../../src/workbook/fileCells';
+import { APPLICATION_NAME, nameApplication } from '../../src/workbook/xlsxApplication';
+import { xlsxFileName } from '../../src/preview/xlsx';
+
+describe('delimited text (RFC 4180)', () => {
+  test('tab-separated text round-trips fields holding tabs, line breaks and quotes', () => {
+    const rows = [['HEPES', 'a\tb'], ['say "hi"', 'two\r\nlines'], ['', '7.4']];
+    const text = toTabSeparated(rows);
+    expect(text).toBe('HEPES\t"a\tb"\r\n"say ""hi"""\t"two\r\nlines"\r\n\t7.4\r\n');
+    expect(parseDelimited(text, '\t')).toEqual(rows);
+  });
+
+  test('a quote inside an unquoted field is kept as written, as spreadsheet programs read it', () => {
+    expect(parseDelimited('5" tube,2\n', ',')).toEqual([['5" tube', '2']]);
+  });
+});
+
+describe('CSV cells for the engine', () => {
+  test('formulas normalised, numbers as numbers, text kept as text', () => {
+    expect(csvRows('\uFEFFname,mM\r\ntris,50\r\n=1E+2,"=_xldudf_PROTON_PKA(""tris"",1,25)"\r\n')).toEqual([
+      ["'name", "'mM"],
+      ["'tris", 50],
+      ['=1e+2', '=PROTON.PKA("tris",1,25)'],
+    ]);
+  });
+
+  test('a formula past the nesting limit and a file past the cell budget are refused with the cell', () => {
+    expect(() => csvRows(`a\r\n=${'('.repeat(65)}1${')'.repeat(65)}\r\n`)).toThrow(new FileRefused('A2 of the CSV file: a formula nested 65 levels deep; a formula may nest up to 64 levels.'));
+    expect(() => csvRows('1,2,3\r\n4,5,6\r\n', new CellBudget(5))).toThrow(FileRefused);
+  });
+});
+
+describe('the written .xlsx names Proton Ledger', () => {
+  test('docProps/app.xml names Proton Ledger, not the library\'s default program, and the workbook still reads', async () => {
+    const wb = new ExcelJS.Workbook();
+    wb.addWorksheet('Prep').getCell('A1').value = 42;
+    const named = await nameApplication((await wb.xlsx.writeBuffer()) as ArrayBuffer);
+    const app = await (await JSZip.loadAsync(named)).file('docProps/app.xml')!.async('string');
+    expect(app).toContain(`<Application>${APPLICATION_NAME}</Application>`);
+    expect(app).not.toMatch(/Microsoft|AppVersion/);
+    const back = new ExcelJS.Workbook();
+    await back.xlsx.load(Buffer.from(named) as unknown as ArrayBuffer);
+    expect(back.getWorksheet('Prep')!.getCell('A1').value).toBe(42);
+  });
+
+  test('the file name comes from the title, without characters file systems refuse', () => {
+    expect(xlsxFileName('Cold room: HEPES / NaCl?')).toBe('Cold room HEPES NaCl.xlsx');
+    expect(xlsxFileName('  ..  ')).toBe('workbook.xlsx');
+  });
+});
