@@ -83,6 +83,8 @@ export const MESSAGES = {
     `pH ${pH.toFixed(2)} is more than ${halfWidth} unit from every pKa′ in the solution (${listed}): it buffers weakly there, and small additions move the pH far.`,
   metalComplexes: (metals: string, binders: string, calciumNote: string) =>
     `${metals} with ${binders}: metal–buffer complexes are not modelled, so the pH and the free ion amounts are estimates (binding releases protons, so the real pH is usually lower).${calciumNote}`,
+  chelatorBindsMetals: (chelators: string, metals: string, chelatorMm: number, metalMm: number, freeMm: number) =>
+    `${chelators} (${chelatorMm.toPrecision(3)} mM) binds ${metals} (${metalMm.toPrecision(3)} mM) about 1:1 and almost completely above pH 6; these complexes are not modelled: the free ${metals} is roughly ${freeMm.toPrecision(3)} mM (what exceeds the chelator), and binding releases protons, so the real pH lies below the predicted one.`,
   conductivityEstimated: (names: string, lambdaPerCharge: number) =>
     `No published limiting conductivity for ${names}: ${lambdaPerCharge} S cm²/mol per charge was assumed, so the conductivity is an estimate.`,
   conductivityTemperature: (temperatureC: number, lowC: number, highC: number) =>
