@@ -5,5 +5,6 @@ export { additiveMolarFromPercent, mergeSystems, percentBasis, resolveShelf, res
 export type { Amount, Stock, StockInput } from './stocks';
 export { LABEL_DIFFERENCE_PH, VOLUME_SIGNIFICANT_FIGURES, mixByVolumes, osmolalityOf, planMix, printedVolume, volumeWords } from './mix';
 export type { LabelShift, MixComponent, MixCorrection, MixInput, MixPlan, MixTarget, Mixture, StockVolume } from './mix';
+export { formatMix } from './format';
 export { NEUTRAL_ADDITIVES, findAdditive } from '../library/additives';
 export type { NeutralAdditive } from '../library/additives';
