@@ -103,6 +103,8 @@ export const MESSAGES = {
     `${what}: only ${microlitres.toPrecision(3)} µL, below the ${smallestUl} µL your pipettes measure accurately; dilute it ${fold}× first and take ${takeUl} µL.`,
   mixDiffersFromLabel: (stock: string, labelPh: number, labelC: number, mixedPh: number, useC: number, dilutedPh: number, othersPh: number) =>
     `The mixture reads pH ${mixedPh.toFixed(2)} at ${useC} °C, not the ${labelPh.toFixed(2)} on the label of "${stock}" (set at ${labelC} °C): diluting that stock alone gives ${dilutedPh.toFixed(2)} (its ionic strength falls), the other stocks bring it to ${othersPh.toFixed(2)} at ${labelC} °C, and the temperature of use does the rest. Check it with a meter at ${useC} °C.`,
+  stockBeyondActivityModel: (stock: string, ionicStrengthM: number, limitM: number, model: string) =>
+    `The stock "${stock}" has an ionic strength of about ${ionicStrengthM.toPrecision(2)} M, beyond the ${limitM} M where the ${model} model holds: the titrant it holds (from its label pH) is an estimate, and so is what it brings to the mix.`,
   additiveEffectNotModelled: (additives: string) =>
     `${additives}: counted for volume and osmolarity only; their effect on pKa values, activities and conductivity (co-solvents move all three) is not modelled: measure the pH of the finished mixture.`,
   correctionNeeded: (predictedPh: number, targetPh: number, tolerance: number, millilitres: string, titrant: string) =>

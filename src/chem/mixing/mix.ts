@@ -13,7 +13,7 @@
  * Pure: no I/O. Errors are ChemError with a code and field; a target that cannot fit in the
  * final volume is an infeasible-target error, never a warning.
  */
-import { parseActivityModel } from '../activity';
+import { ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, parseActivityModel } from '../activity';
 import { solutionWarnings } from '../checks';
 import { Composition, systemAt, withConditions } from '../composition';
 import { conductivityOf } from '../conductivity';
@@ -374,6 +374,13 @@ export function planMix(input: MixInput, library: SubstanceLibrary = defaultLibr
     if (ul < smallestUl) {
       const fold = dilutionFold(ul, smallestUl);
       warnings.push(warning('belowPipetteVolume', MESSAGES.belowPipetteVolume(c.name, ul, smallestUl, fold, Number((ul * fold).toPrecision(3))), c.name));
+    }
+  }
+
+  // A titrated stock's titrant content comes from the activity model at the stock's own ionic strength.
+  for (const stock of shelf) {
+    if (stock.titrant && model !== 'ideal' && stock.titrant.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M && volumes.some((v) => v.stock === stock.name)) {
+      warnings.push(warning('stockBeyondActivityModel', MESSAGES.stockBeyondActivityModel(stock.name, stock.titrant.ionicStrengthM, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES[model]), stock.name));
     }
   }
 

@@ -55,8 +55,8 @@ export interface Stock {
   readonly additivesM: Readonly<Record<string, number>>;
   /** The label of a titrated stock: the pH it was brought to and at what temperature. */
   readonly label?: { readonly ph: number; readonly temperatureC: number };
-  /** Titrant in the stock (titrated stocks), mol/L, and its name. */
-  readonly titrant?: { readonly name: string; readonly concentrationM: number };
+  /** Titrant in the stock (titrated stocks), mol/L, its name, and the stock's ionic strength at its label (mol/L). */
+  readonly titrant?: { readonly name: string; readonly concentrationM: number; readonly ionicStrengthM: number };
 }
 
 /**
@@ -136,7 +136,7 @@ export function resolveStock(input: StockInput, at: string, library: SubstanceLi
     throw err;
   }
   const composition = withConditions(withTitrant(before, titrant, amount.concentrationM), undefined);
-  return { name, kind: 'titrated', form: lib, component, componentM, composition, additivesM: {}, label: { ph, temperatureC: labelT }, titrant: { name: titrant.name, concentrationM: amount.concentrationM } };
+  return { name, kind: 'titrated', form: lib, component, componentM, composition, additivesM: {}, label: { ph, temperatureC: labelT }, titrant: { name: titrant.name, concentrationM: amount.concentrationM, ionicStrengthM: amount.ionicStrengthM } };
 }
 
 /**

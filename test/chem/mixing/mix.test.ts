@@ -159,6 +159,13 @@ describe('stocks', () => {
     expect(edta.composition.strongIons?.['Na+']).toBeLessThan(1.55);
   });
 
+  it('says when a titrated stock sits beyond the activity model (0.5 M disodium EDTA at pH 8 is near 3 M ionic strength)', () => {
+    const plan = planMix({ stocks: SHELF, volumeMl: 100, targets: [{ component: 'EDTA', concentrationMm: 1 }, { component: 'NaCl', concentrationMm: 150 }] });
+    expect(plan.warnings.filter((w) => w.code === 'stockBeyondActivityModel').map((w) => w.field)).toEqual(['EDTA 0.5 M pH 8.0']);
+    const ideal = planMix({ stocks: SHELF, volumeMl: 100, activityModel: 'ideal', targets: [{ component: 'EDTA', concentrationMm: 1 }] });
+    expect(ideal.warnings.map((w) => w.code)).not.toContain('stockBeyondActivityModel');
+  });
+
   it('refuses two stocks of one name, naming the second', () => {
     expect(() => resolveShelf([SHELF[2], { ...SHELF[3], name: 'nacl 5 m' }])).toThrow(expect.objectContaining({ code: 'duplicateStock', field: 'stocks[1].name' }));
   });
