@@ -84,6 +84,8 @@ export const MESSAGES = {
     `${field}: "${component}" is already a target; give each component once.`,
   stocksDoNotFit: (neededMl: number, finalMl: number, detail: string) =>
     `The stocks do not fit: they take ${neededMl.toPrecision(4)} mL, more than the ${finalMl.toPrecision(4)} mL final volume (${detail}); use more concentrated stocks or lower targets.`,
+  badTargetItem: (field: string, item: string) =>
+    `${field}: "${item}" needs a component and its amount, e.g. "NaCl 150 mM" or "glycerol 10 %".`,
   percentForAdditivesOnly: (field: string, component: string) =>
     `${field}: "${component}" is not a neutral additive; give its final concentration in mM.`,
   // Warnings (a result with a caveat); see warnings.ts.
