@@ -119,8 +119,8 @@ export interface MixPlan {
     readonly conductivityMsPerCm: number;
     /** Ideal osmolarity (every dissolved particle, additives included), mOsm/L. */
     readonly idealOsmolarityMosm: number;
-    /** Osmolality from the activity model, mOsm/kg, when the model gives one (see `osmolalityOf`). */
-    readonly osmolalityMosmPerKg?: number;
+    /** Osmolality, mOsm/kg, when the activity model gives one (see `osmolalityOf`). */
+    readonly osmolalityMosmKg?: number;
   };
   readonly targetPh?: number;
   readonly correction?: MixCorrection;
@@ -132,13 +132,19 @@ export interface MixPlan {
 }
 
 /**
- * Osmolality from a speciation result, mOsm/kg, when its activity model reports one; the
- * ideal osmolarity stands in until then. Hook: the concentrated-solution model (osmotic
- * coefficient φ) will add osmolality to the speciation result; read it here.
+ * Osmolality of the mixture, mOsm/kg, when the speciation result carries one (the
+ * concentrated-solution activity model adds `osmolalityMosmKg`, φ·Σm, and `waterKgPerL`);
+ * undefined until then (the ideal osmolarity stands in). Neutral additives are not in the
+ * solver's result: they are added as ideal solutes (φ = 1) per kg of water.
+ *
+ * @param result - the solved mixture
+ * @param additivesM - neutral additives, mol/L in all
  */
-export function osmolalityOf(result: SpeciationResult): number | undefined {
-  const value = (result as unknown as { osmolalityMosmPerKg?: unknown }).osmolalityMosmPerKg;
-  return typeof value === 'number' && Number.isFinite(value) ? value : undefined;
+export function osmolalityOf(result: SpeciationResult, additivesM = 0): number | undefined {
+  const r = result as unknown as { osmolalityMosmKg?: unknown; waterKgPerL?: unknown };
+  if (typeof r.osmolalityMosmKg !== 'number' || !Number.isFinite(r.osmolalityMosmKg)) return undefined;
+  const waterKgPerL = typeof r.waterKgPerL === 'number' && r.waterKgPerL > 0 ? r.waterKgPerL : 1;
+  return r.osmolalityMosmKg + (additivesM / waterKgPerL) * 1000;
 }
 
 /** A volume as printed: VOLUME_SIGNIFICANT_FIGURES significant figures. */
@@ -390,7 +396,7 @@ export function planMix(input: MixInput, library: SubstanceLibrary = defaultLibr
 
   const finalM: Record<string, number> = { ...mixture.componentM, ...additivesM };
   const additiveSum = additiveNames.reduce((sum, a) => sum + additivesM[a], 0);
-  const osmolality = osmolalityOf(result);
+  const osmolality = osmolalityOf(result, additiveSum);
   const cautions = cautionLines(shelf.filter((s) => volumes.some((v) => v.stock === s.name)), neat.map((n) => n.additive), correction);
   return {
     volumeMl,
@@ -404,7 +410,7 @@ export function planMix(input: MixInput, library: SubstanceLibrary = defaultLibr
       ionicStrengthM: result.ionicStrengthM,
       conductivityMsPerCm: conductivity.conductivityMsPerCm,
       idealOsmolarityMosm: (idealOsmolarity(result) + additiveSum) * 1000,
-      ...(osmolality === undefined ? {} : { osmolalityMosmPerKg: osmolality }),
+      ...(osmolality === undefined ? {} : { osmolalityMosmKg: osmolality }),
     },
     ...(targetPh === undefined ? {} : { targetPh }),
     ...(correction ? { correction } : {}),

@@ -4,7 +4,7 @@
  * cannot fit, and neutral additives. Every shelf and mixture here is our own.
  */
 import { ChemError, speciate } from '../../../src/chem';
-import { MixInput, NEUTRAL_ADDITIVES, StockInput, mixByVolumes, planMix, printedVolume, resolveShelf } from '../../../src/chem/mixing';
+import { MixInput, NEUTRAL_ADDITIVES, StockInput, mixByVolumes, osmolalityOf, planMix, printedVolume, resolveShelf } from '../../../src/chem/mixing';
 import { molarMassOf } from '../../../src/chem/library/formula';
 import { expectClose } from '../fixtures';
 
@@ -146,6 +146,16 @@ describe('neutral additives', () => {
   it('refuses a percentage for a component that is not an additive, and a titrant on an additive stock', () => {
     expect(() => planMix({ stocks: SHELF, volumeMl: 10, targets: [{ component: 'NaCl', percent: 1 }] })).toThrow(expect.objectContaining({ code: 'percentForAdditivesOnly' }));
     expect(() => resolveShelf([{ name: 'glycerol 50 %', form: 'glycerol', concentration: '50 %', titrant: 'HCl', ph: 7 }])).toThrow(expect.objectContaining({ code: 'additiveNotTitrated', field: 'stocks[0].titrant' }));
+  });
+});
+
+describe('osmolality hook', () => {
+  it('reads the activity model’s osmolality when the result carries one, adding additives per kg of water, and is undefined otherwise', () => {
+    const result = speciate({ systems: [], strongIons: { 'Na+': 0.15, 'Cl-': 0.15 } });
+    expect(osmolalityOf(result)).toBeUndefined();
+    // A stand-in for a concentrated-solution result: 280 mOsm/kg from the ions, 0.99 kg water per litre, 0.1 M glycerol.
+    const withModel = { ...result, osmolalityMosmKg: 280, waterKgPerL: 0.99 };
+    expectClose('osmolality with additives', osmolalityOf(withModel, 0.1) ?? NaN, 280 + (0.1 / 0.99) * 1000, 1e-9);
   });
 });
 
