@@ -80,6 +80,8 @@ export const MESSAGES = {
     `${field}: a stock named "${name}" is already on the shelf (${existing}); give each stock its own name.`,
   noStockFor: (field: string, component: string, stocks: readonly string[]) =>
     `${field}: no stock on the shelf holds "${component}"; the stocks are ${stocks.map((s) => `"${s}"`).join(', ')}.`,
+  ambiguousStock: (field: string, component: string, stocks: readonly string[]) =>
+    `${field}: more than one stock holds "${component}" (${stocks.map((s) => `"${s}"`).join(', ')}); name the stock to use.`,
   targetTwice: (field: string, component: string) =>
     `${field}: "${component}" is already a target; give each component once.`,
   stocksDoNotFit: (neededMl: number, finalMl: number, detail: string) =>

@@ -200,27 +200,37 @@ export function mixByVolumes(shelf: readonly Stock[], volumes: readonly StockVol
   return { composition: { systems: mergeSystems(systems), strongIons, temperatureC, activityModel: model }, componentM, additivesM };
 }
 
-/** The stock a target names: by stock name, then by what the stock holds (the library resolves aliases). */
-function stockFor(target: string, shelf: readonly Stock[], library: SubstanceLibrary): Stock | undefined {
+/**
+ * The stock a target names: by stock name, then by what the stock holds (the library
+ * resolves aliases and form names). Two stocks holding the same component make the name
+ * ambiguous: the target must then name the stock.
+ */
+function stockFor(target: string, at: string, shelf: readonly Stock[], library: SubstanceLibrary): Stock | undefined {
   const k = target.trim().toLowerCase();
   const byName = shelf.find((s) => s.name.toLowerCase() === k);
   if (byName) return byName;
-  const direct = shelf.find((s) => s.component.toLowerCase() === k);
-  if (direct) return direct;
+  let component: string | undefined;
   const additive = findAdditive(target);
-  if (additive) return shelf.find((s) => s.additive?.name === additive.name);
-  let system: string | undefined;
-  try {
-    system = library.findSystem(target, 'target').name;
-  } catch {
+  if (shelf.some((s) => s.component.toLowerCase() === k)) component = shelf.find((s) => s.component.toLowerCase() === k)?.component;
+  else if (additive) component = additive.name;
+  else {
     try {
-      const form = library.findForm(target, 'target');
-      system = form.adds[0]?.system ?? form.substance;
+      component = library.findSystem(target, 'target').name;
     } catch {
-      return undefined;
+      try {
+        const form = library.findForm(target, 'target');
+        component = form.adds[0]?.system ?? form.substance;
+      } catch {
+        return undefined;
+      }
     }
   }
-  return shelf.find((s) => s.component === system);
+  const holding = shelf.filter((s) => s.component === component);
+  if (holding.length > 1) {
+    const names = holding.map((s) => s.name);
+    throw new ChemError('invalid-input', 'ambiguousStock', MESSAGES.ambiguousStock(at, target, names), at, names.join(', '));
+  }
+  return holding[0];
 }
 
 /** Smallest power of ten that brings a volume up to the pipetting limit. */
@@ -248,7 +258,7 @@ function resolveTargets(input: MixInput, shelf: readonly Stock[], library: Subst
     const e = (t ?? {}) as Partial<MixTarget>;
     const name = readTextField('form', e.component, `${at}.component`);
     if (name === undefined) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${at}.component`, 'a stock or component name'), `${at}.component`, 'a name');
-    const stock = stockFor(name, shelf, library);
+    const stock = stockFor(name, `${at}.component`, shelf, library);
     const additive = stock?.additive ?? (stock ? undefined : findAdditive(name));
     if (!stock && !additive) throw new ChemError('invalid-input', 'noStockFor', MESSAGES.noStockFor(`${at}.component`, name, shelf.map((s) => s.name)), `${at}.component`, shelf.map((s) => s.name).join(', '));
     const key = stock ? `stock:${stock.name}` : `additive:${additive?.name}`;

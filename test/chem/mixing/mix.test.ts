@@ -119,6 +119,12 @@ describe('pipetting and fitting', () => {
     }
   });
 
+  it('asks which stock when two hold the same component, and takes the stock by name', () => {
+    const shelf = [...SHELF, { name: 'Tris-HCl 1 M pH 7.0', form: 'tris base', concentration: '1 M', titrant: 'HCl', ph: 7.0 }];
+    expect(() => planMix({ stocks: shelf, volumeMl: 10, targets: [{ component: 'Tris', concentrationMm: 20 }] })).toThrow(expect.objectContaining({ code: 'ambiguousStock', field: 'targets[0].component' }));
+    expect(planMix({ stocks: shelf, volumeMl: 10, targets: [{ component: 'Tris-HCl 1 M pH 7.0', concentrationMm: 20 }] }).components[0].name).toBe('Tris-HCl 1 M pH 7.0');
+  });
+
   it('names the target field when no stock holds a component', () => {
     try {
       planMix({ stocks: SHELF, volumeMl: 10, targets: [{ component: 'NaCl', concentrationMm: 100 }, { component: 'MOPS', concentrationMm: 20 }] });
