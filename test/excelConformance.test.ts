@@ -77,6 +77,14 @@ const COMPOSITION = [
 /** A user-substance range with an unreadable pKa list (columns as docs/functions.md gives them). */
 const BAD_USER_RANGE = [['Lab acid', 0, '6.1; seven', '', '', 'Lab acid', 100]];
 
+/** Our lab's stock shelf, as a range (docs/stocks.md). */
+const SHELF = [
+  ['name', 'form', 'concentration', 'titrant', 'pH', 'pH at °C'],
+  ['Tris-HCl 1 M pH 8.0', 'tris base', '1 M', 'HCl', 8, 25],
+  ['NaCl 5 M', 'NaCl', 5, '', '', ''],
+  ['KCl 3 M', 'KCl', '3 M', '', '', ''],
+];
+
 /** Arguments Excel would pass, by function: good ones (our own lab's values) and bad ones. */
 const CALLS: Record<string, { good: unknown[]; bad: unknown[] }> = {
   'PH.OF': { good: [COMPOSITION], bad: [COMPOSITION, 'warm'] },
@@ -96,6 +104,8 @@ const CALLS: Record<string, { good: unknown[]; bad: unknown[] }> = {
   RECIPE: { good: ['HEPES', 7.4, 25, 500, 4, [['NaCl', 150]], [['form', 'HEPES free acid'], ['titrant', 'NaOH'], ['benchTemperatureC', 22]]], bad: ['HEPES', 7.4, -25, 500] },
   CONDUCTIVITY: { good: [COMPOSITION, 20], bad: [COMPOSITION, 80] },
   OSMOLALITY: { good: [COMPOSITION], bad: [COMPOSITION, 150] },
+  'MIX.VOLUMES': { good: [SHELF, [['tris', 20], ['NaCl', '150 mM']], 50, 7.9, 4], bad: [SHELF, [['NaCl', 3000], ['KCl', 2000]], 10] },
+  'MIX.PH': { good: [SHELF, [['Tris-HCl 1 M pH 8.0', 1], ['NaCl 5 M', 1.5]], 50, 4], bad: [SHELF, [['Tris-HCl 1 M pH 8.0', 40], ['NaCl 5 M', 20]], 50] },
 };
 
 /** The arguments as Excel passes them: one per declared parameter, null where the user gave none. */

@@ -50,9 +50,31 @@ export function metalComplexWarning(composition: Composition): ChemWarning | und
   return warning('metalComplexes', MESSAGES.metalComplexes(metals.join(' and '), binders.join(', '), calcium));
 }
 
+/** Systems that bind Mg²⁺ and Ca²⁺ about 1:1 and almost completely near neutral pH (library names). */
+export const CHELATORS = ['EDTA', 'EGTA'] as const;
+
+/**
+ * A warning when a chelator (EDTA, EGTA) shares the solution with Mg²⁺ or Ca²⁺: beyond the
+ * general metal-complex caveat, it binds them about 1:1 and almost completely above pH ~6,
+ * so the free metal is roughly what exceeds the chelator, and binding releases protons that
+ * the solver does not see. Undefined otherwise.
+ *
+ * @param composition - the solution as given (mol/L)
+ */
+export function chelatorWarning(composition: Composition): ChemWarning | undefined {
+  const metalM = DIVALENT_METALS.reduce((sum, m) => sum + (composition.strongIons?.[m] ?? 0), 0);
+  if (metalM <= 0) return undefined;
+  const present = composition.systems.filter((s) => s.totalM > 0 && (CHELATORS as readonly string[]).includes(s.name));
+  if (present.length === 0) return undefined;
+  const chelatorM = present.reduce((sum, s) => sum + s.totalM, 0);
+  const metals = DIVALENT_METALS.filter((m) => (composition.strongIons?.[m] ?? 0) > 0).join(' and ');
+  const freeMm = Math.max(0, metalM - chelatorM) * 1000;
+  return warning('chelatorBindsMetals', MESSAGES.chelatorBindsMetals(present.map((s) => s.name).join(' and '), metals, chelatorM * 1000, metalM * 1000, freeMm));
+}
+
 /**
  * Every warning about a solved solution: the solver's own, then weak buffering, then metal
- * complexes, then its temperature against each step's data (temperatureChecks.ts).
+ * complexes (and chelators), then its temperature against each step's data (temperatureChecks.ts).
  *
  * @param composition - the solution as given
  * @param result - its speciation
@@ -63,6 +85,8 @@ export function solutionWarnings(composition: Composition, result: SpeciationRes
   if (weak) warnings.push(weak);
   const metals = metalComplexWarning(composition);
   if (metals) warnings.push(metals);
+  const chelated = chelatorWarning(composition);
+  if (chelated) warnings.push(chelated);
   warnings.push(...temperatureWarnings(composition.systems, composition.temperatureC ?? 25, 'Temperature', result.pH));
   return warnings;
 }

@@ -72,6 +72,24 @@ export const MESSAGES = {
     `The input is not valid JSON: ${detail}.`,
   unknownCommand: (command: string, commands: readonly string[]) =>
     `"${command}" is not a command; the commands are ${commands.join(', ')} (proton-ledger --help lists them).`,
+  additiveNotTitrated: (field: string, additive: string) =>
+    `${field}: ${additive} is a neutral additive; it takes no titrant or pH (leave them blank).`,
+  ofTheStockNamed: (stock: string, message: string) =>
+    `The stock "${stock}": ${message}`,
+  duplicateStock: (field: string, name: string, existing: string) =>
+    `${field}: a stock named "${name}" is already on the shelf (${existing}); give each stock its own name.`,
+  noStockFor: (field: string, component: string, stocks: readonly string[]) =>
+    `${field}: no stock on the shelf holds "${component}"; the stocks are ${stocks.map((s) => `"${s}"`).join(', ')}.`,
+  ambiguousStock: (field: string, component: string, stocks: readonly string[]) =>
+    `${field}: more than one stock holds "${component}" (${stocks.map((s) => `"${s}"`).join(', ')}); name the stock to use.`,
+  targetTwice: (field: string, component: string) =>
+    `${field}: "${component}" is already a target; give each component once.`,
+  stocksDoNotFit: (neededMl: number, finalMl: number, detail: string) =>
+    `The stocks do not fit: they take ${neededMl.toPrecision(4)} mL, more than the ${finalMl.toPrecision(4)} mL final volume (${detail}); use more concentrated stocks or lower targets.`,
+  badTargetItem: (field: string, item: string) =>
+    `${field}: "${item}" needs a component and its amount, e.g. "NaCl 150 mM" or "glycerol 10 %".`,
+  percentForAdditivesOnly: (field: string, component: string) =>
+    `${field}: "${component}" is not a neutral additive; give its final concentration in mM.`,
   // Warnings (a result with a caveat); see warnings.ts.
   constantsFromMemory: (systems: readonly string[]) =>
     `Constants for ${systems.join(', ')} were written from memory of their source and not yet checked against it; see the substance list for the source, and check them there before relying on the result.`,
@@ -83,6 +101,18 @@ export const MESSAGES = {
     `pH ${pH.toFixed(2)} is more than ${halfWidth} unit from every pKa′ in the solution (${listed}): it buffers weakly there, and small additions move the pH far.`,
   metalComplexes: (metals: string, binders: string, calciumNote: string) =>
     `${metals} with ${binders}: metal–buffer complexes are not modelled, so the pH and the free ion amounts are estimates (binding releases protons, so the real pH is usually lower).${calciumNote}`,
+  chelatorBindsMetals: (chelators: string, metals: string, chelatorMm: number, metalMm: number, freeMm: number) =>
+    `${chelators} (${chelatorMm.toPrecision(3)} mM) binds ${metals} (${metalMm.toPrecision(3)} mM) about 1:1 and almost completely above pH 6; these complexes are not modelled: the free ${metals} is roughly ${freeMm.toPrecision(3)} mM (what exceeds the chelator), and binding releases protons, so the real pH lies below the predicted one.`,
+  belowPipetteVolume: (what: string, microlitres: number, smallestUl: number, fold: number, takeUl: number) =>
+    `${what}: only ${microlitres.toPrecision(3)} µL, below the ${smallestUl} µL your pipettes measure accurately; dilute it ${fold}× first and take ${takeUl} µL.`,
+  mixDiffersFromLabel: (stock: string, labelPh: number, labelC: number, mixedPh: number, useC: number, dilutedPh: number, othersPh: number) =>
+    `The mixture reads pH ${mixedPh.toFixed(2)} at ${useC} °C, not the ${labelPh.toFixed(2)} on the label of "${stock}" (set at ${labelC} °C): diluting that stock alone gives ${dilutedPh.toFixed(2)} (its ionic strength falls), the other stocks bring it to ${othersPh.toFixed(2)} at ${labelC} °C, and the temperature of use does the rest. Check it with a meter at ${useC} °C.`,
+  stockBeyondActivityModel: (stock: string, ionicStrengthM: number, limitM: number, model: string) =>
+    `The stock "${stock}" has an ionic strength of about ${ionicStrengthM.toPrecision(2)} M, beyond the ${limitM} M where the ${model} model holds: the titrant it holds (from its label pH) is an estimate, and so is what it brings to the mix.`,
+  additiveEffectNotModelled: (additives: string) =>
+    `${additives}: counted for volume and osmolarity only; their effect on pKa values, activities and conductivity (co-solvents move all three) is not modelled: measure the pH of the finished mixture.`,
+  correctionNeeded: (predictedPh: number, targetPh: number, tolerance: number, millilitres: string, titrant: string) =>
+    `The stocks alone give pH ${predictedPh.toFixed(2)}, more than ${tolerance} from the target ${targetPh.toFixed(2)}: add about ${millilitres} of ${titrant} (in the plan) and check with the meter.`,
   conductivityEstimated: (names: string, lambdaPerCharge: number) =>
     `No published limiting conductivity for ${names}: ${lambdaPerCharge} S cm²/mol per charge was assumed, so the conductivity is an estimate.`,
   conductivityTemperature: (temperatureC: number, lowC: number, highC: number) =>

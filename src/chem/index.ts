@@ -7,7 +7,7 @@ export { saltCoefficients } from './pitzer/model';
 export type { ActivityModel } from './activity';
 export { MAX_CONCENTRATION_M, MAX_STEPS, MAX_TEMPERATURE_C, MIN_TEMPERATURE_C, FITTED_RANGE_MAX_C, prepare, systemAt, withConditions } from './composition';
 export type { AcidBaseChemistry, AcidBaseStep, AcidBaseSystem, Composition } from './composition';
-export { BUFFERING_HALF_WIDTH, metalComplexWarning, solutionWarnings, weakBufferingWarning } from './checks';
+export { BUFFERING_HALF_WIDTH, CHELATORS, chelatorWarning, metalComplexWarning, solutionWarnings, weakBufferingWarning } from './checks';
 export { ChemError, MESSAGES } from './errors';
 export { uniqueWarnings, warning, warningTexts } from './warnings';
 export type { ChemWarning } from './warnings';

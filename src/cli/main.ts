@@ -17,6 +17,8 @@ import { FIELDS, allowedOf } from '../chem/input';
 import { defaultLibrary } from '../chem/library';
 import { formatRecipe, planRecipe } from '../chem/planner';
 import { libraryFor } from './compositionInput';
+import { MIX_HELP, mixCommand } from './mix';
+import { formatMix } from '../chem/mixing';
 import { DEMO_COMPOSITION } from './demo';
 import { toRecipeInput } from './recipeInput';
 import { solveComposition } from './solve';
@@ -37,6 +39,7 @@ Commands:
   solve --batch <file.csv|.jsonl> [-o <out>]         many compositions at once, one output row each
   recipe [--json '<recipe JSON>'] [--text]           plan a buffer: amounts, bench steps, meter reading, predictions
   recipe --batch <file.csv|.jsonl> [-o <out>]        a what-if table: one recipe row per input row (CSV, JSON lines or .xlsx out)
+  mix [--shelf <shelf.json>] [--json '<mix>'] [--text]  a working buffer from stock solutions: mL of each, the pH it lands on
   substances [--json]                                list the substance library (a table, or JSON)
   demo [--pretty]                                    solve the demo composition (our QC lab's HEPES saline)
   calc <book.xlsx|.csv> -o <filled.xlsx|.csv> [--force]  evaluate a workbook's formulas (PROTON functions included), write values
@@ -87,6 +90,7 @@ const HELP: Readonly<Record<string, () => string>> = {
   solve: () => SOLVE_HELP,
   recipe: recipeHelp,
   calc: () => CALC_HELP,
+  mix: () => MIX_HELP,
   substances: () => 'Usage: proton-ledger substances [--json]\n\nLists every substance of the library: name, pKa values at 25 °C, forms.',
   demo: () => 'Usage: proton-ledger demo [--pretty]\n\nSolves the demo composition: the QC bench’s 25 mM HEPES / 150 mM NaCl wash buffer at 4 °C.',
 };
@@ -183,6 +187,14 @@ export function run(args: string[], write: (text: string) => void): number {
         if (text === undefined) return 0;
         const plan = recipeCommand(parseJson(text));
         if (args.includes('--text')) write(formatRecipe(plan) + '\n');
+        else print(plan);
+        return 0;
+      }
+      case 'mix': {
+        const text = readText(args, write, 'mix');
+        if (text === undefined) return 0;
+        const plan = mixCommand(parseJson(text), optionValue(args, '--shelf'));
+        if (args.includes('--text')) write(formatMix(plan) + '\n');
         else print(plan);
         return 0;
       }

@@ -22,6 +22,8 @@ import { invalid } from './errors';
 import { memoised } from './memo';
 import { SHEET_MESSAGES } from './messages';
 import { libraryFor, userRowCount } from './userRange';
+import { MixInput, mixByVolumes, planMix, printedVolume, resolveShelf } from '../chem/mixing';
+import { VOLUMES_ARGUMENT, onShelf, shelfFrom, targetsFrom, volumesFrom } from './stockRange';
 
 /** Most rows of the SPECIES table, header included. Excel spills only the rows a solution has; the formula engine, which sizes arrays before computing, pads to this (formulaEngine.ts). 29 species covers H⁺, OH⁻, the strong ions and several polyprotic systems. */
 export const SPECIES_TABLE_ROWS = 30;
@@ -463,6 +465,106 @@ export function recipe(buffer: any, targetPh: any, concentrationMm: any, volumeM
   });
 }
 
+/** Columns of the MIX.VOLUMES table. */
+export const MIX_TABLE_HEADER = ['item', 'amount', 'unit', 'gives'] as const;
+/** Option names MIX.VOLUMES takes in its options range, and the mix field each sets. */
+const MIX_OPTIONS: Readonly<Record<string, string>> = {
+  phtolerance: 'phTolerance',
+  benchtemperaturec: 'benchTemperatureC',
+  smallestvolumeul: 'smallestVolumeUl',
+  titrant: 'titrant.form',
+  'titrant.form': 'titrant.form',
+  'titrant.concentrationm': 'titrant.concentrationM',
+  activitymodel: 'activityModel',
+};
+
+/** The options range of MIX.VOLUMES as mix fields (values passed on for the core's reader). */
+function mixOptions(options: unknown): Partial<MixInput> {
+  const out: Record<string, unknown> = {};
+  const titrant: Record<string, unknown> = {};
+  for (const row of toRange(options)) {
+    if (row.every(isBlank)) continue;
+    const written = toText('options', row[0]);
+    const name = MIX_OPTIONS[written.trim().toLowerCase().replace(/\s+/g, '')];
+    if (!name) {
+      const allowed = [...new Set(Object.values(MIX_OPTIONS))].join(', ');
+      throw new ChemError('invalid-input', 'unknownField', MESSAGES.unknownField(written, [], allowed), written, allowed);
+    }
+    const value = row.length > 1 && !isBlank(row[1]) ? row[1] : undefined;
+    if (name.startsWith('titrant.')) titrant[name.slice(8)] = value;
+    else out[name] = value;
+  }
+  return Object.keys(titrant).length > 0 ? { ...out, titrant } : out;
+}
+
+/**
+ * A working buffer mixed from your stock solutions: mL of each stock (g of a solid additive), the pH correction when a target pH is missed, water, and the predicted pH at use and at the bench. Spills (targets + 5) rows × 4 columns (item, amount, unit, gives).
+ * @customfunction MIX.VOLUMES MIX.VOLUMES
+ * @helpurl https://localhost:3000/help/functions.html#mix-volumes
+ * @param stocks Your stock shelf: name, form (or additive), concentration ("1 M", "50 %"), and for stocks made by titration the titrant, pH and its temperature.
+ * @param targets Two columns: component (a stock or what it holds) and final mM (or "10 %" for an additive).
+ * @param volumeMl Final volume, mL.
+ * @param [targetPh] pH wanted at the temperature of use (blank: no correction).
+ * @param [useTemperatureC] Temperature of use, °C (blank: 25).
+ * @param [options] Two columns: option name and value (phTolerance, benchTemperatureC, smallestVolumeUl, titrant, titrant.concentrationM, activityModel).
+ * @param [userSubstances] Range of your own substances.
+ * @returns The mix, one line per row.
+ */
+export function mixVolumes(stocks: any[][], targets: any[][], volumeMl: any, targetPh?: any, useTemperatureC?: any, options?: any[][], userSubstances?: any[][]): any[][] {
+  const args = [stocks, targets, volumeMl, targetPh, useTemperatureC, options, userSubstances];
+  return memoised('MIX.VOLUMES', args, () => {
+    const shelf = shelfFrom(stocks);
+    const input: MixInput = {
+      ...mixOptions(options),
+      stocks: shelf.stocks,
+      targets: targetsFrom(targets),
+      volumeMl,
+      ...(isBlank(targetPh) ? {} : { targetPh }),
+      ...(isBlank(useTemperatureC) ? {} : { useTemperatureC }),
+    };
+    const plan = onShelf(shelf.rows, () => planMix(input, libraryFor(userSubstances)));
+    const rows: (number | string)[][] = [[...MIX_TABLE_HEADER]];
+    for (const c of plan.components) {
+      if (c.role === 'titrant' || c.role === 'water') continue;
+      if (c.millilitres !== undefined) rows.push([c.name, printedVolume(c.millilitres), 'mL', c.finalText ?? '']);
+      else rows.push([c.name, Number((c.grams ?? 0).toPrecision(4)), 'g', c.finalText ?? '']);
+    }
+    const correction = plan.components.find((c) => c.role === 'titrant');
+    rows.push(correction ? [`pH correction: ${correction.name}`, printedVolume(correction.millilitres ?? 0), 'mL', `to pH ${plan.targetPh}`] : ['pH correction: none', 0, 'mL', '']);
+    const water = plan.components.find((c) => c.role === 'water');
+    rows.push(['water, to final volume', printedVolume(water?.millilitres ?? 0), 'mL', '']);
+    rows.push([`predicted pH at ${plan.useTemperatureC} °C`, plan.predictions.pHAtUse, 'pH', '']);
+    rows.push([`predicted pH at ${plan.benchTemperatureC} °C (bench)`, plan.predictions.pHAtBench, 'pH', '']);
+    return rows;
+  });
+}
+
+/**
+ * Predicted pH of stocks mixed by volume and made up to a final volume with water.
+ * @customfunction MIX.PH MIX.PH
+ * @helpurl https://localhost:3000/help/functions.html#mix-ph
+ * @param stocks Your stock shelf (as for MIX.VOLUMES).
+ * @param volumes Two columns: stock name and mL.
+ * @param finalVolumeMl Final volume, mL.
+ * @param [temperatureC] Temperature, °C (blank: 25).
+ * @param [activityModel] "davies" (default), "ideal" or "bates-guggenheim".
+ * @param [userSubstances] Range of your own substances.
+ * @returns pH.
+ */
+export function mixPh(stocks: any[][], volumes: any[][], finalVolumeMl: any, temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
+  const args = [stocks, volumes, finalVolumeMl, temperatureC, activityModel, userSubstances];
+  return memoised('MIX.PH', args, () => {
+    const s = setup(temperatureC, activityModel, userSubstances);
+    const read = shelfFrom(stocks);
+    const shelf = onShelf(read.rows, () => resolveShelf(read.stocks, s.library, s.model));
+    const list = volumesFrom(volumes);
+    const finalMl = toField('finalVolumeMl', finalVolumeMl);
+    const takenMl = list.reduce((sum, v) => sum + v.millilitres, 0);
+    if (takenMl > finalMl) throw new ChemError('infeasible-target', 'stocksDoNotFit', MESSAGES.stocksDoNotFit(takenMl, finalMl, list.map((v) => `${v.stock} ${v.millilitres} mL`).join(', ')), VOLUMES_ARGUMENT, `at most ${finalMl} mL in all`);
+    return solvePh(mixByVolumes(shelf, list, finalMl, s.temperatureC, s.model).composition);
+  });
+}
+
 /** Size of a spilled result: rows × columns. */
 export interface SpillShape {
   readonly rows: number;
@@ -487,6 +589,8 @@ export function spillShape(id: string, argumentRows: readonly number[]): SpillSh
       return { rows: RECIPE_TABLE_ROWS, columns: RECIPE_TABLE_HEADER.length };
     case 'RECIPE.ROW':
       return { rows: 1, columns: RECIPE_ROW_HEADER.length };
+    case 'MIX.VOLUMES':
+      return { rows: 1 + (argumentRows[1] ?? 0) + 4, columns: MIX_TABLE_HEADER.length };
     case 'SUBSTANCES':
       return { rows: listLength('substances', new Array(argumentRows[0] ?? 0)), columns: 1 };
     case 'FORMS':

@@ -208,4 +208,34 @@ describeBrowser('preview workbook in Chromium', () => {
     expect(notes).toHaveLength(1);
     expect(notes[0]).toMatch(/not in this file: the \.xlsx writer cannot write charts/);
   });
+
+  test('the pane plans a mix from a stock shelf typed into the sheet ("from stocks")', async () => {
+    await page.locator('#sheet-tabs .tab').first().click();
+    // Our shelf, typed as a user would: a titrated tris stock and a plain saline stock.
+    const shelf = [
+      ['Tris-HCl 1 M pH 8.0', 'tris base', '1 M', 'HCl', '8', '25'],
+      ['NaCl 5 M', 'NaCl', '5', '', '', ''],
+    ];
+    for (const [r, row] of shelf.entries()) {
+      for (const [c, value] of row.entries()) {
+        if (value === '') continue;
+        await cell(`${'ABCDEF'[c]}${33 + r}`).click();
+        await page.fill('#formula-input', value);
+        await page.press('#formula-input', 'Enter');
+      }
+    }
+    await page.fill('#mix-shelf', "'North bench prep'!A33:F34");
+    await page.fill('#mix-targets', 'tris 20 mM; NaCl 150 mM');
+    await page.fill('#mix-volumeMl', '50');
+    await page.fill('#mix-useTemperatureC', '4');
+    await page.click('#build-mix');
+    await page.waitForSelector('#mix-status.status-done', { timeout: 30000 });
+    await expect(page.locator('#mix-status').textContent()).resolves.toMatch(/^Wrote the mix to the new sheet "Mix 50 mL at 4 °C": pH 8\.\d\d at 4 °C\.$/);
+    // Targets in A10:B11, the MIX.VOLUMES spill from A13: 1 mL of the tris stock, 1.5 mL of the saline.
+    await expect(cell('A14').textContent()).resolves.toBe('Tris-HCl 1 M pH 8.0');
+    expect(Number(await cell('B14').textContent())).toBeCloseTo(1, 6);
+    expect(Number(await cell('B15').textContent())).toBeCloseTo(1.5, 6);
+    await page.locator('#pane-root').screenshot({ path: join(ARTIFACTS, 'pane-mix.png') });
+    expect(pageErrors).toEqual([]);
+  });
 });

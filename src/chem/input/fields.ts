@@ -168,6 +168,31 @@ export const FIELDS: readonly Field[] = [
     description: 'Ionic strength at which an apparent pKa′ is given.', example: '150 mM',
   },
   { kind: 'number', scope: 'argument', name: 'dilutionFactor', required: true, label: 'Dilution (×)', dimension: 'count', unit: '×', min: 1, max: 1e6, description: 'Final volume over starting volume.', example: '10' },
+  // Mixing from stock solutions (docs/stocks.md): the stock shelf, the targets and the mix.
+  {
+    kind: 'number', scope: 'argument', name: 'stock.concentrationM', required: true, label: 'Stock concentration (M)', dimension: 'concentration', unit: 'M', min: 0, max: MAX_FORM_CONCENTRATION_M, minExclusive: true,
+    description: 'Concentration of a stock on the shelf: of its form, or of its buffer system for a stock made by titration (a neutral additive may instead be given in %).', example: '1 M',
+  },
+  {
+    kind: 'number', scope: 'argument', name: 'stock.percent', required: true, label: 'Stock (%)', dimension: 'percent', unit: '%', min: 0, max: 100, minExclusive: true,
+    description: 'Strength of a neutral-additive stock: % v/v for a liquid (glycerol, DMSO), % w/v for a solid (sucrose, urea).', example: '50 %',
+  },
+  { kind: 'number', scope: 'argument', name: 'stock.ph', label: 'Stock pH', dimension: 'pH', unit: 'pH', min: MIN_TARGET_PH, max: MAX_TARGET_PH, description: 'pH a stock made by titration was brought to (its label).', example: '8.0' },
+  { ...TEMPERATURE, scope: 'argument', name: 'stock.phTemperatureC', label: 'Stock pH at (°C)', default: 25, description: 'Temperature at which the stock’s pH was set.', example: '25 °C' },
+  {
+    kind: 'number', scope: 'argument', name: 'target.concentrationMm', required: true, label: 'Final (mM)', dimension: 'concentration', unit: 'mM', min: 0, max: MAX_RECIPE_CONCENTRATION_MM,
+    description: 'Final concentration of a component mixed from the stocks.', example: '150 mM',
+  },
+  {
+    kind: 'number', scope: 'argument', name: 'target.percent', required: true, label: 'Final (%)', dimension: 'percent', unit: '%', min: 0, max: 100,
+    description: 'Final amount of a neutral additive: % v/v for a liquid, % w/v for a solid.', example: '10 %',
+  },
+  { kind: 'number', scope: 'argument', name: 'mixTargetPh', label: 'Target pH (optional)', dimension: 'pH', unit: 'pH', min: MIN_TARGET_PH, max: MAX_TARGET_PH, description: 'pH wanted at the temperature of use; when given and missed by more than the tolerance, a correction is planned.', example: '7.5' },
+  { kind: 'number', scope: 'argument', name: 'phTolerance', label: 'pH tolerance (±)', dimension: 'fraction', unit: '', min: 0.001, max: 1, default: 0.05, description: 'How far the mixture’s predicted pH may lie from the target before a correction is planned.', example: '0.05' },
+  {
+    kind: 'number', scope: 'argument', name: 'smallestVolumeUl', label: 'Smallest volume (µL)', dimension: 'volume', unit: 'µL', min: 0.1, max: 1000, default: 2,
+    description: 'Smallest volume your pipettes measure accurately; a stock needed in less is flagged with the dilution that fixes it.', example: '2 µL',
+  },
   { kind: 'purity', scope: 'argument', name: 'purity', label: 'Purity', min: 1, max: 100, description: 'Purity (assay) of the form weighed.', example: '99.5%' },
 ];
 

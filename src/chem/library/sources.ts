@@ -18,6 +18,10 @@ export const SOURCES = {
     'CRC Handbook of Chemistry and Physics, "Dissociation constants of organic acids and bases" (edition not checked)',
   crcSolubility:
     'CRC Handbook of Chemistry and Physics, "Aqueous solubility of inorganic compounds at various temperatures" (edition not checked), converted to grams per litre of saturated solution',
+  nist46:
+    'A. E. Martell, R. M. Smith, R. J. Motekaitis, NIST Critically Selected Stability Constants of Metal Complexes, NIST Standard Reference Database 46 (the protonation constants at 25 °C and I = 0 with their enthalpies)',
+  martellSmith:
+    'A. E. Martell, R. M. Smith, Critical Stability Constants, Vol. 1: Amino Acids, Plenum (1974), the ethylenebis(oxyethylenenitrilo)tetraacetic acid entry (constants at I = 0.1 M)',
   commonlyStated: 'Value commonly stated in textbooks (no primary source checked)',
   supplierLabel: 'Molar mass as printed on common suppliers\' labels and catalogues (written from memory; checked against the formula with CIAAW 2021 atomic weights)',
   userDefined: 'Defined by the user',
@@ -43,6 +47,8 @@ export const COPIES = {
     'The fitted equations transcribed in pytzer (github.com/mvdh7/pytzer, pytzer/dissociation.py): Bates & Hetzer 1961 eq. 3 (tris), Clegg, Rard & Pitzer 1994 eq. 21 (HSO4−), Millero 1979 (boric and carbonic acid), Plummer & Busenberg 1982 (carbonic acid), Bates & Pinching 1949 (ammonium), and the phosphoric-acid fits of Bates 1951, Bates & Acree 1943 and Schwarzenbach & Meier 1964 as given by Millero & Pierrot 1998. pK, ΔH° and ΔCp° at 298.15 K are read off each equation by differentiation (ΔH° = RT² d lnK/dT, ΔCp° = dΔH°/dT)',
   minteqV4:
     'minteq.v4.dat, the MINTEQA2 v4 thermodynamic database distributed with PHREEQC (github.com/usgs-coupled/phreeqc3, database/minteq.v4.dat): log K and ΔH of each protonation reaction at 25 °C and I = 0, with NIST Critical Stability Constants (NIST46) named as source. Read as pKa = log K of one protonation (cumulative constants differenced) and ΔH° of ionization = −ΔH of protonation',
+  hummel2005ThermoChimie:
+    'The ThermoChimie database as distributed with PHREEQC (github.com/usgs-coupled/phreeqc3, database/sit.dat, version 12a), whose EDTA protonation lines cite W. Hummel, G. Anderegg, L. Rao, I. Puigdomènech, O. Tochiyama, Chemical Thermodynamics of Compounds and Complexes of U, Np, Pu, Am, Tc, Se, Ni and Zr with Selected Organic Ligands, OECD-NEA, Elsevier (2005) ("05HUM/AND"): cumulative log β and ΔH at 25 °C and I = 0, extrapolated with the SIT and with the Na+ and K+ complexes of EDTA treated as species of their own',
   royAbstracts:
     'The abstracts (and, for J. Chem. Eng. Data 42 (1997) 41, the first page) of R. N. Roy and co-workers\' emf studies of Good buffers from 5 to 55 °C, as shown on public index and publisher pages: each gives pK2 at 25 °C (and 37 °C) or the fitted pK2(T) equation. Where an equation is given, pK, ΔH° and ΔCp° at 298.15 K are read off it by differentiation; where two temperatures are given, they are compared with the stored constants',
   batesAllen1960:

@@ -71,6 +71,31 @@ const gm = (d: GoldbergData) =>
 const roomOnly = (d: Omit<StepData, 'checkedAgainst' | 'temperatureRangeC' | 'deltaHkJ' | 'deltaCpJ'>) =>
   step({ ...d, checkedAgainst: 'memory', temperatureRangeC: NO_ENTHALPY_RANGE_C });
 
+/** NIST46 holds the EDTA enthalpies at 25 °C only, with no ΔCp°: a constant ΔH° is trusted over about 0–50 °C (memory of common practice for van 't Hoff extrapolation). */
+const EDTA_RANGE_C: readonly [number, number] = [0, 50];
+
+/** An EDTA step from NIST46, read in minteq.v4 and compared with Hummel et al. 2005 as ThermoChimie carries it. */
+const edta = (d: { entry: string; pKa: number; deltaHkJ: number; minteq: string; hummel: string }) =>
+  step({
+    source: 'nist46',
+    entry: d.entry,
+    pKa: d.pKa,
+    deltaHkJ: d.deltaHkJ,
+    temperatureRangeC: EDTA_RANGE_C,
+    checkedAgainst: [
+      { copy: 'minteqV4', where: 'the H+ + Edta-4 lines (NIST46.2), cumulative constants differenced', reads: d.minteq },
+      { copy: 'hummel2005ThermoChimie', where: 'the H+ + Edta-4 lines (05HUM/AND), cumulative constants differenced', reads: d.hummel },
+    ],
+    note: 'Copies disagree: Hummel et al. 2005 extrapolate to I = 0 with the SIT and count NaEdta3− and KEdta3− as species, which raises the upper two pK by 0.3–0.5; NIST46 is kept because this tool does not model those sodium and potassium complexes, and its values describe EDTA in the sodium and potassium media buffers are made in. No ΔCp° in either copy.',
+  });
+
+/** Davies correction from I = 0.1 M to I = 0 at 25 °C for a step whose acid has lost `lost` protons from the neutral H4L: A·F(0.1)·(z_A² − z_HA²), A·F(0.1) = 0.5108 × 0.2103. */
+const DAVIES_AT_0_1 = 0.5108 * 0.2103;
+
+/** An EGTA step from memory of Martell & Smith (I = 0.1 M, 20 °C), brought to I = 0 with the Davies equation; no ΔH° known. */
+const egta = (d: { entry: string; pKaAt01: number; lost: number }) =>
+  roomOnly({ source: 'martellSmith', entry: d.entry, pKa: Math.round((d.pKaAt01 + DAVIES_AT_0_1 * ((d.lost + 1) ** 2 - d.lost ** 2)) * 100) / 100, note: `(memory) pK ${d.pKaAt01} at I = 0.1 M and 20 °C as remembered from the table, not checked against a copy; brought to I = 0 by the Davies equation (${DAVIES_AT_0_1.toFixed(4)} × (z_A² − z_HA²)).` });
+
 /** A form on the shelf, by name: molar mass and what one mole adds are named fields. */
 interface FormData extends Partial<Pick<FormRecord, 'protonsReleased' | 'cautions' | 'cautionNote' | 'note' | 'solubility'>> {
   readonly name: string;
@@ -400,6 +425,31 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     form({ name: 'trisodium citrate anhydrous', aliases: ['sodium citrate anhydrous', 'sodium citrate tribasic anhydrous'], formula: 'Na3C6H5O7', listedMolarMass: 258.07, adds: [{ system: 'citrate', moles: 1, protonsLost: 3 }], counterIons: { 'Na+': 3 } }),
     form({ name: 'tripotassium citrate monohydrate', aliases: ['potassium citrate', 'potassium citrate monohydrate', 'K3C6H5O7·H2O'], formula: 'K3C6H5O7·H2O', listedMolarMass: 324.41, adds: [{ system: 'citrate', moles: 1, protonsLost: 3 }], counterIons: { 'K+': 3 } }),
   ], note: 'Binds Ca2+ and Mg2+ strongly; complexes are not modelled.' }),
+  // ── Chelators: EDTA and EGTA ────────────────────────────────────────────────────────
+  system({ name: 'EDTA', aliases: ['ethylenediaminetetraacetic acid', 'edetic acid', 'edetate', 'H4EDTA'], chargeOfMostProtonated: 0, steps: [
+    edta({ entry: 'EDTA, H4L ⇌ H3L− (4H+ + Edta-4 = H4(Edta) less 3H+ + Edta-4 = H3(Edta)-)', pKa: 2.16, deltaHkJ: -1.26, hummel: 'pK 23.42 − 21.19 = 2.23, ΔH° of ionization −(−26.0 + 27.9) = −1.9 kJ/mol', minteq: 'pK 22.5 − 20.34 = 2.16, ΔH° of ionization −(−34.309 + 35.564) = −1.26 kJ/mol: same as stored' }),
+    edta({ entry: 'EDTA, H3L− ⇌ H2L2− (3H+ + Edta-4 = H3(Edta)- less 2H+ + Edta-4 = H2(Edta)-2)', pKa: 3.119, deltaHkJ: -5.44, hummel: 'pK 21.19 − 18.04 = 3.15, ΔH° −(−27.9 + 35.0) = −7.1 kJ/mol', minteq: 'pK 20.34 − 17.221 = 3.119, ΔH° −(−35.564 + 41.003) = −5.44 kJ/mol: same as stored' }),
+    edta({ entry: 'EDTA, H2L2− ⇌ HL3− (2H+ + Edta-4 = H2(Edta)-2 less H+ + Edta-4 = H(Edta)-3)', pKa: 6.273, deltaHkJ: 17.57, hummel: 'pK 18.04 − 11.24 = 6.80, ΔH° −(−35.0 + 19.8) = 15.2 kJ/mol', minteq: 'pK 17.221 − 10.948 = 6.273, ΔH° −(−41.003 + 23.430) = 17.57 kJ/mol: same as stored' }),
+    edta({ entry: 'EDTA, HL3− ⇌ L4− (H+ + Edta-4 = H(Edta)-3)', pKa: 10.948, deltaHkJ: 23.43, hummel: 'pK 11.24, ΔH° 19.8 kJ/mol', minteq: 'log K 10.948, ΔH° of ionization 23.43 kJ/mol: same as stored' }),
+  ], forms: [
+    form({ name: 'EDTA free acid', aliases: ['EDTA', 'EDTA acid', 'ethylenediaminetetraacetic acid', 'C10H16N2O8'], formula: 'C10H16N2O8', listedMolarMass: 292.24, adds: [{ system: 'EDTA', moles: 1, protonsLost: 0 }], note: 'Dissolves very poorly until base brings the pH up (near pH 8).' }),
+    form({ name: 'EDTA disodium salt dihydrate', aliases: ['Na2EDTA·2H2O', 'disodium EDTA', 'disodium EDTA dihydrate', 'EDTA disodium salt', 'Na2H2EDTA·2H2O', 'disodium edetate dihydrate', 'edetate disodium'], formula: 'C10H14N2Na2O8·2H2O', listedMolarMass: 372.24, adds: [{ system: 'EDTA', moles: 1, protonsLost: 2 }], counterIons: { 'Na+': 2 }, note: 'The usual form for a 0.5 M stock at pH 8.0; it dissolves only as NaOH brings the pH towards 8.' }),
+    form({ name: 'EDTA disodium salt anhydrous', aliases: ['Na2EDTA', 'disodium EDTA anhydrous'], formula: 'C10H14N2Na2O8', listedMolarMass: 336.21, adds: [{ system: 'EDTA', moles: 1, protonsLost: 2 }], counterIons: { 'Na+': 2 } }),
+    form({ name: 'EDTA tetrasodium salt', aliases: ['Na4EDTA', 'tetrasodium EDTA', 'tetrasodium edetate', 'EDTA tetrasodium salt anhydrous'], formula: 'C10H12N2Na4O8', listedMolarMass: 380.17, adds: [{ system: 'EDTA', moles: 1, protonsLost: 4 }], counterIons: { 'Na+': 4 }, note: 'Its solutions are strongly alkaline (pH about 11).' }),
+    form({ name: 'EDTA tetrasodium salt tetrahydrate', aliases: ['Na4EDTA·4H2O', 'tetrasodium EDTA tetrahydrate', 'EDTA tetrasodium salt hydrate', 'tetrasodium EDTA hydrate'], formula: 'C10H12N2Na4O8·4H2O', listedMolarMass: 452.23, adds: [{ system: 'EDTA', moles: 1, protonsLost: 4 }], counterIons: { 'Na+': 4 }, note: 'Sold as "hydrate" with a water content that varies by lot: read the label or certificate for the molar mass.' }),
+  ], cautions: ['irritant'],
+    cautionNote: 'Harmful if the dust is inhaled; repeated inhalation may harm the airways. Weigh without raising dust.',
+    note: 'Chelator: binds Mg2+, Ca2+ and most divalent metal ions about 1:1 and strongly; those complexes are not modelled. Na+ and K+ bind weakly (log K about 2.7 and 1.7 at I = 0, NIST46 as carried in minteq.v4), not modelled either: in sodium-rich stocks the real pH lies somewhat below the predicted one. The H5L+ and H6L2+ steps (below pH 2) are left out.' }),
+  system({ name: 'EGTA', aliases: ['ethylene glycol-bis(2-aminoethylether)-N,N,N′,N′-tetraacetic acid', 'egtazic acid', 'H4EGTA'], chargeOfMostProtonated: 0, steps: [
+    egta({ entry: 'EGTA, H4L ⇌ H3L−', pKaAt01: 2.0, lost: 0 }),
+    egta({ entry: 'EGTA, H3L− ⇌ H2L2−', pKaAt01: 2.65, lost: 1 }),
+    egta({ entry: 'EGTA, H2L2− ⇌ HL3−', pKaAt01: 8.85, lost: 2 }),
+    egta({ entry: 'EGTA, HL3− ⇌ L4−', pKaAt01: 9.47, lost: 3 }),
+  ], forms: [
+    form({ name: 'EGTA free acid', aliases: ['EGTA', 'EGTA acid', 'C14H24N2O10'], formula: 'C14H24N2O10', listedMolarMass: 380.35, adds: [{ system: 'EGTA', moles: 1, protonsLost: 0 }], note: 'Dissolves only as NaOH (or KOH) brings the pH towards 8.' }),
+    form({ name: 'EGTA tetrasodium salt', aliases: ['Na4EGTA', 'tetrasodium EGTA'], formula: 'C14H20N2Na4O10', listedMolarMass: 468.28, adds: [{ system: 'EGTA', moles: 1, protonsLost: 4 }], counterIons: { 'Na+': 4 } }),
+  ], cautionNote: 'May irritate eyes and skin as a powder; see the safety data sheet.',
+    note: 'Chelator selective for Ca2+ over Mg2+; its metal complexes are not modelled. Its pKa values are from memory of a table at I = 0.1 M and 20 °C, brought to I = 0 with the Davies equation, with no ΔH°: treat EGTA pH predictions as estimates.' }),
   system({ name: 'phthalate', aliases: ['phthalic acid', 'benzene-1,2-dicarboxylic acid'], chargeOfMostProtonated: 0, steps: [
     step({ source: 'goldberg2002', entry: 'phthalic acid, H2L ⇌ HL−', pKa: 2.95, deltaHkJ: -2.7, deltaCpJ: -88, temperatureRangeC: GOLDBERG_RANGE_C, checkedAgainst: [{ copy: 'minteqV4', where: '2H+ + Phthalate-2 = H2(Phthalate) less H+ + Phthalate-2 (NIST46.2)', reads: 'pK 8.358 − 5.408 = 2.950; ΔH° of ionization −(4.853 − 2.176) = −2.68 kJ/mol: agrees with −2.7; no ΔCp°' }], note: 'ΔH° −2.7 kJ/mol: the earlier +2.7 had the sign wrong (with it, 0.05 mol/kg potassium hydrogen phthalate read 0.061 above its IUPAC pH(S) at 0 °C; with −2.7, within 0.02 from 0 to 50 °C). ΔCp° −88 from memory of the review, not in the copy.' }),
     step({ source: 'goldberg2002', entry: 'phthalic acid, HL− ⇌ L2−', pKa: 5.408, deltaHkJ: -2.17, deltaCpJ: -295, temperatureRangeC: GOLDBERG_RANGE_C, checkedAgainst: [{ copy: 'minteqV4', where: 'H+ + Phthalate-2 = H(Phthalate)- (NIST46.2)', reads: 'log K 5.408, ΔH° of ionization −2.18 kJ/mol: agrees; no ΔCp°' }], note: 'ΔCp° −295 from memory of the review, not in the copy.' }),
