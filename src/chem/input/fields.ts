@@ -400,3 +400,16 @@ export function recipeFieldOf(written: string): Field {
   const suggestions = written.length > 60 ? [] : closestNames(optionKey(written), OPTION_NAMES);
   throw new ChemError('invalid-input', 'unknownField', MESSAGES.unknownField(written, suggestions, names.join(', ')), written, names.join(', '));
 }
+
+const BATCH_KEYS = new Map<string, Field>();
+for (const f of FIELDS) {
+  // Per-form fields (grams, purity) are a form's row, not a named row of their own.
+  if (f.scope !== 'batch' || f.name === 'actual.grams' || f.name === 'actual.purityPercent') continue;
+  BATCH_KEYS.set(optionKey(f.name), f);
+  BATCH_KEYS.set(optionKey(f.label), f);
+}
+
+/** The batch field a row name (a field name or its label) stands for, or undefined (then the row names a form weighed). */
+export function batchFieldOf(written: string): Field | undefined {
+  return BATCH_KEYS.get(optionKey(written));
+}
