@@ -67,7 +67,7 @@ export function readActualsRange(range: unknown): ActualsRange {
 /** Columns of AS.MADE. */
 export const AS_MADE_HEADER = ['check', 'planned', 'as made', 'deviation', 'tolerance', 'result'] as const;
 /** Most rows of AS.MADE, header and verdict included: Excel spills only the rows a batch has; the formula engine pads to this. */
-export const AS_MADE_ROWS = 32;
+export const AS_MADE_ROWS = 24;
 
 const verdict = (pass: boolean) => (pass ? 'PASS' : 'FAIL');
 

@@ -456,7 +456,7 @@ export function recipe(buffer: any, targetPh: any, concentrationMm: any, volumeM
 }
 
 /**
- * The as-made check of a batch: from the actual amounts (grams of each form with the lot's purity, titrant mL at its standardised strength, the volume made up to, the bench temperature, readings), what was made, against the plan, with pass/fail. Spills one row per check (at most 32) × 6 columns (check, planned, as made, deviation, tolerance, result); the last row is the batch's verdict.
+ * The as-made check of a batch: from the actual amounts (grams of each form with the lot's purity, titrant mL at its standardised strength, the volume made up to, the bench temperature, readings), what was made, against the plan, with pass/fail. Spills one row per check (at most 24) × 6 columns (check, planned, as made, deviation, tolerance, result); the last row is the batch's verdict.
  * @customfunction AS.MADE AS.MADE
  * @helpurl https://localhost:3000/help/functions.html#as-made
  * @param buffer Buffer system (e.g. "HEPES", "tris", "phosphate").

@@ -10,6 +10,7 @@ import { PreviewAdapter } from '../workbook/previewAdapter';
 import { DEMO_CELLS, DEMO_COLUMN_WIDTHS, DEMO_SHEET } from './demo';
 import { Grid } from './grid';
 import { PreviewWorkbook } from './workbook';
+import { mountPrintView } from './printView';
 import { workbookToXlsx } from './xlsx';
 
 function loadDemo(book: PreviewWorkbook): void {
@@ -32,6 +33,7 @@ function start(): void {
   const paneRoot = document.getElementById('pane-root') as HTMLElement;
   void mountPane(paneRoot, { port, version: VERSION, onWritten: (sheet) => grid.showSheet(sheet) });
 
+  mountPrintView(document.querySelector('.topbar-actions') as HTMLElement, book, () => grid.activeSheet());
   const status = document.getElementById('page-status') as HTMLElement;
   const download = document.getElementById('download-xlsx') as HTMLButtonElement;
   download.addEventListener('click', () => {

@@ -7,6 +7,7 @@ import { listSubstances } from '../chem/library';
 import type { WorkbookPort } from '../workbook/port';
 import { defaultInput, FieldName, FormInput } from './form';
 import { buildRecipeTable, mergedSettings, valuesCopy } from './writer';
+import { mountBatchRecordBox } from './batchRecordBox';
 
 interface FieldSpec {
   readonly name: FieldName;
@@ -176,6 +177,8 @@ export async function mountPane(root: HTMLElement, options: PaneOptions): Promis
   make('p', { className: 'hint', text: 'Copies the sheet you have selected as plain numbers on a new sheet, with a provenance block (add-in version, activity model, temperatures, constant sources, date).' }, copyBox);
   const copyButton = make('button', { text: 'Copy selected sheet as values', id: 'values-copy' }, copyBox);
   copyButton.type = 'button';
+
+  mountBatchRecordBox(root, { port: options.port, version: options.version, ...(options.onWritten ? { onWritten: options.onWritten } : {}) });
 
   const cautions = make('section', { className: 'pane-cautions' }, root);
   make('h3', { text: 'Before you weigh' }, cautions);

@@ -50,7 +50,7 @@ describe('AS.MADE', () => {
     expect(errorOf(() => asMadeCheck('HEPES', 7.4, 25, 500, [['actual.titrantMl', 5]], 4, [['NaCl', 150]], options)).code).toBe('notWeighed');
   });
 
-  it('spills 32 × 6 in the formula engine, padded below the verdict', () => {
+  it('spills 24 × 6 in the formula engine, padded below the verdict', () => {
     expect(spillShape('AS.MADE', [1, 1, 1, 1, 3])).toEqual({ rows: AS_MADE_ROWS, columns: AS_MADE_HEADER.length });
     const hf = createFormulaEngine({
       Sheet1: [
