@@ -9,7 +9,8 @@
  * read by its field's one declaration (src/chem/input) in the core.
  */
 import { ChemError, MESSAGES } from '../chem';
-import { AsMadeResult, BatchActuals, BatchTolerances, BenchCorrection, BenchState, WeighedActual } from '../chem/batch';
+import { AsMadeResult, BatchActuals, BatchTolerances, BenchCorrection, BenchState, WeighedActual, plannedWeighings } from '../chem/batch';
+import type { RecipePlan } from '../chem/planner';
 import { batchFieldOf } from '../chem/input';
 import { isBlank, toRange, toText } from './coerce';
 import { invalid } from './errors';
@@ -88,6 +89,23 @@ export function asMadeTable(r: AsMadeResult): (number | string)[][] {
   for (const w of r.warnings) rows.push(['warning', '', '', '', '', w.message]);
   if (rows.length >= AS_MADE_ROWS) rows.length = AS_MADE_ROWS - 1;
   rows.push(['batch', '', '', '', '', verdict(r.pass)]);
+  return rows;
+}
+
+/**
+ * The table of a record not yet filled in: each planned amount, entered or not, and the
+ * verdict `INCOMPLETE` (a batch record computes as it is filled in; until every planned form
+ * and the titrant have an amount, there is nothing to check). Undefined when all are entered.
+ */
+export function incompleteTable(plan: RecipePlan, read: ActualsRange): (number | string)[][] | undefined {
+  const planned = plannedWeighings(plan);
+  const titrantMissing = plan.titration !== undefined && read.actuals.titrantMl === undefined;
+  if (read.weighed.length >= planned.length && !titrantMissing) return undefined;
+  const entered = new Set(read.weighed.map((w) => w.form.trim().toLowerCase()));
+  const rows: (number | string)[][] = [[...AS_MADE_HEADER]];
+  for (const c of planned) rows.push([`${c.name} (g)`, c.grams!, '', '', '', entered.has(c.name.toLowerCase()) ? 'entered' : 'not entered']);
+  if (plan.titration) rows.push([`${plan.titration.stockM} M ${plan.titration.titrant} (mL)`, plan.titration.volumeMl, '', '', '', titrantMissing ? 'not entered' : 'entered']);
+  rows.push(['batch', '', '', '', '', 'INCOMPLETE']);
   return rows;
 }
 

@@ -23,7 +23,7 @@ import { memoised } from './memo';
 import { SHEET_MESSAGES } from './messages';
 import { libraryFor, userRowCount } from './userRange';
 import { BenchState, asMade, benchCorrection } from '../chem/batch';
-import { AS_MADE_HEADER, AS_MADE_ROWS, TITRANT_NEXT_HEADER, asMadeTable, readActualsRange, titrantNextRow } from './batch';
+import { AS_MADE_HEADER, AS_MADE_ROWS, TITRANT_NEXT_HEADER, asMadeTable, incompleteTable, readActualsRange, titrantNextRow } from './batch';
 
 /** Most rows of the SPECIES table, header included. Excel spills only the rows a solution has; the formula engine, which sizes arrays before computing, pads to this (formulaEngine.ts). 29 species covers H⁺, OH⁻, the strong ions and several polyprotic systems. */
 export const SPECIES_TABLE_ROWS = 30;
@@ -475,6 +475,8 @@ export function asMadeCheck(buffer: any, targetPh: any, concentrationMm: any, vo
   return memoised('AS.MADE', [...args, actuals], () => {
     const plan = recipePlan(args, true);
     const read = readActualsRange(actuals);
+    const incomplete = incompleteTable(plan, read);
+    if (incomplete) return incomplete;
     return asMadeTable(asMade(plan, { ...read.actuals, weighed: read.weighed }, read.tolerances, libraryFor(userSubstances)));
   });
 }

@@ -3,7 +3,7 @@
  * formats and charts). Writes go through the same formulas Excel gets.
  */
 import type { PreviewWorkbook } from '../preview/workbook';
-import { rememberPrintLayout } from '../preview/printView';
+import { rememberPrintLayout } from '../preview/printArea';
 import { CellBlock, CellValue, ChartSpec, PaneSettings, PrintLayout, RangeRef, Selection, WorkbookPort, literal, uniqueName } from './port';
 
 /** The grid's current selection, supplied by the page. */

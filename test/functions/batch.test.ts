@@ -46,8 +46,9 @@ describe('AS.MADE', () => {
     expect(asMadeCheck('HEPES', 7.4, 25, 500, [...short, ['tolerance.concentrationPercent', 6], ['tolerance.ph', 0.2]], 4, [['NaCl', 150]], options).at(-1)![5]).toBe('PASS');
   });
 
-  it('names a planned form left blank (code notWeighed)', () => {
-    expect(errorOf(() => asMadeCheck('HEPES', 7.4, 25, 500, [['actual.titrantMl', 5]], 4, [['NaCl', 150]], options)).code).toBe('notWeighed');
+  it('is INCOMPLETE, listing what is entered, until every planned form and the titrant have an amount', () => {
+    const t = asMadeCheck('HEPES', 7.4, 25, 500, [['HEPES free acid', grams[0].grams], ['NaCl', ''], ['actual.titrantMl', '']], 4, [['NaCl', 150]], options);
+    expect(t.map((r) => r[5])).toEqual(['result', 'entered', 'not entered', 'not entered', 'INCOMPLETE']);
   });
 
   it('spills 24 × 6 in the formula engine, padded below the verdict', () => {

@@ -32,9 +32,9 @@ describe('batch record sheet (written through the port, computed by the formula 
     expect(layout.printArea.rowCount).toBeLessThanOrEqual(80);
   });
 
-  it('shows the check waiting for amounts, then PASS with the planned amounts, then FAIL with a short weighing', async () => {
+  it('shows the check INCOMPLETE until the amounts are entered, then PASS with the planned amounts, then FAIL with a short weighing', async () => {
     const { set, verdict, layout, book, sheet } = await record();
-    expect(verdict()).toBe('#VALUE!');
+    expect(verdict()).toBe('INCOMPLETE');
     const weighed = plannedAsWeighed(plan);
     layout.inputs.grams.forEach((g, i) => set(g.at, weighed[i].grams as number));
     set(layout.inputs.titrantMl!, plan.titration!.volumeMl);
