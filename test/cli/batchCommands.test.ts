@@ -14,7 +14,7 @@ function call(args: string[]): { code: number; out: any } {
 
 /** Our own cold-room tris saline, titrated with 1 M HCl at 22 °C. */
 const recipe = { buffer: 'tris', targetPh: 7.5, useTemperatureC: 4, benchTemperatureC: 22, concentrationMm: 50, volumeMl: 500, form: 'tris base', titrant: 'HCl', salts: 'NaCl 150 mM' };
-const plan = planRecipe({ ...recipe, titrant: { form: 'HCl' } });
+const plan = planRecipe({ ...recipe, titrant: { form: 'HCl', concentrationM: 1 } });
 
 describe('proton-ledger as-made and correct', () => {
   it('as-made prints the core\'s check and exits 0 on a pass, 1 on a fail', () => {
