@@ -8,6 +8,9 @@ import type { PrintLayout, RangeRef } from '../workbook/port';
 import { formatValue } from './format';
 import type { PreviewWorkbook } from './workbook';
 
+/** Significant digits of a printed number that has no number format of its own. */
+const PRINT_DIGITS = 4;
+
 const layouts = new WeakMap<PreviewWorkbook, Map<string, PrintLayout>>();
 
 /** Keeps a sheet's print layout (the preview adapter's setPrintLayout). */
@@ -24,14 +27,17 @@ export function printArea(book: PreviewWorkbook, sheet: string): RangeRef {
   return { row: 0, col: 0, rowCount: rows, colCount: cols };
 }
 
-/** The print area's cells as text with their styles. */
+/** The print area's cells as text with their styles; rows with nothing to show or fill are left out, so a page is not spent on them. */
 export function printCells(book: PreviewWorkbook, sheet: string): PrintCell[][] {
   const area = printArea(book, sheet);
   const values = book.values(sheet, area);
-  return values.map((line, r) =>
+  const rows = values.map((line, r) =>
     line.map((value, c) => {
       const meta = book.meta(sheet, area.row + r, area.col + c);
-      return { text: formatValue(value, meta?.numberFormat), ...(meta?.style ? { style: meta.style } : {}), numeric: typeof value === 'number' };
+      // A number without a format (a spilled check table) prints with four significant digits.
+      const shown = typeof value === 'number' && !meta?.numberFormat && Number.isFinite(value) ? Number(value.toPrecision(PRINT_DIGITS)) : value;
+      return { text: formatValue(shown, meta?.numberFormat), ...(meta?.style ? { style: meta.style } : {}), numeric: typeof value === 'number' };
     }),
   );
+  return rows.filter((row) => row.some((c) => c.text !== '' || c.style === 'input'));
 }

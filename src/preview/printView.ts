@@ -5,7 +5,7 @@
  * through the DOM (the page's Content-Security-Policy allows no inline style sheets); while
  * printing, everything else on the page is hidden.
  */
-import { PAGE_STYLE, PRINT_STYLES, spansRow } from '../workbook/printPage';
+import { CELL_STYLE, PAGE_STYLE, PRINT_STYLES, spansRow } from '../workbook/printPage';
 import { printArea, printCells } from './printArea';
 import type { PreviewWorkbook } from './workbook';
 
@@ -43,7 +43,7 @@ export function showPrintView(book: PreviewWorkbook, sheet: string): HTMLElement
   const body = styled('tbody', table);
   for (const row of cells) {
     const tr = styled('tr', body);
-    const cellCss = { padding: '1.5pt 3pt', 'vertical-align': 'top', overflow: 'hidden', 'white-space': 'nowrap', 'text-overflow': 'ellipsis' };
+    const cellCss = CELL_STYLE;
     if (spansRow(row)) {
       const td = styled('td', tr, { ...cellCss, 'white-space': 'normal', ...PRINT_STYLES[row[0].style ?? 'result'] });
       td.colSpan = row.length;

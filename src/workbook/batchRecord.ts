@@ -155,7 +155,7 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
     titrantMl = { row, col: 5 };
     actuals.push([v('actual.titrantMl'), f(mirror(titrantMl), 'note')]);
     const srow = here();
-    add(v('titrant stock, nominal and standardised (M)'), v(''), v(''), v(`±${t.tolerancePercent} %`), v(t.stockM, 'result', '0.000'), blankInput('0.000'));
+    add(v('titrant stock (M): nominal, standardised'), v(''), v(''), v(`±${t.tolerancePercent} %`), v(t.stockM, 'result', '0.000'), blankInput('0.000'));
     titrantStandardisedM = { row: srow, col: 5 };
     actuals.push([v('actual.titrantConcentrationM'), f(mirror(titrantStandardisedM), 'note')]);
   }
@@ -214,7 +214,7 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
   const checkAt = { row: here(), col: 0 };
   const actualsRange = rangeAddress({ row: 0, col: ACTUALS_COL, rowCount: actuals.length, colCount: 3 });
   const cell = (k: string) => cellAddress(recipeAt[k].row, recipeAt[k].col);
-  add(f(`${call('AS.MADE', cell('buffer'), cell('targetPh'), cell('concentrationMm'), cell('volumeMl'), actualsRange, cell('useTemperatureC'), saltRange, optionRange)}`, 'result', '0.000'));
+  add(f(`${call('AS.MADE', cell('buffer'), cell('targetPh'), cell('concentrationMm'), cell('volumeMl'), actualsRange, cell('useTemperatureC'), saltRange, optionRange)}`, 'result'));
   for (let i = 1; i < CHECK_ROWS; i++) add();
 
   add(v('Sign-off', 'subtitle'));

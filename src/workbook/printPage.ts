@@ -15,8 +15,8 @@ export interface PrintCell {
 
 /** CSS of each cell style, as property → value (kebab-case), matching the Excel adapter's look. */
 export const PRINT_STYLES: Readonly<Record<CellStyle, Readonly<Record<string, string>>>> = {
-  title: { 'font-weight': '700', 'font-size': '14pt', color: '#1F3A44' },
-  subtitle: { 'font-weight': '700', 'font-size': '10.5pt', color: '#1F3A44', 'padding-top': '6pt', 'border-bottom': '1px solid #1F3A44' },
+  title: { 'font-weight': '700', 'font-size': '13pt', color: '#1F3A44' },
+  subtitle: { 'font-weight': '700', 'font-size': '9pt', color: '#1F3A44', 'padding-top': '5pt', 'border-bottom': '1px solid #1F3A44' },
   label: { color: '#40505A' },
   header: { 'font-weight': '700', color: '#1F3A44', background: '#E4EAEC' },
   input: { color: '#0B4F5C', background: '#EEF5F3', border: '1px solid #9DBDB5', 'min-width': '3em' },
@@ -28,7 +28,10 @@ export const PRINT_STYLES: Readonly<Record<CellStyle, Readonly<Record<string, st
 };
 
 /** Styles of the page itself: A4 portrait, small type, so a record fits one page. */
-export const PAGE_STYLE: Readonly<Record<string, string>> = { 'font-family': 'Segoe UI, Helvetica, Arial, sans-serif', 'font-size': '8pt', color: '#111' };
+export const PAGE_STYLE: Readonly<Record<string, string>> = { 'font-family': 'Segoe UI, Helvetica, Arial, sans-serif', 'font-size': '7.5pt', 'line-height': '1.2', color: '#111' };
+
+/** Style of every printed cell. */
+export const CELL_STYLE: Readonly<Record<string, string>> = { padding: '1pt 3pt', 'vertical-align': 'top', overflow: 'hidden', 'white-space': 'nowrap', 'text-overflow': 'ellipsis', 'font-size': '7.5pt', 'line-height': '1.2', height: 'auto' };
 
 const escapeHtml = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
 const css = (o: Readonly<Record<string, string>>) => Object.entries(o).map(([k, v]) => `${k}: ${v}`).join('; ');
@@ -65,7 +68,7 @@ export function printPageHtml(title: string, rows: readonly (readonly PrintCell[
 @page { size: A4 portrait; margin: 12mm; }
 body { ${css(PAGE_STYLE)}; margin: 0; }
 table { border-collapse: collapse; table-layout: fixed; width: 100%; }
-td { padding: 1.5pt 3pt; vertical-align: top; overflow: hidden; white-space: nowrap; text-overflow: ellipsis; }
+td { ${css(CELL_STYLE)} }
 td[colspan] { white-space: normal; }
 td.num { text-align: right; }
 ${styles}
