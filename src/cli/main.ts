@@ -103,7 +103,8 @@ ${FIELDS.filter((f) => f.scope === 'batch').map((f) => `  ${f.name.padEnd(32)} $
 
 as-made prints the check (components, predictions, checks with pass/fail, warnings) and exits 1 when the batch fails.
 correct prints what to add next, a safe first portion, the end-point reading and, off the plan, the likely causes.
-record writes the .xlsx (formulas with values, print area on one A4 page) and the .html page (default: beside it).
+record writes the .xlsx (formulas with values, print area on one A4 page) and the .html page (default: beside it);
+given a batch ({"recipe", "actual"}) instead of a recipe, it writes the record filled in with the actual values.
 
 Example (our own): proton-ledger correct --json '{"recipe": {"buffer": "tris", "targetPh": 7.5, "useTemperatureC": 4, "benchTemperatureC": 22, "concentrationMm": 50, "volumeMl": 500, "titrant": "HCl"}, "actual": {"titrantMl": 20}, "reading": {"ph": 7.35}}'`;
 
@@ -189,10 +190,13 @@ async function recordCommand(args: string[], write: (text: string) => void): Pro
   const html = optionValue(args, '--html') ?? xlsx.replace(/\.xlsx$/i, '.html');
   const text = readText(args, write, 'record');
   if (text === undefined) return 0;
-  const { recipe, userSubstances } = toRecipeInput(parseJson(text));
+  // A recipe, or a batch ({"recipe", "actual"}) whose actual values fill the record in.
+  const raw = parseJson(text) as Record<string, unknown>;
+  const filled = raw !== null && typeof raw === 'object' && 'recipe' in raw ? toBatchInput(raw) : undefined;
+  const { recipe, userSubstances } = filled ?? toRecipeInput(raw);
   const plan = planRecipe(recipe, libraryFor(userSubstances));
   const { writeRecord } = await import('./record');
-  write(JSON.stringify(await writeRecord(recipe, plan, { xlsx, html }, version())) + '\n');
+  write(JSON.stringify(await writeRecord(recipe, plan, { xlsx, html }, version(), filled?.actuals)) + '\n');
   return 0;
 }
 

@@ -8,6 +8,7 @@
  */
 import { writeFileSync } from 'fs';
 import ExcelJS from 'exceljs';
+import { BatchActuals } from '../chem/batch';
 import { RecipeInput, RecipePlan } from '../chem/planner';
 import { createFormulaEngine } from '../functions/formulaEngine';
 import { printCells } from '../preview/printArea';
@@ -21,6 +22,29 @@ const FILLS: Partial<Record<string, string>> = { input: 'FFEEF5F3', header: 'FFE
 const BOLD = new Set(['title', 'subtitle', 'header', 'caution']);
 /** A4 in the page-setup codes of the .xlsx format. */
 const PAPER_A4 = 9;
+
+/** Puts recorded values into the record's input cells, as a filler would type them (forms by name, in the plan's order otherwise). */
+function fillRecord(book: PreviewWorkbook, sheet: string, inputs: ReturnType<typeof batchRecordLayout>['inputs'], a: BatchActuals): void {
+  const put = (at: { row: number; col: number } | undefined, value: unknown) => {
+    if (at && value !== undefined && value !== null && value !== '') book.setContents(sheet, at.row, at.col, [[value as string | number]]);
+  };
+  book.batch(() => {
+    (a.weighed ?? []).forEach((w, i) => {
+      const j = inputs.grams.findIndex((g) => g.form.toLowerCase() === String(w.form).toLowerCase());
+      const k = j >= 0 ? j : i;
+      put(inputs.grams[k]?.at, w.grams);
+      put(inputs.purity[k], w.purityPercent);
+      if (w.lot && inputs.grams[k]) put({ row: inputs.grams[k].at.row, col: 2 }, w.lot);
+    });
+    put(inputs.titrantMl, a.titrantMl);
+    put(inputs.titrantStandardisedM, a.titrantConcentrationM);
+    put(inputs.finalVolumeMl, a.finalVolumeMl);
+    put(inputs.benchTemperatureC, a.benchTemperatureC);
+    put(inputs.meterPh, a.meterPh);
+    put(inputs.finalPh, a.finalPh);
+    put(inputs.conductivity25, a.conductivity25MsPerCm);
+  });
+}
 
 /** What `record` wrote. */
 export interface RecordSummary {
@@ -37,12 +61,14 @@ export interface RecordSummary {
  * @param plan - planRecipe(input)
  * @param out - the .xlsx and/or .html paths
  * @param version - printed in the footer
+ * @param actuals - what was done, to fill in the record's input cells (a filled record; default: blank)
  */
-export async function writeRecord(input: RecipeInput, plan: RecipePlan, out: { xlsx?: string; html?: string }, version: string): Promise<RecordSummary> {
+export async function writeRecord(input: RecipeInput, plan: RecipePlan, out: { xlsx?: string; html?: string }, version: string, actuals?: BatchActuals): Promise<RecordSummary> {
   const book = new PreviewWorkbook(createFormulaEngine({ Sheet1: [] }));
   const port = new PreviewAdapter(book, () => ({ sheet: 'Sheet1', range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }), () => undefined);
   const sheet = await writeBatchRecord(port, input, plan, version);
   const layout = batchRecordLayout(input, plan, version);
+  if (actuals) fillRecord(book, sheet, layout.inputs, actuals);
   if (out.html) writeFileSync(out.html, printPageHtml(sheet, printCells(book, sheet), layout.widths.slice(0, layout.printArea.colCount)));
   if (out.xlsx) {
     const wb = new ExcelJS.Workbook();

@@ -71,6 +71,16 @@ describe('proton-ledger record', () => {
     expect(asMadeFormula).toMatch(/^PROTON\.AS\.MADE\(B\d+,B\d+,B\d+,B\d+,H1:J\d+,B\d+,A\d+:B\d+,A\d+:B\d+\)$/);
   });
 
+  it('given a batch instead of a recipe, writes the record filled in, its check computed (PASS with the planned amounts)', async () => {
+    let text = '';
+    const html = join(dir, 'filled.html');
+    const actual = { weighed: plannedAsWeighed(plan), titrantMl: plan.titration!.volumeMl, finalPh: 7.52 };
+    expect(await main(['record', '-o', join(dir, 'filled.xlsx'), '--html', html, '--json', JSON.stringify({ recipe, actual })], (t) => (text += t))).toBe(0);
+    const page = readFileSync(html, 'utf8');
+    expect(page).not.toContain('INCOMPLETE');
+    expect(page).toMatch(/<td class="s-result">batch<\/td>(<td[^>]*><\/td>){4}<td class="s-result">PASS<\/td>/);
+  });
+
   it('refuses an output that is not .xlsx (field -o)', async () => {
     let text = '';
     expect(await main(['record', '-o', join(dir, 'x.pdf'), '--json', JSON.stringify(recipe)], (t) => (text += t))).toBe(2);
