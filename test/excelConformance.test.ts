@@ -95,6 +95,8 @@ const CALLS: Record<string, { good: unknown[]; bad: unknown[] }> = {
   'RECIPE.ROW': { good: ['HEPES', 7.4, 25, 500], bad: ['HEPES', 15, 25, 500] },
   RECIPE: { good: ['HEPES', 7.4, 25, 500, 4, [['NaCl', 150]], [['form', 'HEPES free acid'], ['titrant', 'NaOH'], ['benchTemperatureC', 22]]], bad: ['HEPES', 7.4, -25, 500] },
   CONDUCTIVITY: { good: [COMPOSITION, 20], bad: [COMPOSITION, 80] },
+  'AS.MADE': { good: ['HEPES', 7.4, 25, 500, [['HEPES free acid', 2.979], ['actual.titrantMl', 4.1]]], bad: ['HEPES', 7.4, 25, 500, [['HEPES free acid', 2.979], ['actual.titrantMl', 'lots']]] },
+  'TITRANT.NEXT': { good: ['HEPES', 7.4, 25, 500, 3, 7.0], bad: ['HEPES', 7.4, 25, 500, 3, 15] },
 };
 
 /** The arguments as Excel passes them: one per declared parameter, null where the user gave none. */
