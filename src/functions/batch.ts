@@ -86,6 +86,7 @@ export function asMadeTable(r: AsMadeResult): (number | string)[][] {
   rows.push([`pH at ${r.benchTemperatureC} °C, as made (pH)`, '', p.pHAtBench, '', '', '']);
   rows.push(['ionic strength, as made (mM)', '', p.ionicStrengthM * 1000, '', '', '']);
   rows.push(['ideal osmolarity, as made (mOsm/L)', '', p.idealOsmolarityMosm, '', '', '']);
+  if (p.osmolalityMosmPerKg !== undefined) rows.push(['osmolality, as made (mOsm/kg)', '', p.osmolalityMosmPerKg, '', '', 'at the plan’s osmotic coefficient']);
   for (const w of r.warnings) rows.push(['warning', '', '', '', '', w.message]);
   if (rows.length >= AS_MADE_ROWS) rows.length = AS_MADE_ROWS - 1;
   rows.push(['batch', '', '', '', '', verdict(r.pass)]);

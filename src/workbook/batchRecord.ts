@@ -14,6 +14,7 @@
  * each of its cells mirrors an input cell with `IF(ISBLANK(cell), "", cell)`, so an input not
  * yet filled is blank to the check rather than 0.
  */
+import { osmolalityOf } from '../chem/batch';
 import { DEFAULT_PKA_UNCERTAINTY, RecipeInput, RecipePlan } from '../chem/planner';
 import { formatGrams, formatMl } from '../chem/planner/protocol';
 import { AS_MADE_ROWS } from '../functions/batch';
@@ -202,7 +203,7 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
   add(v('Conductivity at 25 °C (mS/cm)'), v(`${kappa} ± tolerance %`), blankInput('0.00'), v(''), { value: DEFAULT_CONDUCTIVITY_TOLERANCE_PERCENT, style: 'input', numberFormat: '0' }, f(`IF(ISBLANK(${kCell}),"",IF(ABS(${kCell}-${kappa})<=${kappa}*${kTol}/100,"PASS","FAIL"))`));
   actuals.push([v('actual.conductivity25MsPerCm'), f(mirror(conductivity25), 'note')]);
   actuals.push([v('tolerance.conductivityPercent'), f(mirror(tolK), 'note')]);
-  const osmolality = (p as unknown as { osmolalityMosmPerKg?: number }).osmolalityMosmPerKg;
+  const osmolality = osmolalityOf(plan);
   if (typeof osmolality === 'number') add(v('Osmolality (mOsm/kg)'), v(`${osmolality.toFixed(0)} (predicted)`), blankInput('0'), v(''), v(''), v(''));
   const arow = here();
   add(v('Weighed amounts, each (± %)'), v('as planned'), v(''), v(''), { value: DEFAULT_AMOUNT_TOLERANCE_PERCENT, style: 'input', numberFormat: '0' });

@@ -41,6 +41,12 @@ export function readTolerances(t: BatchTolerances = {}): { ph: number; concentra
   };
 }
 
+/** The plan's predicted osmolality, mOsm/kg, when its activity model gives one (a prediction named osmolality…). */
+export function osmolalityOf(plan: RecipePlan): number | undefined {
+  const found = Object.entries(plan.predictions).find(([key, value]) => key.toLowerCase().startsWith('osmolality') && typeof value === 'number' && Number.isFinite(value));
+  return found ? (found[1] as number) : undefined;
+}
+
 const percentOff = (value: number, planned: number) => (planned === 0 ? (value === 0 ? 0 : Infinity) : ((value - planned) / planned) * 100);
 
 /**
@@ -86,12 +92,17 @@ export function asMade(plan: RecipePlan, actuals: BatchActuals, tolerances: Batc
   const kappa25 = useT === 25 ? kappa : conductivityAt(finished, 25);
   const part = plan.meter.partVolumeFraction;
   const meterPh = solvePh(withConditions(scaleComposition(made, 1 / part), benchT));
+  // Osmolality needs an osmotic coefficient from an activity model that gives one; when the plan
+  // predicts it, the batch's follows at the plan's coefficient, scaled by the particles made.
+  const plannedOsmolality = osmolalityOf(plan);
+  const idealMosm = idealOsmolarity(result) * 1000;
   const predictions = {
+    ...(plannedOsmolality === undefined ? {} : { osmolalityMosmPerKg: (plannedOsmolality * idealMosm) / plan.predictions.idealOsmolarityMosm }),
     pHAtUse: result.pH,
     pHAtBench: solvePh(withConditions(finished, benchT)),
     meterPh,
     ionicStrengthM: result.ionicStrengthM,
-    idealOsmolarityMosm: idealOsmolarity(result) * 1000,
+    idealOsmolarityMosm: idealMosm,
     conductivityMsPerCm: kappa.conductivityMsPerCm,
     conductivity25MsPerCm: kappa25.conductivityMsPerCm,
   };

@@ -83,6 +83,8 @@ export interface AsMadeResult {
     readonly meterPh: number;
     readonly ionicStrengthM: number;
     readonly idealOsmolarityMosm: number;
+    /** Only when the plan predicts osmolality: the plan's, scaled by the ideal osmolarity made (the plan's osmotic coefficient kept). */
+    readonly osmolalityMosmPerKg?: number;
     readonly conductivityMsPerCm: number;
     readonly conductivity25MsPerCm: number;
   };

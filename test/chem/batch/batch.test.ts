@@ -61,6 +61,15 @@ describe('as-made check: the planned amounts give the plan back (within 0.001 pH
     expect(asMade(plan, { ...asPlanned(plan), finalPh: plan.targetPh + 0.08 }, { ph: 0.1 }).pass).toBe(true);
   });
 
+  it('carries a planned osmolality (when the plan\'s activity model predicts one) at the plan\'s osmotic coefficient, scaled by the particles made', () => {
+    const plan = planRecipe(RECIPES[0][1]);
+    expect(asMade(plan, asPlanned(plan)).predictions.osmolalityMosmPerKg).toBeUndefined();
+    const withOsmolality = { ...plan, predictions: { ...plan.predictions, osmolalityMosmPerKg: 371 } } as RecipePlan;
+    expect(asMade(withOsmolality, asPlanned(plan)).predictions.osmolalityMosmPerKg).toBeCloseTo(371, 9);
+    const salty = asMade(withOsmolality, { ...asPlanned(plan), weighed: plannedAsWeighed(plan).map((w) => (w.form === 'sodium chloride' ? { ...w, grams: (w.grams as number) * 1.1 } : w)) });
+    expect(salty.predictions.osmolalityMosmPerKg! / 371).toBeCloseTo(salty.predictions.idealOsmolarityMosm / plan.predictions.idealOsmolarityMosm, 9);
+  });
+
   it('refuses a planned form with no mass (code notWeighed) and a bad mass (field named)', () => {
     const plan = planRecipe(RECIPES[0][1]);
     const e = caught(() => asMade(plan, { weighed: plannedAsWeighed(plan).slice(0, 1), titrantMl: 20 }));
