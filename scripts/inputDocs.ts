@@ -33,7 +33,7 @@ function unitsOfField(f: Field): string {
 }
 
 function table(scope: Field['scope']): string[] {
-  const first = scope === 'recipe' ? 'option (command line and options range)' : 'argument';
+  const first = scope === 'recipe' ? 'option (command line and options range)' : scope === 'batch' ? 'field (actuals range and JSON)' : 'argument';
   const lines = [`| ${first} | label (also accepted) | unit | allowed | default | what it is | example |`, '|---|---|---|---|---|---|---|'];
   for (const f of FIELDS.filter((x) => x.scope === scope)) {
     lines.push(`| \`${f.name}\` | ${cell(f.label)} | ${cell(f.kind === 'number' ? f.unit || 'plain number' : unitsOfField(f))} | ${cell(allowedOf(f))} | ${cell(defaultOf(f))} | ${cell(f.description)} | \`${cell(f.example)}\` |`);
@@ -86,6 +86,13 @@ export function inputDocsMarkdown(): string {
     '## Other worksheet arguments',
     '',
     ...table('argument'),
+    '',
+    '## A batch: actual amounts, readings and tolerances',
+    'The as-made check and the bench correction (docs/batch.md) read these, in an actuals range',
+    '(two columns, name or label and value; a weighed form is a row of its own: the form\'s name',
+    'and its grams, with `name purity` rows for a lot\'s purity) or in the command line\'s JSON.',
+    '',
+    ...table('batch'),
     '',
   ].join('\n');
 }

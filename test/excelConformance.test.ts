@@ -106,6 +106,8 @@ const CALLS: Record<string, { good: unknown[]; bad: unknown[] }> = {
   OSMOLALITY: { good: [COMPOSITION], bad: [COMPOSITION, 150] },
   'MIX.VOLUMES': { good: [SHELF, [['tris', 20], ['NaCl', '150 mM']], 50, 7.9, 4], bad: [SHELF, [['NaCl', 3000], ['KCl', 2000]], 10] },
   'MIX.PH': { good: [SHELF, [['Tris-HCl 1 M pH 8.0', 1], ['NaCl 5 M', 1.5]], 50, 4], bad: [SHELF, [['Tris-HCl 1 M pH 8.0', 40], ['NaCl 5 M', 20]], 50] },
+  'AS.MADE': { good: ['HEPES', 7.4, 25, 500, [['HEPES free acid', 2.979], ['actual.titrantMl', 4.1]]], bad: ['HEPES', 7.4, 25, 500, [['HEPES free acid', 2.979], ['actual.titrantMl', 'lots']]] },
+  'TITRANT.NEXT': { good: ['HEPES', 7.4, 25, 500, 3, 7.0], bad: ['HEPES', 7.4, 25, 500, 3, 15] },
 };
 
 /** The arguments as Excel passes them: one per declared parameter, null where the user gave none. */

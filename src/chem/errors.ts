@@ -157,6 +157,39 @@ export const MESSAGES = {
     `${where} ${temperatureC} °C lies outside ${lowC}–${highC} °C, the temperatures the data for ${system} (${steps}) cover: its pKa there is an extrapolation; check the pH with a meter at that temperature.`,
   noEnthalpy: (where: string, temperatureC: number, system: string, steps: string, toleranceC: number) =>
     `${system} has no ΔH° for ${steps}: its pKa is held at the 25 °C value, so at ${where.toLowerCase()} ${temperatureC} °C (beyond 25 ± ${toleranceC} °C) the pH is an estimate; measure it at that temperature.`,
+  // A batch as made, and the correction at the bench (src/chem/batch).
+  notWeighed: (form: string) =>
+    `${form} is in the plan but no actual mass is given for it; enter the grams weighed (0 if it was left out).`,
+  nothingToTitrate: (route: string) =>
+    `This recipe (route ${route}) adds no titrant, so there is nothing to correct with one; weigh the forms again or plan it with a titrant.`,
+  readingUnexplained: (readingPh: number, startPh: number, titrant: string, direction: string) =>
+    `The reading pH ${readingPh.toFixed(2)} lies beyond pH ${startPh.toFixed(2)}, what the weighed forms give before any titrant, although ${titrant} ${direction} the pH: no amount of titrant explains it; check the meter on a standard buffer, the electrode, and that the right substances went in.`,
+  correctionTooLarge: (millilitres: number, roomMl: number, titrant: string) =>
+    `${millilitres.toPrecision(3)} mL of ${titrant} would be needed, more than the ${roomMl.toPrecision(3)} mL left before the final volume; use a stronger stock or start the batch again.`,
+  otherFormWeighed: (weighed: string, planned: string, ratio: number) =>
+    `${weighed} was weighed where the plan has ${planned}: the same mass gives ${(ratio * 100).toFixed(1)} % of the planned amount (molar masses differ); the check uses the form weighed.`,
+  formNotInPlan: (form: string) =>
+    `${form} is not in the plan; it is counted in the as-made solution as weighed.`,
+  stockOffNominal: (nominalM: number, standardisedM: number, tolerancePercent: number) =>
+    `The titrant stock was standardised at ${standardisedM} M, not the nominal ${nominalM} M (beyond its ±${tolerancePercent} %): volumes poured by the plan give a different amount.`,
+  benchTemperatureOffPlan: (actualC: number, plannedC: number, readingPh: number, plannedReadingPh: number) =>
+    `The bench was at ${actualC} °C, not the planned ${plannedC} °C: there the meter should read pH ${readingPh.toFixed(2)} at the end point, not ${plannedReadingPh.toFixed(2)}; adjusting to the planned reading at this temperature misses the target.`,
+  readingOffPlan: (readingPh: number, predictedPh: number, bandPh: number) =>
+    `The meter reads pH ${readingPh.toFixed(2)} where pH ${predictedPh.toFixed(2)} was expected (band ±${bandPh.toFixed(2)}): the solution differs from the plan, and the next amount is worked out from the reading.`,
+  readingOffAsMade: (readingPh: number, predictedPh: number, bandPh: number) =>
+    `The recorded meter reading pH ${readingPh.toFixed(2)} differs from pH ${predictedPh.toFixed(2)}, what the recorded amounts give at the bench (band ±${bandPh.toFixed(2)}): an amount, a concentration or the meter is not as recorded.`,
+  causeStockConcentration: (effectiveM: number, statedM: number) =>
+    `Likely cause, the titrant stock: the reading fits a stock of ${effectiveM.toPrecision(3)} M rather than ${statedM} M; standardise it.`,
+  causeHydrate: (plannedForm: string, otherForm: string) =>
+    `Likely cause, the form weighed: the reading fits ${otherForm} weighed in place of ${plannedForm} (another hydrate or salt form); check the bottle's label.`,
+  causeTemperature: (fittedC: number, statedC: number) =>
+    `Likely cause, the temperature: the reading fits the solution at ${fittedC.toFixed(1)} °C rather than ${statedC} °C; read the thermometer in the solution and let it settle.`,
+  causeCalibration: (offsetPh: number, nearPh: number) =>
+    `Possible cause, the meter: an offset of ${offsetPh >= 0 ? '+' : ''}${offsetPh.toFixed(2)} pH; check it on a standard buffer near pH ${nearPh.toFixed(1)} at this temperature.`,
+  overshoot: (titrant: string, counter: string) =>
+    `The target is passed: more ${titrant} would move further away; bring it back with ${counter} (it adds salt: the ionic strength ends a little above the plan's).`,
+  benchOnTarget: (readingPh: number, tolerancePh: number) =>
+    `The meter reads pH ${readingPh.toFixed(2)}, within ±${tolerancePh} of the end point: add no more; make up to volume.`,
 } as const;
 
 export type MessageCode = keyof typeof MESSAGES;

@@ -21,6 +21,8 @@ import { MIX_HELP, mixCommand } from './mix';
 import { formatMix } from '../chem/mixing';
 import { DEMO_COMPOSITION } from './demo';
 import { toRecipeInput } from './recipeInput';
+import { asMade, benchCorrection } from '../chem/batch';
+import { toBatchInput } from './batchInput';
 import { solveComposition } from './solve';
 
 /** The package version, for --version (read from package.json beside lib/). */
@@ -43,6 +45,9 @@ Commands:
   substances [--json]                                list the substance library (a table, or JSON)
   demo [--pretty]                                    solve the demo composition (our QC lab's HEPES saline)
   calc <book.xlsx|.csv> -o <filled.xlsx|.csv> [--force]  evaluate a workbook's formulas (PROTON functions included), write values
+  record [--json '<recipe JSON>'] -o <record.xlsx>   a batch record to print and fill in: .xlsx with live checks, and a printable .html beside it
+  as-made [--json '<batch JSON>'] [--pretty]         check a batch as made: actual amounts in, concentrations, pH, conductivity, pass/fail out
+  correct [--json '<batch JSON>'] [--pretty]         what to add next at the bench, from the titrant added so far and the meter's reading
   help [command]                                     this text, or one command's fields
 
 Options: --help (any command), --version. Input JSON may also come on standard input.
@@ -86,7 +91,30 @@ values. Prints a JSON report: formulas evaluated, errors (each with its cell and
 and the deliberate #N/A cells that formulas return by design. Refuses to overwrite an
 existing output unless --force.`;
 
+const BATCH_HELP = `Usage: proton-ledger as-made [--json '<batch JSON>'] [--pretty]
+       proton-ledger correct [--json '<batch JSON>'] [--pretty]
+       proton-ledger record [--json '<recipe JSON>'] -o <record.xlsx> [--html <record.html>]
+
+A batch (JSON object; the recipe as for proton-ledger recipe):
+  recipe            the recipe the batch was planned from
+  actual            {"weighed": [{"form", "grams", "purityPercent", "lot"}], "titrantMl", "titrantConcentrationM",
+                    "finalVolumeMl", "benchTemperatureC", "meterPh", "finalPh", "conductivity25MsPerCm"}
+  tolerance         {"ph", "concentrationPercent", "conductivityPercent", "meterPh"}
+  reading           (correct) {"ph", "temperatureC", "volumeMl"}: the meter now
+  counterTitrant    (correct) {"form", "concentrationM"}: after an overshoot
+${FIELDS.filter((f) => f.scope === 'batch').map((f) => `  ${f.name.padEnd(32)} ${allowedOf(f)}; default: ${f.kind === 'number' && f.default !== undefined ? f.default : ((f as { defaultText?: string }).defaultText ?? '—')}. ${f.description}`).join('\n')}
+
+as-made prints the check (components, predictions, checks with pass/fail, warnings) and exits 1 when the batch fails.
+correct prints what to add next, a safe first portion, the end-point reading and, off the plan, the likely causes.
+record writes the .xlsx (formulas with values, print area on one A4 page) and the .html page (default: beside it);
+given a batch ({"recipe", "actual"}) instead of a recipe, it writes the record filled in with the actual values.
+
+Example (our own): proton-ledger correct --json '{"recipe": {"buffer": "tris", "targetPh": 7.5, "useTemperatureC": 4, "benchTemperatureC": 22, "concentrationMm": 50, "volumeMl": 500, "titrant": "HCl"}, "actual": {"titrantMl": 20}, "reading": {"ph": 7.35}}'`;
+
 const HELP: Readonly<Record<string, () => string>> = {
+  'as-made': () => BATCH_HELP,
+  correct: () => BATCH_HELP,
+  record: () => BATCH_HELP,
   solve: () => SOLVE_HELP,
   recipe: recipeHelp,
   calc: () => CALC_HELP,
@@ -159,6 +187,23 @@ async function batchCommand(command: 'recipe' | 'solve', args: string[], write: 
   return failed > 0 ? 1 : 0;
 }
 
+/** Writes a recipe's batch record (.xlsx and .html); the workbook libraries load only here. */
+async function recordCommand(args: string[], write: (text: string) => void): Promise<number> {
+  const xlsx = optionValue(args, '-o');
+  if (!xlsx || extname(xlsx).toLowerCase() !== '.xlsx') throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('-o', 'the record file to write, ending .xlsx'), '-o', 'a path ending .xlsx');
+  const html = optionValue(args, '--html') ?? xlsx.replace(/\.xlsx$/i, '.html');
+  const text = readText(args, write, 'record');
+  if (text === undefined) return 0;
+  // A recipe, or a batch ({"recipe", "actual"}) whose actual values fill the record in.
+  const raw = parseJson(text) as Record<string, unknown>;
+  const filled = raw !== null && typeof raw === 'object' && 'recipe' in raw ? toBatchInput(raw) : undefined;
+  const { recipe, userSubstances } = filled ?? toRecipeInput(raw);
+  const plan = planRecipe(recipe, libraryFor(userSubstances));
+  const { writeRecord } = await import('./record');
+  write(JSON.stringify(await writeRecord(recipe, plan, { xlsx, html }, version(), filled?.actuals)) + '\n');
+  return 0;
+}
+
 function printError(e: unknown, print: (value: unknown) => void): void {
   if (e instanceof ChemError) print({ error: { kind: e.kind, code: e.code, message: e.message, field: e.field, allowed: e.allowed } });
   else if ((e as NodeJS.ErrnoException)?.code === 'ENOENT') print({ error: { kind: 'invalid-input', code: 'fileNotFound', message: (e as Error).message, field: 'file' } });
@@ -198,6 +243,23 @@ export function run(args: string[], write: (text: string) => void): number {
         else print(plan);
         return 0;
       }
+      case 'as-made': {
+        const text = readText(args, write, 'as-made');
+        if (text === undefined) return 0;
+        const b = toBatchInput(parseJson(text));
+        const library = libraryFor(b.userSubstances);
+        const { composition: _composition, ...result } = asMade(planRecipe(b.recipe, library), b.actuals, b.tolerances, library);
+        print(result);
+        return result.pass ? 0 : 1;
+      }
+      case 'correct': {
+        const text = readText(args, write, 'correct');
+        if (text === undefined) return 0;
+        const b = toBatchInput(parseJson(text));
+        const library = libraryFor(b.userSubstances);
+        print(benchCorrection(planRecipe(b.recipe, library), b.bench, library));
+        return 0;
+      }
       case 'substances':
         if (args.includes('--json')) print(defaultLibrary().list());
         else write(substanceTable());
@@ -234,6 +296,14 @@ export async function main(args: string[], write: (text: string) => void): Promi
     }
     const { runCalc } = await import('./calc');
     return runCalc(args.slice(1), write);
+  }
+  if (args[0] === 'record' && !args.includes('--help')) {
+    try {
+      return await recordCommand(args, write);
+    } catch (e) {
+      printError(e, (v) => write(JSON.stringify(v) + '\n'));
+      return 2;
+    }
   }
   if ((args[0] === 'recipe' || args[0] === 'solve') && args.includes('--batch') && !args.includes('--help')) {
     try {

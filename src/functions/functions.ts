@@ -24,6 +24,8 @@ import { SHEET_MESSAGES } from './messages';
 import { libraryFor, userRowCount } from './userRange';
 import { MixInput, mixByVolumes, planMix, printedVolume, resolveShelf } from '../chem/mixing';
 import { VOLUMES_ARGUMENT, onShelf, shelfFrom, targetsFrom, volumesFrom } from './stockRange';
+import { BenchState, asMade, benchCorrection } from '../chem/batch';
+import { AS_MADE_HEADER, AS_MADE_ROWS, TITRANT_NEXT_HEADER, asMadeTable, incompleteTable, readActualsRange, titrantNextRow } from './batch';
 
 /** Most rows of the SPECIES table, header included. Excel spills only the rows a solution has; the formula engine, which sizes arrays before computing, pads to this (formulaEngine.ts). 29 species covers H⁺, OH⁻, the strong ions and several polyprotic systems. */
 export const SPECIES_TABLE_ROWS = 30;
@@ -540,6 +542,32 @@ export function mixVolumes(stocks: any[][], targets: any[][], volumeMl: any, tar
 }
 
 /**
+ * The as-made check of a batch: from the actual amounts (grams of each form with the lot's purity, titrant mL at its standardised strength, the volume made up to, the bench temperature, readings), what was made, against the plan, with pass/fail. Spills one row per check (at most 24) × 6 columns (check, planned, as made, deviation, tolerance, result); the last row is the batch's verdict.
+ * @customfunction AS.MADE AS.MADE
+ * @helpurl https://localhost:3000/help/functions.html#as-made
+ * @param buffer Buffer system (e.g. "HEPES", "tris", "phosphate").
+ * @param targetPh pH wanted at the temperature of use.
+ * @param concentrationMm Buffer concentration in the final solution, mM.
+ * @param volumeMl Final volume, mL.
+ * @param actuals Two or three columns: a form's name, grams weighed and the lot's purity; or a field and its value (e.g. "actual.titrantMl", 5.6; "tolerance.ph", 0.05); the fields are listed on the help page.
+ * @param [useTemperatureC] Temperature of use, °C (blank: 25).
+ * @param [salts] Two columns: salt form and mM (e.g. "NaCl", 150).
+ * @param [options] Two columns: option name and value, as for RECIPE.
+ * @param [userSubstances] Range of your own substances.
+ * @returns The checks, one per row, and the verdict.
+ */
+export function asMadeCheck(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, actuals: any[][], useTemperatureC?: any, salts?: any[][], options?: any[][], userSubstances?: any[][]): any[][] {
+  const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
+  return memoised('AS.MADE', [...args, actuals], () => {
+    const plan = recipePlan(args, true);
+    const read = readActualsRange(actuals);
+    const incomplete = incompleteTable(plan, read);
+    if (incomplete) return incomplete;
+    return asMadeTable(asMade(plan, { ...read.actuals, weighed: read.weighed }, read.tolerances, libraryFor(userSubstances)));
+  });
+}
+
+/**
  * Predicted pH of stocks mixed by volume and made up to a final volume with water.
  * @customfunction MIX.PH MIX.PH
  * @helpurl https://localhost:3000/help/functions.html#mix-ph
@@ -547,7 +575,7 @@ export function mixVolumes(stocks: any[][], targets: any[][], volumeMl: any, tar
  * @param volumes Two columns: stock name and mL.
  * @param finalVolumeMl Final volume, mL.
  * @param [temperatureC] Temperature, °C (blank: 25).
- * @param [activityModel] "davies" (default), "ideal" or "bates-guggenheim".
+ * @param [activityModel] "pitzer" (blank), "davies", "ideal" or "bates-guggenheim".
  * @param [userSubstances] Range of your own substances.
  * @returns pH.
  */
@@ -562,6 +590,39 @@ export function mixPh(stocks: any[][], volumes: any[][], finalVolumeMl: any, tem
     const takenMl = list.reduce((sum, v) => sum + v.millilitres, 0);
     if (takenMl > finalMl) throw new ChemError('infeasible-target', 'stocksDoNotFit', MESSAGES.stocksDoNotFit(takenMl, finalMl, list.map((v) => `${v.stock} ${v.millilitres} mL`).join(', ')), VOLUMES_ARGUMENT, `at most ${finalMl} mL in all`);
     return solvePh(mixByVolumes(shelf, list, finalMl, s.temperatureC, s.model).composition);
+  });
+}
+
+/**
+ * What to add next at the bench: from the recipe, the titrant added so far and what the meter reads now, how much more titrant (or which counter-titrant, and how much) reaches the end point, with a safe first portion; off the plan's band it says so, works from the reading and names the likely causes. Spills 1 row × 6 columns (add, next mL, first portion mL, end-point reading, reading expected now, note).
+ * @customfunction TITRANT.NEXT TITRANT.NEXT
+ * @helpurl https://localhost:3000/help/functions.html#titrant-next
+ * @param buffer Buffer system (e.g. "HEPES", "tris", "phosphate").
+ * @param targetPh pH wanted at the temperature of use.
+ * @param concentrationMm Buffer concentration in the final solution, mM.
+ * @param volumeMl Final volume, mL.
+ * @param titrantAddedMl Titrant added so far, mL (all portions together).
+ * @param readingPh What the meter reads now.
+ * @param [useTemperatureC] Temperature of use, °C (blank: 25).
+ * @param [salts] Two columns: salt form and mM (e.g. "NaCl", 150).
+ * @param [options] Two columns: option name and value, as for RECIPE.
+ * @param [actuals] Two or three columns, as for AS.MADE: forms weighed (blank: as planned), "reading.temperatureC", "reading.volumeMl", "actual.titrantConcentrationM", "counterTitrant.form".
+ * @param [userSubstances] Range of your own substances.
+ * @returns One row: what to add, how much, the first portion, and the readings.
+ */
+export function titrantNext(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, titrantAddedMl: any, readingPh: any, useTemperatureC?: any, salts?: any[][], options?: any[][], actuals?: any[][], userSubstances?: any[][]): any[][] {
+  const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
+  return memoised('TITRANT.NEXT', [...args, titrantAddedMl, readingPh, actuals], () => {
+    const plan = recipePlan(args, true);
+    const read = readActualsRange(actuals);
+    const state: BenchState = {
+      ...read.bench,
+      ...(read.actuals.titrantConcentrationM === undefined ? {} : { titrantConcentrationM: read.actuals.titrantConcentrationM }),
+      ...(read.weighed.length > 0 ? { weighed: read.weighed } : {}),
+      titrantMl: toField('actual.titrantMl', titrantAddedMl, 'titrantAddedMl'),
+      readingPh: toField('reading.ph', readingPh, 'readingPh'),
+    };
+    return [titrantNextRow(benchCorrection(plan, state, libraryFor(userSubstances)))];
   });
 }
 
@@ -591,6 +652,10 @@ export function spillShape(id: string, argumentRows: readonly number[]): SpillSh
       return { rows: 1, columns: RECIPE_ROW_HEADER.length };
     case 'MIX.VOLUMES':
       return { rows: 1 + (argumentRows[1] ?? 0) + 4, columns: MIX_TABLE_HEADER.length };
+    case 'AS.MADE':
+      return { rows: AS_MADE_ROWS, columns: AS_MADE_HEADER.length };
+    case 'TITRANT.NEXT':
+      return { rows: 1, columns: TITRANT_NEXT_HEADER.length };
     case 'SUBSTANCES':
       return { rows: listLength('substances', new Array(argumentRows[0] ?? 0)), columns: 1 };
     case 'FORMS':

@@ -17,6 +17,7 @@ import { openWorkbookFile, OpenRefused } from './openFile';
 import { Autosave, clearSaved, readSaved, SaveState } from './storage';
 import { PreviewWorkbook } from './workbook';
 import { workbookToXlsx, xlsxFileName } from './xlsx';
+import { mountPrintView } from './recordPrintView';
 
 /** Rows the preview's engine allows (HyperFormula's default). */
 const MAX_ROWS = 40000;
@@ -103,6 +104,8 @@ function start(): void {
     autosave.resume();
     autosave.follow(next);
   };
+
+  mountPrintView(document.querySelector('.topbar-actions') as HTMLElement, () => book, () => grid.activeSheet());
 
   const buttons: Record<string, () => void> = {
     'edit-undo': () => grid.undo(),

@@ -8,6 +8,7 @@ import type { WorkbookPort } from '../workbook/port';
 import { defaultInput, FieldName, FormInput } from './form';
 import { buildRecipeTable, mergedSettings, valuesCopy } from './writer';
 import { mountMixSection } from './mixSection';
+import { mountBatchRecordBox } from './batchRecordBox';
 
 interface FieldSpec {
   readonly name: FieldName;
@@ -179,6 +180,7 @@ export async function mountPane(root: HTMLElement, options: PaneOptions): Promis
   copyButton.type = 'button';
 
   mountMixSection(make('section', {}, root), options);
+  mountBatchRecordBox(root, { port: options.port, version: options.version, ...(options.onWritten ? { onWritten: options.onWritten } : {}) });
 
   const cautions = make('section', { className: 'pane-cautions' }, root);
   make('h3', { text: 'Before you weigh' }, cautions);

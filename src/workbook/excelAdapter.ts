@@ -2,7 +2,7 @@
  * The workbook port over Office.js (Excel). All Office.js the pane needs lives here.
  * Each method is one Excel.run batch: queue the writes, one context.sync().
  */
-import { CellBlock, CellStyle, CellValue, ChartSpec, PaneSettings, RangeRef, Selection, WorkbookPort, literal, rangeAddress, uniqueName } from './port';
+import { CellBlock, CellStyle, CellValue, ChartSpec, PaneSettings, PrintLayout, RangeRef, Selection, WorkbookPort, literal, rangeAddress, uniqueName } from './port';
 
 /** Document setting under which the pane keeps its settings (Office.context.document.settings). */
 export const SETTINGS_KEY = 'protonLedger.settings';
@@ -42,6 +42,19 @@ export class ExcelAdapter implements WorkbookPort {
       sheets.load('items/name');
       await context.sync();
       return sheets.items.map((s) => s.name);
+    });
+  }
+
+  /** Print area, orientation and fit to one page (page layout is ExcelApi 1.9; on older hosts the sheet prints with Excel's defaults). */
+  async setPrintLayout(sheet: string, layout: PrintLayout): Promise<void> {
+    const supported = typeof Office !== 'undefined' && Office.context?.requirements?.isSetSupported?.('ExcelApi', '1.9');
+    if (!supported) return;
+    await this.run(async (context) => {
+      const page = context.workbook.worksheets.getItem(sheet).pageLayout;
+      page.setPrintArea(rangeAddress(layout.area));
+      page.orientation = layout.orientation === 'landscape' ? 'Landscape' : 'Portrait';
+      if (layout.onePage) page.zoom = { horizontalFitToPages: 1, verticalFitToPages: 1 };
+      await context.sync();
     });
   }
 

@@ -101,6 +101,15 @@ export interface WorkbookPort {
   activateSheet(sheet: string): Promise<void>;
   loadSettings(): Promise<Partial<PaneSettings>>;
   saveSettings(settings: PaneSettings): Promise<void>;
+  /** Sets what prints and how (optional: a host without page setup prints its own way). */
+  setPrintLayout?(sheet: string, layout: PrintLayout): Promise<void>;
+}
+
+/** How a sheet prints: the area, on one page when asked, and the orientation. */
+export interface PrintLayout {
+  readonly area: RangeRef;
+  readonly onePage: boolean;
+  readonly orientation: 'portrait' | 'landscape';
 }
 
 /** Excel's sheet-name limit (characters). */

@@ -3,7 +3,8 @@
  * formats and charts). Writes go through the same formulas Excel gets.
  */
 import type { PreviewWorkbook } from '../preview/workbook';
-import { CellBlock, CellValue, ChartSpec, PaneSettings, RangeRef, Selection, WorkbookPort, literal, uniqueName } from './port';
+import { rememberPrintLayout } from '../preview/printArea';
+import { CellBlock, CellValue, ChartSpec, PaneSettings, PrintLayout, RangeRef, Selection, WorkbookPort, literal, uniqueName } from './port';
 
 /** The grid's current selection, supplied by the page. */
 export type SelectionSource = () => Selection;
@@ -77,5 +78,9 @@ export class PreviewAdapter implements WorkbookPort {
 
   async saveSettings(settings: PaneSettings): Promise<void> {
     this.book.saveSettings(settings);
+  }
+
+  async setPrintLayout(sheet: string, layout: PrintLayout): Promise<void> {
+    rememberPrintLayout(this.book, sheet, layout);
   }
 }

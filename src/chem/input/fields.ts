@@ -23,8 +23,8 @@ interface FieldBase {
   readonly description: string;
   /** An example of our own, as a user would type it. */
   readonly example: string;
-  /** Where the field can be given: the recipe planner, or a worksheet argument only. */
-  readonly scope: 'recipe' | 'argument';
+  /** Where the field can be given: the recipe planner, a worksheet argument only, or a batch's actuals and checks (as-made check, bench correction). */
+  readonly scope: 'recipe' | 'argument' | 'batch';
 }
 
 /** A number in a unit, with its range. */
@@ -194,6 +194,33 @@ export const FIELDS: readonly Field[] = [
     description: 'Smallest volume your pipettes measure accurately; a stock needed in less is flagged with the dilution that fixes it.', example: '2 µL',
   },
   { kind: 'purity', scope: 'argument', name: 'purity', label: 'Purity', min: 1, max: 100, description: 'Purity (assay) of the form weighed.', example: '99.5%' },
+  // A batch as made: actual amounts, readings and the tolerances it is checked against (docs/batch.md).
+  // Default tolerances are common practice for a buffer's release checks (pH ± 0.05, weighed amounts ± 2 %,
+  // conductivity ± 5 %) and for a two-point calibrated bench meter (± 0.03 pH), not from a published source.
+  { kind: 'number', scope: 'batch', name: 'actual.grams', required: true, label: 'Actual mass (g)', dimension: 'mass', unit: 'g', min: 0, max: 1e6, description: 'Mass of a form actually weighed, as the balance showed it.', example: '2.98 g' },
+  { kind: 'purity', scope: 'batch', name: 'actual.purityPercent', label: 'Lot purity (%)', min: 1, max: 100, description: 'Purity (assay) of the lot actually weighed, from its certificate (default: the purity planned).', example: '99.2%' },
+  { kind: 'number', scope: 'batch', name: 'actual.titrantMl', label: 'Titrant added (mL)', dimension: 'volume', unit: 'mL', min: 0, max: MAX_VOLUME_ML, default: 0, description: 'Titrant actually added, all portions together.', example: '3.45 mL' },
+  {
+    kind: 'number', scope: 'batch', name: 'actual.titrantConcentrationM', label: 'Titrant standardised (M)', dimension: 'concentration', unit: 'M', min: MIN_TITRANT_M, max: MAX_TITRANT_M, defaultText: 'the nominal stock of the plan',
+    description: 'Concentration of the titrant stock as standardised (titrated against a primary standard).', example: '0.987 M',
+  },
+  { kind: 'number', scope: 'batch', name: 'actual.finalVolumeMl', label: 'Made up to (mL)', dimension: 'volume', unit: 'mL', min: 0.001, max: MAX_VOLUME_ML, defaultText: 'the planned volume', description: 'Volume the batch was made up to.', example: '500 mL' },
+  { ...TEMPERATURE, scope: 'batch', name: 'actual.benchTemperatureC', label: 'Bench at (°C)', defaultText: 'the planned bench temperature', description: 'Temperature of the solution when the pH was adjusted.', example: '23.5 °C' },
+  { kind: 'number', scope: 'batch', name: 'actual.meterPh', label: 'Meter read (pH)', dimension: 'pH', unit: 'pH', min: MIN_TARGET_PH, max: MAX_TARGET_PH, description: 'What the meter read at the end of the adjustment, at the bench temperature.', example: '7.62' },
+  { kind: 'number', scope: 'batch', name: 'actual.finalPh', label: 'Final pH at use', dimension: 'pH', unit: 'pH', min: MIN_TARGET_PH, max: MAX_TARGET_PH, description: 'pH of the finished batch measured at the temperature of use.', example: '7.41' },
+  { kind: 'number', scope: 'batch', name: 'actual.conductivity25MsPerCm', label: 'Conductivity at 25 °C (mS/cm)', dimension: 'conductivity', unit: 'mS/cm', min: 0, max: 1000, description: 'Conductivity of the finished batch at 25 °C (or temperature-compensated to 25 °C).', example: '15.2 mS/cm' },
+  { kind: 'number', scope: 'batch', name: 'tolerance.ph', label: 'pH tolerance (±)', dimension: 'pH', unit: 'pH', min: 0.001, max: 2, default: 0.05, description: 'Accepted difference of the pH at use from the target.', example: '0.05' },
+  { kind: 'number', scope: 'batch', name: 'tolerance.concentrationPercent', label: 'Amount tolerance (± %)', dimension: 'percent', unit: '%', min: 0.01, max: 50, default: 2, description: 'Accepted relative difference of each weighed component’s concentration from the plan.', example: '2 %' },
+  { kind: 'number', scope: 'batch', name: 'tolerance.conductivityPercent', label: 'Conductivity tolerance (± %)', dimension: 'percent', unit: '%', min: 0.01, max: 100, default: 5, description: 'Accepted relative difference of the conductivity at 25 °C from the plan.', example: '5 %' },
+  { kind: 'number', scope: 'batch', name: 'tolerance.meterPh', label: 'Meter tolerance (± pH)', dimension: 'pH', unit: 'pH', min: 0, max: 1, default: 0.03, description: 'How far a calibrated bench meter’s reading may stray (adds to the reading’s band).', example: '0.03' },
+  { kind: 'number', scope: 'batch', name: 'reading.ph', required: true, label: 'Meter reads (pH)', dimension: 'pH', unit: 'pH', min: MIN_TARGET_PH, max: MAX_TARGET_PH, description: 'What the meter reads now, at the bench.', example: '7.21' },
+  { ...TEMPERATURE, scope: 'batch', name: 'reading.temperatureC', label: 'Reading at (°C)', defaultText: 'the planned bench temperature', description: 'Temperature of the solution as the meter reads it now.', example: '22 °C' },
+  { kind: 'number', scope: 'batch', name: 'reading.volumeMl', label: 'Volume now (mL)', dimension: 'volume', unit: 'mL', min: 0.001, max: MAX_VOLUME_ML, defaultText: 'the planned part volume', description: 'Volume of the solution as it is now (titrant included).', example: '400 mL' },
+  { kind: 'text', scope: 'batch', name: 'counterTitrant.form', label: 'Counter-titrant', defaultText: 'HCl after a base, NaOH after an acid', description: 'What brings the pH back after an overshoot.', example: 'HCl' },
+  {
+    kind: 'number', scope: 'batch', name: 'counterTitrant.concentrationM', label: 'Counter-titrant stock (M)', dimension: 'concentration', unit: 'M', min: MIN_TITRANT_M, max: MAX_TITRANT_M, defaultText: 'the titrant stock’s strength',
+    description: 'Concentration of the counter-titrant stock.', example: '0.1 M',
+  },
 ];
 
 const BY_NAME = new Map<string, Field>(FIELDS.map((f) => [f.name, f]));
@@ -423,4 +450,17 @@ export function setFieldPath(target: Record<string, unknown>, path: string, valu
     at = at[part] as Record<string, unknown>;
   }
   at[parts[parts.length - 1]] = value;
+}
+
+const BATCH_KEYS = new Map<string, Field>();
+for (const f of FIELDS) {
+  // Per-form fields (grams, purity) are a form's row, not a named row of their own.
+  if (f.scope !== 'batch' || f.name === 'actual.grams' || f.name === 'actual.purityPercent') continue;
+  BATCH_KEYS.set(optionKey(f.name), f);
+  BATCH_KEYS.set(optionKey(f.label), f);
+}
+
+/** The batch field a row name (a field name or its label) stands for, or undefined (then the row names a form weighed). */
+export function batchFieldOf(written: string): Field | undefined {
+  return BATCH_KEYS.get(optionKey(written));
 }

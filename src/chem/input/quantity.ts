@@ -18,7 +18,7 @@
 import { ChemError, MESSAGES } from '../errors';
 
 /** What a number measures; each dimension has its own units. */
-export type Dimension = 'pH' | 'temperature' | 'concentration' | 'volume' | 'fraction' | 'percent' | 'osmolarity' | 'osmolality' | 'conductivity' | 'count';
+export type Dimension = 'pH' | 'temperature' | 'concentration' | 'volume' | 'fraction' | 'percent' | 'osmolarity' | 'osmolality' | 'conductivity' | 'count' | 'mass';
 
 /** Longest text read as one number with its unit: no real entry needs more, and it bounds the work. */
 export const MAX_NUMBER_TEXT = 64;
@@ -55,6 +55,7 @@ const UNITS: Readonly<Record<Dimension, Readonly<Record<string, number>>>> = {
   osmolality: { 'mOsm/kg': 1, 'Osm/kg': 1000 },
   conductivity: { 'mS/cm': 1, 'µS/cm': 1e-3, 'μS/cm': 1e-3, 'uS/cm': 1e-3, 'S/m': 10, 'mS/m': 0.01 },
   count: { '×': 1, x: 1 },
+  mass: { g: 1, mg: 1e-3, kg: 1000 },
 };
 
 /** The base unit of each dimension, as shown to users. */
@@ -69,6 +70,7 @@ export const BASE_UNIT: Readonly<Record<Dimension, string>> = {
   osmolality: 'mOsm/kg',
   conductivity: 'mS/cm',
   count: '×',
+  mass: 'g',
 };
 
 /** The units a dimension accepts (every spelling). */
@@ -88,6 +90,7 @@ const SHOWN_UNITS: Readonly<Record<Dimension, readonly string[]>> = {
   osmolality: ['mOsm/kg', 'Osm/kg'],
   conductivity: ['mS/cm', 'µS/cm', 'S/m'],
   count: ['×'],
+  mass: ['g', 'mg', 'kg'],
 };
 
 /** An example of a typed number of each dimension, for messages. */
@@ -102,6 +105,7 @@ const EXAMPLE: Readonly<Record<Dimension, string>> = {
   osmolality: '"290 mOsm/kg"',
   conductivity: '"15 mS/cm"',
   count: '"10"',
+  mass: '"12.5 g" or "350 mg"',
 };
 
 /** The units shown for a dimension in messages and help. */
