@@ -24,7 +24,8 @@ import { closeSync, fsyncSync, linkSync, lstatSync, openSync, readFileSync, real
 import { basename, dirname, extname, join, resolve } from 'path';
 import ExcelJS from 'exceljs';
 import { AlwaysSparse, DetailedCellError, HyperFormula } from 'hyperformula';
-import { createFormulaEngine, toEngineFormula } from '../functions/formulaEngine';
+import { createFormulaEngine } from '../functions/formulaEngine';
+import { engineFormula } from '../functions/formulaText';
 import { literal } from '../workbook/port';
 import { CALC_MESSAGES } from './calcMessages';
 import { InputRefused, MAX_CELL_CHARS, MAX_CELLS, MAX_COLUMNS, MAX_FILE_BYTES, MAX_ROWS, RangeBudget, checkFormula, checkWorkbookPackage } from './calcLimits';
@@ -170,7 +171,7 @@ function cellInput(cell: ExcelJS.Cell, where: string): unknown {
       const formula = cell.formula;
       if (!formula) return null;
       checkFormula(formula, where);
-      return `=${toEngineFormula(formula.replace(/^=/, ''))}`;
+      return `=${engineFormula(formula.replace(/^=/, ''))}`;
     }
     if ('richText' in v) return engineText(v.richText.map((r) => r.text).join(''));
     if ('error' in v) return v.error;
@@ -322,7 +323,7 @@ const PLAIN_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
 /** A CSV field for the engine: "=…" is a formula, "'…" literal text, a plain number a number, anything else text. */
 function csvInput(field: string): unknown {
   if (field === '') return null;
-  if (field.startsWith('=')) return `=${toEngineFormula(field.slice(1))}`;
+  if (field.startsWith('=')) return `=${engineFormula(field.slice(1))}`;
   if (field.startsWith("'")) return engineText(field.slice(1));
   if (PLAIN_NUMBER.test(field.trim())) return Number(field);
   return engineText(field);

@@ -110,3 +110,22 @@ describe('calc command', () => {
     expect(text).toMatch(/calc <book\.xlsx\|\.csv>/);
   });
 });
+
+describe('calc reads the forms Excel writes that the engine would refuse', () => {
+  test('an upper-case exponent and doubled quotes inside a string compute as in Excel (the one normaliser the preview uses too)', async () => {
+    const input = join(dir, 'excel-forms.xlsx');
+    const wb = new ExcelJS.Workbook();
+    const ws = wb.addWorksheet('Forms');
+    ws.getCell('A1').value = { formula: '6.022E+23/1E+23' } as ExcelJS.CellFormulaValue;
+    ws.getCell('A2').value = { formula: 'LEN("say ""pH""")' } as ExcelJS.CellFormulaValue;
+    await wb.xlsx.writeFile(input);
+    const output = join(dir, 'excel-forms-filled.xlsx');
+    const { code, out } = await run(['calc', input, '-o', output]);
+    expect(code).toBe(0);
+    expect(out.errors).toEqual([]);
+    const back = new ExcelJS.Workbook();
+    await back.xlsx.readFile(output);
+    expect(back.getWorksheet('Forms')!.getCell('A1').value).toBeCloseTo(6.022, 12);
+    expect(back.getWorksheet('Forms')!.getCell('A2').value).toBe(8); // say "pH"
+  });
+});
