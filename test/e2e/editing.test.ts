@@ -72,9 +72,10 @@ describeBrowser('editing the preview workbook (Chromium)', () => {
     expect(await page.textContent('#name-box')).toBe('A1:B3');
     const from = (await cell('C2').boundingBox())!;
     const to = (await cell('D5').boundingBox())!;
-    await page.mouse.move(from.x + 5, from.y + 5);
+    // Cell centres, not corners: a pixel or two of layout drift under load must not land on a neighbour.
+    await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2);
     await page.mouse.down();
-    await page.mouse.move(to.x + 5, to.y + 5, { steps: 4 });
+    await page.mouse.move(to.x + to.width / 2, to.y + to.height / 2, { steps: 4 });
     await page.mouse.up();
     expect(await page.textContent('#name-box')).toBe('C2:D5');
     expect(await page.locator('#grid-scroll td.in-range').count()).toBe(8);
