@@ -339,9 +339,9 @@ export const RECIPE_TABLE_HEADER = ['section', 'item', 'value', 'unit'] as const
  * The plan a RECIPE or RECIPE.ROW call asks for, from its arguments in the order both
  * declare them (one list, so the two functions cannot drift apart).
  */
-function recipePlan(args: readonly any[], twoFormsAllowed: boolean): RecipePlan {
+function recipePlan(args: readonly any[]): RecipePlan {
   const [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances] = args;
-  return planRecipe(recipeInput(buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, twoFormsAllowed), libraryFor(userSubstances));
+  return planRecipe(recipeInput(buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options), libraryFor(userSubstances));
 }
 
 /**
@@ -350,7 +350,7 @@ function recipePlan(args: readonly any[], twoFormsAllowed: boolean): RecipePlan 
  * an options range for everything else. Every value is read by its field's one declaration
  * (src/chem/input), here and in the planner alike.
  */
-function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC: any, salts: any, options: any, twoFormsAllowed: boolean): RecipeInput {
+function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC: any, salts: any, options: any): RecipeInput {
   const { input: chosen, written } = recipeOptions(options);
   if (!isBlank(useTemperatureC) && written.has('useTemperatureC')) throw new ChemError('invalid-input', 'givenTwice', MESSAGES.givenTwice('useTemperatureC'), 'useTemperatureC', 'the argument or the option, once');
   const saltRows = isBlankRange(salts) ? [] : toRange(salts).filter((row) => !row.every(isBlank));
@@ -372,19 +372,17 @@ function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl:
           }),
         }),
   };
-  // "acid form + base form" as the form weighed is the two-forms route (RECIPE only).
+  // "acid form + base form" as the form weighed is the two-forms route.
   const pair = typeof input.form === 'string' ? input.form.split(/\s+\+\s+/) : undefined;
   if (pair && pair.length === 2 && (input.route === undefined || input.route === 'two-forms')) {
-    if (!twoFormsAllowed) throw invalid('oneFormOnly', written.get('form') ?? 'form', SHEET_MESSAGES.oneFormOnly(written.get('form') ?? 'form', input.form as string));
     const { form: _form, ...rest } = input;
     return { ...rest, route: 'two-forms', acidForm: pair[0], baseForm: pair[1] };
   }
-  if (!twoFormsAllowed && input.route === 'two-forms') throw invalid('oneFormOnly', written.get('route') ?? 'route', SHEET_MESSAGES.oneFormOnly(written.get('route') ?? 'route', 'two-forms'));
   return input;
 }
 
 /**
- * One row of a recipe table: grams of the form, titrant mL with its band, what the meter must read at the bench, pH at use, capacity, ionic strength, ideal osmolarity and warnings. Spills 1 row × 11 columns.
+ * One row of a recipe table on any route: grams of the form (of the acid and the base form, weighing two), titrant mL with its band, what the meter must read at the bench (of the stock itself, making a stock), pH at use, capacity, ionic strength, ideal osmolarity, grams of a salt added to a target, stock per batch and warnings. Spills 1 row × 14 columns.
  * @customfunction RECIPE.ROW RECIPE.ROW
  * @helpurl https://localhost:3000/help/functions.html#recipe-row
  * @param buffer Buffer system (e.g. "HEPES", "tris", "phosphate").
@@ -400,7 +398,7 @@ function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl:
 export function recipeRow(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC?: any, salts?: any[][], options?: any[][], userSubstances?: any[][]): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('RECIPE.ROW', args, () => {
-    return [recipeRowValues(recipePlan(args, false))];
+    return [recipeRowValues(recipePlan(args))];
   });
 }
 
@@ -421,7 +419,7 @@ export function recipeRow(buffer: any, targetPh: any, concentrationMm: any, volu
 export function recipe(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC?: any, salts?: any[][], options?: any[][], userSubstances?: any[][]): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('RECIPE', args, () => {
-    const plan = recipePlan(args, true);
+    const plan = recipePlan(args);
     const p = plan.predictions;
     const rows: (number | string)[][] = [[...RECIPE_TABLE_HEADER]];
     rows.push(['recipe', `${plan.buffer}, ${plan.concentrationMm} mM, pH ${plan.targetPh} at ${p.useTemperatureC} °C`, plan.volumeMl, 'mL']);

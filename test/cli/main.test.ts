@@ -178,7 +178,7 @@ describe('proton-ledger help, version and batches', () => {
     expect(rows[2].error).toMatchObject({ kind: 'infeasible-target', code: 'unreachablePh' });
     expect(rows[3]['titrant (mL)']).toBeGreaterThan(0);
     const csv = await cli(['recipe', '--batch', input]);
-    expect(csv.text.split('\n')[0]).toMatch(/^row,form \(g\),titrant \(mL\)/);
+    expect(csv.text.split('\n')[0]).toMatch(/^row,form \(g\),base form \(g\),titrant \(mL\)/);
   });
 
   it('writes a batch as .xlsx, and solves a JSON-lines batch of compositions', async () => {

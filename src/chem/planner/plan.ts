@@ -67,7 +67,7 @@ const DPH_DT_STEP_C = 0.5;
 interface RouteResult {
   readonly composition: Composition;
   /** Forms weighed with their concentrations in the solution made, mol/L. */
-  readonly weighed: readonly { readonly role: RecipeComponent['role']; readonly form: LibraryForm; readonly concentrationM: number }[];
+  readonly weighed: readonly { readonly role: RecipeComponent['role']; readonly form: LibraryForm; readonly concentrationM: number; readonly toTarget?: true }[];
   readonly titrant?: {
     readonly form: LibraryForm;
     readonly titrant: Titrant;
@@ -342,8 +342,8 @@ function baseComposition(s: Settled, items: readonly { form: LibraryForm; concen
 }
 
 function saltComponents(s: Settled, saltTargetM: number): RouteResult['weighed'] {
-  const salts: { role: RecipeComponent['role']; form: LibraryForm; concentrationM: number }[] = s.salts.map((x) => ({ role: 'salt', ...x }));
-  if (saltTargetM > 0 && s.saltTarget) salts.push({ role: 'salt', form: s.saltTarget.form, concentrationM: saltTargetM });
+  const salts: RouteResult['weighed'][number][] = s.salts.map((x) => ({ role: 'salt', ...x }));
+  if (saltTargetM > 0 && s.saltTarget) salts.push({ role: 'salt', form: s.saltTarget.form, concentrationM: saltTargetM, toTarget: true });
   return salts;
 }
 
@@ -584,6 +584,7 @@ function componentsOf(s: Settled, made: RouteResult, volumeL: number, titration:
       concentrationMm: w.concentrationM * 1000,
       grams: (w.concentrationM * volumeL * w.form.molarMass) / (purity / 100),
       purityPercent: purity,
+      ...(w.toTarget ? { toTarget: true as const } : {}),
     };
   });
   if (titration && made.titrant) {

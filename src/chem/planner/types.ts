@@ -106,6 +106,8 @@ export interface RecipeComponent {
   /** Volume to measure, mL. */
   readonly millilitres?: number;
   readonly purityPercent?: number;
+  /** A salt whose amount the planner found to reach the salt target. */
+  readonly toTarget?: true;
 }
 
 /** The titration part of a recipe. */
