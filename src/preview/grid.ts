@@ -216,7 +216,8 @@ export class Grid {
           if (typeof value === 'string' && text !== '' && meta?.style !== 'header') {
             // Text runs over empty cells to its right and stops at the first one holding a value, as in Excel.
             let px = this.columnPx(c) - CELL_PADDING_PX;
-            for (let k = c + 1; k < cols; k++) {
+            // A warning or a protocol's text wraps within its own column instead (the charts sit to its right).
+            for (let k = c + 1; meta?.style !== 'warning' && meta?.style !== 'text' && k < cols; k++) {
               const next = k < dims.cols ? this.book.value(this.sheet, r, k) : null;
               if (next !== null && next !== '') break;
               px += this.columnPx(k);

@@ -30,7 +30,13 @@ function start(): void {
   const grid = new Grid(book, document.body);
   const port = new PreviewAdapter(book, () => grid.selection(), (sheet) => grid.showSheet(sheet));
   const paneRoot = document.getElementById('pane-root') as HTMLElement;
-  void mountPane(paneRoot, { port, version: VERSION, onWritten: (sheet) => grid.showSheet(sheet) });
+  const showPane = document.getElementById('show-pane') as HTMLButtonElement;
+  const setPaneHidden = (hidden: boolean) => {
+    paneRoot.hidden = hidden;
+    showPane.hidden = !hidden;
+  };
+  showPane.addEventListener('click', () => setPaneHidden(false));
+  void mountPane(paneRoot, { port, version: VERSION, onWritten: (sheet) => grid.showSheet(sheet), onHide: () => setPaneHidden(true) });
 
   const status = document.getElementById('page-status') as HTMLElement;
   const download = document.getElementById('download-xlsx') as HTMLButtonElement;

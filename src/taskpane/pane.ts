@@ -278,6 +278,9 @@ export async function mountPane(root: HTMLElement, options: PaneOptions): Promis
     build.disabled = true;
     drop.disabled = true;
     cancel.hidden = false;
+    // Indeterminate until the first rows are planned.
+    progress.hidden = false;
+    progress.removeAttribute('value');
     status.textContent = 'Checking…';
     status.className = 'status';
     void buildRecipeTable(options.port, read(), {

@@ -10,6 +10,7 @@ import { ChemError } from '../chem';
 import { planRecipe } from '../chem/planner';
 import type { RecipeInput, RecipePlan } from '../chem/planner';
 import type { SubstanceLibrary } from '../chem/library';
+import { RECIPE_TABLE_ROWS } from '../functions/functions';
 import { recipeOptions } from '../functions/recipeOptions';
 import { CellBlock, cellAddress, quoteSheet } from '../workbook/port';
 import type { TableRequest } from './form';
@@ -117,7 +118,7 @@ export function protocolBlocks(tableSheet: string, rowCount: number, rowNumber: 
         [{ value: 'Type another row number to see its protocol. Every line is one live PROTON.RECIPE formula over that row and the table’s settings.', style: 'note' }],
         [{ value: 'Table row', style: 'label' }, { value: rowNumber, style: 'input', numberFormat: '0' }, { value: `of ${rowCount}`, style: 'note' }],
         [
-          { value: 'pH, °C, mM, mL', style: 'label' },
+          { value: 'Row inputs', style: 'label' },
           { formula: `=${r.targetPh}`, numberFormat: '0.00', style: 'result' },
           { formula: `=${r.useTemperatureC}`, numberFormat: '0.0', style: 'result' },
           { formula: `=${r.concentrationMm}`, numberFormat: '0.0', style: 'result' },
@@ -125,9 +126,18 @@ export function protocolBlocks(tableSheet: string, rowCount: number, rowNumber: 
         ],
       ],
     },
-    { row: PROTOCOL_FIRST_ROW, col: 0, cells: [[{ formula: F.recipeProtocol(settings, r), style: 'result', numberFormat: '0.000' }]] },
+    {
+      row: PROTOCOL_FIRST_ROW,
+      col: 0,
+      // The spill's cells carry formats only (a value would block it): the value column wraps its long steps and warnings.
+      cells: Array.from({ length: RECIPE_TABLE_ROWS }, (_, i) => [
+        i === 0 ? { formula: F.recipeProtocol(settings, r), style: 'label' as const } : { style: 'label' as const },
+        { style: 'label' as const },
+        { style: 'text' as const, numberFormat: '0.000' },
+      ]),
+    },
   ];
 }
 
 /** Widths of the protocol sheet's columns (section, item, value or step text, unit). */
-export const PROTOCOL_WIDTHS = [12, 40, 90, 10] as const;
+export const PROTOCOL_WIDTHS = [11, 44, 70, 10] as const;

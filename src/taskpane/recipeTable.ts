@@ -274,7 +274,7 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
     {
       row: LAYOUT.settingsRow,
       col: 0,
-      cells: [[label('Settings (rows Route to pKa uncertainty are the rows’ options)', 'subtitle')], ...SETTING_ROWS.map((name) => [label(name), values.get(name)!])],
+      cells: [[label('Settings', 'subtitle')], ...SETTING_ROWS.map((name) => [label(name), values.get(name)!])],
     },
     { row: LAYOUT.tableHeaderRow, col: 0, cells: [columnsFor(request.route).map((h) => label(h, 'header'))] },
   ];
@@ -307,7 +307,7 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
     const cells: CellWrite[] = [input(tr.targetPh, '0.00'), input(tr.useTemperatureC, '0.0'), input(tr.concentrationMm, '0.0'), input(request.volumeMl, '0.0'), ...spill];
     return { row, col: 0, cells: [cells] };
   });
-  const base = { baseName: sheetBaseName(request), head, rows, columnWidths: [21, 12, 16, 11, 11, 11, 10, 10, 10, 13, 11, 13, 13, 11, 12, 11, 11, 60, 2] };
+  const base = { baseName: sheetBaseName(request), head, rows, columnWidths: [21, 16, 12, 22, 11, 11, 10, 10, 10, 13, 11, 13, 13, 11, 12, 11, 11, 60, 2] };
   // Curves and charts follow the titration of the first row: only the titrate route has one.
   if (request.route !== 'titrate') {
     tail.push({ row: LAYOUT.tableHeaderRow - 1, col: COL.formGrams, cells: [[label('No titration curve: this route weighs its amounts (two forms) or titrates a stock; each row’s protocol has the steps.', 'note')]] });

@@ -3,7 +3,7 @@
  * values copy with its provenance block. Nothing is written unless the request checked out;
  * every table goes on a new sheet with a name not yet used.
  */
-import { ChemError } from '../chem';
+import { ChemError, MESSAGES } from '../chem';
 import { SubstanceLibrary, defaultLibrary, findSystem, titrantFromForm } from '../chem/library';
 import { bufferSystemOf, formContains } from '../chem/planner';
 import { libraryFor } from '../functions/userRange';
@@ -64,9 +64,17 @@ function checkNames(request: TableRequest, library: SubstanceLibrary): { errors:
     // The planner's own check: a strong electrolyte (NaCl) named as the buffer is told so rather than offered look-alikes.
     errors.buffer = error instanceof ChemError && error.code === 'outOfRange' ? `${request.buffer} is a strong electrolyte, not a buffer system; give it as the salt.` : fieldMessage(error);
   }
+  // A name that leaves the hydration state open is not resolved silently: the pane asks which form is on the shelf.
+  const askHydrate = (field: keyof FieldErrors, typed: string): boolean => {
+    const others = library.hydrateAlternatives(typed);
+    if (others.length === 0) return false;
+    errors[field] = MESSAGES.hydrateAmbiguous(`"${typed}"`, typed, [library.findForm(typed), ...others].map((f) => `${f.name}, ${f.molarMass.toFixed(2)} g/mol`)).replace(/^"[^"]*": /, '');
+    return true;
+  };
   const ofSystem = (field: 'form' | 'acidForm' | 'baseForm', typed: string): string => {
     try {
       const form = library.findForm(typed);
+      askHydrate(field, typed);
       if (system && !formContains(form, system)) errors[field] = `"${form.name}" does not contain ${system.name}; its forms are ${system.forms.map((f) => f.name).join(', ')}.`;
       return form.name;
     } catch (error) {
@@ -90,7 +98,9 @@ function checkNames(request: TableRequest, library: SubstanceLibrary): { errors:
   }
   const salts = request.salts.map((salt) => {
     try {
-      return { ...salt, form: library.findForm(salt.form).name };
+      const found = library.findForm(salt.form).name;
+      askHydrate('salts', salt.form);
+      return { ...salt, form: found };
     } catch (error) {
       errors.salts = fieldMessage(error);
       return salt;
@@ -99,7 +109,9 @@ function checkNames(request: TableRequest, library: SubstanceLibrary): { errors:
   let saltTarget = request.saltTarget;
   if (saltTarget) {
     try {
-      saltTarget = { ...saltTarget, form: library.findForm(saltTarget.form).name };
+      const found = library.findForm(saltTarget.form).name;
+      askHydrate('saltTargetForm', saltTarget.form);
+      saltTarget = { ...saltTarget, form: found };
     } catch (error) {
       errors.saltTargetForm = fieldMessage(error);
     }
@@ -205,9 +217,9 @@ export async function buildRecipeTable(port: WorkbookPort, form: FormInput, opti
   await port.writeTable(sheet, {
     row: PROTOCOL_LINK.row,
     col: PROTOCOL_LINK.labelCol,
-    cells: [[{ value: 'Bench protocol on sheet', style: 'label' }, { value: protocol, style: 'note' }]],
+    cells: [[{ value: 'Protocol sheet', style: 'label' }, { value: protocol, style: 'note' }]],
   });
-  await port.saveSettings(settingsOf(request));
+  await port.saveSettings(settingsOf(checked.request)); // as typed, for the next form
   await port.activateSheet(sheet);
   return { ok: true, sheet, protocolSheet: protocol, rows: total, dropped: failed };
 }

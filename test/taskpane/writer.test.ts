@@ -176,7 +176,7 @@ describe('recipe table in the preview workbook', () => {
 
   test('every route (issue 17, item 1): a 10× stock, two forms and several salts, and a salt to a target, each row the planner’s', async () => {
     const { book, port } = setup();
-    const stock = await buildRecipeTable(port, { ...defaultInput(), buffer: 'MES', form: 'MES', route: 'stock', stockFold: '10', stockVolumeMl: '100 mL', titrantStockM: '10', phMode: 'list', phList: '6.0', useTemperaturesC: '25', concentrationsMm: '50', salts: '' }, { version: '0.1.0', now: NOW });
+    const stock = await buildRecipeTable(port, { ...defaultInput(), buffer: 'MES', form: 'MES free acid', route: 'stock', stockFold: '10', stockVolumeMl: '100 mL', titrantStockM: '10', phMode: 'list', phList: '6.0', useTemperaturesC: '25', concentrationsMm: '50', salts: '' }, { version: '0.1.0', now: NOW });
     if (!stock.ok) throw new Error(JSON.stringify(stock));
     const row = LAYOUT.firstDataRow;
     const plan = planRecipe({ buffer: 'MES', targetPh: 6.0, concentrationMm: 50, volumeMl: 1000, useTemperatureC: 25, route: 'stock', form: 'MES free acid', titrant: { form: 'NaOH', concentrationM: 10 }, stock: { fold: 10, volumeMl: 100 }, benchTemperatureC: 22, partVolumeFraction: 0.8 });
@@ -246,6 +246,17 @@ describe('recipe table in the preview workbook', () => {
     expect(stopped.ok).toBe(false);
     if (!stopped.ok) expect(stopped.cancelled).toBe(true);
     expect(phases[0]).toBe('planning');
+    expect(book.sheetNames()).toEqual(['Notes']);
+  });
+
+  test('a name that leaves the hydrate open is not resolved silently (issue 17, item 5): the pane asks which form is on the shelf', async () => {
+    const { book, port } = setup();
+    const asked = await buildRecipeTable(port, { ...defaultInput(), buffer: 'phosphate', route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'sodium phosphate dibasic', salts: 'CaCl2 1 mM' }, { version: '0.1.0', now: NOW });
+    expect(asked.ok).toBe(false);
+    if (asked.ok) return;
+    expect(asked.errors.baseForm).toMatch(/sodium phosphate dibasic anhydrous, 141\.9\d g\/mol.*sodium phosphate dibasic heptahydrate, 268\.0\d g\/mol.*name the one on your shelf/);
+    expect(asked.errors.salts).toMatch(/calcium chloride dihydrate/);
+    expect(asked.errors.acidForm).toBeUndefined();
     expect(book.sheetNames()).toEqual(['Notes']);
   });
 

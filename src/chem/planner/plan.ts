@@ -169,6 +169,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
 
   if (stockKappa) warnings.push(...stockKappa.warnings.map((w) => warning(w.code, MESSAGES.ofTheStock(w.message), w.field)));
   warnings.push(...planWarnings(s, made, components, madeVolumeL, titration));
+  warnings.push(...hydrateWarnings(input, s.library));
   const metals = metalComplexWarning(finished);
   if (metals) warnings.push(metals);
   // The temperature of use and the bench temperature, each against the constants' data (the same messages when equal are merged by dedupe).
@@ -592,6 +593,29 @@ function componentsOf(s: Settled, made: RouteResult, volumeL: number, titration:
   }
   // Solids take up volume too, so water is given as "to volume", never as a subtraction.
   out.push({ role: 'water', name: 'water, to final volume', millilitres: volumeL * 1000 });
+  return out;
+}
+
+/**
+ * A name that leaves the hydration state open (`sodium phosphate dibasic`) is weighed as the
+ * form the library lists under it (docs/substances.md); the plan says which, with its molar
+ * mass, and names the other forms, so a heptahydrate on the shelf is not weighed as anhydrous.
+ */
+export function hydrateWarnings(input: RecipeInput, library: SubstanceLibrary): ChemWarning[] {
+  const typed: { name: string; field: string }[] = [];
+  for (const field of ['form', 'acidForm', 'baseForm'] as const) {
+    const name = input[field];
+    if (typeof name === 'string' && name.trim() !== '') typed.push({ name, field });
+  }
+  if (input.salts !== undefined) readSaltsField(input.salts).forEach((salt, i) => typed.push({ name: salt.form, field: `salts[${i}].form` }));
+  if (typeof input.saltTarget?.form === 'string') typed.push({ name: input.saltTarget.form, field: 'saltTarget.form' });
+  const out: ChemWarning[] = [];
+  for (const { name, field } of typed) {
+    const others = library.hydrateAlternatives(name);
+    if (others.length === 0) continue;
+    const used = library.findForm(name, field);
+    out.push(warning('hydrateAssumed', MESSAGES.hydrateAssumed(name, used.name, used.molarMass, others.map((f) => `${f.name} (${f.molarMass.toFixed(2)} g/mol)`)), field));
+  }
   return out;
 }
 
