@@ -21,6 +21,7 @@ export type FieldName =
   | 'purityPercent'
   | 'titrant'
   | 'titrantStockM'
+  | 'titrantInBuffer'
   | 'phMode'
   | 'phStart'
   | 'phStop'
@@ -75,6 +76,8 @@ export interface TableRequest {
   readonly purityPercent: number;
   readonly titrant: string;
   readonly titrantStockM: number;
+  /** A titrant of the buffer system itself (acetic acid into sodium acetate): state the total it makes, or hold the stated total. */
+  readonly titrantInBuffer: 'state' | 'hold';
   readonly targetPhs: readonly number[];
   readonly useTemperaturesC: readonly number[];
   readonly concentrationsMm: readonly number[];
@@ -184,6 +187,12 @@ export function checkForm(input: FormInput): Checked {
     fail('purityPercent', e);
   }
   const titrant = weighsOne ? need('titrant', 'a titrant') : input.titrant.trim();
+  let titrantInBuffer: TableRequest['titrantInBuffer'] = 'state';
+  try {
+    titrantInBuffer = readChoiceField('titrantInBuffer', input.titrantInBuffer, 'titrant of the buffer') as TableRequest['titrantInBuffer'];
+  } catch (e) {
+    fail('titrantInBuffer', e);
+  }
   // Weighing two forms needs no titrant: its fields are then kept as typed for the next table, not checked.
   const titrantStockM = weighsOne ? number('titrantStockM', 'titrant.concentrationM', 'the titrant stock concentration', 'Titrant stock (M)') : 1;
 
@@ -259,6 +268,7 @@ export function checkForm(input: FormInput): Checked {
       purityPercent,
       titrant,
       titrantStockM,
+      titrantInBuffer,
       targetPhs,
       useTemperaturesC,
       concentrationsMm,
@@ -291,6 +301,7 @@ export function defaultInput(settings: Partial<PaneSettings> = {}): FormInput {
     purityPercent: '',
     titrant: settings.titrant ?? 'NaOH',
     titrantStockM: String(settings.titrantStockM ?? 1),
+    titrantInBuffer: 'state',
     phMode: 'range',
     phStart: '7.0',
     phStop: '7.6',

@@ -36,6 +36,12 @@ const GROUPS: readonly { legend: string; fields: readonly FieldSpec[]; id?: stri
       { name: 'purityPercent', label: 'Purity of the form(s) (%)', hint: 'From its label or certificate; blank: 100', inputMode: 'decimal' },
       { name: 'titrant', label: 'Titrant', hint: 'A strong acid or base, or a weak one (e.g. acetic acid)', list: 'list-titrants' },
       { name: 'titrantStockM', label: 'Titrant stock (M)', inputMode: 'decimal' },
+      {
+        name: 'titrantInBuffer',
+        label: 'If the titrant is a form of the buffer (acetic acid into sodium acetate)',
+        kind: 'select',
+        options: [['state', 'weigh the stated amount; show the total it makes'], ['hold', 'weigh less, so the stated total holds']],
+      },
       { name: 'stockFold', label: 'Stock strength (× the working buffer)', hint: 'e.g. 10 for a 10× stock', inputMode: 'decimal' },
       { name: 'stockVolumeMl', label: 'Stock to make (mL)', hint: 'Blank: as much as one batch of working buffer', inputMode: 'decimal' },
     ],
@@ -183,7 +189,7 @@ export async function mountPane(root: HTMLElement, options: PaneOptions): Promis
   const goalControl = controls.get('saltTargetGoal') as HTMLSelectElement;
   const showRoute = () => {
     const route = routeControl.value;
-    for (const f of ['form', 'titrant', 'titrantStockM'] as FieldName[]) rows.get(f)!.hidden = route === 'two-forms';
+    for (const f of ['form', 'titrant', 'titrantStockM', 'titrantInBuffer'] as FieldName[]) rows.get(f)!.hidden = route === 'two-forms';
     for (const f of ['acidForm', 'baseForm'] as FieldName[]) rows.get(f)!.hidden = route !== 'two-forms';
     for (const f of ['stockFold', 'stockVolumeMl'] as FieldName[]) rows.get(f)!.hidden = route !== 'stock';
     for (const f of ['saltTargetForm', 'saltTargetValue'] as FieldName[]) rows.get(f)!.hidden = goalControl.value === 'none';

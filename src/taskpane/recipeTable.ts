@@ -31,6 +31,7 @@ export const SETTING_ROWS = [
   'Titrant',
   'Titrant stock (M)',
   'Stock tolerance (%)',
+  'Titrant of the buffer',
   'Acid form',
   'Base form',
   'Stock fold (×)',
@@ -198,6 +199,7 @@ function settingValues(request: TableRequest, options: { builtWith: string; buil
   v.set('Titrant', titrates ? input(request.titrant) : blank);
   v.set('Titrant stock (M)', titrates ? input(request.titrantStockM, '0.000') : blank);
   v.set('Stock tolerance (%)', input(DEFAULT_STOCK_TOLERANCE_PERCENT, '0.0'));
+  v.set('Titrant of the buffer', titrates ? input(request.titrantInBuffer) : blank);
   v.set('Acid form', titrates ? blank : input(request.acidForm));
   v.set('Base form', titrates ? blank : input(request.baseForm));
   v.set('Stock fold (×)', request.stockFold !== undefined && request.route === 'stock' ? input(request.stockFold, '0') : blank);

@@ -260,6 +260,18 @@ describe('recipe table in the preview workbook', () => {
     expect(book.sheetNames()).toEqual(['Notes']);
   });
 
+  test('a titrant of the buffer itself (issue 17, item 6): the row states the total it makes; the "hold" setting weighs less instead', async () => {
+    const { book, port } = setup();
+    const built = await buildRecipeTable(port, { ...defaultInput(), buffer: 'acetate', form: 'sodium acetate trihydrate', titrant: 'acetic acid', phMode: 'list', phList: '4.6', useTemperaturesC: '25', concentrationsMm: '100', salts: '' }, { version: '0.1.0', now: NOW });
+    if (!built.ok) throw new Error(JSON.stringify(built));
+    const row = LAYOUT.firstDataRow;
+    expect(String(book.value(built.sheet, row, COL.warnings))).toMatch(/is itself a form of acetate: the finished buffer holds \d+(\.\d+)? mM acetate in all, not the 100 mM stated/);
+    const stated = book.value(built.sheet, row, COL.formGrams) as number;
+    book.setContents(built.sheet, settingRow('Titrant of the buffer'), SETTING_VALUE_COL, [['hold']]);
+    expect(String(book.value(built.sheet, row, COL.warnings))).not.toMatch(/is itself a form of acetate/);
+    expect(book.value(built.sheet, row, COL.formGrams) as number).toBeLessThan(stated);
+  });
+
   test('sheet names keep the decimals of the pH series (issue 17, item 9)', async () => {
     const { port } = setup();
     const built = await buildRecipeTable(port, { ...defaultInput(), phStart: '6.6', phStop: '7.0', phStep: '0.2', useTemperaturesC: '25' }, { version: '0.1.0', now: NOW });

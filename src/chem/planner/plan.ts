@@ -100,6 +100,8 @@ interface Settled {
   /** The salt added to a target: its form, what it reaches (mol/L of ionic strength, mOsm/L, or mS/cm read at readAtC °C). */
   readonly saltTarget?: { readonly form: LibraryForm; readonly kind: 'ionicStrength' | 'osmolarity' | 'conductivity'; readonly goal: number; readonly readAtC: number };
   readonly pKaUncertainty?: number;
+  /** A titrant of the buffer system itself: state the total it makes, or hold the stated total. */
+  readonly titrantInBuffer: 'state' | 'hold';
   readonly formPurityPercent?: number;
   readonly purityPercent: readonly { readonly key: string; readonly percent: number }[];
 }
@@ -170,6 +172,8 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   if (stockKappa) warnings.push(...stockKappa.warnings.map((w) => warning(w.code, MESSAGES.ofTheStock(w.message), w.field)));
   warnings.push(...planWarnings(s, made, components, madeVolumeL, titration));
   warnings.push(...hydrateWarnings(input, s.library));
+  const sharedTotal = titrantTotalWarning(s, base);
+  if (sharedTotal) warnings.push(sharedTotal);
   const metals = metalComplexWarning(finished);
   if (metals) warnings.push(metals);
   // The temperature of use and the bench temperature, each against the constants' data (the same messages when equal are merged by dedupe).
@@ -270,6 +274,7 @@ function settle(input: RecipeInput, library: SubstanceLibrary): Settled {
     ...(stock ? { stock } : {}),
     saltTarget: settleSaltTarget(input.saltTarget, library, useT),
     pKaUncertainty: readNumberField('pKaUncertainty', input.pKaUncertainty),
+    titrantInBuffer: readChoiceField('titrantInBuffer', input.titrantInBuffer) as Settled['titrantInBuffer'],
     formPurityPercent: readPurityField('formPurityPercent', input.formPurityPercent),
     purityPercent: Object.entries(input.purityPercent ?? {}).map(([name, value]) => ({ key: nameKey(name), percent: readPurityField('formPurityPercent', value, `purityPercent.${name}`) ?? 100 })),
   };
@@ -351,19 +356,50 @@ function saltComponents(s: Settled, saltTargetM: number): RouteResult['weighed']
 /** Route 1 (and the stock route's finished buffer): one form plus titrant. */
 function titrateRoute(s: Settled, saltTargetM: number): RouteResult {
   const form = weighedForm(s);
-  const formM = s.concentrationM / systemMolesIn(form, s.system);
-  const start = baseComposition(s, [{ form, concentrationM: formM }], saltTargetM);
-  const weighed = [{ role: 'buffer' as const, form, concentrationM: formM }, ...saltComponents(s, saltTargetM)];
-  const startPh = solvePh(start);
-  if (Math.abs(startPh - s.targetPh) <= NO_TITRANT_PH) return { composition: start, weighed, unadjustedPh: startPh };
-  const chosen = chooseTitrant(s, start);
-  const composition = withTitrant(start, chosen.titrant, chosen.concentrationM);
-  return {
-    composition,
-    weighed,
-    titrant: { ...chosen, before: start },
-    unadjustedPh: startPh,
+  const perMole = systemMolesIn(form, s.system);
+  const attempt = (formM: number): RouteResult => {
+    const start = baseComposition(s, [{ form, concentrationM: formM }], saltTargetM);
+    const weighed = [{ role: 'buffer' as const, form, concentrationM: formM }, ...saltComponents(s, saltTargetM)];
+    const startPh = solvePh(start);
+    if (Math.abs(startPh - s.targetPh) <= NO_TITRANT_PH) return { composition: start, weighed, unadjustedPh: startPh };
+    const chosen = chooseTitrant(s, start);
+    const composition = withTitrant(start, chosen.titrant, chosen.concentrationM);
+    return { composition, weighed, titrant: { ...chosen, before: start }, unadjustedPh: startPh };
   };
+  const stated = attempt(s.concentrationM / perMole);
+  const shared = stated.titrant ? systemMolesIn(stated.titrant.form, s.system) : 0;
+  if (shared === 0 || s.titrantInBuffer === 'state') return stated;
+  // Hold the stated total: weigh x of the form so that x·perMole + titrant(x)·shared = C. The
+  // titrant needed is close to proportional to x at a fixed target, so a secant on x converges
+  // in a few steps.
+  const total = (r: RouteResult) => r.weighed[0].concentrationM * perMole + (r.titrant?.concentrationM ?? 0) * shared;
+  let [x0, r0] = [s.concentrationM / perMole, stated];
+  let x1 = (x0 * s.concentrationM) / total(r0);
+  let r1 = attempt(x1);
+  for (let i = 0; i < HOLD_TOTAL_STEPS && Math.abs(total(r1) - s.concentrationM) > HOLD_TOTAL_TOLERANCE * s.concentrationM; i++) {
+    const slope = (total(r1) - total(r0)) / (x1 - x0);
+    const x2 = x1 - (total(r1) - s.concentrationM) / slope;
+    [x0, r0] = [x1, r1];
+    x1 = x2 > 0 && Number.isFinite(x2) ? x2 : x1 / 2;
+    r1 = attempt(x1);
+  }
+  return r1;
+}
+
+/** Most secant steps, and the relative tolerance, when the stated total is held against a titrant of the buffer (a few steps reach 1e-9). */
+const HOLD_TOTAL_STEPS = 30;
+const HOLD_TOTAL_TOLERANCE = 1e-9;
+
+/**
+ * When the titrant is a form of the buffer and the weighed amount was not reduced for it:
+ * the total it makes, as a warning (code titrantAddsBuffer).
+ */
+function titrantTotalWarning(s: Settled, base: RouteResult): ChemWarning | undefined {
+  if (!base.titrant || s.titrantInBuffer === 'hold' || s.route === 'two-forms') return undefined;
+  const shared = systemMolesIn(base.titrant.form, s.system);
+  if (shared === 0) return undefined;
+  const totalMm = base.weighed.filter((w) => w.role === 'buffer').reduce((sum, w) => sum + w.concentrationM * systemMolesIn(w.form, s.system), 0) * 1000 + base.titrant.concentrationM * shared * 1000;
+  return warning('titrantAddsBuffer', MESSAGES.titrantAddsBuffer(base.titrant.form.name, s.system.name, s.concentrationM * 1000, totalMm), 'titrantInBuffer');
 }
 
 /** The titrant named, or 1 M NaOH / 1 M HCl, whichever reaches the target. */
