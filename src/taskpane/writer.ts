@@ -12,8 +12,13 @@ import { checkForm, FormInput, FieldErrors, settingsOf, TableRequest } from './f
 import { PROTOCOL_LINK, PROTOCOL_ROW_CELL, PROTOCOL_WIDTHS, UnmakeableRow, planRows, protocolBlocks } from './protocol';
 import { planRecipeSheet, SETTING_ROWS, SETTING_VALUE_COL, settingRow, tableRows, LAYOUT } from './recipeTable';
 
-/** Table rows written per port call: keeps each Excel batch small. */
-export const ROWS_PER_BATCH = 100;
+/**
+ * Table rows written per port call: keeps each Excel batch small, and each recalculation of
+ * the preview's engine (one RECIPE.ROW plan per row) well under the 200 ms a page may hold.
+ */
+export const ROWS_PER_BATCH = 25;
+/** Blocks of the curves' working cells written between two yields (each holds a few titrant and capacity formulas). */
+const TAIL_BLOCKS_PER_SLICE = 4;
 
 export type BuildResult =
   | { readonly ok: true; readonly sheet: string; readonly protocolSheet: string; readonly rows: number; readonly dropped: readonly UnmakeableRow[] }
@@ -207,7 +212,10 @@ export async function buildRecipeTable(port: WorkbookPort, form: FormInput, opti
     await port.writeTable(sheet, { row: batch[0].row, col: 0, cells: batch.map((b) => b.cells[0]) });
     options.onProgress?.(Math.min(total, i + ROWS_PER_BATCH), total, 'writing');
   }
-  for (const block of plan.tail) await port.writeTable(sheet, block);
+  for (const [i, block] of plan.tail.entries()) {
+    if (i % TAIL_BLOCKS_PER_SLICE === 0) await pause();
+    await port.writeTable(sheet, block);
+  }
   await port.setColumnWidths(sheet, plan.columnWidths);
   for (const chart of plan.charts) await port.addChart(sheet, chart);
   const protocol = await port.uniqueSheetName(`Protocol ${sheet}`);

@@ -312,6 +312,9 @@ describeBrowser('preview workbook in Chromium', () => {
     await page.click('#build-table');
     await page.waitForSelector('#pane-status.status-done', { timeout: 120000 });
     expect(await page.locator('#pane-status').textContent()).toMatch(/^Wrote 656 rows/);
+    // The grid draws the rows in view: scroll to the end and the last row is drawn, computed.
+    await page.locator('#grid-scroll').evaluate((e) => (e.scrollTop = e.scrollHeight));
+    await cell(at(COL.check, 655)).waitFor();
     expect(await cell(at(COL.check, 655)).textContent()).toMatch(/^\d\.\d\d$/);
     await page.screenshot({ path: join(ARTIFACTS, 'preview-large-table.png') });
     expect(pageErrors).toEqual([]);
