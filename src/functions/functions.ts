@@ -180,7 +180,7 @@ export function pka(substance: any, step?: any, temperatureC?: any, ionicStrengt
  * Grams of a form to weigh for a concentration and volume.
  * @customfunction GRAMS GRAMS
  * @helpurl https://localhost:3000/help/functions.html#grams
- * @param form Form to weigh, as on the bottle (e.g. "Na2HPO4·7H2O", "tris hydrochloride").
+ * @param form Form to weigh, as on the bottle (e.g. "Na2HPO4·7H2O", "tris hydrochloride"); a name that leaves the hydrate open ("sodium phosphate dibasic") is the library's form under it, which WARNINGS names.
  * @param concentrationMm Concentration in the final solution, mM.
  * @param volumeMl Final volume, mL.
  * @param [purity] Assay of the reagent: a fraction (0.995), a percentage (99.5) or text ("99.5%"); blank: pure.
@@ -260,6 +260,15 @@ export function warnings(composition: any[][], temperatureC?: any, activityModel
     const found = solutionWarnings(solved, speciate(solved));
     const fromMemory = solved.systems.filter((sys) => sys.totalM > 0 && s.library.findSystem(sys.name).steps.some((st) => st.checkedAgainst === 'memory')).map((sys) => sys.name);
     if (fromMemory.length > 0) found.push(warning('constantsFromMemory', MESSAGES.constantsFromMemory(fromMemory)));
+    // A name that leaves the hydrate open is weighed (GRAMS) and counted as the library's form under it: say which.
+    for (const row of toRange(composition)) {
+      const name = row[0];
+      if (typeof name !== 'string') continue;
+      const others = s.library.hydrateAlternatives(name);
+      if (others.length === 0) continue;
+      const used = s.library.findForm(name);
+      found.push(warning('hydrateAssumed', MESSAGES.hydrateAssumed(name, used.name, used.molarMass, others.map((f) => `${f.name} (${f.molarMass.toFixed(2)} g/mol)`))));
+    }
     if (found.length === 0) return 'none';
     return `${found.length} warning${found.length === 1 ? '' : 's'}: ${found.map((w, i) => `(${i + 1}) ${w.message}`).join(' ')}`;
   });

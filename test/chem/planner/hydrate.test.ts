@@ -5,7 +5,7 @@
  */
 import { planRecipe } from '../../../src/chem/planner';
 import { defaultLibrary } from '../../../src/chem/library';
-import { recipe } from '../../../src/functions/functions';
+import { grams, recipe, warnings } from '../../../src/functions/functions';
 
 describe('hydrate left open', () => {
   const pair = { buffer: 'phosphate', targetPh: 7.2, concentrationMm: 50, volumeMl: 1000, route: 'two-forms', acidForm: 'sodium phosphate monobasic monohydrate' } as const;
@@ -28,6 +28,13 @@ describe('hydrate left open', () => {
     expect(plan.components.find((c) => c.role === 'base form')!.name).toBe('sodium phosphate dibasic anhydrous');
     const explicit = planRecipe({ ...pair, baseForm: 'sodium phosphate dibasic heptahydrate' });
     expect(explicit.warnings.some((w) => w.code === 'hydrateAssumed')).toBe(false);
+  });
+
+  it('GRAMS weighs the library form under the name; WARNINGS beside it names that form and its molar mass', () => {
+    // 10 mM in 1 L of the anhydrous salt, 141.96 g/mol (the library's formula mass).
+    expect(grams('sodium phosphate dibasic', 10, 1000)).toBeCloseTo(1.4196, 3);
+    expect(warnings([['sodium phosphate dibasic', 10]])).toMatch(/"sodium phosphate dibasic" does not say which form is weighed: sodium phosphate dibasic anhydrous \(141\.9\d g\/mol\)/);
+    expect(warnings([['Na2HPO4·7H2O', 10]])).not.toMatch(/does not say which form/);
   });
 
   it('RECIPE carries the warning in its rows', () => {
