@@ -22,6 +22,8 @@ const MIN_ROWS = 40;
  * stand for the rest, with each row's height as last measured (24 px until drawn).
  */
 const WINDOW_MARGIN_ROWS = 40;
+/** Least time between two drawings caused by changes to the book, ms. */
+const RENDER_INTERVAL_MS = 250;
 const MIN_COLS = 12;
 
 export class Grid {
@@ -41,6 +43,7 @@ export class Grid {
   private heights: number[] = [];
   /** A row the next drawing must include (a cell selected off screen). */
   private wantedRow: number | null = null;
+  private lastRender = 0;
 
   constructor(
     private readonly book: PreviewWorkbook,
@@ -166,13 +169,22 @@ export class Grid {
     }
   }
 
+  /**
+   * Draws again on the next frame, at most once per RENDER_INTERVAL_MS while changes keep
+   * coming (a table being written changes the book dozens of times a second).
+   */
   private queueRender(): void {
     if (this.renderQueued) return;
     this.renderQueued = true;
-    requestAnimationFrame(() => {
-      this.renderQueued = false;
-      this.render();
-    });
+    const wait = Math.max(0, this.lastRender + RENDER_INTERVAL_MS - performance.now());
+    setTimeout(
+      () =>
+        requestAnimationFrame(() => {
+          this.renderQueued = false;
+          this.render();
+        }),
+      wait,
+    );
   }
 
   private rowPx(row: number): number {
@@ -203,6 +215,7 @@ export class Grid {
   }
 
   render(): void {
+    this.lastRender = performance.now();
     if (!this.book.hasSheet(this.sheet)) this.sheet = this.book.sheetNames()[0];
     this.renderTabs();
     const dims = this.book.dimensions(this.sheet);

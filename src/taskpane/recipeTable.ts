@@ -15,6 +15,8 @@ import * as F from './formulas';
 /** pH span of the curves either side of the targets, and their step. */
 const CURVE_MARGIN_PH = 1.5;
 const CURVE_STEP_PH = 0.1;
+/** Curve points written per block (the writer gives the page back between blocks). */
+const CURVE_POINTS_PER_BLOCK = 4;
 
 /**
  * Settings block: label, then value, in rows from LAYOUT.settingsRow. The rows from "Route"
@@ -360,7 +362,9 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
       { formula: `=IF(ISNA(${mlRef}),NA(),${F.curveCapacity(settings, first, comp).slice(1)})`, numberFormat: '0.00' },
     ]);
   });
-  tail.push(curveHeader, { row: curveTop, col: curveCol, cells: curveRows });
+  // A few curve points per block: each point solves a titration and a capacity, and the writer yields between blocks.
+  tail.push(curveHeader);
+  for (let i = 0; i < curveRows.length; i += CURVE_POINTS_PER_BLOCK) tail.push({ row: curveTop + i, col: curveCol, cells: curveRows.slice(i, i + CURVE_POINTS_PER_BLOCK) });
   tail.push({
     row: curveTop - 2,
     col: curveCol,

@@ -18,7 +18,7 @@ import { planRecipeSheet, SETTING_ROWS, SETTING_VALUE_COL, settingRow, tableRows
  */
 export const ROWS_PER_BATCH = 25;
 /** Blocks of the curves' working cells written between two yields (each holds a few titrant and capacity formulas). */
-const TAIL_BLOCKS_PER_SLICE = 4;
+const TAIL_BLOCKS_PER_SLICE = 2;
 
 export type BuildResult =
   | { readonly ok: true; readonly sheet: string; readonly protocolSheet: string; readonly rows: number; readonly dropped: readonly UnmakeableRow[] }

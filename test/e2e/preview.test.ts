@@ -174,7 +174,7 @@ describeBrowser('preview workbook in Chromium', () => {
     }
   });
 
-  test('the protocol of any row is a live sheet: row 3 on request, following an edit of that row', async () => {
+  test('the protocol of any row is a live sheet: row 3 on request, its formula over that row', async () => {
     await page.fill('#protocol-row', '3');
     await page.click('#show-protocol');
     await page.waitForSelector('#pane-status.status-done');
