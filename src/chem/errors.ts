@@ -97,6 +97,12 @@ export const MESSAGES = {
     `Temperature ${temperatureC} °C is above ${limitC} °C, beyond the range most pKa temperature fits were made over; treat the pH as an estimate.`,
   beyondActivityModel: (ionicStrengthM: number, limitM: number, model: string) =>
     `Ionic strength ${ionicStrengthM.toPrecision(3)} M is above ${limitM} M, beyond where the ${model} activity model is reliable; the pH is an extrapolation.`,
+  titrantAddsBuffer: (titrant: string, system: string, statedMm: number, totalMm: number) =>
+    `The titrant ${titrant} is itself a form of ${system}: the finished buffer holds ${Number(totalMm.toPrecision(4))} mM ${system} in all, not the ${Number(statedMm.toPrecision(4))} mM stated. To hold the stated total, set the option "titrantInBuffer" to "hold" (less of the form is weighed).`,
+  hydrateAssumed: (typed: string, used: string, molarMass: number, others: readonly string[]) =>
+    `"${typed}" does not say which form is weighed: ${used} (${molarMass.toFixed(2)} g/mol) is used; the library also lists ${others.join(', ')}. Name the form on your shelf to weigh the right mass.`,
+  hydrateAmbiguous: (field: string, typed: string, choices: readonly string[]) =>
+    `${field}: "${typed}" is sold in several forms (${choices.join(', ')}); name the one on your shelf.`,
   weakBuffering: (pH: number, halfWidth: number, listed: string) =>
     `pH ${pH.toFixed(2)} is more than ${halfWidth} unit from every pKa′ in the solution (${listed}): it buffers weakly there, and small additions move the pH far.`,
   metalComplexes: (metals: string, binders: string, calciumNote: string) =>

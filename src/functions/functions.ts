@@ -181,7 +181,7 @@ export function pka(substance: any, step?: any, temperatureC?: any, ionicStrengt
  * Grams of a form to weigh for a concentration and volume.
  * @customfunction GRAMS GRAMS
  * @helpurl https://localhost:3000/help/functions.html#grams
- * @param form Form to weigh, as on the bottle (e.g. "Na2HPO4·7H2O", "tris hydrochloride").
+ * @param form Form to weigh, as on the bottle (e.g. "Na2HPO4·7H2O", "tris hydrochloride"); a name that leaves the hydrate open ("sodium phosphate dibasic") is the library's form under it, which WARNINGS names.
  * @param concentrationMm Concentration in the final solution, mM.
  * @param volumeMl Final volume, mL.
  * @param [purity] Assay of the reagent: a fraction (0.995), a percentage (99.5) or text ("99.5%"); blank: pure.
@@ -274,6 +274,15 @@ export function warnings(composition: any[][], temperatureC?: any, activityModel
     const found = solutionWarnings(solved, speciate(solved));
     const fromMemory = solved.systems.filter((sys) => sys.totalM > 0 && s.library.findSystem(sys.name).steps.some((st) => st.checkedAgainst === 'memory')).map((sys) => sys.name);
     if (fromMemory.length > 0) found.push(warning('constantsFromMemory', MESSAGES.constantsFromMemory(fromMemory)));
+    // A name that leaves the hydrate open is weighed (GRAMS) and counted as the library's form under it: say which.
+    for (const row of toRange(composition)) {
+      const name = row[0];
+      if (typeof name !== 'string') continue;
+      const others = s.library.hydrateAlternatives(name);
+      if (others.length === 0) continue;
+      const used = s.library.findForm(name);
+      found.push(warning('hydrateAssumed', MESSAGES.hydrateAssumed(name, used.name, used.molarMass, others.map((f) => `${f.name} (${f.molarMass.toFixed(2)} g/mol)`))));
+    }
     if (found.length === 0) return 'none';
     return `${found.length} warning${found.length === 1 ? '' : 's'}: ${found.map((w, i) => `(${i + 1}) ${w.message}`).join(' ')}`;
   });
@@ -353,9 +362,9 @@ export const RECIPE_TABLE_HEADER = ['section', 'item', 'value', 'unit'] as const
  * The plan a RECIPE or RECIPE.ROW call asks for, from its arguments in the order both
  * declare them (one list, so the two functions cannot drift apart).
  */
-function recipePlan(args: readonly any[], twoFormsAllowed: boolean): RecipePlan {
+function recipePlan(args: readonly any[]): RecipePlan {
   const [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances] = args;
-  return planRecipe(recipeInput(buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, twoFormsAllowed), libraryFor(userSubstances));
+  return planRecipe(recipeInput(buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options), libraryFor(userSubstances));
 }
 
 /**
@@ -364,7 +373,7 @@ function recipePlan(args: readonly any[], twoFormsAllowed: boolean): RecipePlan 
  * an options range for everything else. Every value is read by its field's one declaration
  * (src/chem/input), here and in the planner alike.
  */
-function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC: any, salts: any, options: any, twoFormsAllowed: boolean): RecipeInput {
+function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC: any, salts: any, options: any): RecipeInput {
   const { input: chosen, written } = recipeOptions(options);
   if (!isBlank(useTemperatureC) && written.has('useTemperatureC')) throw new ChemError('invalid-input', 'givenTwice', MESSAGES.givenTwice('useTemperatureC'), 'useTemperatureC', 'the argument or the option, once');
   checkRowLimit('salts', salts);
@@ -386,19 +395,17 @@ function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl:
           }),
         }),
   };
-  // "acid form + base form" as the form weighed is the two-forms route (RECIPE only).
+  // "acid form + base form" as the form weighed is the two-forms route.
   const pair = typeof input.form === 'string' ? input.form.split(/\s+\+\s+/) : undefined;
   if (pair && pair.length === 2 && (input.route === undefined || input.route === 'two-forms')) {
-    if (!twoFormsAllowed) throw invalid('oneFormOnly', written.get('form') ?? 'form', SHEET_MESSAGES.oneFormOnly(written.get('form') ?? 'form', input.form as string));
     const { form: _form, ...rest } = input;
     return { ...rest, route: 'two-forms', acidForm: pair[0], baseForm: pair[1] };
   }
-  if (!twoFormsAllowed && input.route === 'two-forms') throw invalid('oneFormOnly', written.get('route') ?? 'route', SHEET_MESSAGES.oneFormOnly(written.get('route') ?? 'route', 'two-forms'));
   return input;
 }
 
 /**
- * One row of a recipe table: grams of the form, titrant mL with its band, what the meter must read at the bench, pH at use, capacity, ionic strength, ideal osmolarity and warnings. Spills 1 row × 11 columns.
+ * One row of a recipe table on any route: grams of the form (of the acid and the base form, weighing two), titrant mL with its band, what the meter must read at the bench (of the stock itself, making a stock), pH at use, capacity, ionic strength, ideal osmolarity, grams of a salt added to a target, stock per batch and warnings. Spills 1 row × 14 columns.
  * @customfunction RECIPE.ROW RECIPE.ROW
  * @helpurl https://localhost:3000/help/functions.html#recipe-row
  * @param buffer Buffer system (e.g. "HEPES", "tris", "phosphate").
@@ -414,7 +421,7 @@ function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl:
 export function recipeRow(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC?: any, salts?: any[][], options?: any[][], userSubstances?: any[][]): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('RECIPE.ROW', args, () => {
-    return [recipeRowValues(recipePlan(args, false))];
+    return [recipeRowValues(recipePlan(args))];
   });
 }
 
@@ -435,7 +442,7 @@ export function recipeRow(buffer: any, targetPh: any, concentrationMm: any, volu
 export function recipe(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC?: any, salts?: any[][], options?: any[][], userSubstances?: any[][]): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('RECIPE', args, () => {
-    const plan = recipePlan(args, true);
+    const plan = recipePlan(args);
     const p = plan.predictions;
     const rows: (number | string)[][] = [[...RECIPE_TABLE_HEADER]];
     rows.push(['recipe', `${plan.buffer}, ${plan.concentrationMm} mM, pH ${plan.targetPh} at ${p.useTemperatureC} °C`, plan.volumeMl, 'mL']);
@@ -559,7 +566,7 @@ export function mixVolumes(stocks: any[][], targets: any[][], volumeMl: any, tar
 export function asMadeCheck(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, actuals: any[][], useTemperatureC?: any, salts?: any[][], options?: any[][], userSubstances?: any[][]): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('AS.MADE', [...args, actuals], () => {
-    const plan = recipePlan(args, true);
+    const plan = recipePlan(args);
     const read = readActualsRange(actuals);
     const incomplete = incompleteTable(plan, read);
     if (incomplete) return incomplete;
@@ -613,7 +620,7 @@ export function mixPh(stocks: any[][], volumes: any[][], finalVolumeMl: any, tem
 export function titrantNext(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, titrantAddedMl: any, readingPh: any, useTemperatureC?: any, salts?: any[][], options?: any[][], actuals?: any[][], userSubstances?: any[][]): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('TITRANT.NEXT', [...args, titrantAddedMl, readingPh, actuals], () => {
-    const plan = recipePlan(args, true);
+    const plan = recipePlan(args);
     const read = readActualsRange(actuals);
     const state: BenchState = {
       ...read.bench,

@@ -26,8 +26,6 @@ export const SHEET_MESSAGES = {
     `cannot read the counter-ions "${text}"; write them as "Na+", "2 Na+" or "K+; Cl-".`,
   tooManyRows: (argument: string, rows: number, limit: number) =>
     `${argument} has ${rows} rows; allowed: up to ${limit} rows with values.`,
-  oneFormOnly: (argument: string, text: string) =>
-    `${argument}: "${text}" names two forms; a recipe row titrates one form (use RECIPE for two forms).`,
   recipeTooLong: (rows: number, limit: number) =>
     `The recipe needs ${rows} rows, more than the ${limit} this table shows; print it with the command line instead.`,
   resultLargerThanSpill: (rows: number, columns: number, spillRows: number, spillColumns: number) =>

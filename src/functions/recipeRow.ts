@@ -7,6 +7,7 @@ import type { RecipePlan } from '../chem/planner';
 /** Columns of RECIPE.ROW, in order; a recipe table's header row. */
 export const RECIPE_ROW_HEADER = [
   'form (g)',
+  'base form (g)',
   'titrant (mL)',
   'titrant low (mL)',
   'titrant high (mL)',
@@ -16,19 +17,40 @@ export const RECIPE_ROW_HEADER = [
   'acid per 0.1 pH (mM)',
   'ionic strength (mM)',
   'ideal osmolarity (mOsm/L)',
+  'salt to target (g)',
+  'stock per batch (mL)',
   'warnings',
 ] as const;
 
 /**
- * A plan's row: grams of the buffer's form, titrant mL and its band, the meter reading, pH at
- * use, capacity both ways, ionic strength (mM), ideal osmolarity and the warnings as text.
+ * A plan's row: grams of the buffer's form (the acid form on the two-forms route, with the
+ * base form's grams beside it; blank on the other routes), titrant mL and its band, the meter
+ * reading (of the stock itself on the stock route), pH at use, capacity both ways, ionic
+ * strength (mM), ideal osmolarity, grams of a salt added to a target (blank without one),
+ * stock per batch of working buffer (blank off the stock route) and the warnings as text.
  *
  * @param plan - a plan from planRecipe
  * @returns one value per RECIPE_ROW_HEADER column
  */
 export function recipeRowValues(plan: RecipePlan): (number | string)[] {
-  const weighed = plan.components.find((c) => c.role === 'buffer');
+  const weighed = plan.components.find((c) => c.role === 'buffer' || c.role === 'acid form');
+  const base = plan.components.find((c) => c.role === 'base form');
   const t = plan.titration;
   const p = plan.predictions;
-  return [weighed?.grams ?? 0, t?.volumeMl ?? 0, t?.lowMl ?? 0, t?.highMl ?? 0, plan.meter.pH, p.pHAtUse, p.baseMmPerTenthPh, p.acidMmPerTenthPh, p.ionicStrengthM * 1000, p.idealOsmolarityMosm, plan.warnings.map((w) => w.message).join(' ')];
+  return [
+    weighed?.grams ?? 0,
+    base?.grams ?? '',
+    t?.volumeMl ?? 0,
+    t?.lowMl ?? 0,
+    t?.highMl ?? 0,
+    plan.meter.pH,
+    p.pHAtUse,
+    p.baseMmPerTenthPh,
+    p.acidMmPerTenthPh,
+    p.ionicStrengthM * 1000,
+    p.idealOsmolarityMosm,
+    plan.components.find((c) => c.toTarget)?.grams ?? '',
+    plan.stock?.stockPerBatchMl ?? '',
+    plan.warnings.map((w) => w.message).join(' '),
+  ];
 }

@@ -9,7 +9,7 @@ import type { PreviewWorkbook } from './workbook';
 const SVG = 'http://www.w3.org/2000/svg';
 const WIDTH = 460;
 const HEIGHT = 260;
-const MARGIN = { left: 56, right: 16, top: 30, bottom: 44 };
+const MARGIN = { left: 56, right: 16, top: 14, bottom: 44 };
 
 function el<K extends keyof SVGElementTagNameMap>(name: K, attrs: Record<string, string | number>, parent?: Element): SVGElementTagNameMap[K] {
   const node = document.createElementNS(SVG, name);
@@ -41,6 +41,11 @@ function label(v: number): string {
 export function drawChart(book: PreviewWorkbook, sheet: string, spec: ChartSpec): HTMLElement {
   const figure = document.createElement('figure');
   figure.className = 'chart';
+  // The title is page text above the drawing, so a long one wraps instead of being cut at the drawing's edge.
+  const heading = document.createElement('p');
+  heading.className = 'chart-title';
+  heading.textContent = spec.title;
+  figure.appendChild(heading);
   const svg = el('svg', { viewBox: `0 0 ${WIDTH} ${HEIGHT}`, role: 'img', 'aria-label': spec.title, class: 'chart-svg' });
   figure.appendChild(svg);
 
@@ -57,8 +62,6 @@ export function drawChart(book: PreviewWorkbook, sheet: string, spec: ChartSpec)
   const all = series.flatMap((s) => s.points);
   const bandXs = spec.xBand ? numbers(book, sheet, spec.xBand.x).filter((v): v is number => v !== null) : [];
   const band = spec.xBand && bandXs.length > 0 ? { from: Math.min(...bandXs), to: Math.max(...bandXs), label: spec.xBand.label } : null;
-  const title = el('text', { x: WIDTH / 2, y: 18, 'text-anchor': 'middle', class: 'chart-title' }, svg);
-  title.textContent = spec.title;
   if (all.length === 0) {
     const t = el('text', { x: WIDTH / 2, y: HEIGHT / 2, 'text-anchor': 'middle', class: 'chart-empty' }, svg);
     t.textContent = 'No numeric values to plot (see the data cells).';
@@ -80,7 +83,8 @@ export function drawChart(book: PreviewWorkbook, sheet: string, spec: ChartSpec)
     const b = Math.min(x1, band.to);
     if (b > a) {
       el('rect', { x: px(a), y: MARGIN.top, width: px(b) - px(a), height: HEIGHT - MARGIN.top - MARGIN.bottom, class: 'chart-band' }, svg);
-      const t = el('text', { x: (px(a) + px(b)) / 2, y: MARGIN.top + 12, 'text-anchor': 'middle', class: 'chart-band-label' }, svg);
+      // At the foot of the band: the capacity curve peaks at the top of its middle.
+      const t = el('text', { x: (px(a) + px(b)) / 2, y: HEIGHT - MARGIN.bottom - 6, 'text-anchor': 'middle', class: 'chart-band-label' }, svg);
       t.textContent = band.label;
     }
   }

@@ -23,6 +23,14 @@ const ROW_HEADER_PX = 44;
 const CELL_PADDING_PX = 10;
 const CHAR_PX = 7.2;
 const MIN_ROWS = 40;
+/**
+ * Rows drawn above and below the visible ones. Only a window of rows is in the page (a
+ * 656-row table would be some 30,000 cells, seconds of drawing on every change); spacer rows
+ * stand for the rest, with each row's height as last measured (24 px until drawn).
+ */
+const WINDOW_MARGIN_ROWS = 40;
+/** Least time between two drawings caused by changes to the book, ms. */
+const RENDER_INTERVAL_MS = 250;
 const MIN_COLS = 12;
 
 export class Grid {
@@ -43,6 +51,13 @@ export class Grid {
   private table: HTMLTableElement | null = null;
   private renderQueued = false;
   private unsubscribe: () => void = () => undefined;
+  /** First and last (exclusive) rows in the page, and the measured heights of rows drawn so far (px) on the sheet shown. */
+  private windowTop = 0;
+  private windowEnd = 0;
+  private heights: number[] = [];
+  /** A row the next drawing must include (a cell selected off screen). */
+  private wantedRow: number | null = null;
+  private lastRender = 0;
 
   constructor(
     private book: PreviewWorkbook,
@@ -74,6 +89,10 @@ export class Grid {
     document.addEventListener('copy', (e) => this.onCopy(e, false));
     document.addEventListener('cut', (e) => this.onCopy(e, true));
     document.addEventListener('paste', (e) => this.onPaste(e));
+    this.scroller.addEventListener('scroll', () => {
+      const [first, last] = this.visibleRows();
+      if (first < this.windowTop || last > this.windowEnd) this.queueRender();
+    });
     this.unsubscribe = book.onChange(() => this.queueRender());
     this.render();
   }
@@ -108,6 +127,7 @@ export class Grid {
   }
 
   showSheet(name: string): void {
+    if (name !== this.sheet) this.heights = [];
     this.sheet = name;
     this.row = 0;
     this.col = 0;
@@ -129,7 +149,10 @@ export class Grid {
     this.row = Math.max(0, row);
     this.col = Math.max(0, col);
     const td = this.cellElement(this.row, this.col);
-    if (!td && this.table) this.render();
+    if (!td && this.table) {
+      this.wantedRow = this.row;
+      this.render();
+    }
     this.markSelection();
     const current = this.cellElement(this.row, this.col);
     current?.scrollIntoView({ block: 'nearest', inline: 'nearest' });
@@ -349,13 +372,45 @@ export class Grid {
     }
   }
 
+  /**
+   * Draws again on the next frame, at most once per RENDER_INTERVAL_MS while changes keep
+   * coming (a table being written changes the book dozens of times a second).
+   */
   private queueRender(): void {
     if (this.renderQueued) return;
     this.renderQueued = true;
-    requestAnimationFrame(() => {
-      this.renderQueued = false;
-      this.render();
-    });
+    const wait = Math.max(0, this.lastRender + RENDER_INTERVAL_MS - performance.now());
+    setTimeout(
+      () =>
+        requestAnimationFrame(() => {
+          this.renderQueued = false;
+          this.render();
+        }),
+      wait,
+    );
+  }
+
+  private rowPx(row: number): number {
+    return this.heights[row] ?? ROW_HEIGHT_PX;
+  }
+
+  /** Top of a row within the sheet, px (header row excluded). */
+  private rowTopPx(row: number): number {
+    let y = 0;
+    for (let r = 0; r < row; r++) y += this.rowPx(r);
+    return y;
+  }
+
+  /** First and last (exclusive) rows in view, from the scroll position and the rows' heights. */
+  private visibleRows(): [number, number] {
+    const top = this.scroller.scrollTop;
+    const bottom = top + (this.scroller.clientHeight || 900);
+    let y = 0;
+    let r = 0;
+    while (y + this.rowPx(r) <= top && r < 1e6) y += this.rowPx(r++);
+    const first = r;
+    while (y < bottom && r < 1e6) y += this.rowPx(r++);
+    return [first, r];
   }
 
   private columnPx(col: number): number {
@@ -363,9 +418,12 @@ export class Grid {
   }
 
   render(): void {
+    this.lastRender = performance.now();
     if (!this.book.hasSheet(this.sheet)) this.sheet = this.book.sheetNames()[0];
     this.renderTabs();
     const dims = this.book.dimensions(this.sheet);
+    const sheetValues = this.book.sheetValues(this.sheet);
+    const valueAt = (r: number, c: number) => sheetValues[r]?.[c] ?? null;
     const charts = this.book.charts(this.sheet);
     const chartRows = Math.max(0, ...charts.map((c) => c.anchor.row + c.anchor.rowCount));
     const chartCols = Math.max(0, ...charts.map((c) => c.anchor.col + c.anchor.colCount));
@@ -399,7 +457,26 @@ export class Grid {
     table.appendChild(thead);
     const tbody = document.createElement('tbody');
     const sel = this.selectedRange();
-    for (let r = 0; r < rows; r++) {
+    const [firstVisible, lastVisible] = this.visibleRows();
+    let top = Math.max(0, firstVisible - WINDOW_MARGIN_ROWS);
+    let end = Math.min(rows, lastVisible + WINDOW_MARGIN_ROWS);
+    const wanted = this.wantedRow;
+    this.wantedRow = null;
+    if (wanted !== null && (wanted < top || wanted >= end)) {
+      top = Math.max(0, wanted - WINDOW_MARGIN_ROWS);
+      end = Math.min(rows, wanted + WINDOW_MARGIN_ROWS * 2);
+    }
+    const spacer = (heightPx: number) => {
+      const tr = document.createElement('tr');
+      tr.className = 'grid-spacer';
+      const td = document.createElement('td');
+      td.colSpan = cols + 1;
+      td.style.height = `${heightPx}px`;
+      tr.appendChild(td);
+      return tr;
+    };
+    if (top > 0) tbody.appendChild(spacer(this.rowTopPx(top)));
+    for (let r = top; r < end; r++) {
       const tr = document.createElement('tr');
       const th = document.createElement('th');
       th.scope = 'row';
@@ -414,14 +491,15 @@ export class Grid {
         td.dataset.col = String(c);
         td.setAttribute('role', 'gridcell');
         if (r < dims.rows && c < dims.cols) {
-          const value = this.book.value(this.sheet, r, c);
+          const value = valueAt(r, c);
           const meta = this.book.meta(this.sheet, r, c);
           const text = formatValue(value, meta?.numberFormat);
           if (typeof value === 'string' && text !== '' && meta?.style !== 'header') {
             // Text runs over empty cells to its right and stops at the first one holding a value, as in Excel.
             let px = this.columnPx(c) - CELL_PADDING_PX;
-            for (let k = c + 1; k < cols; k++) {
-              const next = k < dims.cols ? this.book.value(this.sheet, r, k) : null;
+            // A warning or a protocol's text wraps within its own column instead (the charts sit to its right).
+            for (let k = c + 1; meta?.style !== 'warning' && meta?.style !== 'text' && k < cols; k++) {
+              const next = k < dims.cols ? valueAt(r, k) : null;
               if (next !== null && next !== '') break;
               px += this.columnPx(k);
             }
@@ -439,7 +517,7 @@ export class Grid {
             td.classList.add('cell-error');
             td.title = value.message;
           }
-          if (this.book.formula(this.sheet, r, c) !== undefined) td.classList.add('has-formula');
+          if (this.book.hasFormula(this.sheet, r, c)) td.classList.add('has-formula');
         }
         if (r === this.row && c === this.col) td.classList.add('selected');
         else if (r >= sel.row && r < sel.row + sel.rowCount && c >= sel.col && c < sel.col + sel.colCount) td.classList.add('in-range');
@@ -447,7 +525,10 @@ export class Grid {
       }
       tbody.appendChild(tr);
     }
+    if (end < rows) tbody.appendChild(spacer(this.rowTopPx(rows) - this.rowTopPx(end)));
     table.appendChild(tbody);
+    this.windowTop = top;
+    this.windowEnd = end;
 
     const layer = document.createElement('div');
     layer.className = 'grid-layer';
@@ -460,7 +541,7 @@ export class Grid {
       for (let c = spec.anchor.col; c < spec.anchor.col + spec.anchor.colCount; c++) width += this.columnPx(c);
       figure.classList.add('chart-floating');
       figure.style.left = `${left}px`;
-      figure.style.top = `${ROW_HEIGHT_PX * (spec.anchor.row + 1)}px`;
+      figure.style.top = `${ROW_HEIGHT_PX + this.rowTopPx(spec.anchor.row)}px`;
       figure.style.width = `${width}px`;
       layer.appendChild(figure);
     }
@@ -470,6 +551,8 @@ export class Grid {
     this.scroller.scrollTop = keepTop;
     this.scroller.scrollLeft = keepLeft;
     this.table = table;
+    // Measure the rows drawn (a wrapped warning makes a row taller), for the spacers of the next drawing.
+    tbody.querySelectorAll('tr:not(.grid-spacer)').forEach((tr, i) => (this.heights[top + i] = (tr as HTMLElement).offsetHeight || ROW_HEIGHT_PX));
     const current = this.cellElement(this.row, this.col);
     if (current) this.scroller.setAttribute('aria-activedescendant', current.id);
     this.markSelection();

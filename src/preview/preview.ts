@@ -12,7 +12,6 @@ import { VERSION } from '../taskpane/version';
 import { PreviewAdapter } from '../workbook/previewAdapter';
 import { DEMO_CELLS, DEMO_COLUMN_WIDTHS, DEMO_SHEET } from './demo';
 import { Grid } from './grid';
-import { buildPrintView } from './printView';
 import { openWorkbookFile, OpenRefused } from './openFile';
 import { Autosave, clearSaved, readSaved, SaveState } from './storage';
 import { PreviewWorkbook } from './workbook';
@@ -80,7 +79,13 @@ function start(): void {
 
   const port = new PreviewAdapter(book, () => grid.selection(), (sheet) => grid.showSheet(sheet));
   const paneRoot = document.getElementById('pane-root') as HTMLElement;
-  void mountPane(paneRoot, { port, version: VERSION, onWritten: (sheet) => grid.showSheet(sheet) });
+  const showPane = document.getElementById('show-pane') as HTMLButtonElement;
+  const setPaneHidden = (hidden: boolean) => {
+    paneRoot.hidden = hidden;
+    showPane.hidden = !hidden;
+  };
+  showPane.addEventListener('click', () => setPaneHidden(false));
+  void mountPane(paneRoot, { port, version: VERSION, onWritten: (sheet) => grid.showSheet(sheet), onHide: () => setPaneHidden(true) });
 
   const showSave = (state: SaveState) => {
     saveStatus.textContent = saveStateText(state);
@@ -144,17 +149,6 @@ function start(): void {
         status.textContent = error instanceof OpenRefused ? error.message : `"${file.name}" was not opened: ${(error as Error).message}`;
         document.body.dataset.opened = 'refused';
       });
-  });
-
-  const printView = document.getElementById('print-view') as HTMLElement;
-  document.getElementById('print-protocol')!.addEventListener('click', () => {
-    if (!buildPrintView(book, grid.activeSheet(), printView)) {
-      status.textContent = 'Show a recipe-table sheet made by the pane (it holds a bench protocol) to print its protocol.';
-      return;
-    }
-    status.textContent = '';
-    document.body.dataset.printView = 'ready';
-    window.print();
   });
 
   const download = document.getElementById('download-xlsx') as HTMLButtonElement;

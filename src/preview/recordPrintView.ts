@@ -92,7 +92,7 @@ export function mountPrintView(parent: Element, book: () => PreviewWorkbook, act
   const button = document.createElement('button');
   button.type = 'button';
   button.id = 'record-print-open';
-  button.textContent = 'Print record';
+  button.textContent = 'Print view';
   parent.insertBefore(button, parent.firstChild);
   // The workbook is read at the click: the page may have opened or started another since.
   button.addEventListener('click', () => showPrintView(book(), activeSheet()));

@@ -337,6 +337,25 @@ export class PreviewWorkbook {
   }
 
   /** The formula of a cell (with `=`), or undefined for a value cell. */
+  /** Every computed value of a sheet at once (one engine call; the grid draws from it rather than asking cell by cell). */
+  sheetValues(sheet: string): ComputedValue[][] {
+    return this.engine.getSheetValues(this.sheetId(sheet)).map((line) =>
+      line.map((v) => {
+        if (v === null || v === undefined) return null;
+        if (typeof v === 'object') {
+          const err = v as { value?: string; message?: string };
+          return { error: String(err.value ?? '#ERROR!'), message: String(err.message ?? '') };
+        }
+        return v as CellValue;
+      }),
+    );
+  }
+
+  /** Whether a cell holds a formula (cheap: the grid asks it of every cell it draws; `formula` rebuilds the text). */
+  hasFormula(sheet: string, row: number, col: number): boolean {
+    return this.engine.doesCellHaveFormula({ sheet: this.sheetId(sheet), row, col });
+  }
+
   formula(sheet: string, row: number, col: number): string | undefined {
     return this.engine.getCellFormula({ sheet: this.sheetId(sheet), row, col });
   }

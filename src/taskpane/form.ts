@@ -4,17 +4,24 @@
  * is written to the workbook while any field has one.
  */
 import { ACTIVITY_MODELS, ChemError } from '../chem';
-import { readChoiceField, readNumberListField, readPurityField, readQuantity, requireNumberField } from '../chem/input';
+import { FIELDS, readChoiceField, readNumberField, readNumberListField, readPurityField, readQuantity, readSaltsField, requireNumberField } from '../chem/input';
+import type { SaltEntry } from '../chem/input';
 import { parseRangeText } from '../workbook/port';
 import type { PaneSettings } from '../workbook/port';
 
 /** Field names, as the DOM's ids use them (`field-<name>`). */
 export type FieldName =
   | 'buffer'
+  | 'route'
   | 'form'
+  | 'acidForm'
+  | 'baseForm'
+  | 'stockFold'
+  | 'stockVolumeMl'
   | 'purityPercent'
   | 'titrant'
   | 'titrantStockM'
+  | 'titrantInBuffer'
   | 'phMode'
   | 'phStart'
   | 'phStop'
@@ -22,8 +29,10 @@ export type FieldName =
   | 'phList'
   | 'useTemperaturesC'
   | 'concentrationsMm'
-  | 'saltForm'
-  | 'saltMm'
+  | 'salts'
+  | 'saltTargetForm'
+  | 'saltTargetGoal'
+  | 'saltTargetValue'
   | 'volumeMl'
   | 'benchTemperatureC'
   | 'activityModel'
@@ -33,20 +42,49 @@ export type FieldName =
 /** The form as typed: every field a string (select boxes give their value). */
 export type FormInput = Readonly<Record<FieldName, string>>;
 
+/** How the table's buffers are made (the planner's routes, src/chem/planner). */
+export type TableRoute = 'titrate' | 'two-forms' | 'stock';
+
+/**
+ * The salt-target goals, from the declared fields `saltTarget.<goal>` (a number with a unit;
+ * the temperature of a conductivity reading is a setting of that goal, not a goal).
+ */
+export const SALT_TARGET_GOALS: readonly { readonly name: string; readonly label: string }[] = FIELDS.filter(
+  (f) => f.kind === 'number' && f.name.startsWith('saltTarget.') && f.dimension !== 'temperature',
+).map((f) => ({ name: f.name.slice('saltTarget.'.length), label: f.label }));
+
+/** A salt added until the finished buffer reaches a goal: `goal` is a SALT_TARGET_GOALS name, `value` in that field's unit. */
+export interface TableSaltTarget {
+  readonly form: string;
+  readonly goal: string;
+  readonly value: number;
+}
+
 /** A checked request for a recipe table. Units are in the names. */
 export interface TableRequest {
   readonly buffer: string;
+  readonly route: TableRoute;
+  /** Titrate and stock routes: the form weighed ('' on the two-forms route). */
   readonly form: string;
+  /** Two-forms route: the acid and the base form weighed ('' on the other routes). */
+  readonly acidForm: string;
+  readonly baseForm: string;
+  /** Stock route: how many times concentrated, and how much stock to make (mL; undefined: the final volume). */
+  readonly stockFold?: number;
+  readonly stockVolumeMl?: number;
   /** Purity (assay) of the form weighed, % (100 when the field is blank). */
   readonly purityPercent: number;
   readonly titrant: string;
   readonly titrantStockM: number;
+  /** A titrant of the buffer system itself (acetic acid into sodium acetate): state the total it makes, or hold the stated total. */
+  readonly titrantInBuffer: 'state' | 'hold';
   readonly targetPhs: readonly number[];
   readonly useTemperaturesC: readonly number[];
   readonly concentrationsMm: readonly number[];
-  /** Optional salt (e.g. sodium chloride) at a fixed concentration; blank form means none. */
-  readonly saltForm: string;
-  readonly saltMm: number;
+  /** Salts at fixed concentrations in the final buffer (none: empty). */
+  readonly salts: readonly SaltEntry[];
+  /** A salt added to reach an ionic strength, osmolarity or conductivity (none: undefined). */
+  readonly saltTarget?: TableSaltTarget;
   readonly volumeMl: number;
   readonly benchTemperatureC: number;
   readonly activityModel: PaneSettings['activityModel'];
@@ -60,6 +98,8 @@ export type FieldErrors = Partial<Record<FieldName, string>>;
 /** A failed check: a message per field, and the code of each error the input reader raised (as the functions and the command line raise them). */
 export type Checked = { readonly ok: true; readonly request: TableRequest } | { readonly ok: false; readonly errors: FieldErrors; readonly codes: Partial<Record<FieldName, string>> };
 
+/** Most salts at fixed concentrations one table holds (the rows of its salts block). */
+export const MAX_TABLE_SALTS = 6;
 /** Most rows one table may have (every target pH × temperature × concentration). */
 export const MAX_TABLE_ROWS = 2000;
 /** Most pH values a start/stop/step series may produce before the row limit is checked. */
@@ -120,15 +160,41 @@ export function checkForm(input: FormInput): Checked {
   };
 
   const buffer = need('buffer', 'a buffer system');
-  const form = need('form', 'the form you weigh');
+  let route: TableRoute = 'titrate';
+  try {
+    route = readChoiceField('route', input.route, 'route') as TableRoute;
+  } catch (e) {
+    fail('route', e);
+  }
+  const weighsOne = route !== 'two-forms';
+  const form = weighsOne ? need('form', 'the form you weigh') : '';
+  const acidForm = weighsOne ? '' : need('acidForm', 'the acid form you weigh');
+  const baseForm = weighsOne ? '' : need('baseForm', 'the base form you weigh');
+  let stockFold: number | undefined;
+  let stockVolumeMl: number | undefined;
+  if (route === 'stock') {
+    stockFold = number('stockFold', 'stock.fold', 'how many times concentrated the stock is', 'stock fold');
+    try {
+      stockVolumeMl = readNumberField('stock.volumeMl', input.stockVolumeMl, 'stock volume');
+    } catch (e) {
+      fail('stockVolumeMl', e);
+    }
+  }
   let purityPercent = 100;
   try {
     purityPercent = readPurityField('formPurityPercent', input.purityPercent, 'Form purity (%)') ?? 100;
   } catch (e) {
     fail('purityPercent', e);
   }
-  const titrant = need('titrant', 'a titrant');
-  const titrantStockM = number('titrantStockM', 'titrant.concentrationM', 'the titrant stock concentration', 'Titrant stock (M)');
+  const titrant = weighsOne ? need('titrant', 'a titrant') : input.titrant.trim();
+  let titrantInBuffer: TableRequest['titrantInBuffer'] = 'state';
+  try {
+    titrantInBuffer = readChoiceField('titrantInBuffer', input.titrantInBuffer, 'titrant of the buffer') as TableRequest['titrantInBuffer'];
+  } catch (e) {
+    fail('titrantInBuffer', e);
+  }
+  // Weighing two forms needs no titrant: its fields are then kept as typed for the next table, not checked.
+  const titrantStockM = weighsOne ? number('titrantStockM', 'titrant.concentrationM', 'the titrant stock concentration', 'Titrant stock (M)') : 1;
 
   let targetPhs: number[] = [];
   if (input.phMode === 'list') {
@@ -154,11 +220,21 @@ export function checkForm(input: FormInput): Checked {
 
   const useTemperaturesC = list('useTemperaturesC', 'useTemperatureC', 'temperature of use', 'temperature of use');
   const concentrationsMm = list('concentrationsMm', 'concentrationMm', 'buffer concentration', 'buffer concentration');
-  const saltForm = input.saltForm.trim();
-  let saltMm = 0;
-  if (saltForm !== '' || input.saltMm.trim() !== '') {
-    saltMm = number('saltMm', 'saltMm', 'the salt concentration', 'salt concentration');
-    if (saltForm === '' && saltMm > 0) errors.saltForm = 'Name the salt, or clear its concentration.';
+  let salts: SaltEntry[] = [];
+  try {
+    salts = readSaltsField(input.salts, 'salts');
+  } catch (e) {
+    fail('salts', e);
+  }
+  if (salts.length > MAX_TABLE_SALTS) errors.salts = `At most ${MAX_TABLE_SALTS} salts in one table.`;
+  let saltTarget: TableSaltTarget | undefined;
+  const targetForm = input.saltTargetForm.trim();
+  if (input.saltTargetGoal !== '' && input.saltTargetGoal !== 'none') {
+    const goal = SALT_TARGET_GOALS.find((g) => g.name === input.saltTargetGoal);
+    if (!goal) errors.saltTargetGoal = `Choose one of: ${SALT_TARGET_GOALS.map((g) => g.label).join(', ')}.`;
+    if (targetForm === '') errors.saltTargetForm = 'Name the salt added to reach the target.';
+    const value = goal ? number('saltTargetValue', `saltTarget.${goal.name}`, 'the target value', goal.label) : NaN;
+    if (goal && targetForm !== '' && !errors.saltTargetValue) saltTarget = { form: targetForm, goal: goal.name, value };
   }
   const volumeMl = number('volumeMl', 'volumeMl', 'the final volume', 'final volume');
   const benchTemperatureC = number('benchTemperatureC', 'benchTemperatureC', 'the bench temperature', 'bench temperature');
@@ -183,15 +259,21 @@ export function checkForm(input: FormInput): Checked {
     ok: true,
     request: {
       buffer,
+      route,
       form,
+      acidForm,
+      baseForm,
+      ...(stockFold === undefined ? {} : { stockFold }),
+      ...(stockVolumeMl === undefined ? {} : { stockVolumeMl }),
       purityPercent,
       titrant,
       titrantStockM,
+      titrantInBuffer,
       targetPhs,
       useTemperaturesC,
       concentrationsMm,
-      saltForm,
-      saltMm: saltForm === '' ? 0 : saltMm,
+      salts,
+      ...(saltTarget ? { saltTarget } : {}),
       volumeMl,
       benchTemperatureC,
       activityModel,
@@ -210,10 +292,16 @@ function unique(values: readonly number[]): number[] {
 export function defaultInput(settings: Partial<PaneSettings> = {}): FormInput {
   return {
     buffer: 'HEPES',
+    route: 'titrate',
     form: 'HEPES',
+    acidForm: '',
+    baseForm: '',
+    stockFold: '10',
+    stockVolumeMl: '',
     purityPercent: '',
     titrant: settings.titrant ?? 'NaOH',
     titrantStockM: String(settings.titrantStockM ?? 1),
+    titrantInBuffer: 'state',
     phMode: 'range',
     phStart: '7.0',
     phStop: '7.6',
@@ -221,8 +309,10 @@ export function defaultInput(settings: Partial<PaneSettings> = {}): FormInput {
     phList: '7.2; 7.4',
     useTemperaturesC: '4; 25',
     concentrationsMm: '25',
-    saltForm: 'sodium chloride',
-    saltMm: '150',
+    salts: 'sodium chloride 150 mM',
+    saltTargetForm: '',
+    saltTargetGoal: 'none',
+    saltTargetValue: '',
     volumeMl: '1000',
     benchTemperatureC: String(settings.benchTemperatureC ?? 22),
     activityModel: settings.activityModel ?? 'pitzer',

@@ -34,7 +34,6 @@ export interface RowCells {
   readonly targetPh: string;
   readonly useTemperatureC: string;
   readonly concentrationMm: string;
-  readonly saltMm: string;
   readonly volumeMl: string;
   readonly titrantMl: string;
   readonly partVolumeFraction: string;
@@ -47,7 +46,6 @@ export interface SettingCells {
   readonly purityPercent: string;
   readonly titrant: string;
   readonly titrantStockM: string;
-  readonly salt: string;
   readonly activityModel: string;
   readonly benchTemperatureC: string;
   readonly pKaUncertainty: string;
@@ -56,27 +54,29 @@ export interface SettingCells {
   readonly userSubstances: string;
   /** The settings that are recipe options, as a two-column range (label, value). */
   readonly options: string;
+  /** The salts block: two columns (name, mM); blank rows are no salt. */
+  readonly salts: string;
 }
 
-/** Grams of the salt, or blank when the sheet names no salt. */
-export const saltGrams = (s: SettingCells, r: RowCells) => `=IF(${s.salt}="","",${call('GRAMS', s.salt, r.saltMm, r.volumeMl, '', s.userSubstances)})`;
+/** Grams of a salt of the salts block for a volume, or blank beside a blank row. */
+export const saltGrams = (name: string, mM: string, volumeMl: string, userSubstances: string) => `=IF(${name}="","",${call('GRAMS', name, mM, volumeMl, '', userSubstances)})`;
 
 /**
- * The recipe row: one PROTON.RECIPE.ROW formula whose result spills across
- * RECIPE_ROW_COLUMNS cells — grams of the form, titrant mL and its band, the meter reading
- * at the bench, pH at use, capacity both ways, ionic strength, ideal osmolarity, warnings —
- * all from the recipe planner, salt included.
+ * The recipe row: one PROTON.RECIPE.ROW formula whose result spills across the row — grams
+ * of the form(s), titrant mL and its band, the meter reading at the bench, pH at use,
+ * capacity both ways, ionic strength, ideal osmolarity, salt to a target, stock per batch,
+ * warnings — all from the recipe planner, with the sheet's salts and options.
  */
-export const recipeRow = (s: SettingCells, r: RowCells, salts: string) =>
-  `=${call('RECIPE.ROW', s.buffer, r.targetPh, r.concentrationMm, r.volumeMl, r.useTemperatureC, salts, s.options, s.userSubstances)}`;
+export const recipeRow = (s: SettingCells, r: RowCells) =>
+  `=${call('RECIPE.ROW', s.buffer, r.targetPh, r.concentrationMm, r.volumeMl, r.useTemperatureC, s.salts, s.options, s.userSubstances)}`;
 
-/** A salt row for RECIPE.ROW and TITRANT.ML: the salt's name and mM, blank when the sheet names no salt. */
-export const saltName = (s: SettingCells) => `=IF(${s.salt}="","",${s.salt})`;
-export const saltAmount = (s: SettingCells, r: RowCells) => `=IF(${s.salt}="","",${r.saltMm})`;
+/** The whole recipe of a row, steps and warnings included, spilling one line per row (the row's live protocol). */
+export const recipeProtocol = (s: SettingCells, r: RowCells) =>
+  `=${call('RECIPE', s.buffer, r.targetPh, r.concentrationMm, r.volumeMl, r.useTemperatureC, s.salts, s.options, s.userSubstances)}`;
 
-/** Titrant volume at a pH with the row's salt, mL. */
-function titrantAt(s: SettingCells, r: RowCells, ph: string, salts: string): string {
-  return call('TITRANT.ML', s.form, r.concentrationMm, r.volumeMl, ph, s.titrant, s.titrantStockM, r.useTemperatureC, s.activityModel, salts, s.userSubstances);
+/** Titrant volume at a pH with the sheet's salts, mL. */
+function titrantAt(s: SettingCells, r: RowCells, ph: string): string {
+  return call('TITRANT.ML', s.form, r.concentrationMm, r.volumeMl, ph, s.titrant, s.titrantStockM, r.useTemperatureC, s.activityModel, s.salts, s.userSubstances);
 }
 
 /** Titrant amount in the final solution, mM, from its volume (mL × mol/L ÷ mL × 1000). */
@@ -86,9 +86,9 @@ export const nameOrBlank = (name: string) => `=IF(${name}="","",${name})`;
 export const amountOrBlank = (name: string, mM: string) => `=IF(${name}="","",${mM})`;
 
 /** Titrant volume at a pH, for the curve (the chart's row of the table gives form, amounts, salt and temperature). */
-export const curveTitrantMl = (s: SettingCells, r: RowCells, ph: string, salts: string) => `=IFERROR(${titrantAt(s, r, ph, salts)},NA())`;
+export const curveTitrantMl = (s: SettingCells, r: RowCells, ph: string) => `=IFERROR(${titrantAt(s, r, ph)},NA())`;
 /** Capacity at a pH for the capacity curve: the composition of the chart's row at that pH's titrant amount. */
 export const curveCapacity = (s: SettingCells, r: RowCells, composition: string) => `=IFERROR(${call('CAPACITY', composition, text('base'), r.useTemperatureC, s.activityModel, s.userSubstances)},NA())`;
-/** Apparent pKa′ of a step at the row's temperature (for the usable range, pKa′ ± 1). */
+/** Apparent pKa′ of a step at the row's temperature (for the usable range, pKa′ ± the buffering half-width). */
 export const pKaPrime = (buffer: string, step: number, r: RowCells, s: SettingCells, ionicStrength: string) =>
   `=${call('PKA', buffer, String(step), r.useTemperatureC, ionicStrength, s.activityModel, s.userSubstances)}`;

@@ -13,5 +13,6 @@ Office.onReady((info) => {
     return;
   }
   const port = new ExcelAdapter((batch) => Excel.run(batch), Office.context.document.settings);
-  void mountPane(root, { port, version: VERSION });
+  // Excel shows the pane again from the add-in's ribbon button (shared runtime).
+  void mountPane(root, { port, version: VERSION, onHide: () => void Office.addin.hide() });
 });

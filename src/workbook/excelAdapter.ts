@@ -19,6 +19,7 @@ const STYLE_FORMATS: Record<CellStyle, { bold?: boolean; italic?: boolean; size?
   warning: { color: '#7A4A00', fill: '#FFF4DC' },
   caution: { bold: true, color: '#8A1C1C' },
   provenance: { color: '#40505A', fill: '#F3F3F0' },
+  text: {},
 };
 
 /** Excel's API, as much of it as the adapter needs (lets tests pass office-addin-mock objects). */
@@ -117,7 +118,9 @@ export class ExcelAdapter implements WorkbookPort {
     if (f.size !== undefined) range.format.font.size = f.size;
     if (f.color !== undefined) range.format.font.color = f.color;
     if (f.fill !== undefined) range.format.fill.color = f.fill;
-    if (style === 'warning' || style === 'note') range.format.wrapText = false;
+    // Warnings wrap in their column (they are long and the charts sit to their right); notes run over empty cells.
+    if (style === 'warning' || style === 'text') range.format.wrapText = true;
+    if (style === 'note') range.format.wrapText = false;
   }
 
   async setColumnWidths(sheet: string, widths: readonly number[]): Promise<void> {

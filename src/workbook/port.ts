@@ -11,7 +11,7 @@
 export type CellValue = string | number | boolean | null;
 
 /** How a cell looks; adapters map these to their own formats. */
-export type CellStyle = 'title' | 'subtitle' | 'label' | 'header' | 'input' | 'result' | 'note' | 'warning' | 'caution' | 'provenance';
+export type CellStyle = 'title' | 'subtitle' | 'label' | 'header' | 'input' | 'result' | 'note' | 'warning' | 'caution' | 'provenance' | 'text';
 
 /** One cell to write: a literal value or a formula (text starting with `=`). */
 export interface CellWrite {

@@ -23,6 +23,7 @@ export const PRINT_STYLES: Readonly<Record<CellStyle, Readonly<Record<string, st
   result: {},
   note: { 'font-style': 'italic', color: '#52616B' },
   warning: { color: '#7A4A00', background: '#FFF4DC' },
+  text: { 'white-space': 'normal' },
   caution: { 'font-weight': '700', color: '#8A1C1C' },
   provenance: { color: '#40505A', background: '#F3F3F0' },
 };

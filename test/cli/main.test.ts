@@ -8,6 +8,17 @@ function call(args: string[]): { code: number; out: any } {
   return { code, out: text.startsWith('{') || text.startsWith('[') ? JSON.parse(text) : text };
 }
 
+describe('proton-ledger recipe: a name that leaves the hydrate open', () => {
+  it('weighs the library form under that name and warns with code hydrateAssumed, naming it and its molar mass', () => {
+    const { code, out } = call(['recipe', '--json', JSON.stringify({ buffer: 'phosphate', targetPh: 7.2, concentrationMm: 50, volumeMl: 500, route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'sodium phosphate dibasic' })]);
+    expect(code).toBe(0);
+    const found = out.warnings.filter((w: { code: string }) => w.code === 'hydrateAssumed');
+    expect(found).toHaveLength(1);
+    expect(found[0].field).toBe('baseForm');
+    expect(found[0].message).toMatch(/sodium phosphate dibasic anhydrous \(141\.9\d g\/mol\) is used/);
+  });
+});
+
 describe('proton-ledger solve', () => {
   it('solves an inline composition given in mM and prints one JSON result', () => {
     const { code, out } = call(['solve', '--json', JSON.stringify({ systems: [{ name: 'MES', chargeOfMostProtonated: 0, pKa: [6.27], totalMm: 50 }], strongIonsMm: { 'Na+': 25 }, activityModel: 'ideal' })]);
@@ -178,7 +189,7 @@ describe('proton-ledger help, version and batches', () => {
     expect(rows[2].error).toMatchObject({ kind: 'infeasible-target', code: 'unreachablePh' });
     expect(rows[3]['titrant (mL)']).toBeGreaterThan(0);
     const csv = await cli(['recipe', '--batch', input]);
-    expect(csv.text.split('\n')[0]).toMatch(/^row,form \(g\),titrant \(mL\)/);
+    expect(csv.text.split('\n')[0]).toMatch(/^row,form \(g\),base form \(g\),titrant \(mL\)/);
   });
 
   it('writes a batch as .xlsx, and solves a JSON-lines batch of compositions', async () => {

@@ -5,6 +5,8 @@ import { errorOf } from './errorOf';
 
 /** The sheet functions call the planner; their numbers are the planner's, unrounded. */
 const SAME = 1e-12;
+/** A RECIPE.ROW column by its header. */
+const col = (name: (typeof RECIPE_ROW_HEADER)[number]) => RECIPE_ROW_HEADER.indexOf(name);
 
 describe('RECIPE.ROW', () => {
   const options = [['form', 'HEPES free acid'], ['titrant', 'NaOH'], ['titrant.concentrationM', 1], ['benchTemperatureC', 22], ['partVolumeFraction', 0.8]];
@@ -14,25 +16,25 @@ describe('RECIPE.ROW', () => {
     const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, useTemperatureC: 4, benchTemperatureC: 22, partVolumeFraction: 0.8, salts: [{ form: 'NaCl', concentrationMm: 150 }] });
     const [r] = row();
     expect(r).toHaveLength(RECIPE_ROW_HEADER.length);
-    expect(Math.abs((r[0] as number) - plan.components[0].grams!)).toBeLessThan(SAME);
-    expect(Math.abs((r[1] as number) - plan.titration!.volumeMl)).toBeLessThan(SAME);
-    expect(r[2] as number).toBeLessThan(r[1] as number);
-    expect(r[3] as number).toBeGreaterThan(r[1] as number);
-    expect(Math.abs((r[4] as number) - plan.meter.pH)).toBeLessThan(SAME);
-    expect(Math.abs((r[5] as number) - 7.4)).toBeLessThan(0.001);
-    expect(r[10]).toBe('');
+    expect(Math.abs((r[col('form (g)')] as number) - plan.components[0].grams!)).toBeLessThan(SAME);
+    expect(Math.abs((r[col('titrant (mL)')] as number) - plan.titration!.volumeMl)).toBeLessThan(SAME);
+    expect(r[col('titrant low (mL)')] as number).toBeLessThan(r[col('titrant (mL)')] as number);
+    expect(r[col('titrant high (mL)')] as number).toBeGreaterThan(r[col('titrant (mL)')] as number);
+    expect(Math.abs((r[col('meter reads (pH)')] as number) - plan.meter.pH)).toBeLessThan(SAME);
+    expect(Math.abs((r[col('pH at use')] as number) - 7.4)).toBeLessThan(0.001);
+    expect(r[col('warnings')]).toBe('');
   });
 
   it('accepts numbers as text, blank optional arguments and mixed-case names', () => {
     const [r] = recipeRow('hepes', '7,4', '25 mM', '0.5 L', null, undefined, [['Form weighed', 'hepes FREE acid'], ['', '']], undefined);
-    expect(Math.abs((r[5] as number) - 7.4)).toBeLessThan(0.001);
+    expect(Math.abs((r[col('pH at use')] as number) - 7.4)).toBeLessThan(0.001);
   });
 
   it('carries warnings as text', () => {
     const [r] = recipeRow('HEPES', 9.3, 25, 500, '', undefined, [['form', 'HEPES free acid'], ['titrant', 'NaOH']]);
     const plan = planRecipe({ buffer: 'HEPES', targetPh: 9.3, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } });
     expect(plan.warnings.map((w) => w.code)).toContain('weakBuffering');
-    expect(r[10]).toBe(plan.warnings.map((w) => w.message).join(' '));
+    expect(r[col('warnings')]).toBe(plan.warnings.map((w) => w.message).join(' '));
   });
 
   it('weighs more of a form that is less than pure: the same grams for 0.98, 98 and "98%", pure grams ÷ 0.98', () => {
@@ -40,17 +42,36 @@ describe('RECIPE.ROW', () => {
     const pure = recipeRow('MES', 6.1, 20, 1000, '', undefined, mes)[0];
     for (const purity of [0.98, 98, '98%']) {
       const [r] = recipeRow('MES', 6.1, 20, 1000, '', undefined, [...mes, ['formPurityPercent', purity]]);
-      expect(Math.abs((r[0] as number) - (pure[0] as number) / 0.98)).toBeLessThan(1e-9);
+      expect(Math.abs((r[col('form (g)')] as number) - (pure[col('form (g)')] as number) / 0.98)).toBeLessThan(1e-9);
       // The chemistry is the same: only the mass weighed changes.
-      expect(r[1]).toBe(pure[1]);
-      expect(r[4]).toBe(pure[4]);
+      expect(r[col('titrant (mL)')]).toBe(pure[col('titrant (mL)')]);
+      expect(r[col('meter reads (pH)')]).toBe(pure[col('meter reads (pH)')]);
     }
     expect(errorOf(() => recipeRow('MES', 6.1, 20, 1000, '', undefined, [...mes, ['Form purity (%)', 150]]))).toMatchObject({ code: 'outOfRange', field: 'Form purity (%)' });
   });
 
+  it('gives every route: two forms (acid and base grams, no titrant), a stock (its own meter reading, stock per batch), a salt to a target (its grams)', () => {
+    const pair = [['route', 'two-forms'], ['acidForm', 'sodium phosphate monobasic monohydrate'], ['baseForm', 'sodium phosphate dibasic heptahydrate']];
+    const two = planRecipe({ buffer: 'phosphate', targetPh: 7.0, concentrationMm: 100, volumeMl: 1000, route: 'two-forms', acidForm: 'sodium phosphate monobasic monohydrate', baseForm: 'sodium phosphate dibasic heptahydrate' });
+    const [r2] = recipeRow('phosphate', 7.0, 100, 1000, '', undefined, pair);
+    expect(Math.abs((r2[col('form (g)')] as number) - two.components.find((c) => c.role === 'acid form')!.grams!)).toBeLessThan(SAME);
+    expect(Math.abs((r2[col('base form (g)')] as number) - two.components.find((c) => c.role === 'base form')!.grams!)).toBeLessThan(SAME);
+    expect(r2[col('titrant (mL)')]).toBe(0);
+    const stockOptions = [['route', 'stock'], ['form', 'MES free acid'], ['titrant', 'NaOH'], ['titrant.concentrationM', 10], ['stock.fold', 10], ['stock.volumeMl', 200]];
+    const stock = planRecipe({ buffer: 'MES', targetPh: 6.0, concentrationMm: 50, volumeMl: 1000, route: 'stock', form: 'MES free acid', titrant: { form: 'NaOH', concentrationM: 10 }, stock: { fold: 10, volumeMl: 200 } });
+    const [rs] = recipeRow('MES', 6.0, 50, 1000, '', undefined, stockOptions);
+    expect(Math.abs((rs[col('meter reads (pH)')] as number) - stock.meter.pH)).toBeLessThan(SAME);
+    expect(rs[col('stock per batch (mL)')]).toBe(100);
+    expect(Math.abs((rs[col('titrant (mL)')] as number) - stock.titration!.volumeMl)).toBeLessThan(SAME);
+    const [rt] = recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['saltTarget.form', 'NaCl'], ['saltTarget.ionicStrengthM', 0.15]]);
+    const target = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 500, saltTarget: { form: 'NaCl', ionicStrengthM: 0.15 } });
+    expect(Math.abs((rt[col('salt to target (g)')] as number) - target.components.find((c) => c.toTarget)!.grams!)).toBeLessThan(SAME);
+    expect(Math.abs((rt[col('ionic strength (mM)')] as number) - 150)).toBeLessThan(0.01);
+    expect(r2[col('salt to target (g)')]).toBe('');
+  });
+
   it('names the argument on bad input', () => {
     expect(errorOf(() => recipeRow('HEPES', 15, 25, 500))).toMatchObject({ kind: 'value', code: 'outOfRange', field: 'targetPh' });
-    expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['form', 'NaH2PO4 + Na2HPO4']]))).toMatchObject({ kind: 'value', code: 'oneFormOnly', field: 'form' });
     expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, 25, [['NaCl', 'lots']]))).toMatchObject({ kind: 'value', code: 'notANumber', field: 'salts row 1 (mM)' });
     expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['titrant.concentrationM', 25]]))).toMatchObject({ kind: 'value', code: 'outOfRange', field: 'titrant.concentrationM' });
   });
@@ -124,9 +145,9 @@ describe('recipe functions through the formula engine', () => {
         ['=PROTON.RECIPE.ROW("HEPES", 7.4, 25, 500, 4, A1:B1, D1:E2)'],
       ],
     });
-    const phAtUse = hf.getCellValue({ sheet: 0, row: 2, col: 5 }) as number;
+    const phAtUse = hf.getCellValue({ sheet: 0, row: 2, col: col('pH at use') }) as number;
     expect(Math.abs(phAtUse - 7.4)).toBeLessThan(0.001);
-    expect(typeof hf.getCellValue({ sheet: 0, row: 2, col: 4 })).toBe('number');
+    expect(typeof hf.getCellValue({ sheet: 0, row: 2, col: col('meter reads (pH)') })).toBe('number');
   });
 
   it('RECIPE spills 48 rows', () => {

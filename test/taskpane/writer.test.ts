@@ -7,8 +7,9 @@ import { planRecipe } from '../../src/chem/planner';
 import { createFormulaEngine } from '../../src/functions/formulaEngine';
 import { PreviewWorkbook } from '../../src/preview/workbook';
 import { checkForm, defaultInput } from '../../src/taskpane/form';
-import { COL, LAYOUT, SETTING_VALUE_COL, SettingLabel, settingRow } from '../../src/taskpane/recipeTable';
-import { buildRecipeTable, valuesCopy } from '../../src/taskpane/writer';
+import { COL, LAYOUT, SALTS_BLOCK, SETTING_VALUE_COL, SettingLabel, settingRow } from '../../src/taskpane/recipeTable';
+import { PROTOCOL_FIRST_ROW } from '../../src/taskpane/protocol';
+import { buildRecipeTable, showProtocol, valuesCopy } from '../../src/taskpane/writer';
 import { PreviewAdapter } from '../../src/workbook/previewAdapter';
 
 function setup() {
@@ -29,7 +30,7 @@ describe('recipe table in the preview workbook', () => {
     if (!result.ok) return;
     expect(result.rows).toBe(8); // 4 pH × 2 temperatures × 1 concentration
     expect(active()).toBe(result.sheet);
-    expect(book.sheetNames()).toEqual(['Notes', result.sheet]);
+    expect(book.sheetNames()).toEqual(['Notes', result.sheet, result.protocolSheet]);
     expect(progress[progress.length - 1]).toBe(8);
     const row = LAYOUT.firstDataRow;
     const v = (col: number, r = row) => book.value(result.sheet, r, col);
@@ -54,7 +55,7 @@ describe('recipe table in the preview workbook', () => {
       titrant: { form: setting('Titrant') as string, concentrationM: setting('Titrant stock (M)') as number },
       benchTemperatureC: setting('Bench temp. (°C)') as number,
       partVolumeFraction: setting('Adjust at (fraction)') as number,
-      salts: [{ form: setting('Salt') as string, concentrationMm: v(COL.saltMm) as number }],
+      salts: [{ form: book.value(result.sheet, SALTS_BLOCK.row + 1, SALTS_BLOCK.col) as string, concentrationMm: book.value(result.sheet, SALTS_BLOCK.row + 1, SALTS_BLOCK.col + 1) as number }],
     });
     expect(Math.abs((v(COL.titrantMl) as number) - plan.titration!.volumeMl)).toBeLessThan(1e-9);
     expect(Math.abs((v(COL.meter) as number) - plan.meter.pH)).toBeLessThan(1e-9);
@@ -94,12 +95,12 @@ describe('recipe table in the preview workbook', () => {
 
   test('misspelt or mismatched names: the library nearest names under each field, and nothing written', async () => {
     const { book, port } = setup();
-    const result = await buildRecipeTable(port, { ...defaultInput(), buffer: 'HEPSE', titrant: 'NaOHH', saltForm: 'sodium chlorid' }, { version: '0.1.0' });
+    const result = await buildRecipeTable(port, { ...defaultInput(), buffer: 'HEPSE', titrant: 'NaOHH', salts: 'sodium chlorid 100 mM' }, { version: '0.1.0' });
     expect(result.ok).toBe(false);
     if (result.ok) return;
     expect(result.errors.buffer).toMatch(/^"HEPSE" is not in the substance library; did you mean .*"HEPES"/);
     expect(result.errors.titrant).toMatch(/^"NaOHH" is not in the substance library; did you mean .*"NaOH"/);
-    expect(result.errors.saltForm).toMatch(/did you mean .*"sodium chloride"/);
+    expect(result.errors.salts).toMatch(/did you mean .*"sodium chloride"/);
     expect(book.sheetNames()).toEqual(['Notes']);
 
     const mismatched = await buildRecipeTable(port, { ...defaultInput(), buffer: 'tris', form: 'HEPES free acid' }, { version: '0.1.0' });
@@ -150,7 +151,7 @@ describe('recipe table in the preview workbook', () => {
     const b = await buildRecipeTable(port, defaultInput(), { version: '0.1.0', now: NOW });
     if (!a.ok || !b.ok) throw new Error('not built');
     expect(b.sheet).toBe(`${a.sheet} (2)`);
-    expect(book.sheetNames()).toHaveLength(3);
+    expect(book.sheetNames()).toHaveLength(5); // two tables, each with its protocol sheet
   });
 
   test('values copy: numbers without formulas, under a provenance block', async () => {
@@ -167,6 +168,115 @@ describe('recipe table in the preview workbook', () => {
     const gramsCopy = book.value(copy.sheet, 9 + LAYOUT.firstDataRow, COL.formGrams);
     expect(gramsCopy).toBeCloseTo(book.value(built.sheet, LAYOUT.firstDataRow, COL.formGrams) as number, 9);
     expect(book.formula(copy.sheet, 9 + LAYOUT.firstDataRow, COL.formGrams)).toBeUndefined();
+    // The table's note about live formulas is not copied: a copy says it holds values only.
+    const notes = book.values(copy.sheet, { row: 9, col: 0, rowCount: 3, colCount: 1 }).map((r) => String(r[0]));
+    expect(notes.join(' ')).not.toMatch(/live PROTON formula/);
+    expect(notes.join(' ')).toMatch(/Values only/);
+  });
+
+  test('every route (issue 17, item 1): a 10× stock, two forms and several salts, and a salt to a target, each row the planner’s', async () => {
+    const { book, port } = setup();
+    const stock = await buildRecipeTable(port, { ...defaultInput(), buffer: 'MES', form: 'MES free acid', route: 'stock', stockFold: '10', stockVolumeMl: '100 mL', titrantStockM: '10', phMode: 'list', phList: '6.0', useTemperaturesC: '25', concentrationsMm: '50', salts: '' }, { version: '0.1.0', now: NOW });
+    if (!stock.ok) throw new Error(JSON.stringify(stock));
+    const row = LAYOUT.firstDataRow;
+    const plan = planRecipe({ buffer: 'MES', targetPh: 6.0, concentrationMm: 50, volumeMl: 1000, useTemperatureC: 25, route: 'stock', form: 'MES free acid', titrant: { form: 'NaOH', concentrationM: 10 }, stock: { fold: 10, volumeMl: 100 }, benchTemperatureC: 22, partVolumeFraction: 0.8 });
+    expect(Math.abs((book.value(stock.sheet, row, COL.titrantMl) as number) - plan.titration!.volumeMl)).toBeLessThan(1e-9);
+    expect(Math.abs((book.value(stock.sheet, row, COL.meter) as number) - plan.meter.pH)).toBeLessThan(1e-9);
+    expect(book.value(stock.sheet, row, COL.stockPerBatchMl)).toBe(100);
+    expect(stock.sheet).toMatch(/10x stock pH 6$/);
+
+    const two = await buildRecipeTable(port, { ...defaultInput(), buffer: 'phosphate', route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'sodium phosphate dibasic heptahydrate', salts: 'NaCl 137 mM; KCl 2.7 mM', phMode: 'list', phList: '7.4', useTemperaturesC: '25', concentrationsMm: '10' }, { version: '0.1.0', now: NOW });
+    if (!two.ok) throw new Error(JSON.stringify(two));
+    // The settings show the forms as the library names them, not as typed.
+    expect(book.value(two.sheet, settingRow('Acid form'), SETTING_VALUE_COL)).toBe('sodium phosphate monobasic monohydrate');
+    const twoPlan = planRecipe({ buffer: 'phosphate', targetPh: 7.4, concentrationMm: 10, volumeMl: 1000, useTemperatureC: 25, route: 'two-forms', acidForm: 'sodium phosphate monobasic monohydrate', baseForm: 'sodium phosphate dibasic heptahydrate', salts: [{ form: 'sodium chloride', concentrationMm: 137 }, { form: 'potassium chloride', concentrationMm: 2.7 }], benchTemperatureC: 22 });
+    expect(Math.abs((book.value(two.sheet, row, COL.baseFormGrams) as number) - twoPlan.components.find((c) => c.role === 'base form')!.grams!)).toBeLessThan(1e-9);
+    expect(Math.abs((book.value(two.sheet, row, COL.ionicStrength) as number) - twoPlan.predictions.ionicStrengthM * 1000)).toBeLessThan(1e-9);
+    expect(book.value(two.sheet, SALTS_BLOCK.row + 2, SALTS_BLOCK.col)).toBe('potassium chloride');
+
+    const target = await buildRecipeTable(port, { ...defaultInput(), salts: '', saltTargetGoal: 'idealOsmolarityMosm', saltTargetForm: 'NaCl', saltTargetValue: '300', phMode: 'list', phList: '7.4', useTemperaturesC: '25' }, { version: '0.1.0', now: NOW });
+    if (!target.ok) throw new Error(JSON.stringify(target));
+    expect(Math.abs((book.value(target.sheet, row, COL.osmolarity) as number) - 300)).toBeLessThan(0.01);
+    expect(book.value(target.sheet, row, COL.saltTargetGrams) as number).toBeGreaterThan(0);
+  });
+
+  test('rows that cannot be made (issue 17, item 4): listed with the planner’s code before anything is written; dropped on request', async () => {
+    const { book, port } = setup();
+    // KH2PO4 already reads about pH 4.5: HCl cannot bring it up to 6.8, but 3.5 is within reach.
+    const input = { ...defaultInput(), buffer: 'phosphate', form: 'KH2PO4', titrant: 'HCl', phMode: 'list', phList: '3.5; 6.8', useTemperaturesC: '25', salts: '' };
+    const asked = await buildRecipeTable(port, input, { version: '0.1.0', now: NOW });
+    expect(asked.ok).toBe(false);
+    if (asked.ok) return;
+    expect(asked.unmakeable!.map((f) => [f.index, f.row.targetPh, f.code])).toEqual([[2, 6.8, 'unreachablePh']]);
+    expect(book.sheetNames()).toEqual(['Notes']);
+    const dropped = await buildRecipeTable(port, input, { version: '0.1.0', now: NOW, unmakeable: 'drop' });
+    if (!dropped.ok) throw new Error('not built');
+    expect(dropped.rows).toBe(1);
+    expect(book.value(dropped.sheet, LAYOUT.firstDataRow, COL.targetPh)).toBe(3.5);
+    expect(typeof book.value(dropped.sheet, LAYOUT.firstDataRow, COL.titrantMl)).toBe('number');
+  });
+
+  test('the protocol of any row is live (issue 17, item 2): it follows the row number and an edit of that row', async () => {
+    const { book, port } = setup();
+    const built = await buildRecipeTable(port, defaultInput(), { version: '0.1.0', now: NOW });
+    if (!built.ok) throw new Error('not built');
+    const meterLine = () => {
+      const lines = book.values(built.protocolSheet, { row: PROTOCOL_FIRST_ROW, col: 0, rowCount: 48, colCount: 4 });
+      return lines.find((l) => l[0] === 'meter')![2] as number;
+    };
+    await showProtocol(port, 3, built.sheet);
+    const third = LAYOUT.firstDataRow + 2;
+    expect(Math.abs(meterLine() - (book.value(built.sheet, third, COL.meter) as number))).toBeLessThan(1e-9);
+    book.setContents(built.sheet, third, COL.targetPh, [[7.3]]);
+    expect(Math.abs(meterLine() - (book.value(built.sheet, third, COL.meter) as number))).toBeLessThan(1e-9);
+    expect(book.formula(built.protocolSheet, PROTOCOL_FIRST_ROW, 0)).toMatch(/^=PROTON\.RECIPE\(/);
+    await expect(showProtocol(port, 99, built.sheet)).rejects.toThrow(/from 1 to 8/);
+  });
+
+  test('a build can be stopped between slices; progress reports planning, then writing', async () => {
+    const { book, port } = setup();
+    const phases: string[] = [];
+    let slices = 0;
+    const stopped = await buildRecipeTable(port, { ...defaultInput(), phStep: '0.01' }, {
+      version: '0.1.0',
+      onProgress: (_d, _t, phase) => phases.push(phase),
+      yieldToPage: async () => void slices++,
+      cancelled: () => slices >= 2,
+    });
+    expect(stopped.ok).toBe(false);
+    if (!stopped.ok) expect(stopped.cancelled).toBe(true);
+    expect(phases[0]).toBe('planning');
+    expect(book.sheetNames()).toEqual(['Notes']);
+  });
+
+  test('a name that leaves the hydrate open is not resolved silently (issue 17, item 5): the pane asks which form is on the shelf', async () => {
+    const { book, port } = setup();
+    const asked = await buildRecipeTable(port, { ...defaultInput(), buffer: 'phosphate', route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'sodium phosphate dibasic', salts: 'CaCl2 1 mM' }, { version: '0.1.0', now: NOW });
+    expect(asked.ok).toBe(false);
+    if (asked.ok) return;
+    expect(asked.errors.baseForm).toMatch(/sodium phosphate dibasic anhydrous, 141\.9\d g\/mol.*sodium phosphate dibasic heptahydrate, 268\.0\d g\/mol.*name the one on your shelf/);
+    expect(asked.errors.salts).toMatch(/calcium chloride dihydrate/);
+    expect(asked.errors.acidForm).toBeUndefined();
+    expect(book.sheetNames()).toEqual(['Notes']);
+  });
+
+  test('a titrant of the buffer itself (issue 17, item 6): the row states the total it makes; the "hold" setting weighs less instead', async () => {
+    const { book, port } = setup();
+    const built = await buildRecipeTable(port, { ...defaultInput(), buffer: 'acetate', form: 'sodium acetate trihydrate', titrant: 'acetic acid', phMode: 'list', phList: '4.6', useTemperaturesC: '25', concentrationsMm: '100', salts: '' }, { version: '0.1.0', now: NOW });
+    if (!built.ok) throw new Error(JSON.stringify(built));
+    const row = LAYOUT.firstDataRow;
+    expect(String(book.value(built.sheet, row, COL.warnings))).toMatch(/is itself a form of acetate: the finished buffer holds \d+(\.\d+)? mM acetate in all, not the 100 mM stated/);
+    const stated = book.value(built.sheet, row, COL.formGrams) as number;
+    book.setContents(built.sheet, settingRow('Titrant of the buffer'), SETTING_VALUE_COL, [['hold']]);
+    expect(String(book.value(built.sheet, row, COL.warnings))).not.toMatch(/is itself a form of acetate/);
+    expect(book.value(built.sheet, row, COL.formGrams) as number).toBeLessThan(stated);
+  });
+
+  test('sheet names keep the decimals of the pH series (issue 17, item 9)', async () => {
+    const { port } = setup();
+    const built = await buildRecipeTable(port, { ...defaultInput(), phStart: '6.6', phStop: '7.0', phStep: '0.2', useTemperaturesC: '25' }, { version: '0.1.0', now: NOW });
+    if (!built.ok) throw new Error('not built');
+    expect(built.sheet).toBe('HEPES 25 mM pH 6.6–7.0');
   });
 });
 
@@ -188,9 +298,14 @@ describe('form checks', () => {
     expect(!c.ok && c.errors.buffer).toBe('Give a buffer system.');
     expect(!c.ok && c.errors.titrantStockM).toBe('Give the titrant stock concentration.');
   });
-  test('a salt concentration without a salt name is refused', () => {
-    const c = checkForm({ ...defaultInput(), saltForm: '', saltMm: '100' });
-    expect(!c.ok && c.errors.saltForm).toMatch(/Name the salt/);
+  test('a salt without an amount is refused with the reader’s code', () => {
+    const c = checkForm({ ...defaultInput(), salts: 'NaCl' });
+    expect(!c.ok && c.codes.salts).toBe('notANumber');
+  });
+  test('a salt target needs its salt and a value in the goal’s declared range', () => {
+    const c = checkForm({ ...defaultInput(), saltTargetGoal: 'ionicStrengthM', saltTargetForm: '', saltTargetValue: '9' });
+    expect(!c.ok && c.errors.saltTargetForm).toMatch(/Name the salt/);
+    expect(!c.ok && c.codes.saltTargetValue).toBe('outOfRange');
   });
 });
 

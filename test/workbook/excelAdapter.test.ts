@@ -167,9 +167,9 @@ describe('ExcelAdapter on office-addin-mock', () => {
     const { adapter, calls, stored } = fakeExcel(['Prep']);
     const result = await buildRecipeTable(adapter, defaultInput(), { version: '0.1.0' });
     expect(result.ok).toBe(true);
-    expect(calls[0]).toEqual({ what: 'worksheets.add', args: ['HEPES 25 mM pH 7–7.6'] });
+    expect(calls[0]).toEqual({ what: 'worksheets.add', args: ['HEPES 25 mM pH 7.0–7.6'] });
     expect(calls.filter((c) => c.what === 'charts.add')).toHaveLength(2);
-    expect(calls[calls.length - 1]).toEqual({ what: 'activate', args: ['HEPES 25 mM pH 7–7.6'] });
+    expect(calls[calls.length - 1]).toEqual({ what: 'activate', args: ['HEPES 25 mM pH 7.0–7.6'] });
     expect(JSON.parse(String(stored.get(SETTINGS_KEY)))).toEqual({ activityModel: 'pitzer', benchTemperatureC: 22, titrant: 'NaOH', titrantStockM: 1, partVolumeFraction: 0.8 });
   });
 

@@ -139,6 +139,10 @@ export const FIELDS: readonly Field[] = [
     kind: 'number', scope: 'recipe', name: 'partVolumeFraction', label: 'Adjust at (fraction)', dimension: 'fraction', unit: '', min: 0.1, max: 1, default: 0.8,
     description: 'Fraction of the final volume in which the pH is adjusted.', example: '0.8',
   },
+  {
+    kind: 'choice', scope: 'recipe', name: 'titrantInBuffer', label: 'Titrant of the buffer', choices: ['state', 'hold'], default: 'state',
+    description: 'When the titrant is itself a form of the buffer (acetic acid into sodium acetate): "state" weighs the stated amount and says the total the titrant makes; "hold" weighs less so the stated total holds.', example: 'hold',
+  },
   { kind: 'choice', scope: 'recipe', name: 'activityModel', label: 'Activity model', choices: ACTIVITY_MODELS, default: ACTIVITY_MODELS[0], description: 'Activity model for the equilibrium solver.', example: 'davies' },
   {
     kind: 'number', scope: 'recipe', name: 'pKaUncertainty', label: 'pKa uncertainty (±)', dimension: 'fraction', unit: '', min: 0, max: 1, defaultText: 'the library’s, or 0.02',

@@ -59,6 +59,15 @@ export interface SubstanceListing {
   readonly userDefined: boolean;
 }
 
+/** A formula without its water of hydration: `Na2HPO4·7H2O` → `Na2HPO4`. */
+function saltOf(formula: string): string {
+  return formula
+    .split('·')
+    .map((part) => part.trim())
+    .filter((part) => !/^\d*(\.\d+)?H2O$/.test(part))
+    .join('·');
+}
+
 /** A substance library: the built-in table plus any user substances. */
 export interface SubstanceLibrary {
   /** The acid–base system by name or alias (a form's name finds its system too). */
@@ -67,6 +76,13 @@ export interface SubstanceLibrary {
   /** A form by name or alias, with its computed molar mass. */
   /** A form on the shelf by name; `field` names the input in errors (default `form`). */
   findForm(name: string, field?: string): LibraryForm;
+  /**
+   * The other hydration states of a form, when a name leaves the state open: a name that
+   * says neither "anhydrous" nor a water count (`sodium phosphate dibasic`, `MgCl2`) while
+   * the same salt is listed anhydrous and as hydrates. Empty when the name is explicit or
+   * the salt has one form.
+   */
+  hydrateAlternatives(name: string): readonly LibraryForm[];
   /** Every substance, in table order (library first, then the user's). */
   list(): readonly SubstanceListing[];
   /** Every substance record. */
@@ -199,6 +215,17 @@ class Library implements SubstanceLibrary {
     const found = typeof name === 'string' ? this.forms.get(nameKey(name)) : undefined;
     if (found) return found;
     return this.notFound(field, name, this.formNames);
+  }
+
+  hydrateAlternatives(name: string): readonly LibraryForm[] {
+    const key = typeof name === 'string' ? nameKey(name) : '';
+    const form = this.forms.get(key);
+    // The form's own name is explicit (the library names each hydrate), as is any name that states the water.
+    if (!form || key === nameKey(form.name) || key.includes('·') || key.includes('anhydrous') || key.includes('hydrate')) return [];
+    const salt = saltOf(form.formula);
+    const record = this.all.find((r) => r.name === form.substance);
+    const siblings = (record?.forms ?? []).filter((f) => f.name !== form.name && f.formula !== '' && saltOf(f.formula) === salt);
+    return siblings.map((f) => this.forms.get(nameKey(f.name))!).filter(Boolean);
   }
 
   list(): readonly SubstanceListing[] {

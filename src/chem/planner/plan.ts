@@ -81,7 +81,7 @@ const ACTIVITY_RANGE_CODES: ReadonlySet<string> = new Set(['beyondActivityModel'
 interface RouteResult {
   readonly composition: Composition;
   /** Forms weighed with their concentrations in the solution made, mol/L. */
-  readonly weighed: readonly { readonly role: RecipeComponent['role']; readonly form: LibraryForm; readonly concentrationM: number }[];
+  readonly weighed: readonly { readonly role: RecipeComponent['role']; readonly form: LibraryForm; readonly concentrationM: number; readonly toTarget?: true }[];
   readonly titrant?: {
     readonly form: LibraryForm;
     readonly titrant: Titrant;
@@ -114,6 +114,8 @@ interface Settled {
   /** The salt added to a target: its form, what it reaches (mol/L of ionic strength, mOsm/L, or mS/cm read at readAtC °C). */
   readonly saltTarget?: { readonly form: LibraryForm; readonly kind: SaltGoal; readonly goal: number; readonly readAtC: number };
   readonly pKaUncertainty?: number;
+  /** A titrant of the buffer system itself: state the total it makes, or hold the stated total. */
+  readonly titrantInBuffer: 'state' | 'hold';
   readonly formPurityPercent?: number;
   readonly purityPercent: readonly { readonly key: string; readonly percent: number }[];
 }
@@ -187,6 +189,9 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
 
   if (stockKappa) warnings.push(...stockKappa.warnings.map((w) => warning(w.code, MESSAGES.ofTheStock(w.message), w.field)));
   warnings.push(...planWarnings(s, made, components, madeVolumeL, titration));
+  warnings.push(...hydrateWarnings(input, s.library));
+  const sharedTotal = titrantTotalWarning(s, base);
+  if (sharedTotal) warnings.push(sharedTotal);
   const metals = metalComplexWarning(finished);
   if (metals) warnings.push(metals);
   // The temperature of use and the bench temperature, each against the constants' data (the same messages when equal are merged by dedupe).
@@ -287,6 +292,7 @@ function settle(input: RecipeInput, library: SubstanceLibrary): Settled {
     ...(stock ? { stock } : {}),
     saltTarget: settleSaltTarget(input.saltTarget, library, useT),
     pKaUncertainty: readNumberField('pKaUncertainty', input.pKaUncertainty),
+    titrantInBuffer: readChoiceField('titrantInBuffer', input.titrantInBuffer) as Settled['titrantInBuffer'],
     formPurityPercent: readPurityField('formPurityPercent', input.formPurityPercent),
     purityPercent: Object.entries(input.purityPercent ?? {}).map(([name, value]) => ({ key: nameKey(name), percent: readPurityField('formPurityPercent', value, `purityPercent.${name}`) ?? 100 })),
   };
@@ -361,27 +367,58 @@ function baseComposition(s: Settled, items: readonly { form: LibraryForm; concen
 }
 
 function saltComponents(s: Settled, saltTargetM: number): RouteResult['weighed'] {
-  const salts: { role: RecipeComponent['role']; form: LibraryForm; concentrationM: number }[] = s.salts.map((x) => ({ role: 'salt', ...x }));
-  if (saltTargetM > 0 && s.saltTarget) salts.push({ role: 'salt', form: s.saltTarget.form, concentrationM: saltTargetM });
+  const salts: RouteResult['weighed'][number][] = s.salts.map((x) => ({ role: 'salt', ...x }));
+  if (saltTargetM > 0 && s.saltTarget) salts.push({ role: 'salt', form: s.saltTarget.form, concentrationM: saltTargetM, toTarget: true });
   return salts;
 }
 
 /** Route 1 (and the stock route's finished buffer): one form plus titrant. */
 function titrateRoute(s: Settled, saltTargetM: number): RouteResult {
   const form = weighedForm(s);
-  const formM = s.concentrationM / systemMolesIn(form, s.system);
-  const start = baseComposition(s, [{ form, concentrationM: formM }], saltTargetM);
-  const weighed = [{ role: 'buffer' as const, form, concentrationM: formM }, ...saltComponents(s, saltTargetM)];
-  const startPh = solvePh(start);
-  if (Math.abs(startPh - s.targetPh) <= NO_TITRANT_PH) return { composition: start, weighed, unadjustedPh: startPh };
-  const chosen = chooseTitrant(s, start);
-  const composition = withTitrant(start, chosen.titrant, chosen.concentrationM);
-  return {
-    composition,
-    weighed,
-    titrant: { ...chosen, before: start },
-    unadjustedPh: startPh,
+  const perMole = systemMolesIn(form, s.system);
+  const attempt = (formM: number): RouteResult => {
+    const start = baseComposition(s, [{ form, concentrationM: formM }], saltTargetM);
+    const weighed = [{ role: 'buffer' as const, form, concentrationM: formM }, ...saltComponents(s, saltTargetM)];
+    const startPh = solvePh(start);
+    if (Math.abs(startPh - s.targetPh) <= NO_TITRANT_PH) return { composition: start, weighed, unadjustedPh: startPh };
+    const chosen = chooseTitrant(s, start);
+    const composition = withTitrant(start, chosen.titrant, chosen.concentrationM);
+    return { composition, weighed, titrant: { ...chosen, before: start }, unadjustedPh: startPh };
   };
+  const stated = attempt(s.concentrationM / perMole);
+  const shared = stated.titrant ? systemMolesIn(stated.titrant.form, s.system) : 0;
+  if (shared === 0 || s.titrantInBuffer === 'state') return stated;
+  // Hold the stated total: weigh x of the form so that x·perMole + titrant(x)·shared = C. The
+  // titrant needed is close to proportional to x at a fixed target, so a secant on x converges
+  // in a few steps.
+  const total = (r: RouteResult) => r.weighed[0].concentrationM * perMole + (r.titrant?.concentrationM ?? 0) * shared;
+  let [x0, r0] = [s.concentrationM / perMole, stated];
+  let x1 = (x0 * s.concentrationM) / total(r0);
+  let r1 = attempt(x1);
+  for (let i = 0; i < HOLD_TOTAL_STEPS && Math.abs(total(r1) - s.concentrationM) > HOLD_TOTAL_TOLERANCE * s.concentrationM; i++) {
+    const slope = (total(r1) - total(r0)) / (x1 - x0);
+    const x2 = x1 - (total(r1) - s.concentrationM) / slope;
+    [x0, r0] = [x1, r1];
+    x1 = x2 > 0 && Number.isFinite(x2) ? x2 : x1 / 2;
+    r1 = attempt(x1);
+  }
+  return r1;
+}
+
+/** Most secant steps, and the relative tolerance, when the stated total is held against a titrant of the buffer (a few steps reach 1e-9). */
+const HOLD_TOTAL_STEPS = 30;
+const HOLD_TOTAL_TOLERANCE = 1e-9;
+
+/**
+ * When the titrant is a form of the buffer and the weighed amount was not reduced for it:
+ * the total it makes, as a warning (code titrantAddsBuffer).
+ */
+function titrantTotalWarning(s: Settled, base: RouteResult): ChemWarning | undefined {
+  if (!base.titrant || s.titrantInBuffer === 'hold' || s.route === 'two-forms') return undefined;
+  const shared = systemMolesIn(base.titrant.form, s.system);
+  if (shared === 0) return undefined;
+  const totalMm = base.weighed.filter((w) => w.role === 'buffer').reduce((sum, w) => sum + w.concentrationM * systemMolesIn(w.form, s.system), 0) * 1000 + base.titrant.concentrationM * shared * 1000;
+  return warning('titrantAddsBuffer', MESSAGES.titrantAddsBuffer(base.titrant.form.name, s.system.name, s.concentrationM * 1000, totalMm), 'titrantInBuffer');
 }
 
 /** The titrant named, or 1 M NaOH / 1 M HCl, whichever reaches the target. */
@@ -603,6 +640,7 @@ function componentsOf(s: Settled, made: RouteResult, volumeL: number, titration:
       concentrationMm: w.concentrationM * 1000,
       grams: (w.concentrationM * volumeL * w.form.molarMass) / (purity / 100),
       purityPercent: purity,
+      ...(w.toTarget ? { toTarget: true as const } : {}),
     };
   });
   if (titration && made.titrant) {
@@ -610,6 +648,29 @@ function componentsOf(s: Settled, made: RouteResult, volumeL: number, titration:
   }
   // Solids take up volume too, so water is given as "to volume", never as a subtraction.
   out.push({ role: 'water', name: 'water, to final volume', millilitres: volumeL * 1000 });
+  return out;
+}
+
+/**
+ * A name that leaves the hydration state open (`sodium phosphate dibasic`) is weighed as the
+ * form the library lists under it (docs/substances.md); the plan says which, with its molar
+ * mass, and names the other forms, so a heptahydrate on the shelf is not weighed as anhydrous.
+ */
+export function hydrateWarnings(input: RecipeInput, library: SubstanceLibrary): ChemWarning[] {
+  const typed: { name: string; field: string }[] = [];
+  for (const field of ['form', 'acidForm', 'baseForm'] as const) {
+    const name = input[field];
+    if (typeof name === 'string' && name.trim() !== '') typed.push({ name, field });
+  }
+  if (input.salts !== undefined) readSaltsField(input.salts).forEach((salt, i) => typed.push({ name: salt.form, field: `salts[${i}].form` }));
+  if (typeof input.saltTarget?.form === 'string') typed.push({ name: input.saltTarget.form, field: 'saltTarget.form' });
+  const out: ChemWarning[] = [];
+  for (const { name, field } of typed) {
+    const others = library.hydrateAlternatives(name);
+    if (others.length === 0) continue;
+    const used = library.findForm(name, field);
+    out.push(warning('hydrateAssumed', MESSAGES.hydrateAssumed(name, used.name, used.molarMass, others.map((f) => `${f.name} (${f.molarMass.toFixed(2)} g/mol)`)), field));
+  }
   return out;
 }
 

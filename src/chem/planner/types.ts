@@ -88,6 +88,8 @@ export interface RecipeInput {
   readonly purityPercent?: Readonly<Record<string, Amount>>;
   /** Purity of the buffer's own form(s) weighed, whichever the route picks, % (default 100); a name in purityPercent wins. */
   readonly formPurityPercent?: Amount;
+  /** A titrant that is a form of the buffer itself: state the total it makes (`state`, default) or weigh less so the stated total holds (`hold`). */
+  readonly titrantInBuffer?: 'state' | 'hold' | string;
   /** Activity model (default `davies`). */
   readonly activityModel?: ActivityModel | string;
   /** pKa uncertainty for the titrant band, pH units (default: the library's, or 0.02 where it gives none). */
@@ -108,6 +110,8 @@ export interface RecipeComponent {
   /** Volume to measure, mL. */
   readonly millilitres?: number;
   readonly purityPercent?: number;
+  /** A salt whose amount the planner found to reach the salt target. */
+  readonly toTarget?: true;
 }
 
 /** The titration part of a recipe. */
