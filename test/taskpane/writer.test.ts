@@ -3,7 +3,9 @@
  * preview workbook (HyperFormula with the PROTON functions) must compute; bad input must
  * write nothing; a values copy carries values and provenance.
  */
+import { BUFFERING_HALF_WIDTH } from '../../src/chem';
 import { planRecipe } from '../../src/chem/planner';
+import { pka } from '../../src/functions/functions';
 import { createFormulaEngine } from '../../src/functions/formulaEngine';
 import { PreviewWorkbook } from '../../src/preview/workbook';
 import { checkForm, defaultInput } from '../../src/taskpane/form';
@@ -251,7 +253,7 @@ describe('recipe table in the preview workbook', () => {
 
   test('a name that leaves the hydrate open is not resolved silently (issue 17, item 5): the pane asks which form is on the shelf', async () => {
     const { book, port } = setup();
-    const asked = await buildRecipeTable(port, { ...defaultInput(), buffer: 'phosphate', route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'sodium phosphate dibasic', salts: 'CaCl2 1 mM' }, { version: '0.1.0', now: NOW });
+    const asked = await buildRecipeTable(port, { ...defaultInput(), buffer: 'phosphate', route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'sodium phosphate dibasic', salts: 'calcium chloride 1 mM' }, { version: '0.1.0', now: NOW });
     expect(asked.ok).toBe(false);
     if (asked.ok) return;
     expect(asked.errors.baseForm).toMatch(/sodium phosphate dibasic anhydrous, 141\.9\d g\/mol.*sodium phosphate dibasic heptahydrate, 268\.0\d g\/mol.*name the one on your shelf/);
@@ -270,6 +272,19 @@ describe('recipe table in the preview workbook', () => {
     book.setContents(built.sheet, settingRow('Titrant of the buffer'), SETTING_VALUE_COL, [['hold']]);
     expect(String(book.value(built.sheet, row, COL.warnings))).not.toMatch(/is itself a form of acetate/);
     expect(book.value(built.sheet, row, COL.formGrams) as number).toBeLessThan(stated);
+  });
+
+  test('the chart’s usable band is the planner’s one buffering criterion (issue 17, item 7): pKa′ at the first row’s temperature and ionic strength ± BUFFERING_HALF_WIDTH', async () => {
+    const { book, port } = setup();
+    const built = await buildRecipeTable(port, defaultInput(), { version: '0.1.0', now: NOW });
+    if (!built.ok) throw new Error('not built');
+    const band = book.charts(built.sheet)[1].xBand!;
+    const edges = book.values(built.sheet, band.x).map((r) => r[0] as number);
+    const row = LAYOUT.firstDataRow;
+    const pKaPrime = pka('HEPES', 1, book.value(built.sheet, row, COL.useTemperatureC), book.value(built.sheet, row, COL.ionicStrength), 'davies');
+    expect(Math.abs(edges[0] - (pKaPrime - BUFFERING_HALF_WIDTH))).toBeLessThan(1e-12);
+    expect(Math.abs(edges[3] - (pKaPrime + BUFFERING_HALF_WIDTH))).toBeLessThan(1e-12);
+    expect(band.label).toContain(`± ${BUFFERING_HALF_WIDTH}`);
   });
 
   test('sheet names keep the decimals of the pH series (issue 17, item 9)', async () => {

@@ -78,9 +78,9 @@ export interface SubstanceLibrary {
   findForm(name: string, field?: string): LibraryForm;
   /**
    * The other hydration states of a form, when a name leaves the state open: a name that
-   * says neither "anhydrous" nor a water count (`sodium phosphate dibasic`, `MgCl2`) while
-   * the same salt is listed anhydrous and as hydrates. Empty when the name is explicit or
-   * the salt has one form.
+   * says neither "anhydrous" nor a water count and is not the form's formula (`sodium
+   * phosphate dibasic`, `magnesium chloride`) while the same salt is listed anhydrous and as
+   * hydrates. Empty when the name is explicit or the salt has one form.
    */
   hydrateAlternatives(name: string): readonly LibraryForm[];
   /** Every substance, in table order (library first, then the user's). */
@@ -220,8 +220,9 @@ class Library implements SubstanceLibrary {
   hydrateAlternatives(name: string): readonly LibraryForm[] {
     const key = typeof name === 'string' ? nameKey(name) : '';
     const form = this.forms.get(key);
-    // The form's own name is explicit (the library names each hydrate), as is any name that states the water.
-    if (!form || key === nameKey(form.name) || key.includes('·') || key.includes('anhydrous') || key.includes('hydrate')) return [];
+    // The form's own name is explicit (the library names each hydrate), as is its formula
+    // (Na2HPO4 is the anhydrous salt; the heptahydrate is Na2HPO4·7H2O) and any name that states the water.
+    if (!form || key === nameKey(form.name) || key === nameKey(form.formula) || key.includes('·') || key.includes('anhydrous') || key.includes('hydrate')) return [];
     const salt = saltOf(form.formula);
     const record = this.all.find((r) => r.name === form.substance);
     const siblings = (record?.forms ?? []).filter((f) => f.name !== form.name && f.formula !== '' && saltOf(f.formula) === salt);

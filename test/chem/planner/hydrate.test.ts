@@ -1,5 +1,5 @@
 /**
- * A name that leaves the hydration state open ("sodium phosphate dibasic", "MgCl2") is
+ * A name that leaves the hydration state open ("sodium phosphate dibasic", "magnesium chloride") is
  * weighed as the form the library lists under it, and the plan says so: a warning with its
  * own code naming the form and molar mass used and the other forms listed.
  */
@@ -15,12 +15,14 @@ describe('hydrate left open', () => {
     expect(lib.hydrateAlternatives('sodium phosphate dibasic').map((f) => f.name)).toEqual(['sodium phosphate dibasic dihydrate', 'sodium phosphate dibasic heptahydrate', 'sodium phosphate dibasic dodecahydrate']);
     expect(lib.hydrateAlternatives('Na2HPO4·7H2O')).toEqual([]);
     expect(lib.hydrateAlternatives('sodium phosphate dibasic anhydrous')).toEqual([]);
+    // A formula states its water: Na2HPO4 is the anhydrous salt.
+    expect(lib.hydrateAlternatives('Na2HPO4')).toEqual([]);
     // tris hydrochloride is another salt of tris, not a hydrate of tris base.
     expect(lib.hydrateAlternatives('tris base')).toEqual([]);
   });
 
   it('planRecipe weighs the default form and warns with code hydrateAssumed, naming the form and its molar mass', () => {
-    const plan = planRecipe({ ...pair, baseForm: 'sodium phosphate dibasic', salts: 'MgCl2 1 mM' });
+    const plan = planRecipe({ ...pair, baseForm: 'sodium phosphate dibasic', salts: 'magnesium chloride 1 mM' });
     const found = plan.warnings.filter((w) => w.code === 'hydrateAssumed');
     expect(found.map((w) => w.field)).toEqual(['baseForm', 'salts[0].form']);
     expect(found[0].message).toMatch(/sodium phosphate dibasic anhydrous \(141\.9\d g\/mol\) is used/);
