@@ -281,7 +281,7 @@ describe('recipe table in the preview workbook', () => {
     const band = book.charts(built.sheet)[1].xBand!;
     const edges = book.values(built.sheet, band.x).map((r) => r[0] as number);
     const row = LAYOUT.firstDataRow;
-    const pKaPrime = pka('HEPES', 1, book.value(built.sheet, row, COL.useTemperatureC), book.value(built.sheet, row, COL.ionicStrength), 'davies');
+    const pKaPrime = pka('HEPES', 1, book.value(built.sheet, row, COL.useTemperatureC), book.value(built.sheet, row, COL.ionicStrength), defaultInput().activityModel);
     expect(Math.abs(edges[0] - (pKaPrime - BUFFERING_HALF_WIDTH))).toBeLessThan(1e-12);
     expect(Math.abs(edges[3] - (pKaPrime + BUFFERING_HALF_WIDTH))).toBeLessThan(1e-12);
     expect(band.label).toContain(`± ${BUFFERING_HALF_WIDTH}`);
