@@ -50,6 +50,8 @@ export class Grid {
   private readonly status: HTMLElement;
   private table: HTMLTableElement | null = null;
   private renderQueued = false;
+  /** The last refused write and its cell, shown until the selection moves. */
+  private refusal: { sheet: string; row: number; col: number; text: string } | null = null;
   private unsubscribe: () => void = () => undefined;
   /** First and last (exclusive) rows in the page, and the measured heights of rows drawn so far (px) on the sheet shown. */
   private windowTop = 0;
@@ -174,6 +176,12 @@ export class Grid {
   }
 
   private showStatus(): void {
+    // A refusal stays until the selection moves or a write succeeds: a drawing queued by an earlier change must not wipe it.
+    if (this.refusal && this.refusal.row === this.row && this.refusal.col === this.col && this.refusal.sheet === this.sheet) {
+      this.status.textContent = this.refusal.text;
+      return;
+    }
+    this.refusal = null;
     const v = this.book.value(this.sheet, this.row, this.col);
     if (v === null || typeof v !== 'object') {
       this.status.textContent = '';
@@ -194,17 +202,21 @@ export class Grid {
     try {
       // A formula that cannot be read is refused, as a spreadsheet does, with what and where; a name the engine does not know is written (it shows #NAME? and a did-you-mean).
       const problem = text.trim().startsWith('=') ? formulaProblem(text.trim(), this.book.functionNames()) : undefined;
-      if (problem && problem.code !== 'unknownFunction') {
-        this.status.textContent = `Not written: ${problem.message}`;
-        return false;
-      }
+      if (problem && problem.code !== 'unknownFunction') return this.refuse(`Not written: ${problem.message}`);
+      this.refusal = null;
       this.book.setContents(this.sheet, this.row, this.col, [[typedContent(text)]]);
       this.render();
       return true;
     } catch (error) {
-      this.status.textContent = `Not written: ${(error as Error).message}`;
-      return false;
+      return this.refuse(`Not written: ${(error as Error).message}`);
     }
+  }
+
+  /** Says why a write was refused, under the grid, for the cell it was meant for. */
+  private refuse(text: string): false {
+    this.refusal = { sheet: this.sheet, row: this.row, col: this.col, text };
+    this.status.textContent = text;
+    return false;
   }
 
   /** Runs a change of the workbook, reporting a refusal under the grid instead of throwing. */

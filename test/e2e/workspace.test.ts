@@ -7,6 +7,23 @@ import { writeFileSync } from 'fs';
 import { join } from 'path';
 import type { Page } from 'playwright-core';
 import { ARTIFACTS, describeBrowser, openPreview, PreviewSession } from '../support/previewBrowser';
+import { COL, LAYOUT } from '../../src/taskpane/recipeTable';
+import { cellAddress } from '../../src/workbook/port';
+
+/** The last of the 656 table rows, as an A1 row number. */
+const LAST_ROW = LAYOUT.firstDataRow + 656;
+/** That row's grams of the form and titrant mL. */
+const GRAMS = cellAddress(LAST_ROW - 1, COL.formGrams);
+const TITRANT = cellAddress(LAST_ROW - 1, COL.titrantMl);
+
+/** Scrolls the grid to its end and waits until a cell of the last table row is drawn (the grid draws the rows in view). */
+async function showLastRow(page: Page): Promise<void> {
+  await page.evaluate(() => {
+    const s = document.querySelector('#grid-scroll') as HTMLElement;
+    s.scrollTop = s.scrollHeight;
+  });
+  await page.waitForSelector(`#grid-scroll td[data-cell="A${LAST_ROW}"]`);
+}
 
 describeBrowser('the preview keeps the work (Chromium)', () => {
   let session: PreviewSession;
@@ -89,12 +106,12 @@ describeBrowser('the preview keeps the work (Chromium)', () => {
     await page.click('#build-table');
     await page.waitForSelector('#pane-status.status-done', { timeout: 300000 });
     const tabs = await page.locator('#sheet-tabs .tab').allTextContents();
-    expect(tabs).toHaveLength(2);
-    // First data row is sheet row 21; 656 rows end at row 676.
-    expect(await cell('A676').count()).toBe(1);
-    const lastPh = await cell('A676').textContent();
-    const grams = await cell('G676').textContent();
-    const titrant = await cell('H676').textContent();
+    // The demo sheet, the table and its live protocol sheet.
+    expect(tabs).toHaveLength(3);
+    await showLastRow(page);
+    const lastPh = await cell(`A${LAST_ROW}`).textContent();
+    const grams = await cell(GRAMS).textContent();
+    const titrant = await cell(TITRANT).textContent();
     expect(lastPh).toBe('8.80');
     expect(Number(grams)).toBeGreaterThan(0);
     await saved();
@@ -105,9 +122,10 @@ describeBrowser('the preview keeps the work (Chromium)', () => {
       times.push(Number(await page.getAttribute('body', 'data-restore-ms')));
     }
     await page.locator('#sheet-tabs .tab').nth(1).click();
-    expect(await cell('A676').textContent()).toBe(lastPh);
-    expect(await cell('G676').textContent()).toBe(grams);
-    expect(await cell('H676').textContent()).toBe(titrant);
+    await showLastRow(page);
+    expect(await cell(`A${LAST_ROW}`).textContent()).toBe(lastPh);
+    expect(await cell(GRAMS).textContent()).toBe(grams);
+    expect(await cell(TITRANT).textContent()).toBe(titrant);
     await page.screenshot({ path: join(ARTIFACTS, 'preview-restored-656.png') });
     const note = [
       'Restore on reload of the preview workbook holding a 656-row recipe table',
