@@ -150,21 +150,26 @@ interface PitzerTitrantSetup {
 }
 
 /**
- * Setups already made, by composition object: a worksheet column or a planner run asks the same composition
- * for several target pH (compositions are never changed once built, so the object stands for its content).
+ * The last setups made, by composition object, most recent first found: a worksheet column asks the same
+ * composition for several target pH (compositions are never changed once built, so the object stands for its
+ * content). A ring scanned by identity rather than a WeakMap: a planner run makes fresh compositions that are
+ * never asked again, and a WeakMap entry for each cost more than the lookup saved.
  */
-const PITZER_TITRANT_SETUPS = new WeakMap<Composition, PitzerTitrantSetup[]>();
-/** Titrants remembered per composition before its list is emptied. */
-const SETUPS_PER_COMPOSITION = 4;
+const SETUP_RING = 128;
+const ringKeys: (Composition | undefined)[] = new Array<Composition | undefined>(SETUP_RING).fill(undefined);
+const ringSetups: (PitzerTitrantSetup | undefined)[] = new Array<PitzerTitrantSetup | undefined>(SETUP_RING).fill(undefined);
+let ringNext = 0;
 
 /**
  * The composition prepared once with the titrant's species present at zero amount, the amount entering
  * linearly (src/chem/pitzer/amount.ts); kept for the next target pH asked of the same composition and titrant.
  */
 function pitzerTitrantSetup(composition: Composition, titrant: Titrant): PitzerTitrantSetup {
-  let list = PITZER_TITRANT_SETUPS.get(composition);
-  if (list) {
-    for (const e of list) if (e.strongIons === titrant.strongIons && e.system === titrant.system && e.systemPerMole === titrant.systemPerMole) return e;
+  for (let k = 1; k <= SETUP_RING; k++) {
+    const i = (ringNext - k + SETUP_RING) % SETUP_RING;
+    if (ringKeys[i] !== composition) continue;
+    const e = ringSetups[i]!;
+    if (e.strongIons === titrant.strongIons && e.system === titrant.system && e.systemPerMole === titrant.systemPerMole) return e;
   }
   const zero = withTitrant(composition, titrant, 0);
   const p = prepare(zero);
@@ -177,12 +182,9 @@ function pitzerTitrantSetup(composition: Composition, titrant: Titrant): PitzerT
   if (titrant.system) totalsUp[totalsUp.length - 1] = titrant.systemPerMole ?? 1;
   const inc: AmountIncrements = { strongUp, strongDown: strongUp.map((v) => -v), totalsUp, totalsDown: totalsUp.map((v) => -v) };
   const setup: PitzerTitrantSetup = { strongIons: titrant.strongIons, system: titrant.system, systemPerMole: titrant.systemPerMole, p, inc };
-  if (!list) {
-    list = [];
-    PITZER_TITRANT_SETUPS.set(composition, list);
-  }
-  if (list.length >= SETUPS_PER_COMPOSITION) list.length = 0;
-  list.push(setup);
+  ringKeys[ringNext] = composition;
+  ringSetups[ringNext] = setup;
+  ringNext = (ringNext + 1) % SETUP_RING;
   return setup;
 }
 
