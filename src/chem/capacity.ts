@@ -47,7 +47,9 @@ export function capacity(composition: Composition): Capacity {
  */
 export function capacityOfPrepared(p: PreparedComposition, pH: number): Capacity {
   const at = (x: number) => netStrongBaseForPh(p, x);
-  const here = at(pH);
+  // At its own solved pH the composition needs no strong base or acid: the amount there is the
+  // solve's residual (about 1e-13 mol/L), so it is taken as zero rather than solved for (one of five amount solves).
+  const here = 0;
   const beta = (at(pH + CAPACITY_STEP_PH) - at(pH - CAPACITY_STEP_PH)) / (2 * CAPACITY_STEP_PH);
   return {
     pH,

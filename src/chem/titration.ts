@@ -132,8 +132,45 @@ export function titrantForPh(composition: Composition, titrant: Titrant, targetP
     const p = prepare(composition);
     return titrantForPhPrepared(p, prepareTitrant(titrant, p.temperatureC), titrant.name, targetPh);
   }
-  // Pitzer: the composition prepared once with the titrant's species present at zero amount, the amount entering
-  // linearly (src/chem/pitzer/amount.ts).
+  const { p, inc } = pitzerTitrantSetup(composition, titrant);
+  // No starting estimate is needed: at fixed γ the first step already lands on the amount.
+  const found = pitzerAmountAtPh(p, inc, targetPh, 0);
+  if (!Number.isFinite(found.amount) || found.amount < 0 || found.amount > MAX_CONCENTRATION_M) throw unreachable(p, titrant.name, targetPh, found.chargePerMole, found.amount);
+  return { concentrationM: found.amount, ionicStrengthM: found.ionicStrengthM, chargePerMole: found.chargePerMole, iterations: found.iterations };
+}
+
+
+/** A composition prepared for the Pitzer amount solve with one titrant, and how the titrant's amount enters it. */
+interface PitzerTitrantSetup {
+  readonly strongIons: Titrant['strongIons'];
+  readonly system: Titrant['system'];
+  readonly systemPerMole: Titrant['systemPerMole'];
+  readonly p: PreparedComposition;
+  readonly inc: AmountIncrements;
+}
+
+/**
+ * The last setups made, by composition object, most recent first found: a worksheet column asks the same
+ * composition for several target pH (compositions are never changed once built, so the object stands for its
+ * content). A ring scanned by identity rather than a WeakMap: a planner run makes fresh compositions that are
+ * never asked again, and a WeakMap entry for each cost more than the lookup saved.
+ */
+const SETUP_RING = 128;
+const ringKeys: (Composition | undefined)[] = new Array<Composition | undefined>(SETUP_RING).fill(undefined);
+const ringSetups: (PitzerTitrantSetup | undefined)[] = new Array<PitzerTitrantSetup | undefined>(SETUP_RING).fill(undefined);
+let ringNext = 0;
+
+/**
+ * The composition prepared once with the titrant's species present at zero amount, the amount entering
+ * linearly (src/chem/pitzer/amount.ts); kept for the next target pH asked of the same composition and titrant.
+ */
+function pitzerTitrantSetup(composition: Composition, titrant: Titrant): PitzerTitrantSetup {
+  for (let k = 1; k <= SETUP_RING; k++) {
+    const i = (ringNext - k + SETUP_RING) % SETUP_RING;
+    if (ringKeys[i] !== composition) continue;
+    const e = ringSetups[i]!;
+    if (e.strongIons === titrant.strongIons && e.system === titrant.system && e.systemPerMole === titrant.systemPerMole) return e;
+  }
   const zero = withTitrant(composition, titrant, 0);
   const p = prepare(zero);
   prepareTitrant(titrant, p.temperatureC); // validates the titrant as the one-number path does
@@ -144,12 +181,12 @@ export function titrantForPh(composition: Composition, titrant: Titrant, targetP
   const totalsUp = new Array<number>(zero.systems.length).fill(0);
   if (titrant.system) totalsUp[totalsUp.length - 1] = titrant.systemPerMole ?? 1;
   const inc: AmountIncrements = { strongUp, strongDown: strongUp.map((v) => -v), totalsUp, totalsDown: totalsUp.map((v) => -v) };
-  // No starting estimate is needed: at fixed γ the first step already lands on the amount.
-  const found = pitzerAmountAtPh(p, inc, targetPh, 0);
-  if (!Number.isFinite(found.amount) || found.amount < 0 || found.amount > MAX_CONCENTRATION_M) throw unreachable(p, titrant.name, targetPh, found.chargePerMole, found.amount);
-  return { concentrationM: found.amount, ionicStrengthM: found.ionicStrengthM, chargePerMole: found.chargePerMole, iterations: found.iterations };
+  const setup: PitzerTitrantSetup = { strongIons: titrant.strongIons, system: titrant.system, systemPerMole: titrant.systemPerMole, p, inc };
+  ringKeys[ringNext] = composition;
+  ringSetups[ringNext] = setup;
+  ringNext = (ringNext + 1) % SETUP_RING;
+  return setup;
 }
-
 
 function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: string, targetPh: number): TitrantAmount {
   const aH = Math.pow(10, -targetPh);

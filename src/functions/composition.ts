@@ -131,3 +131,28 @@ export function compositionFrom(library: SubstanceLibrary, value: unknown, tempe
   }
   return withConditions(base, temperatureC, activityModel);
 }
+
+/** Single-form compositions at their conditions, per library: a grid asks the same one for every target pH of a column. */
+const formAloneCache = new WeakMap<SubstanceLibrary, Lru<Composition>>();
+
+/**
+ * A form alone at a concentration, temperature and activity model; the same object for the same four values
+ * (so what the chemistry keeps per composition, such as a titrant's prepared setup, is found again).
+ *
+ * @param library - substance library (built-in plus the user's)
+ * @param form - the form's name as typed
+ * @param concentrationM - mol/L
+ * @param temperatureC - °C
+ * @param activityModel - activity model
+ */
+export function formAlone(library: SubstanceLibrary, form: string, concentrationM: number, temperatureC: number, activityModel: ActivityModel): Composition {
+  let cache = formAloneCache.get(library);
+  if (!cache) formAloneCache.set(library, (cache = new Lru<Composition>(1024)));
+  const key = `${form}\u0000${concentrationM}\u0000${temperatureC}\u0000${activityModel}`;
+  let c = cache.get(key);
+  if (!c) {
+    c = library.compositionFromForms([{ form, concentrationM }], { temperatureC, activityModel });
+    cache.set(key, c);
+  }
+  return c;
+}

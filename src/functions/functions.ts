@@ -17,7 +17,7 @@ import { recipeOptions } from './recipeOptions';
 import { RECIPE_ROW_HEADER, recipeRowValues } from './recipeRow';
 import { DEFAULT_PART_VOLUME_FRACTION, RecipeInput, RecipePlan, checkTitrantFits, planRecipe } from '../chem/planner';
 import { volumeText } from '../chem/planner/protocol';
-import { checkRowLimit, compositionFrom } from './composition';
+import { checkRowLimit, compositionFrom, formAlone } from './composition';
 import { invalid } from './errors';
 import { memoised } from './memo';
 import { SHEET_MESSAGES } from './messages';
@@ -83,10 +83,10 @@ export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, t
     const volumeMl = toField('finalVolumeMl', finalVolumeMl);
     const target = toField('targetPh', targetPh);
     const stockM = toField('titrantConcentrationM', titrantConcentrationM);
-    // Without other components the composition is the form alone: built directly, it skips the range cache.
+    // Without other components the composition is the form alone: kept by its four values, it skips the range cache.
     checkRowLimit('salts', salts);
     const composition = isBlankRange(salts)
-      ? s.library.compositionFromForms([{ form: formName, concentrationM: mM / 1000 }], { temperatureC: s.temperatureC, activityModel: s.model })
+      ? formAlone(s.library, formName, mM / 1000, s.temperatureC, s.model)
       : compositionFrom(s.library, [[formName, mM], ...toRange(salts)], s.temperatureC, s.model);
     const t = titrantFromForm(s.library.findForm(toText('titrant', titrant)), s.library);
     const ml = (titrantForPh(composition, t, target).concentrationM * volumeMl) / stockM;

@@ -140,11 +140,17 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const madeVolumeL = stockVolumeL;
   const finished = base.composition;
 
+  // Each composition below is solved once: a speciation made for one figure gives the others their pH.
   const atMeter = withConditions(scaleComposition(made.composition, 1 / s.partFraction), s.benchT);
+  const meterSpeciation = fold === 1 ? undefined : speciate(atMeter);
   // A stock's own activity warnings (past the model's range, ions without Pitzer parameters) bear on the meter reading.
-  const stockWarnings = fold === 1 ? [] : speciate(atMeter).warnings.filter((w) => ACTIVITY_RANGE_CODES.has(w.code)).map((w) => warning(w.code, MESSAGES.stockAtMeter(fold, w.message), w.field));
-  const meterPh = solvePh(atMeter);
-  const titration = made.titrant ? titrationPlan(s, made, madeVolumeL) : undefined;
+  const stockWarnings = meterSpeciation ? meterSpeciation.warnings.filter((w) => ACTIVITY_RANGE_CODES.has(w.code)).map((w) => warning(w.code, MESSAGES.stockAtMeter(fold, w.message), w.field)) : [];
+  const meterPh = meterSpeciation ? meterSpeciation.pH : solvePh(atMeter);
+  // The stock as made, at the temperature of use: its pH and conductivity (the stock route only).
+  // Adjusted in the full volume at the temperature of use, the meter reads the stock itself.
+  const meterReadsStock = s.partFraction === 1 && s.benchT === s.useT;
+  const stockSpeciation = s.route !== 'stock' ? undefined : meterReadsStock && meterSpeciation ? meterSpeciation : speciate(made.composition);
+  const titration = made.titrant ? titrationPlan(s, made, madeVolumeL, stockSpeciation?.pH) : undefined;
   if (titration) checkTitrantFits(titration.volumeMl, madeVolumeL * 1000, s.partFraction, titration.stockM);
 
   const prepared = prepare(finished);
@@ -159,7 +165,8 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const predictions = {
     useTemperatureC: s.useT,
     pHAtUse: result.pH,
-    pHAtBench: solvePh(withConditions(finished, s.benchT)),
+    // With nothing scaled (no stock, adjusted in the full volume) the meter reads the finished buffer at the bench temperature.
+    pHAtBench: fold === 1 && s.partFraction === 1 ? meterPh : solvePh(withConditions(finished, s.benchT)),
     ionicStrengthM: result.ionicStrengthM,
     idealOsmolarityMosm: idealOsmolarity(result) * 1000,
     osmolalityMosmKg: result.osmolalityMosmKg,
@@ -173,17 +180,17 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   };
 
   const components = componentsOf(s, made, madeVolumeL, titration);
-  const stockKappa = s.route === 'stock' ? conductivityAt(made.composition) : undefined;
+  const stockKappa = stockSpeciation ? conductivityOf(stockSpeciation) : undefined;
   const stock =
-    stockKappa
+    stockKappa && stockSpeciation
       ? {
           fold,
           stockVolumeMl: madeVolumeL * 1000,
-          stockPhAtUse: solvePh(made.composition),
+          stockPhAtUse: stockSpeciation.pH,
           stockPerBatchMl: (s.volumeL * 1000) / fold,
           waterPerBatchMl: s.volumeL * 1000 * (1 - 1 / fold),
           stockConductivityMsPerCm: stockKappa.conductivityMsPerCm,
-          stockConductivity25MsPerCm: conductivityAt(made.composition, 25).conductivityMsPerCm,
+          stockConductivity25MsPerCm: s.useT === 25 ? stockKappa.conductivityMsPerCm : conductivityAt(made.composition, 25).conductivityMsPerCm,
         }
       : undefined;
 
@@ -536,7 +543,7 @@ function scaleRoute(r: RouteResult, fold: number): RouteResult {
 }
 
 /** The titrant volume and its band from the pKa uncertainty and the stock tolerance. */
-function titrationPlan(s: Settled, made: RouteResult, volumeL: number): TitrationPlan {
+function titrationPlan(s: Settled, made: RouteResult, volumeL: number, stockPh: number | undefined): TitrationPlan {
   const t = made.titrant!;
   const volumeMl = ((t.concentrationM * volumeL) / t.stock.concentrationM) * 1000;
   const u =
@@ -545,7 +552,7 @@ function titrationPlan(s: Settled, made: RouteResult, volumeL: number): Titratio
       : Math.max(...s.system.steps.map((step) => step.pKaUncertainty ?? DEFAULT_PKA_UNCERTAINTY));
   // The amount needed with every pKa of the buffer moved by ±u, to the pH the made solution has.
   const before = t.before;
-  const madePh = s.route === 'stock' ? solvePh(made.composition) : s.targetPh;
+  const madePh = s.route === 'stock' ? (stockPh ?? solvePh(made.composition)) : s.targetPh;
   const amounts = [-u, u].map((shift) => {
     const shifted = shiftSystem(before, s.system.name, shift);
     try {
@@ -561,7 +568,8 @@ function titrationPlan(s: Settled, made: RouteResult, volumeL: number): Titratio
   return {
     titrant: t.form.name,
     stockM: t.stock.concentrationM,
-    direction: t.titrant.system ? (madePh > solvePh(before) ? 'raises' : 'lowers') : chargeOf(t.titrant) > 0 ? 'raises' : 'lowers',
+    // The titrate route's unadjusted pH is the pH of `before`, already solved.
+    direction: t.titrant.system ? (madePh > (s.route === 'titrate' && made.unadjustedPh !== undefined ? made.unadjustedPh : solvePh(before)) ? 'raises' : 'lowers') : chargeOf(t.titrant) > 0 ? 'raises' : 'lowers',
     volumeMl,
     lowMl,
     highMl,
