@@ -5,7 +5,7 @@
  */
 import ExcelJS from 'exceljs';
 import { parseDelimited, toTabSeparated } from '../../src/workbook/delimited';
-import { CellBudget, csvRows, FileRefused } from '../../src/workbook/fileCells';
+import { CellBudget, csvRows, FileRefused, worksheetRows } from '../../src/workbook/fileCells';
 import { inflateRawSync } from 'zlib';
 import { APP_PART, APPLICATION_NAME, crc32, entryData, nameApplication, zipEntries } from '../../src/workbook/xlsxApplication';
 import { xlsxFileName } from '../../src/preview/xlsx';
@@ -35,6 +35,18 @@ describe('CSV cells for the engine', () => {
   test('a formula past the nesting limit and a file past the cell budget are refused with the cell', () => {
     expect(() => csvRows(`a\r\n=${'('.repeat(65)}1${')'.repeat(65)}\r\n`)).toThrow(new FileRefused('A2 of the CSV file: a formula nested 65 levels deep; a formula may nest up to 64 levels.'));
     expect(() => csvRows('1,2,3\r\n4,5,6\r\n', new CellBudget(5))).toThrow(FileRefused);
+  });
+});
+
+describe('worksheet cells for the engine', () => {
+  test('a merged range keeps its value in its first cell only; an array formula\'s other cells are left to it; a saved PROTON name is restored', () => {
+    const ws = new ExcelJS.Workbook().addWorksheet('Prep');
+    ws.getCell('A1').value = 'Cold room';
+    ws.mergeCells('A1:C1');
+    ws.getCell('A2').value = { formula: '_xldudf_PROTON_PKA("tris",1,25)', result: 8.07 } as ExcelJS.CellFormulaValue;
+    ws.getCell('B2').value = { formula: 'TRANSPOSE(A3:A4)', result: 1, shareType: 'array', ref: 'B2:C2' } as unknown as ExcelJS.CellFormulaValue;
+    ws.getCell('C2').value = 2;
+    expect(worksheetRows(ws)).toEqual([["'Cold room"], ['=PROTON.PKA("tris",1,25)', '=TRANSPOSE(A3:A4)']]);
   });
 });
 
