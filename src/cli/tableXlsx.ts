@@ -3,7 +3,9 @@
  * from the content, wrapped long text. Loaded only when a batch asks for .xlsx output, so
  * the workbook library never slows the other commands' start.
  */
+import { writeFileSync } from 'fs';
 import ExcelJS from 'exceljs';
+import { nameApplication } from '../workbook/xlsxApplication';
 
 /** Widest column, in characters: long warnings wrap instead. */
 const MAX_COLUMN_WIDTH = 60;
@@ -27,5 +29,6 @@ export async function writeTableXlsx(path: string, sheetName: string, rows: read
     column.width = Math.min(MAX_COLUMN_WIDTH, Math.max(8, longest + 2));
     if (longest > MAX_COLUMN_WIDTH) column.alignment = { wrapText: true, vertical: 'top' };
   }
-  await wb.xlsx.writeFile(path);
+  // exceljs names another program as the application; the file says Proton Ledger wrote it.
+  writeFileSync(path, nameApplication(await wb.xlsx.writeBuffer(), [sheetName]));
 }

@@ -187,10 +187,16 @@ export class Grid {
       this.status.textContent = '';
       return;
     }
-    // A formula the engine could not read, or a name it does not know: said in our words, with where.
-    const formula = this.book.formula(this.sheet, this.row, this.col);
-    const problem = formula !== undefined && (v.error === '#ERROR!' || v.error === '#NAME?') ? formulaProblem(formula, this.book.functionNames()) : undefined;
-    this.status.textContent = problem ? `${v.error} ${problem.message}` : v.error === '#ERROR!' && /^Parsing error/.test(v.message) ? `${v.error} ${FORMULA_MESSAGES.unreadable()}` : `${v.error} ${v.message}`;
+    this.status.textContent = `${v.error} ${this.errorText(this.row, this.col, v)}`;
+  }
+
+  /** Why a cell shows an error: the function's own message, or, for a formula the engine could not read or a name it does not know, what and where in our words. */
+  private errorText(row: number, col: number, v: { readonly error: string; readonly message: string }): string {
+    if (v.error !== '#ERROR!' && v.error !== '#NAME?') return v.message;
+    const formula = this.book.formula(this.sheet, row, col);
+    const problem = formula !== undefined ? formulaProblem(formula, this.book.functionNames()) : undefined;
+    if (problem) return problem.message;
+    return v.error === '#ERROR!' && /^Parsing error/.test(v.message) ? FORMULA_MESSAGES.unreadable() : v.message;
   }
 
   private cellElement(row: number, col: number): HTMLElement | null {
@@ -527,7 +533,7 @@ export class Grid {
           if (typeof value === 'number') td.classList.add('num');
           if (value !== null && typeof value === 'object') {
             td.classList.add('cell-error');
-            td.title = value.message;
+            td.title = this.errorText(r, c, value);
           }
           if (this.book.hasFormula(this.sheet, r, c)) td.classList.add('has-formula');
         }

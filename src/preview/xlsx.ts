@@ -131,5 +131,5 @@ export async function workbookToXlsx(book: PreviewWorkbook, version: string): Pr
       note.font = { italic: true, color: { argb: 'FF52616B' } };
     }
   }
-  return nameApplication((await wb.xlsx.writeBuffer()) as ArrayBuffer);
+  return nameApplication((await wb.xlsx.writeBuffer()) as ArrayBuffer, book.sheetNames());
 }

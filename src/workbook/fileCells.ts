@@ -18,6 +18,8 @@ export const MAX_CELL_CHARS = 32_767;
 /** Day 0 of Excel's 1900 date system (serial 1 = 1900-01-01, with Excel's 1900 leap-year quirk folded in). */
 const EXCEL_EPOCH_MS = Date.UTC(1899, 11, 30);
 const MS_PER_DAY = 86400000;
+/** exceljs's ValueType.Merge (lib/doc/enums.js), spelt as its number so that this module needs no value import of exceljs (the browser loads exceljs on demand). */
+const MERGE_CELL_TYPE = 1;
 
 /** A file refused while its cells are read, with the reason in plain words. */
 export class FileRefused extends Error {}
@@ -54,6 +56,8 @@ function engineText(text: string, where: string): string {
  * @param where - the cell for messages ("Sheet1!B2")
  */
 export function cellInput(cell: ExcelJS.Cell, where: string): unknown {
+  // A merged range holds its value in its first cell; the others are empty (exceljs reports the first cell's value for each).
+  if (cell.type === MERGE_CELL_TYPE) return null;
   const v = cell.value;
   if (v === null || v === undefined) return null;
   if (typeof v === 'number' || typeof v === 'boolean') return v;

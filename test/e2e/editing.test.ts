@@ -96,6 +96,19 @@ describeBrowser('editing the preview workbook (Chromium)', () => {
     await page.screenshot({ path: join(ARTIFACTS, 'preview-editing.png') });
   });
 
+  test('cut and paste moves cells; a formula reading them follows', async () => {
+    await type('H1', '7');
+    await type('H2', '=H1*2');
+    await cell('H1').click();
+    await page.keyboard.press('Control+x');
+    await cell('I5').click();
+    await page.keyboard.press('Control+v');
+    expect(await cell('H1').textContent()).toBe('');
+    expect(await cell('I5').textContent()).toBe('7');
+    expect(await formulaOf('H2')).toBe('=I5*2');
+    expect(await cell('H2').textContent()).toBe('14');
+  });
+
   test('text from another program pastes as values: numbers as numbers, text as text, a formula as a formula', async () => {
     await cell('A10').click();
     await page.locator('#grid-scroll').focus();
@@ -130,6 +143,7 @@ describeBrowser('editing the preview workbook (Chromium)', () => {
     expect(await cell('G1').textContent()).toBe('#NAME?');
     await cell('G1').click();
     expect(await page.textContent('#grid-status')).toMatch(/There is no function PROTON\.PKAA .*did you mean PROTON\.PKA/);
+    expect(await cell('G1').getAttribute('title')).toMatch(/did you mean PROTON\.PKA/);
     await page.screenshot({ path: join(ARTIFACTS, 'preview-formula-message.png') });
     await type('G2', '=6.022E+23/1E+23');
     expect(await cell('G2').textContent()).toBe('6.022');
