@@ -36,7 +36,14 @@ export default tseslint.config(
   {
     files: ['src/chem/**/*.ts'],
     rules: {
-      'no-restricted-imports': ['error', { patterns: [{ group: ['fs', 'path', 'child_process', 'os', 'exceljs', 'hyperformula', '@microsoft/*', '../../*'], message: 'src/chem is pure: no I/O, Office or host code.' }] }],
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            { group: ['fs', 'path', 'child_process', 'os', 'exceljs', 'hyperformula', '@microsoft/*', '../../*'], message: 'src/chem is pure: no I/O, Office or host code.' },
+          ],
+        },
+      ],
       'no-restricted-globals': ['error', 'document', 'window', 'Office', 'Excel', 'CustomFunctions', 'fetch', 'localStorage'],
     },
   },

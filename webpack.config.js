@@ -153,7 +153,11 @@ function buildConfig(env, argv) {
     resolve: { extensions: ['.ts', '.js', '.json'] },
     module: {
       rules: [
-        { test: /\.ts$/, exclude: /node_modules/, use: { loader: 'ts-loader', options: { transpileOnly: true, configFile: 'tsconfig.json', compilerOptions: { module: 'es2020' } } } },
+        {
+          test: /\.ts$/,
+          exclude: /node_modules/,
+          use: { loader: 'ts-loader', options: { transpileOnly: true, configFile: 'tsconfig.json', compilerOptions: { module: 'es2020' } } },
+        },
       ],
     },
     performance: { hints: false },
@@ -166,7 +170,13 @@ function buildConfig(env, argv) {
     },
     plugins: [
       new HtmlWebpackPlugin({ filename: 'taskpane.html', template: './src/taskpane/taskpane.html', chunks: sharedChunks, inject: 'body', templateParameters: excelPage }),
-      new HtmlWebpackPlugin({ filename: 'functions.html', template: './src/taskpane/functions.html', chunks: hasFunctions ? ['functions'] : [], inject: 'body', templateParameters: excelPage }),
+      new HtmlWebpackPlugin({
+        filename: 'functions.html',
+        template: './src/taskpane/functions.html',
+        chunks: hasFunctions ? ['functions'] : [],
+        inject: 'body',
+        templateParameters: excelPage,
+      }),
       new HtmlWebpackPlugin({ filename: 'index.html', template: './src/preview/index.html', chunks: ['preview'], inject: 'body', templateParameters: { csp: PREVIEW_CSP } }),
       new CopyWebpackPlugin({ patterns: copies }),
       new HelpPagePlugin(),

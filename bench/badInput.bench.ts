@@ -39,7 +39,10 @@ const cases: [string, () => unknown][] = [
   ['PKA: step 9', () => pka('phosphate', 9)],
   ['RECIPE.ROW: unknown buffer', () => recipeRow('HEPPES', 7.4, 25, 500)],
   ['RECIPE.ROW: pH far from any pKa', () => recipeRow('HEPES', 1, 25, 500)],
-  ['planner: titrant too dilute', () => planRecipe({ buffer: 'tris', targetPh: 7, concentrationMm: 1000, volumeMl: 100, titrant: { form: 'HCl', concentrationM: 0.001 } } as RecipeInput)],
+  [
+    'planner: titrant too dilute',
+    () => planRecipe({ buffer: 'tris', targetPh: 7, concentrationMm: 1000, volumeMl: 100, titrant: { form: 'HCl', concentrationM: 0.001 } } as RecipeInput),
+  ],
   ['planner: salt target passed', () => planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 100, saltTarget: { form: 'NaCl', idealOsmolarityMosm: 1 } })],
   ['RECIPE.ROW: 100,000 salt rows', () => recipeRow('HEPES', 7.4, 25, 500, undefined, huge)],
   ['FORMS: 100,000 user-substance rows', () => forms(hugeUserRange)],

@@ -29,7 +29,14 @@ function wallMs(args: string[]): number {
 
 const floor = wallMs(['-e', '0']);
 console.log(`${'bare node -e 0 (the floor)'.padEnd(44)} ${floor.toFixed(0).padStart(6)} ms`);
-for (const cmd of [['--help'], ['--version'], ['substances'], ['recipe', '--help'], ['recipe', '--json', '{"buffer":"HEPES","targetPh":7.4,"concentrationMm":25,"volumeMl":500}'], ['solve', '--json', '{"forms":[{"form":"tris base","mM":50},{"form":"HCl","mM":25}]}']]) {
+for (const cmd of [
+  ['--help'],
+  ['--version'],
+  ['substances'],
+  ['recipe', '--help'],
+  ['recipe', '--json', '{"buffer":"HEPES","targetPh":7.4,"concentrationMm":25,"volumeMl":500}'],
+  ['solve', '--json', '{"forms":[{"form":"tris base","mM":50},{"form":"HCl","mM":25}]}'],
+]) {
   const ms = wallMs([CLI, ...cmd]);
   console.log(`${`start: ${cmd.slice(0, 2).join(' ').slice(0, 36)}`.padEnd(44)} ${ms.toFixed(0).padStart(6)} ms   (${(ms - floor).toFixed(0)} ms above the floor)`);
 }

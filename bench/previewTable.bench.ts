@@ -55,7 +55,11 @@ async function main(): Promise<void> {
     const buildLongest = await longest();
     const status = await page.locator('#pane-status').textContent();
     // One settings edit: the bench temperature (its label in column A, value in B).
-    const row = await page.locator('#grid-scroll td[data-col="0"]').filter({ hasText: /^Bench temp\. \(°C\)$/ }).first().getAttribute('data-row');
+    const row = await page
+      .locator('#grid-scroll td[data-col="0"]')
+      .filter({ hasText: /^Bench temp\. \(°C\)$/ })
+      .first()
+      .getAttribute('data-row');
     await page.click(`#grid-scroll td[data-row="${row}"][data-col="1"]`);
     await page.evaluate(() => ((window as unknown as { longTasks: number[] }).longTasks.length = 0));
     const t1 = Date.now();
@@ -65,7 +69,9 @@ async function main(): Promise<void> {
     await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
     const editMs = Date.now() - t1;
     console.log(`${root}: ${status}`);
-    console.log(`656-row table in the preview: build ${(buildMs / 1000).toFixed(2)} s, longest task ${buildLongest.toFixed(0)} ms; one settings edit ${(editMs / 1000).toFixed(2)} s (longest task ${(await longest()).toFixed(0)} ms)`);
+    console.log(
+      `656-row table in the preview: build ${(buildMs / 1000).toFixed(2)} s, longest task ${buildLongest.toFixed(0)} ms; one settings edit ${(editMs / 1000).toFixed(2)} s (longest task ${(await longest()).toFixed(0)} ms)`,
+    );
   } finally {
     await context.close();
     server.kill('SIGTERM');

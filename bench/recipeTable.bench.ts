@@ -16,7 +16,11 @@ import { PreviewAdapter } from '../src/workbook/previewAdapter';
 async function main(): Promise<void> {
   const book = new PreviewWorkbook(createFormulaEngine({ Notes: [['our own notes']] }));
   let active = 'Notes';
-  const port = new PreviewAdapter(book, () => ({ sheet: active, range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }), (s) => (active = s));
+  const port = new PreviewAdapter(
+    book,
+    () => ({ sheet: active, range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }),
+    (s) => (active = s),
+  );
   const input = { ...defaultInput(), phMode: 'range', phStart: '6.0', phStop: '8.0', phStep: '0.05', useTemperaturesC: '4; 20; 25; 37', concentrationsMm: '10; 25; 50; 100' };
   let longestMs = 0;
   let last = performance.now();
@@ -34,7 +38,9 @@ async function main(): Promise<void> {
   const t1 = performance.now();
   book.setContents(result.sheet, settingRow('Bench temp. (°C)'), SETTING_VALUE_COL, [[21]]);
   const editMs = performance.now() - t1;
-  console.log(`recipe table, ${result.rows} rows: build ${(totalMs / 1000).toFixed(2)} s, longest step between progress reports ${longestMs.toFixed(0)} ms, one settings edit ${(editMs / 1000).toFixed(2)} s`);
+  console.log(
+    `recipe table, ${result.rows} rows: build ${(totalMs / 1000).toFixed(2)} s, longest step between progress reports ${longestMs.toFixed(0)} ms, one settings edit ${(editMs / 1000).toFixed(2)} s`,
+  );
 }
 
 void main();

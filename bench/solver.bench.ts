@@ -14,13 +14,44 @@ const run = (label: string, fn: () => unknown) => measure(label, fn, CALLS, BATC
 
 /** Constants as in test/chem/fixtures.ts (Goldberg et al. 2002, from memory). */
 const acetate = { name: 'acetate', chargeOfMostProtonated: 0, steps: [{ pKa: 4.756, deltaHkJ: -0.41, deltaCpJ: -142 }] };
-const phosphate = { name: 'phosphate', chargeOfMostProtonated: 0, steps: [{ pKa: 2.148, deltaHkJ: -8.0, deltaCpJ: -141 }, { pKa: 7.198, deltaHkJ: 3.6, deltaCpJ: -230 }, { pKa: 12.35, deltaHkJ: 16.0, deltaCpJ: -242 }] };
+const phosphate = {
+  name: 'phosphate',
+  chargeOfMostProtonated: 0,
+  steps: [
+    { pKa: 2.148, deltaHkJ: -8.0, deltaCpJ: -141 },
+    { pKa: 7.198, deltaHkJ: 3.6, deltaCpJ: -230 },
+    { pKa: 12.35, deltaHkJ: 16.0, deltaCpJ: -242 },
+  ],
+};
 const tris = { name: 'tris', chargeOfMostProtonated: 1, steps: [{ pKa: 8.072, deltaHkJ: 47.45, deltaCpJ: -59 }] };
-const citrate = { name: 'citrate', chargeOfMostProtonated: 0, steps: [{ pKa: 3.128, deltaHkJ: 4.07, deltaCpJ: -131 }, { pKa: 4.761, deltaHkJ: 2.23, deltaCpJ: -178 }, { pKa: 6.396, deltaHkJ: -3.38, deltaCpJ: -254 }] };
+const citrate = {
+  name: 'citrate',
+  chargeOfMostProtonated: 0,
+  steps: [
+    { pKa: 3.128, deltaHkJ: 4.07, deltaCpJ: -131 },
+    { pKa: 4.761, deltaHkJ: 2.23, deltaCpJ: -178 },
+    { pKa: 6.396, deltaHkJ: -3.38, deltaCpJ: -254 },
+  ],
+};
 
 const oneSystem: Composition = { systems: [{ ...acetate, totalM: 0.05 }], strongIons: { 'Na+': 0.175, 'Cl-': 0.15 }, temperatureC: 20 };
-const twoSystems: Composition = { systems: [{ ...phosphate, totalM: 0.02 }, { ...tris, totalM: 0.025 }], strongIons: { 'Na+': 0.18, 'Cl-': 0.15, 'K+': 0.005 }, temperatureC: 4 };
-const threeSystems: Composition = { systems: [{ ...citrate, totalM: 0.01 }, { ...phosphate, totalM: 0.02 }, { ...tris, totalM: 0.02 }], strongIons: { 'Na+': 0.2, 'Cl-': 0.15, 'Mg2+': 0.002 }, temperatureC: 37 };
+const twoSystems: Composition = {
+  systems: [
+    { ...phosphate, totalM: 0.02 },
+    { ...tris, totalM: 0.025 },
+  ],
+  strongIons: { 'Na+': 0.18, 'Cl-': 0.15, 'K+': 0.005 },
+  temperatureC: 4,
+};
+const threeSystems: Composition = {
+  systems: [
+    { ...citrate, totalM: 0.01 },
+    { ...phosphate, totalM: 0.02 },
+    { ...tris, totalM: 0.02 },
+  ],
+  strongIons: { 'Na+': 0.2, 'Cl-': 0.15, 'Mg2+': 0.002 },
+  temperatureC: 37,
+};
 
 /** 1× phosphate-buffered saline (our own recipe: 137 mM NaCl, 2.7 mM KCl, 10 mM Na2HPO4, 1.8 mM KH2PO4), and its 10× stock. */
 const salinePhosphate = (fold: number, activityModel: 'pitzer' | 'davies'): Composition => ({

@@ -63,7 +63,13 @@ const saline = (fold: number, activityModel: 'pitzer' | 'davies' | 'bates-guggen
     { temperatureC: 25, activityModel },
   );
 const tris = (scale: number, activityModel: 'pitzer' | 'davies' | 'bates-guggenheim') =>
-  compositionFromForms([{ form: 'tris base', concentrationM: 0.4 * scale }, { form: 'tris hydrochloride', concentrationM: 0.6 * scale }], { temperatureC: 25, activityModel });
+  compositionFromForms(
+    [
+      { form: 'tris base', concentrationM: 0.4 * scale },
+      { form: 'tris hydrochloride', concentrationM: 0.6 * scale },
+    ],
+    { temperatureC: 25, activityModel },
+  );
 
 console.log('\n**Stocks and their dilutions, 25 °C**\n');
 console.log('| solution | model | pH stock | pH diluted | stock − diluted | I stock (mol/kg) | osmolality stock / diluted (mOsm/kg) |');
@@ -71,10 +77,14 @@ console.log('| --- | --- | ---: | ---: | ---: | ---: | ---: |');
 for (const model of ['davies', 'bates-guggenheim', 'pitzer'] as const) {
   const a = speciate(saline(10, model));
   const b = speciate(saline(1, model));
-  console.log(`| saline phosphate 10× → 1× | ${model} | ${a.pH.toFixed(3)} | ${b.pH.toFixed(3)} | ${(a.pH - b.pH).toFixed(3)} | ${a.ionicStrengthMolal.toFixed(2)} | ${a.osmolalityMosmKg.toFixed(0)} / ${b.osmolalityMosmKg.toFixed(0)} |`);
+  console.log(
+    `| saline phosphate 10× → 1× | ${model} | ${a.pH.toFixed(3)} | ${b.pH.toFixed(3)} | ${(a.pH - b.pH).toFixed(3)} | ${a.ionicStrengthMolal.toFixed(2)} | ${a.osmolalityMosmKg.toFixed(0)} / ${b.osmolalityMosmKg.toFixed(0)} |`,
+  );
 }
 for (const model of ['davies', 'bates-guggenheim', 'pitzer'] as const) {
   const a = speciate(tris(1, model));
   const b = speciate(tris(0.1, model));
-  console.log(`| tris 1 M → 0.1 M (0.4 base + 0.6 HCl salt) | ${model} | ${a.pH.toFixed(3)} | ${b.pH.toFixed(3)} | ${(a.pH - b.pH).toFixed(3)} | ${a.ionicStrengthMolal.toFixed(2)} | ${a.osmolalityMosmKg.toFixed(0)} / ${b.osmolalityMosmKg.toFixed(0)} |`);
+  console.log(
+    `| tris 1 M → 0.1 M (0.4 base + 0.6 HCl salt) | ${model} | ${a.pH.toFixed(3)} | ${b.pH.toFixed(3)} | ${(a.pH - b.pH).toFixed(3)} | ${a.ionicStrengthMolal.toFixed(2)} | ${a.osmolalityMosmKg.toFixed(0)} / ${b.osmolalityMosmKg.toFixed(0)} |`,
+  );
 }

@@ -80,9 +80,7 @@ function main(argv: readonly string[]): number {
   const strict = argv.includes('--strict');
   const npm = process.platform === 'win32' ? 'npm.cmd' : 'npm';
   const run = spawnSync(npm, ['audit', '--omit=dev', '--json'], { encoding: 'utf8', timeout: 120_000 });
-  const verdict = run.error
-    ? { state: 'unchecked' as const, blocking: [], flagged: [], reason: run.error.message }
-    : auditVerdict(run.stdout);
+  const verdict = run.error ? { state: 'unchecked' as const, blocking: [], flagged: [], reason: run.error.message } : auditVerdict(run.stdout);
   console.log(describeVerdict(verdict));
   if (verdict.state === 'failed') return 1;
   if (verdict.state === 'unchecked' && strict) return 1;

@@ -67,12 +67,18 @@ function render(size: number): Buffer {
   for (let py = 0; py < size; py++) {
     raw[py * rowBytes] = 0; // filter: none
     for (let px = 0; px < size; px++) {
-      let r = 0, g = 0, b = 0, a = 0;
+      let r = 0,
+        g = 0,
+        b = 0,
+        a = 0;
       for (let sy = 0; sy < SUPERSAMPLE; sy++) {
         for (let sx = 0; sx < SUPERSAMPLE; sx++) {
           const c = colourAt((px + (sx + 0.5) / SUPERSAMPLE) / size, (py + (sy + 0.5) / SUPERSAMPLE) / size);
           if (!c) continue;
-          r += c[0] * c[3]; g += c[1] * c[3]; b += c[2] * c[3]; a += c[3];
+          r += c[0] * c[3];
+          g += c[1] * c[3];
+          b += c[2] * c[3];
+          a += c[3];
         }
       }
       const o = py * rowBytes + 1 + px * 4;

@@ -28,7 +28,12 @@ export async function generateMetadataFiles(): Promise<{ metadata: string; assoc
   const problems = parsed.functions.flatMap((f) => namingProblems(f.id, f.name));
   if (problems.length > 0) throw new Error(`Function names break Excel's naming rules (${NAMING_RULES_SOURCE}):\n${problems.join('\n')}`);
   const metadata = JSON.stringify(parsed, null, 2) + '\n';
-  const associations = JSON.stringify(result.associate.map((a) => ({ id: a.id, functionName: a.functionName })), null, 2) + '\n';
+  const associations =
+    JSON.stringify(
+      result.associate.map((a) => ({ id: a.id, functionName: a.functionName })),
+      null,
+      2,
+    ) + '\n';
   return { metadata, associations };
 }
 

@@ -13,11 +13,15 @@ const seed = process.env.FUZZ_SEED === undefined ? Date.now() : Number(process.e
 let slowestMs = 0;
 const t0 = Date.now();
 const result = fc.check(
-  fc.property(libraryComposition, fc.double({ min: -1.5, max: 1.5, noNaN: true }).filter((x) => Math.abs(x) > 0.01), (comp, shift) => {
-    const start = performance.now();
-    checkComposition(comp, shift);
-    slowestMs = Math.max(slowestMs, performance.now() - start);
-  }),
+  fc.property(
+    libraryComposition,
+    fc.double({ min: -1.5, max: 1.5, noNaN: true }).filter((x) => Math.abs(x) > 0.01),
+    (comp, shift) => {
+      const start = performance.now();
+      checkComposition(comp, shift);
+      slowestMs = Math.max(slowestMs, performance.now() - start);
+    },
+  ),
   { numRuns: runs, seed },
 );
 const seconds = (Date.now() - t0) / 1000;

@@ -36,7 +36,9 @@ function table(scope: Field['scope']): string[] {
   const first = scope === 'recipe' ? 'option (command line and options range)' : scope === 'batch' ? 'field (actuals range and JSON)' : 'argument';
   const lines = [`| ${first} | label (also accepted) | unit | allowed | default | what it is | example |`, '|---|---|---|---|---|---|---|'];
   for (const f of FIELDS.filter((x) => x.scope === scope)) {
-    lines.push(`| \`${f.name}\` | ${cell(f.label)} | ${cell(f.kind === 'number' ? f.unit || 'plain number' : unitsOfField(f))} | ${cell(allowedOf(f))} | ${cell(defaultOf(f))} | ${cell(f.description)} | \`${cell(f.example)}\` |`);
+    lines.push(
+      `| \`${f.name}\` | ${cell(f.label)} | ${cell(f.kind === 'number' ? f.unit || 'plain number' : unitsOfField(f))} | ${cell(allowedOf(f))} | ${cell(defaultOf(f))} | ${cell(f.description)} | \`${cell(f.example)}\` |`,
+    );
   }
   return lines;
 }
@@ -58,7 +60,7 @@ export function inputDocsMarkdown(): string {
     '- `1,000` is refused: a decimal comma and a thousands separator cannot be told apart.',
     '  `0,025` is read as 0.025. Never write thousands separators.',
     '- A number may carry a unit of its kind after it: `50 mM`, `0,5 M`, `500 mL`, `0.5 L`,',
-    '  `4 °C`; a pH may be written `pH 7.4`. It is converted to the field\'s own unit (the unit in',
+    "  `4 °C`; a pH may be written `pH 7.4`. It is converted to the field's own unit (the unit in",
     '  its name: `concentrationMm` is in mM).',
     '- Case matters in concentrations: `mM` is millimolar, `M` molar. `5 m` or `5 mm` is',
     '  refused as ambiguous rather than guessed. Volume units ignore case (`ml`, `L`).',
@@ -77,7 +79,7 @@ export function inputDocsMarkdown(): string {
     '## Recipe options',
     'RECIPE and RECIPE.ROW take four required arguments (buffer, target pH, concentration,',
     'volume), the temperature of use and a salts range, then an **options range**: two columns,',
-    'an option\'s name (or its label) and its value. The command line\'s `recipe` JSON uses the',
+    "an option's name (or its label) and its value. The command line's `recipe` JSON uses the",
     'same names, with the dotted ones as nested objects (`titrant.form` is `{"titrant": {"form": …}}`).',
     'An unknown name gets the nearest names; an option given twice is refused.',
     '',
@@ -89,8 +91,8 @@ export function inputDocsMarkdown(): string {
     '',
     '## A batch: actual amounts, readings and tolerances',
     'The as-made check and the bench correction (docs/batch.md) read these, in an actuals range',
-    '(two columns, name or label and value; a weighed form is a row of its own: the form\'s name',
-    'and its grams, with `name purity` rows for a lot\'s purity) or in the command line\'s JSON.',
+    "(two columns, name or label and value; a weighed form is a row of its own: the form's name",
+    "and its grams, with `name purity` rows for a lot's purity) or in the command line's JSON.",
     '',
     ...table('batch'),
     '',

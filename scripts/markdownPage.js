@@ -26,7 +26,12 @@ function inline(text) {
 }
 
 function cellsOf(line) {
-  return line.trim().replace(/^\|/, '').replace(/\|$/, '').split('|').map((c) => c.trim());
+  return line
+    .trim()
+    .replace(/^\|/, '')
+    .replace(/\|$/, '')
+    .split('|')
+    .map((c) => c.trim());
 }
 
 function markdownToHtml(markdown) {
@@ -57,7 +62,12 @@ function markdownToHtml(markdown) {
     const heading = /^(#{1,4})\s+(.*)$/.exec(line);
     if (heading) {
       const level = heading[1].length;
-      const id = pendingId ?? heading[2].toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
+      const id =
+        pendingId ??
+        heading[2]
+          .toLowerCase()
+          .replace(/[^a-z0-9]+/g, '-')
+          .replace(/^-|-$/g, '');
       pendingId = undefined;
       out.push(`<h${level} id="${id}">${inline(heading[2])}</h${level}>`);
       i++;
@@ -69,8 +79,11 @@ function markdownToHtml(markdown) {
       const rows = [];
       while (i < lines.length && /^\s*\|/.test(lines[i])) rows.push(cellsOf(lines[i++]));
       out.push(
-        '<table><thead><tr>' + head.map((c) => `<th>${inline(c)}</th>`).join('') + '</tr></thead><tbody>' +
-          rows.map((r) => '<tr>' + r.map((c) => `<td>${inline(c)}</td>`).join('') + '</tr>').join('') + '</tbody></table>',
+        '<table><thead><tr>' +
+          head.map((c) => `<th>${inline(c)}</th>`).join('') +
+          '</tr></thead><tbody>' +
+          rows.map((r) => '<tr>' + r.map((c) => `<td>${inline(c)}</td>`).join('') + '</tr>').join('') +
+          '</tbody></table>',
       );
       continue;
     }

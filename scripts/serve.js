@@ -34,9 +34,15 @@ const open = !args.includes('--no-open') && !process.env.CI;
 const keepPid = !args.includes('--no-pid-file');
 
 const TYPES = {
-  '.html': 'text/html; charset=utf-8', '.js': 'text/javascript; charset=utf-8', '.css': 'text/css; charset=utf-8',
-  '.json': 'application/json; charset=utf-8', '.png': 'image/png', '.map': 'application/json', '.md': 'text/plain; charset=utf-8',
-  '.txt': 'text/plain; charset=utf-8', '.svg': 'image/svg+xml',
+  '.html': 'text/html; charset=utf-8',
+  '.js': 'text/javascript; charset=utf-8',
+  '.css': 'text/css; charset=utf-8',
+  '.json': 'application/json; charset=utf-8',
+  '.png': 'image/png',
+  '.map': 'application/json',
+  '.md': 'text/plain; charset=utf-8',
+  '.txt': 'text/plain; charset=utf-8',
+  '.svg': 'image/svg+xml',
 };
 
 if (!fs.existsSync(path.join(root, 'index.html'))) {
@@ -60,7 +66,15 @@ const HTML_CSP = `${PREVIEW_CSP}; frame-ancestors 'none'`;
 /** Policy of everything else, error pages included: nothing may run or load, nothing may frame it. */
 const OTHER_CSP = "default-src 'none'; frame-ancestors 'none'";
 const ALLOWED_METHODS = 'GET, HEAD';
-const STATUS_TEXT = { 400: 'Bad request', 404: 'Not found', 405: 'Method not allowed', 414: 'Request path too long', 421: 'Wrong host: use http://localhost', 431: 'Request headers too large', 500: 'Server error' };
+const STATUS_TEXT = {
+  400: 'Bad request',
+  404: 'Not found',
+  405: 'Method not allowed',
+  414: 'Request path too long',
+  421: 'Wrong host: use http://localhost',
+  431: 'Request headers too large',
+  500: 'Server error',
+};
 
 /** Whether a Host header names this server by a loopback name: localhost, 127.0.0.1 or [::1], with our port. */
 function loopbackHost(host, port) {
@@ -143,16 +157,22 @@ server.on('clientError', (err, socket) => {
   }
   const status = err.code === 'HPE_HEADER_OVERFLOW' ? 431 : 400;
   const { head, body } = plainResponse(status, { Connection: 'close' });
-  const lines = Object.entries(head).map(([k, v]) => `${k}: ${v}`).join('\r\n');
+  const lines = Object.entries(head)
+    .map(([k, v]) => `${k}: ${v}`)
+    .join('\r\n');
   socket.end(`HTTP/1.1 ${status} ${STATUS_TEXT[status]}\r\n${lines}\r\n\r\n${body}`);
 });
 
 function tryOpen(address) {
   if (!open) return;
   const candidates =
-    process.platform === 'darwin' ? [['open', [address]]]
-      : process.platform === 'win32' ? [['cmd', ['/c', 'start', '', address]]]
-        : process.env.DISPLAY || process.env.WAYLAND_DISPLAY ? [['xdg-open', [address]]] : [];
+    process.platform === 'darwin'
+      ? [['open', [address]]]
+      : process.platform === 'win32'
+        ? [['cmd', ['/c', 'start', '', address]]]
+        : process.env.DISPLAY || process.env.WAYLAND_DISPLAY
+          ? [['xdg-open', [address]]]
+          : [];
   for (const [cmd, cmdArgs] of candidates) {
     try {
       const child = spawn(cmd, cmdArgs, { stdio: 'ignore', detached: true });
@@ -183,7 +203,11 @@ server.on('listening', () => {
 });
 const shutdown = () => {
   if (keepPid) {
-    try { fs.unlinkSync(pidFile); } catch { /* already gone */ }
+    try {
+      fs.unlinkSync(pidFile);
+    } catch {
+      /* already gone */
+    }
   }
   server.close(() => process.exit(0));
   setTimeout(() => process.exit(0), 500).unref();

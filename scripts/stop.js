@@ -16,4 +16,8 @@ try {
 } catch {
   console.log(`Process ${pid} was not running; removing the stale pid file.`);
 }
-try { fs.unlinkSync(pidFile); } catch { /* already gone */ }
+try {
+  fs.unlinkSync(pidFile);
+} catch {
+  /* already gone */
+}

@@ -49,9 +49,11 @@ export function substanceDocsMarkdown(): string {
   out.push('');
   out.push(`${acidBase.length} acid–base systems, ${strong.length} strong electrolytes, ${formCount} forms.`);
   out.push('pKa at 25 °C and I = 0; ΔH° in kJ/mol; ΔCp° in J K⁻¹ mol⁻¹; useful range = pKa ± 1 (common practice).');
-  out.push('"Checked against" lists each copy a step was compared with (which copy, where in it, what it reads); "memory" marks values written from memory of the source with no copy found. The range is the span of temperatures the step\'s data cover. How the audit was done: docs/constants.md.');
+  out.push(
+    '"Checked against" lists each copy a step was compared with (which copy, where in it, what it reads); "memory" marks values written from memory of the source with no copy found. The range is the span of temperatures the step\'s data cover. How the audit was done: docs/constants.md.',
+  );
   out.push(`Molar masses are computed from the formula with ${ATOMIC_WEIGHTS_SOURCE}; the listed value is the supplier label.`);
-  out.push('Cautions are a planning aid only: always follow the safety data sheet and your lab\'s rules.');
+  out.push("Cautions are a planning aid only: always follow the safety data sheet and your lab's rules.");
   out.push('');
   out.push('## Sources');
   out.push('');
@@ -76,18 +78,19 @@ export function substanceDocsMarkdown(): string {
     const ranges = usefulPhRange(r);
     r.steps.forEach((s, k) => {
       const [lo, hi] = ranges[k];
-      out.push(`| ${cell(s.entry)} | ${num(s.pKa)} | ${num(s.deltaHkJ)} | ${num(s.deltaCpJ)} | ${s.temperatureRangeC[0]}–${s.temperatureRangeC[1]} | ${num(lo, 2)}–${num(hi, 2)} | \`${s.source}\` | ${cell(provenance(s))} | ${cell(s.note ?? '')} |`);
+      out.push(
+        `| ${cell(s.entry)} | ${num(s.pKa)} | ${num(s.deltaHkJ)} | ${num(s.deltaCpJ)} | ${s.temperatureRangeC[0]}–${s.temperatureRangeC[1]} | ${num(lo, 2)}–${num(hi, 2)} | \`${s.source}\` | ${cell(provenance(s))} | ${cell(s.note ?? '')} |`,
+      );
     });
     out.push('');
     out.push('| Form | Formula | M (g/mol, computed) | M (listed) | Adds per mole | Caution |');
     out.push('| --- | --- | --- | --- | --- | --- |');
     for (const f of r.forms) {
       const lf = library.findForm(f.name);
-      const adds = [
-        ...f.adds.map((p) => `${p.moles} ${p.system} (−${p.protonsLost} H+)`),
-        ...Object.entries(f.counterIons).map(([ion, n]) => `${n} ${ion}`),
-      ].join(', ');
-      out.push(`| ${cell(f.name)} | ${cell(f.formula)} | ${lf.molarMass.toFixed(3)} | ${f.listedMolarMass.toFixed(2)} | ${cell(adds)} | ${cell([f.cautions?.join(', '), f.cautionNote].filter(Boolean).join(': '))} |`);
+      const adds = [...f.adds.map((p) => `${p.moles} ${p.system} (−${p.protonsLost} H+)`), ...Object.entries(f.counterIons).map(([ion, n]) => `${n} ${ion}`)].join(', ');
+      out.push(
+        `| ${cell(f.name)} | ${cell(f.formula)} | ${lf.molarMass.toFixed(3)} | ${f.listedMolarMass.toFixed(2)} | ${cell(adds)} | ${cell([f.cautions?.join(', '), f.cautionNote].filter(Boolean).join(': '))} |`,
+      );
     }
   }
   out.push('');
@@ -98,7 +101,9 @@ export function substanceDocsMarkdown(): string {
   for (const r of strong) {
     for (const f of r.forms) {
       const lf = library.findForm(f.name);
-      const adds = Object.entries(f.counterIons).map(([ion, n]) => `${n} ${ion}`).join(', ');
+      const adds = Object.entries(f.counterIons)
+        .map(([ion, n]) => `${n} ${ion}`)
+        .join(', ');
       out.push(`| ${cell(f.name)} | ${cell(f.formula)} | ${lf.molarMass.toFixed(3)} | ${f.listedMolarMass.toFixed(2)} | ${cell(adds)} | ${cell(lf.cautionText)} |`);
     }
   }

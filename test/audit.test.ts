@@ -14,9 +14,7 @@ function report(vulnerabilities: Record<string, { severity: string }>) {
   }
   return JSON.stringify({
     auditReportVersion: 2,
-    vulnerabilities: Object.fromEntries(
-      Object.entries(vulnerabilities).map(([name, v]) => [name, { name, severity: v.severity, isDirect: false, via: [], range: '*' }]),
-    ),
+    vulnerabilities: Object.fromEntries(Object.entries(vulnerabilities).map(([name, v]) => [name, { name, severity: v.severity, isDirect: false, via: [], range: '*' }])),
     metadata: { vulnerabilities: tally, dependencies: { prod: 180, dev: 0, total: 180 } },
   });
 }

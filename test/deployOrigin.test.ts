@@ -6,14 +6,16 @@ import { readFileSync } from 'fs';
 import { join } from 'path';
 import { XMLParser } from 'fast-xml-parser';
 
- 
 const { DEV_ORIGIN, checkOrigin, withOrigin } = require('../scripts/deployOrigin.js') as {
   DEV_ORIGIN: string;
   checkOrigin: (text: string) => string;
   withOrigin: (text: string, origin: string) => string;
 };
- 
-const webpackConfig = require('../webpack.config.js') as (env: unknown, argv: { mode: string }) => { plugins: { patterns?: { from: string; to: string; transform?: (content: Buffer) => string }[] }[] };
+
+const webpackConfig = require('../webpack.config.js') as (
+  env: unknown,
+  argv: { mode: string },
+) => { plugins: { patterns?: { from: string; to: string; transform?: (content: Buffer) => string }[] }[] };
 
 const ROOT = join(__dirname, '..');
 const ORIGIN = 'https://addins.northbench.example';

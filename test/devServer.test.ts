@@ -6,7 +6,6 @@
 const getHttpsServerOptions = jest.fn();
 jest.mock('office-addin-dev-certs', () => ({ getHttpsServerOptions }));
 
- 
 const webpackConfig = require('../webpack.config.js') as (env: unknown, argv: { mode: string }) => unknown;
 
 interface Config {

@@ -101,12 +101,85 @@ const CALLS: Record<string, { good: unknown[]; bad: unknown[] }> = {
   SUBSTANCES: { good: [], bad: [BAD_USER_RANGE] },
   FORMS: { good: [], bad: [BAD_USER_RANGE] },
   'RECIPE.ROW': { good: ['HEPES', 7.4, 25, 500], bad: ['HEPES', 15, 25, 500] },
-  RECIPE: { good: ['HEPES', 7.4, 25, 500, 4, [['NaCl', 150]], [['form', 'HEPES free acid'], ['titrant', 'NaOH'], ['benchTemperatureC', 22]]], bad: ['HEPES', 7.4, -25, 500] },
+  RECIPE: {
+    good: [
+      'HEPES',
+      7.4,
+      25,
+      500,
+      4,
+      [['NaCl', 150]],
+      [
+        ['form', 'HEPES free acid'],
+        ['titrant', 'NaOH'],
+        ['benchTemperatureC', 22],
+      ],
+    ],
+    bad: ['HEPES', 7.4, -25, 500],
+  },
   CONDUCTIVITY: { good: [COMPOSITION, 20], bad: [COMPOSITION, 80] },
   OSMOLALITY: { good: [COMPOSITION], bad: [COMPOSITION, 150] },
-  'MIX.VOLUMES': { good: [SHELF, [['tris', 20], ['NaCl', '150 mM']], 50, 7.9, 4], bad: [SHELF, [['NaCl', 3000], ['KCl', 2000]], 10] },
-  'MIX.PH': { good: [SHELF, [['Tris-HCl 1 M pH 8.0', 1], ['NaCl 5 M', 1.5]], 50, 4], bad: [SHELF, [['Tris-HCl 1 M pH 8.0', 40], ['NaCl 5 M', 20]], 50] },
-  'AS.MADE': { good: ['HEPES', 7.4, 25, 500, [['HEPES free acid', 2.979], ['actual.titrantMl', 4.1]]], bad: ['HEPES', 7.4, 25, 500, [['HEPES free acid', 2.979], ['actual.titrantMl', 'lots']]] },
+  'MIX.VOLUMES': {
+    good: [
+      SHELF,
+      [
+        ['tris', 20],
+        ['NaCl', '150 mM'],
+      ],
+      50,
+      7.9,
+      4,
+    ],
+    bad: [
+      SHELF,
+      [
+        ['NaCl', 3000],
+        ['KCl', 2000],
+      ],
+      10,
+    ],
+  },
+  'MIX.PH': {
+    good: [
+      SHELF,
+      [
+        ['Tris-HCl 1 M pH 8.0', 1],
+        ['NaCl 5 M', 1.5],
+      ],
+      50,
+      4,
+    ],
+    bad: [
+      SHELF,
+      [
+        ['Tris-HCl 1 M pH 8.0', 40],
+        ['NaCl 5 M', 20],
+      ],
+      50,
+    ],
+  },
+  'AS.MADE': {
+    good: [
+      'HEPES',
+      7.4,
+      25,
+      500,
+      [
+        ['HEPES free acid', 2.979],
+        ['actual.titrantMl', 4.1],
+      ],
+    ],
+    bad: [
+      'HEPES',
+      7.4,
+      25,
+      500,
+      [
+        ['HEPES free acid', 2.979],
+        ['actual.titrantMl', 'lots'],
+      ],
+    ],
+  },
   'TITRANT.NEXT': { good: ['HEPES', 7.4, 25, 500, 3, 7.0], bad: ['HEPES', 7.4, 25, 500, 3, 15] },
 };
 
@@ -160,7 +233,7 @@ describe.each([
     expect(functions).toEqual(source.map(onOrigin));
   });
 
-  test('every id and name follows Excel\'s naming rules', () => {
+  test("every id and name follows Excel's naming rules", () => {
     expect(functions.flatMap((f) => namingProblems(f.id, f.name))).toEqual([]);
   });
 
@@ -212,7 +285,15 @@ describe('the conformance checks themselves', () => {
   });
 
   test('shape checks catch blank padding, ragged rows and a matrix where a scalar belongs', () => {
-    expect(shapeProblems([['a', 1], ['', '']], 'matrix')).toEqual(['a matrix row is blank padding']);
+    expect(
+      shapeProblems(
+        [
+          ['a', 1],
+          ['', ''],
+        ],
+        'matrix',
+      ),
+    ).toEqual(['a matrix row is blank padding']);
     expect(shapeProblems([['a', 1], ['b']], 'matrix')).toEqual(['matrix rows differ in length']);
     expect(shapeProblems([[1]], 'scalar')).toHaveLength(1);
     expect(shapeProblems(Number.NaN, 'scalar')).toHaveLength(1);

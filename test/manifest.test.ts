@@ -14,7 +14,7 @@ const ROOT = join(__dirname, '..');
 const xml = readFileSync(join(ROOT, 'manifest.xml'), 'utf8');
 const parser = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '@' });
 const doc = parser.parse(xml).OfficeApp;
- 
+
 const { OUTPUTS, DEV_PORT } = require('../webpack.config.js') as { OUTPUTS: string[]; DEV_PORT: number };
 const ORIGIN = `https://localhost:${DEV_PORT}`;
 
@@ -52,7 +52,7 @@ describe('manifest.xml', () => {
     expect(doc.Permissions).toBe('ReadWriteDocument');
   });
 
-  test('requires SharedRuntime 1.1 and ExcelApi 1.7 (the pane\'s chart calls) and declares one long-lived shared runtime', () => {
+  test("requires SharedRuntime 1.1 and ExcelApi 1.7 (the pane's chart calls) and declares one long-lived shared runtime", () => {
     const sets = asList(doc.Requirements.Sets.Set).map((s: Record<string, string>) => [s['@Name'], s['@MinVersion']]);
     expect(sets).toEqual([
       ['SharedRuntime', '1.1'],
@@ -117,8 +117,14 @@ describe('the structural checks themselves', () => {
   });
 
   test('an icon of another size than stated, an http URL and a missing requirement set are found', () => {
-    expect(broken('<bt:Image size="32" resid="Icon.32"/>', '<bt:Image size="32" resid="Icon.16"/>')).toContain('Icon.16: https://localhost:3000/assets/icon-16.png is 16×16, stated 32×32');
-    expect(broken('DefaultValue="https://localhost:3000/help/functions.html"/>\n  <AppDomains>', 'DefaultValue="http://localhost:3000/help/functions.html"/>\n  <AppDomains>').join('\n')).toMatch(/SupportUrl: http:\/\/localhost:3000\/help\/functions\.html is not https/);
+    expect(broken('<bt:Image size="32" resid="Icon.32"/>', '<bt:Image size="32" resid="Icon.16"/>')).toContain(
+      'Icon.16: https://localhost:3000/assets/icon-16.png is 16×16, stated 32×32',
+    );
+    expect(
+      broken('DefaultValue="https://localhost:3000/help/functions.html"/>\n  <AppDomains>', 'DefaultValue="http://localhost:3000/help/functions.html"/>\n  <AppDomains>').join(
+        '\n',
+      ),
+    ).toMatch(/SupportUrl: http:\/\/localhost:3000\/help\/functions\.html is not https/);
     expect(broken('<Set Name="ExcelApi" MinVersion="1.7"/>', '').join('\n')).toMatch(/requirement sets/);
   });
 

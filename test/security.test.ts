@@ -8,7 +8,6 @@ import { existsSync, readFileSync, readdirSync } from 'fs';
 import { join } from 'path';
 import { DIST, ROOT, ensureBuild } from './support/build';
 
- 
 const webpackConfig = require('../webpack.config.js') as ((env: unknown, argv: { mode: string }) => unknown) & { OFFICE_JS_CDN: string; excelCsp: (local: boolean) => string };
 const { OFFICE_JS_CDN, excelCsp } = webpackConfig;
 
@@ -64,7 +63,7 @@ describe('the built pages and bundles', () => {
     }
   });
 
-  it.each(EXCEL_PAGES)('%s loads Office.js from Microsoft\'s CDN in <head>, under a CSP that allows scripts from there and our origin only', (name) => {
+  it.each(EXCEL_PAGES)("%s loads Office.js from Microsoft's CDN in <head>, under a CSP that allows scripts from there and our origin only", (name) => {
     const html = readFileSync(join(DIST, name), 'utf8');
     const head = html.slice(0, html.indexOf('</head>'));
     expect(OFFICE_JS_CDN).toBe('https://appsforoffice.microsoft.com/lib/1/hosted/office.js');
@@ -103,7 +102,11 @@ describe('OFFICE_JS=local (closed networks)', () => {
     expect(pages).toHaveLength(2);
     for (const page of pages) expect(page.userOptions!.templateParameters).toEqual({ officeJs: 'office/office.js', csp: excelCsp(true) });
     expect(excelCsp(true)).toMatch(/^script-src 'self';/);
-    expect(plugins().flatMap((p) => p.patterns ?? []).some((c) => c.to === 'office/[name][ext]')).toBe(true);
+    expect(
+      plugins()
+        .flatMap((p) => p.patterns ?? [])
+        .some((c) => c.to === 'office/[name][ext]'),
+    ).toBe(true);
   });
 
   it('any other value stops the build', () => {
@@ -123,7 +126,10 @@ describe('manifest.xml', () => {
 describe('citations stay inside the repository', () => {
   it('no source, test, script or doc cites a planning file outside the repository (SCIENCE.md, "the brief")', () => {
     const { execSync } = jest.requireActual('child_process') as typeof import('child_process');
-    const hits = execSync("git grep -n -I -E 'SCIENCE\\.md|the brief\\b|brief.s bar' -- src test scripts bench docs README.md DEVELOPERS.md ':!test/security.test.ts' || true", { cwd: `${__dirname}/..`, encoding: 'utf8' });
+    const hits = execSync("git grep -n -I -E 'SCIENCE\\.md|the brief\\b|brief.s bar' -- src test scripts bench docs README.md DEVELOPERS.md ':!test/security.test.ts' || true", {
+      cwd: `${__dirname}/..`,
+      encoding: 'utf8',
+    });
     expect(hits).toBe('');
   });
 });

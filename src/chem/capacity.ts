@@ -22,7 +22,6 @@ export interface Capacity {
   readonly acidMmPerTenthPh: number;
 }
 
-
 /**
  * Buffer capacity of a composition at its own pH, with the composition's activity model.
  *

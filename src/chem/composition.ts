@@ -157,7 +157,12 @@ export function prepare(composition: Composition): PreparedComposition {
     throw new ChemError('invalid-input', 'emptyComposition', MESSAGES.emptyComposition(), 'composition');
   }
   const t = composition.temperatureC;
-  const temperatureC = t === undefined ? 25 : inRange(t, MIN_TEMPERATURE_C, MAX_TEMPERATURE_C) ? (t as number) : requireNumber('temperatureC', t, MIN_TEMPERATURE_C, MAX_TEMPERATURE_C, `${MIN_TEMPERATURE_C} to ${MAX_TEMPERATURE_C} °C`);
+  const temperatureC =
+    t === undefined
+      ? 25
+      : inRange(t, MIN_TEMPERATURE_C, MAX_TEMPERATURE_C)
+        ? (t as number)
+        : requireNumber('temperatureC', t, MIN_TEMPERATURE_C, MAX_TEMPERATURE_C, `${MIN_TEMPERATURE_C} to ${MAX_TEMPERATURE_C} °C`);
   const model = parseActivityModel('activityModel', composition.activityModel);
   const systems = composition.systems ?? [];
   if (!Array.isArray(systems)) {
@@ -230,6 +235,15 @@ export function prepare(composition: Composition): PreparedComposition {
     warnings,
     source: composition,
     waterDensity: waterDensity(temperatureC),
-    pitzer: model === 'pitzer' ? pitzerLayout(ionNames, ionNames.map((name) => ions[name]), systems, temperatureC, a) : undefined,
+    pitzer:
+      model === 'pitzer'
+        ? pitzerLayout(
+            ionNames,
+            ionNames.map((name) => ions[name]),
+            systems,
+            temperatureC,
+            a,
+          )
+        : undefined,
   };
 }

@@ -97,9 +97,17 @@ const STRONG_ION_LAMBDA: Readonly<Record<string, IonEntry>> = {
   /** H⁺ 349.65. CRC (read in a copy); shape: McCleskey 2012 Table 1 (one copy). */
   'H+': { lambda25: 349.65, shape: poly(0.01414, 5.355, 224.2), source: `${CRC} (read); temperature: McCleskey et al. 2012 Table 1 (one copy)` },
   /** OH⁻ 198. Lange 8.32 (read) and CRC (memory) agree; PHREEQC's D = 5.27e-9 m²/s gives 197.9. Shape: McCleskey 2012 (one copy). */
-  'OH-': { lambda25: 198, shape: poly(0.003396, 2.925, 121.3), source: `${LANGE} (read; CRC agrees, PHREEQC database D gives 197.9); temperature: McCleskey et al. 2012 Table 1 (one copy)` },
+  'OH-': {
+    lambda25: 198,
+    shape: poly(0.003396, 2.925, 121.3),
+    source: `${LANGE} (read; CRC agrees, PHREEQC database D gives 197.9); temperature: McCleskey et al. 2012 Table 1 (one copy)`,
+  },
   /** Na⁺ 50.08. CRC (memory); Lange 8.32 gives 50.11 (read); PHREEQC's D = 1.33e-9 gives 49.9. Shape: McCleskey 2012 (two copies). */
-  'Na+': { lambda25: 50.08, shape: poly(0.003763, 0.877, 26.23), source: `${CRC} (memory; Lange 50.11, PHREEQC database D gives 49.9); temperature: McCleskey et al. 2012 Table 1` },
+  'Na+': {
+    lambda25: 50.08,
+    shape: poly(0.003763, 0.877, 26.23),
+    source: `${CRC} (memory; Lange 50.11, PHREEQC database D gives 49.9); temperature: McCleskey et al. 2012 Table 1`,
+  },
   /** K⁺ 73.48. CRC (read in a copy). Shape: McCleskey 2012 (two copies). */
   'K+': { lambda25: 73.48, shape: poly(0.003046, 1.261, 40.7), source: `${CRC} (read); temperature: McCleskey et al. 2012 Table 1` },
   /** Li⁺ 38.66. CRC (read). Shape: McCleskey 2012 (one copy). */
@@ -111,7 +119,11 @@ const STRONG_ION_LAMBDA: Readonly<Record<string, IonEntry>> = {
   /** Ca²⁺ 2 × 59.47. CRC (read). Shape: McCleskey 2012 (two copies). */
   'Ca2+': { lambda25: 118.94, shape: poly(0.009645, 1.984, 62.28), source: `${CRC} (read, ½Ca²⁺ 59.47); temperature: McCleskey et al. 2012 Table 1` },
   /** Cl⁻ 76.31. Lange 8.32 (read) and CRC (memory) agree; PHREEQC's D = 2.03e-9 gives 76.2; Hirokawa's mobility 7.91e-8 gives 76.3. Shape: McCleskey 2012 (two copies). */
-  'Cl-': { lambda25: 76.31, shape: poly(0.003817, 1.337, 40.99), source: `${LANGE} (read; CRC agrees, PHREEQC D gives 76.2, Hirokawa mobility 76.3); temperature: McCleskey et al. 2012 Table 1` },
+  'Cl-': {
+    lambda25: 76.31,
+    shape: poly(0.003817, 1.337, 40.99),
+    source: `${LANGE} (read; CRC agrees, PHREEQC D gives 76.2, Hirokawa mobility 76.3); temperature: McCleskey et al. 2012 Table 1`,
+  },
   /** Br⁻ 78.1. Lange 8.32 (read) and CRC (memory) agree. Shape: McCleskey 2012 (one copy). */
   'Br-': { lambda25: 78.1, shape: poly(0.000709, 1.477, 40.91), source: `${LANGE} (read; CRC agrees); temperature: McCleskey et al. 2012 Table 1 (one copy)` },
   /** I⁻ 76.9. Lange 8.32 (read); CRC gives 76.8 (memory). */
@@ -286,7 +298,12 @@ export function conductivityOf(result: SpeciationResult): ConductivityResult {
   }
   const estimates: ConductivityEstimate[] = ions
     .filter((i) => i.estimated)
-    .map((i) => ({ species: i.species, charge: i.charge, lambda25: DEFAULT_LAMBDA_PER_CHARGE * Math.abs(i.charge), shareOfConductivity: total > 0 ? i.contributionMsPerCm / total : 0 }));
+    .map((i) => ({
+      species: i.species,
+      charge: i.charge,
+      lambda25: DEFAULT_LAMBDA_PER_CHARGE * Math.abs(i.charge),
+      shareOfConductivity: total > 0 ? i.contributionMsPerCm / total : 0,
+    }));
   const warnings: ChemWarning[] = [];
   const material = estimates.filter((e) => e.shareOfConductivity >= 0.01);
   if (material.length > 0) {

@@ -10,86 +10,57 @@ export type ChemErrorKind = 'invalid-input' | 'no-convergence' | 'infeasible-tar
 
 /** Every message the core can produce, keyed by a stable code. */
 export const MESSAGES = {
-  notFinite: (field: string, value: unknown) =>
-    `${field} must be a finite number; got ${describe(value)}.`,
-  outOfRange: (field: string, value: unknown, allowed: string) =>
-    `${field} is ${describe(value)}; allowed: ${allowed}.`,
-  notInteger: (field: string, value: unknown) =>
-    `${field} must be a whole number; got ${describe(value)}.`,
-  emptyComposition: () =>
-    'The composition is empty: give at least one acid–base system or strong ion.',
-  stepsOutOfOrder: (field: string, prev: number, next: number) =>
-    `${field}: pKa values must ascend (each step loses one proton); got ${prev} then ${next}.`,
-  listLengthMismatch: (field: string, expected: number, got: number) =>
-    `${field} must list one value per pKa step (${expected}); got ${got}.`,
-  unknownIon: (field: string, name: string, allowed: string) =>
-    `${field}: "${name}" is not a strong ion this tool knows; allowed: ${allowed}.`,
-  unknownModel: (field: string, name: string, allowed: string) =>
-    `${field}: "${name}" is not an activity model; allowed: ${allowed}.`,
-  noConvergence: (what: string, iterations: number) =>
-    `${what} did not converge within ${iterations} iterations.`,
-  unreachablePh: (targetPh: number, detail: string) =>
-    `pH ${targetPh} cannot be reached: ${detail}.`,
+  notFinite: (field: string, value: unknown) => `${field} must be a finite number; got ${describe(value)}.`,
+  outOfRange: (field: string, value: unknown, allowed: string) => `${field} is ${describe(value)}; allowed: ${allowed}.`,
+  notInteger: (field: string, value: unknown) => `${field} must be a whole number; got ${describe(value)}.`,
+  emptyComposition: () => 'The composition is empty: give at least one acid–base system or strong ion.',
+  stepsOutOfOrder: (field: string, prev: number, next: number) => `${field}: pKa values must ascend (each step loses one proton); got ${prev} then ${next}.`,
+  listLengthMismatch: (field: string, expected: number, got: number) => `${field} must list one value per pKa step (${expected}); got ${got}.`,
+  unknownIon: (field: string, name: string, allowed: string) => `${field}: "${name}" is not a strong ion this tool knows; allowed: ${allowed}.`,
+  unknownModel: (field: string, name: string, allowed: string) => `${field}: "${name}" is not an activity model; allowed: ${allowed}.`,
+  noConvergence: (what: string, iterations: number) => `${what} did not converge within ${iterations} iterations.`,
+  unreachablePh: (targetPh: number, detail: string) => `pH ${targetPh} cannot be reached: ${detail}.`,
   unknownSubstance: (field: string, name: string, suggestions: readonly string[]) =>
     suggestions.length > 0
       ? `${field}: "${name}" is not in the substance library; did you mean ${suggestions.map((s) => `"${s}"`).join(', ')}?`
       : `${field}: "${name}" is not in the substance library; list the library to see every name it knows.`,
-  duplicateSubstance: (field: string, name: string, existing: string) =>
-    `${field}: "${name}" is already a name in the substance library (${existing}); choose another name.`,
-  badFormula: (field: string, formula: string, detail: string) =>
-    `${field}: cannot read the formula "${formula}": ${detail}.`,
+  duplicateSubstance: (field: string, name: string, existing: string) => `${field}: "${name}" is already a name in the substance library (${existing}); choose another name.`,
+  badFormula: (field: string, formula: string, detail: string) => `${field}: cannot read the formula "${formula}": ${detail}.`,
   formNotNeutral: (field: string, name: string, netCharge: number) =>
     `${field}: the form "${name}" would add a net charge of ${netCharge} per mole; protons lost and counter-ions must balance to 0.`,
-  missingValue: (field: string, what: string) =>
-    `${field} is missing; give ${what}.`,
-  formNotOfSystem: (field: string, form: string, system: string) =>
-    `${field}: "${form}" does not contain ${system}; choose a form of ${system}.`,
-  formsOfSystem: (field: string, system: string, forms: readonly string[]) =>
-    `${field}: name the forms of ${system} to weigh; its forms are ${forms.join(', ')}.`,
+  missingValue: (field: string, what: string) => `${field} is missing; give ${what}.`,
+  formNotOfSystem: (field: string, form: string, system: string) => `${field}: "${form}" does not contain ${system}; choose a form of ${system}.`,
+  formsOfSystem: (field: string, system: string, forms: readonly string[]) => `${field}: name the forms of ${system} to weigh; its forms are ${forms.join(', ')}.`,
   unreachableByMixing: (targetPh: number, lowPh: number, highPh: number) =>
     `pH ${targetPh} cannot be reached by mixing these two forms: they span pH ${lowPh.toFixed(2)} to ${highPh.toFixed(2)} at this concentration and temperature.`,
-  notATitrant: (field: string, form: string) =>
-    `${field}: "${form}" cannot serve as a titrant (it adds more than one acid–base system).`,
-  notANumber: (field: string, value: unknown, example: string) =>
-    `${field} must be a number (typed, or as text such as ${example}); got ${describe(value)}.`,
+  notATitrant: (field: string, form: string) => `${field}: "${form}" cannot serve as a titrant (it adds more than one acid–base system).`,
+  notANumber: (field: string, value: unknown, example: string) => `${field} must be a number (typed, or as text such as ${example}); got ${describe(value)}.`,
   ambiguousNumber: (field: string, value: unknown) =>
     `${field}: cannot tell how to read ${describe(value)}; write the number with one decimal mark and no thousands separators (e.g. 1000, 7.4 or 7,4).`,
   wrongUnit: (field: string, unit: string, allowed: readonly string[]) =>
     `${field}: the unit "${unit}" does not fit; ${allowed.length ? `allowed: ${allowed.join(', ')} (or a plain number)` : 'give a plain number'}.`,
   ambiguousUnit: (field: string, unit: string, allowed: readonly string[]) =>
     `${field}: the unit "${unit}" is ambiguous (mM is millimolar, M is molar: case matters); write one of ${allowed.join(', ')}.`,
-  listTooLong: (field: string, limit: number) =>
-    `${field} lists too many items; allowed: up to ${limit}, separated by ";".`,
+  listTooLong: (field: string, limit: number) => `${field} lists too many items; allowed: up to ${limit}, separated by ";".`,
   unknownField: (field: string, suggestions: readonly string[], allowed: string) =>
-    suggestions.length > 0
-      ? `"${field}" is not an option; did you mean ${suggestions.map((s) => `"${s}"`).join(', ')}?`
-      : `"${field}" is not an option; allowed: ${allowed}.`,
-  badSaltItem: (field: string, item: string, allowed: string) =>
-    `${field}: cannot read "${item}" as a salt and its amount; allowed: ${allowed}.`,
+    suggestions.length > 0 ? `"${field}" is not an option; did you mean ${suggestions.map((s) => `"${s}"`).join(', ')}?` : `"${field}" is not an option; allowed: ${allowed}.`,
+  badSaltItem: (field: string, item: string, allowed: string) => `${field}: cannot read "${item}" as a salt and its amount; allowed: ${allowed}.`,
   titrantTooLarge: (titrantMl: number, roomMl: number, stockM: number, suggestion: string) =>
     `The ${stockM} M titrant stock is too dilute: it would take ${titrantMl.toPrecision(4)} mL, more than the ${roomMl.toPrecision(4)} mL part volume the pH is adjusted in; use ${suggestion}.`,
-  notJson: (detail: string) =>
-    `The input is not valid JSON: ${detail}.`,
-  unknownCommand: (command: string, commands: readonly string[]) =>
-    `"${command}" is not a command; the commands are ${commands.join(', ')} (proton-ledger --help lists them).`,
-  additiveNotTitrated: (field: string, additive: string) =>
-    `${field}: ${additive} is a neutral additive; it takes no titrant or pH (leave them blank).`,
-  ofTheStockNamed: (stock: string, message: string) =>
-    `The stock "${stock}": ${message}`,
-  duplicateStock: (field: string, name: string, existing: string) =>
-    `${field}: a stock named "${name}" is already on the shelf (${existing}); give each stock its own name.`,
+  notJson: (detail: string) => `The input is not valid JSON: ${detail}.`,
+  unknownCommand: (command: string, commands: readonly string[]) => `"${command}" is not a command; the commands are ${commands.join(', ')} (proton-ledger --help lists them).`,
+  additiveNotTitrated: (field: string, additive: string) => `${field}: ${additive} is a neutral additive; it takes no titrant or pH (leave them blank).`,
+  ofTheStockNamed: (stock: string, message: string) => `The stock "${stock}": ${message}`,
+  duplicateStock: (field: string, name: string, existing: string) => `${field}: a stock named "${name}" is already on the shelf (${existing}); give each stock its own name.`,
   noStockFor: (field: string, component: string, stocks: readonly string[]) =>
     `${field}: no stock on the shelf holds "${component}"; the stocks are ${stocks.map((s) => `"${s}"`).join(', ')}.`,
   ambiguousStock: (field: string, component: string, stocks: readonly string[]) =>
     `${field}: more than one stock holds "${component}" (${stocks.map((s) => `"${s}"`).join(', ')}); name the stock to use.`,
-  targetTwice: (field: string, component: string) =>
-    `${field}: "${component}" is already a target; give each component once.`,
+  targetTwice: (field: string, component: string) => `${field}: "${component}" is already a target; give each component once.`,
   stocksDoNotFit: (neededMl: number, finalMl: number, detail: string) =>
     `The stocks do not fit: they take ${neededMl.toPrecision(4)} mL, more than the ${finalMl.toPrecision(4)} mL final volume (${detail}); use more concentrated stocks or lower targets.`,
-  badTargetItem: (field: string, item: string) =>
-    `${field}: "${item}" needs a component and its amount, e.g. "NaCl 150 mM" or "glycerol 10 %".`,
-  percentForAdditivesOnly: (field: string, component: string) =>
-    `${field}: "${component}" is not a neutral additive; give its final concentration in mM.`,
+  badTargetItem: (field: string, item: string) => `${field}: "${item}" needs a component and its amount, e.g. "NaCl 150 mM" or "glycerol 10 %".`,
+  percentForAdditivesOnly: (field: string, component: string) => `${field}: "${component}" is not a neutral additive; give its final concentration in mM.`,
   // Warnings (a result with a caveat); see warnings.ts.
   constantsFromMemory: (systems: readonly string[]) =>
     `Constants for ${systems.join(', ')} were written from memory of their source and not yet checked against it; see the substance list for the source, and check them there before relying on the result.`,
@@ -131,10 +102,8 @@ export const MESSAGES = {
     `Ions without published Pitzer parameters (${systems}) carry ${sharePercent.toFixed(0)} % of the ionic strength (${ionicStrengthMolal.toPrecision(3)} mol/kg): their activity coefficients use a generic interaction, so the pH may be off by a few tenths.`,
   pitzerTemperature: (temperatureC: number) =>
     `At ${temperatureC} °C some Pitzer parameters are used at their 25 °C values (no published temperature slope) or past the 0–50 °C of their slopes; in a solution this concentrated the pH is an estimate.`,
-  stockAtMeter: (fold: number, message: string) =>
-    `Stock (${fold}×) at the meter: ${message}`,
-  ofTheStock: (message: string) =>
-    `The stock: ${message}`,
+  stockAtMeter: (fold: number, message: string) => `Stock (${fold}×) at the meter: ${message}`,
+  ofTheStock: (message: string) => `The stock: ${message}`,
   titrantOverHalf: (titrantMl: number, totalMl: number) =>
     `The titrant (${titrantMl.toFixed(1)} mL) is more than half the final volume (${totalMl.toFixed(0)} mL): use a more concentrated stock.`,
   titrantTiny: (microlitres: number, fold: number, dilutedM: number, volume: string) =>
@@ -149,10 +118,8 @@ export const MESSAGES = {
     `${milligrams.toPrecision(3)} mg of ${form} is too little to weigh well on an analytical balance (about ${leastMg} mg at least): make a larger volume or a concentrated stock and take a part of it.`,
   aboveSolubility: (form: string, gramsPerLitre: number, solubility: number, temperatureC: number) =>
     `${form} at ${gramsPerLitre.toFixed(0)} g/L in the part volume is above its solubility (about ${solubility} g/L at ${temperatureC} °C).`,
-  givenTwice: (field: string) =>
-    `${field} is given twice; give it once.`,
-  notText: (field: string, value: unknown) =>
-    `${field} must be text (a name); got ${describe(value)}.`,
+  givenTwice: (field: string) => `${field} is given twice; give it once.`,
+  notText: (field: string, value: unknown) => `${field} must be text (a name); got ${describe(value)}.`,
   unknownChoice: (field: string, value: unknown, allowed: readonly string[]) =>
     `${field}: ${describe(value)} is not one of the choices; allowed: ${allowed.map((a) => `"${a}"`).join(', ')}.`,
   saltTargetUnreachable: (what: string, target: number, reached: number) =>
@@ -164,18 +131,15 @@ export const MESSAGES = {
   noEnthalpy: (where: string, temperatureC: number, system: string, steps: string, toleranceC: number) =>
     `${system} has no ΔH° for ${steps}: its pKa is held at the 25 °C value, so at ${where.toLowerCase()} ${temperatureC} °C (beyond 25 ± ${toleranceC} °C) the pH is an estimate; measure it at that temperature.`,
   // A batch as made, and the correction at the bench (src/chem/batch).
-  notWeighed: (form: string) =>
-    `${form} is in the plan but no actual mass is given for it; enter the grams weighed (0 if it was left out).`,
-  nothingToTitrate: (route: string) =>
-    `This recipe (route ${route}) adds no titrant, so there is nothing to correct with one; weigh the forms again or plan it with a titrant.`,
+  notWeighed: (form: string) => `${form} is in the plan but no actual mass is given for it; enter the grams weighed (0 if it was left out).`,
+  nothingToTitrate: (route: string) => `This recipe (route ${route}) adds no titrant, so there is nothing to correct with one; weigh the forms again or plan it with a titrant.`,
   readingUnexplained: (readingPh: number, startPh: number, titrant: string, direction: string) =>
     `The reading pH ${readingPh.toFixed(2)} lies beyond pH ${startPh.toFixed(2)}, what the weighed forms give before any titrant, although ${titrant} ${direction} the pH: no amount of titrant explains it; check the meter on a standard buffer, the electrode, and that the right substances went in.`,
   correctionTooLarge: (millilitres: number, roomMl: number, titrant: string) =>
     `${millilitres.toPrecision(3)} mL of ${titrant} would be needed, more than the ${roomMl.toPrecision(3)} mL left before the final volume; use a stronger stock or start the batch again.`,
   otherFormWeighed: (weighed: string, planned: string, ratio: number) =>
     `${weighed} was weighed where the plan has ${planned}: the same mass gives ${(ratio * 100).toFixed(1)} % of the planned amount (molar masses differ); the check uses the form weighed.`,
-  formNotInPlan: (form: string) =>
-    `${form} is not in the plan; it is counted in the as-made solution as weighed.`,
+  formNotInPlan: (form: string) => `${form} is not in the plan; it is counted in the as-made solution as weighed.`,
   stockOffNominal: (nominalM: number, standardisedM: number, tolerancePercent: number) =>
     `The titrant stock was standardised at ${standardisedM} M, not the nominal ${nominalM} M (beyond its ±${tolerancePercent} %): volumes poured by the plan give a different amount.`,
   benchTemperatureOffPlan: (actualC: number, plannedC: number, readingPh: number, plannedReadingPh: number) =>
@@ -194,8 +158,7 @@ export const MESSAGES = {
     `Possible cause, the meter: an offset of ${offsetPh >= 0 ? '+' : ''}${offsetPh.toFixed(2)} pH; check it on a standard buffer near pH ${nearPh.toFixed(1)} at this temperature.`,
   overshoot: (titrant: string, counter: string) =>
     `The target is passed: more ${titrant} would move further away; bring it back with ${counter} (it adds salt: the ionic strength ends a little above the plan's).`,
-  benchOnTarget: (readingPh: number, tolerancePh: number) =>
-    `The meter reads pH ${readingPh.toFixed(2)}, within ±${tolerancePh} of the end point: add no more; make up to volume.`,
+  benchOnTarget: (readingPh: number, tolerancePh: number) => `The meter reads pH ${readingPh.toFixed(2)}, within ±${tolerancePh} of the end point: add no more; make up to volume.`,
 } as const;
 
 export type MessageCode = keyof typeof MESSAGES;

@@ -2,7 +2,16 @@
  * The chemistry core's public face: everything hosts (worksheet functions, task pane,
  * command line) may call. Pure TypeScript; no Office, DOM or I/O.
  */
-export { ACTIVITY_MODELS, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, DEFAULT_ACTIVITY_MODEL, PITZER_LIMIT_MOLAL, apparentPKa, ionicStrengthFactor, log10Gamma } from './activity';
+export {
+  ACTIVITY_MODELS,
+  ACTIVITY_MODEL_LIMIT_M,
+  ACTIVITY_MODEL_NAMES,
+  DEFAULT_ACTIVITY_MODEL,
+  PITZER_LIMIT_MOLAL,
+  apparentPKa,
+  ionicStrengthFactor,
+  log10Gamma,
+} from './activity';
 export { saltCoefficients } from './pitzer/model';
 export type { ActivityModel } from './activity';
 export { MAX_CONCENTRATION_M, MAX_STEPS, MAX_TEMPERATURE_C, MIN_TEMPERATURE_C, FITTED_RANGE_MAX_C, prepare, systemAt, withConditions } from './composition';

@@ -146,7 +146,9 @@ function solveChargeBalance(p: PreparedComposition, kp: number[], gH: number, gO
     x = next;
   }
   if (!loChecked || !hiChecked) {
-    const detail = loChecked ? 'the composition is more acidic than pH −2 (too much strong acid for this solver)' : 'the composition is more basic than pH 16 (too much strong base for this solver)';
+    const detail = loChecked
+      ? 'the composition is more acidic than pH −2 (too much strong acid for this solver)'
+      : 'the composition is more basic than pH 16 (too much strong base for this solver)';
     throw new ChemError('infeasible-target', 'unreachablePh', `No pH between ${PH_BRACKET_LOW} and ${PH_BRACKET_HIGH} balances the charges: ${detail}.`, 'composition');
   }
   throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The pH solve', MAX_PH_ITERATIONS));
@@ -484,7 +486,15 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
   const aH = Math.pow(10, -state.pH);
   const g1 = state.gamma1;
   const ionNames = Object.keys(composition.strongIons ?? {});
-  const layout = p.pitzer ?? pitzerLayout(ionNames, ionNames.map((name) => composition.strongIons![name]), composition.systems, p.temperatureC, p.a);
+  const layout =
+    p.pitzer ??
+    pitzerLayout(
+      ionNames,
+      ionNames.map((name) => composition.strongIons![name]),
+      composition.systems,
+      p.temperatureC,
+      p.a,
+    );
   const n = layout.speciesCount;
   const charges = layout.system.charges;
   let conc: readonly number[];
@@ -508,7 +518,12 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     conc = c;
     waterKgPerL = waterKgPerLitre(p.waterDensity, c, layout.volumes, state.ionicStrengthM);
     const evaluation: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
-    pitzerEvaluate(layout.system, c.map((v) => v / waterKgPerL), new Array<number>(n).fill(0), evaluation);
+    pitzerEvaluate(
+      layout.system,
+      c.map((v) => v / waterKgPerL),
+      new Array<number>(n).fill(0),
+      evaluation,
+    );
     ionicStrengthMolal = evaluation.ionicStrength;
     osmoticCoefficient = evaluation.osmoticCoefficient;
     const lnG1 = Math.log(g1);
@@ -607,7 +622,9 @@ function pitzerWarnings(p: PreparedComposition, layout: PitzerLayout, coverage: 
   }
   if (ionicStrengthMolal > UNPARAMETERISED_IONIC_STRENGTH_MOLAL) {
     if (coverage.unparameterisedShare > UNPARAMETERISED_SHARE_LIMIT) {
-      warnings.push(warning('pitzerFallback', MESSAGES.pitzerFallback(coverage.unparameterisedSystems.join(', '), coverage.unparameterisedShare * 100, ionicStrengthMolal), 'activityModel'));
+      warnings.push(
+        warning('pitzerFallback', MESSAGES.pitzerFallback(coverage.unparameterisedSystems.join(', '), coverage.unparameterisedShare * 100, ionicStrengthMolal), 'activityModel'),
+      );
     }
     if (layout.system.temperatureExtrapolated && Math.abs(p.temperatureC - 25) > PITZER_TEMPERATURE_WINDOW_K) {
       warnings.push(warning('pitzerTemperature', MESSAGES.pitzerTemperature(p.temperatureC), 'temperatureC'));

@@ -139,7 +139,6 @@ export function titrantForPh(composition: Composition, titrant: Titrant, targetP
   return { concentrationM: found.amount, ionicStrengthM: found.ionicStrengthM, chargePerMole: found.chargePerMole, iterations: found.iterations };
 }
 
-
 /** A composition prepared for the Pitzer amount solve with one titrant, and how the titrant's amount enters it. */
 interface PitzerTitrantSetup {
   readonly strongIons: Titrant['strongIons'];
@@ -209,7 +208,8 @@ function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: 
     if (!Number.isFinite(c) || Math.abs(c) > MAX_CONCENTRATION_M) throw unreachable(p, name, targetPh, q, c);
     return Math.max(0, p.strongIonicStrength + 0.5 * (base.i2 + Math.abs(c) * i2t));
   };
-  const ionicStrength = p.model === 'ideal' ? speciesIonicStrength(0) : selfConsistentIonicStrength(p.strongIonicStrength, speciesIonicStrength, p.ionicStrengthScale + 1, 'The titrant amount');
+  const ionicStrength =
+    p.model === 'ideal' ? speciesIonicStrength(0) : selfConsistentIonicStrength(p.strongIonicStrength, speciesIonicStrength, p.ionicStrengthScale + 1, 'The titrant amount');
   if (c < 0) throw unreachable(p, name, targetPh, q, c);
   return { concentrationM: c, ionicStrengthM: ionicStrength, chargePerMole: q, iterations };
 }
@@ -269,7 +269,13 @@ function unreachable(p: PreparedComposition, name: string, targetPh: number, q: 
     const direction = q > 0 ? 'raises' : 'lowers';
     detail = `${name} ${direction} the pH, and without it the solution is already at pH ${startPh.toFixed(2)}`;
   }
-  return new ChemError('infeasible-target', 'unreachablePh', MESSAGES.unreachablePh(targetPh, detail), 'targetPh', q > 0 ? 'a pH above the starting pH' : 'a pH below the starting pH');
+  return new ChemError(
+    'infeasible-target',
+    'unreachablePh',
+    MESSAGES.unreachablePh(targetPh, detail),
+    'targetPh',
+    q > 0 ? 'a pH above the starting pH' : 'a pH below the starting pH',
+  );
 }
 
 /**
@@ -283,8 +289,6 @@ export function withTitrant(composition: Composition, titrant: Titrant, concentr
     const existing = Object.keys(strongIons).find((k) => findStrongIon('strongIons', k).name === key);
     strongIons[existing ?? key] = (strongIons[existing ?? key] ?? 0) + perMole * concentrationM;
   }
-  const systems = titrant.system
-    ? [...composition.systems, systemAt(titrant.system, (titrant.systemPerMole ?? 1) * concentrationM)]
-    : composition.systems;
+  const systems = titrant.system ? [...composition.systems, systemAt(titrant.system, (titrant.systemPerMole ?? 1) * concentrationM)] : composition.systems;
   return { systems, strongIons, temperatureC: composition.temperatureC, activityModel: composition.activityModel };
 }

@@ -28,7 +28,6 @@ export interface BatchInput {
 /** The columns every output row starts with, then the command's own. */
 export const SOLVE_COLUMNS = ['pH', 'ionic strength (mM)', 'conductivity (mS/cm)', 'warnings'] as const;
 
-
 /**
  * Reads batch inputs from text: JSON lines when the first non-blank character is "{",
  * otherwise CSV with a header row. Blank CSV cells are left out (the field's default holds).
@@ -37,7 +36,8 @@ export const SOLVE_COLUMNS = ['pH', 'ionic strength (mM)', 'conductivity (mS/cm)
  */
 export function readBatch(text: string): BatchInput[] {
   const trimmed = text.trimStart();
-  const tooMany = (n: number) => new ChemError('invalid-input', 'outOfRange', `The batch has ${n} rows; allowed: up to ${MAX_BATCH_ROWS}.`, 'batch', `up to ${MAX_BATCH_ROWS} rows`);
+  const tooMany = (n: number) =>
+    new ChemError('invalid-input', 'outOfRange', `The batch has ${n} rows; allowed: up to ${MAX_BATCH_ROWS}.`, 'batch', `up to ${MAX_BATCH_ROWS} rows`);
   if (trimmed.startsWith('{')) {
     const lines = text.split(/\r?\n/);
     const out: BatchInput[] = [];

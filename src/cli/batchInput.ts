@@ -32,7 +32,14 @@ function group(raw: Record<string, unknown>, name: string): Record<string, unkno
   if (!isObject(value)) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(name, 'an object'), name, 'an object');
   for (const key of Object.keys(value)) {
     const allowed = KEYS.get(name)!;
-    if (!allowed.has(key)) throw new ChemError('invalid-input', 'unknownField', MESSAGES.unknownField(`${name}.${key}`, [], [...allowed].map((k) => `${name}.${k}`).join(', ')), `${name}.${key}`, [...allowed].join(', '));
+    if (!allowed.has(key))
+      throw new ChemError(
+        'invalid-input',
+        'unknownField',
+        MESSAGES.unknownField(`${name}.${key}`, [], [...allowed].map((k) => `${name}.${k}`).join(', ')),
+        `${name}.${key}`,
+        [...allowed].join(', '),
+      );
   }
   return value;
 }
@@ -52,9 +59,17 @@ export interface BatchCommandInput {
  * @throws ChemError naming an unknown key or a missing recipe
  */
 export function toBatchInput(raw: unknown): BatchCommandInput {
-  if (!isObject(raw) || !isObject(raw.recipe)) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('recipe', 'a JSON object {"recipe": {…}, "actual": {…}} (see proton-ledger help as-made)'), 'recipe', 'an object');
+  if (!isObject(raw) || !isObject(raw.recipe))
+    throw new ChemError(
+      'invalid-input',
+      'missingValue',
+      MESSAGES.missingValue('recipe', 'a JSON object {"recipe": {…}, "actual": {…}} (see proton-ledger help as-made)'),
+      'recipe',
+      'an object',
+    );
   for (const key of Object.keys(raw)) {
-    if (!(GROUPS as readonly string[]).includes(key)) throw new ChemError('invalid-input', 'unknownField', MESSAGES.unknownField(key, [], GROUPS.join(', ')), key, GROUPS.join(', '));
+    if (!(GROUPS as readonly string[]).includes(key))
+      throw new ChemError('invalid-input', 'unknownField', MESSAGES.unknownField(key, [], GROUPS.join(', ')), key, GROUPS.join(', '));
   }
   const { recipe, userSubstances } = toRecipeInput(raw.recipe);
   const actual = group(raw, 'actual');

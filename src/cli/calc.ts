@@ -34,7 +34,10 @@ const USAGE = 'Usage: proton-ledger calc <input.xlsx|input.csv> -o <output.xlsx|
 
 /** A refusal of calc, reported as a JSON error naming the argument at fault. */
 export class CalcFailure extends Error {
-  constructor(message: string, readonly field: 'input' | 'output' | 'sheet' | 'usage') {
+  constructor(
+    message: string,
+    readonly field: 'input' | 'output' | 'sheet' | 'usage',
+  ) {
     super(message);
   }
 }
@@ -85,7 +88,7 @@ export function writeFileAtomically(output: string, data: string | Uint8Array, f
     created = true;
     try {
       const bytes = typeof data === 'string' ? Buffer.from(data, 'utf8') : data;
-      for (let offset = 0; offset < bytes.length; ) offset += writeSync(fd, bytes, offset, bytes.length - offset);
+      for (let offset = 0; offset < bytes.length;) offset += writeSync(fd, bytes, offset, bytes.length - offset);
       fsyncSync(fd);
     } finally {
       closeSync(fd);
@@ -424,7 +427,8 @@ export async function calcFile(input: string, output: string, options: CalcOptio
   const { sheetName, force = false } = options;
   const inExt = extname(input).toLowerCase();
   const outExt = extname(output).toLowerCase();
-  if (!['.xlsx', '.csv'].includes(inExt) || !['.xlsx', '.csv'].includes(outExt)) throw new CalcFailure(`calc reads and writes .xlsx or .csv files.\n${USAGE}`, ['.xlsx', '.csv'].includes(inExt) ? 'output' : 'input');
+  if (!['.xlsx', '.csv'].includes(inExt) || !['.xlsx', '.csv'].includes(outExt))
+    throw new CalcFailure(`calc reads and writes .xlsx or .csv files.\n${USAGE}`, ['.xlsx', '.csv'].includes(inExt) ? 'output' : 'input');
   checkOutput(input, output, force);
   const { workbook, sheets } = await readInput(input, inExt === '.xlsx');
   const grids: Record<string, Grid> = {};
@@ -450,7 +454,14 @@ export async function calcFile(input: string, output: string, options: CalcOptio
       if (id === undefined) throw new CalcFailure(`No sheet named "${name}"; the workbook has ${names.map((n) => `"${n}"`).join(', ')}.`, 'sheet');
       const { width, height } = hf.getSheetDimensions(id);
       if (width * height > MAX_CELLS) throw new CalcFailure(CALC_MESSAGES.csvTooLarge(name, height, width, MAX_CELLS), 'output');
-      writeFileAtomically(output, hf.getSheetValues(id).map((row) => row.map(csvField).join(',')).join('\r\n') + '\r\n', force);
+      writeFileAtomically(
+        output,
+        hf
+          .getSheetValues(id)
+          .map((row) => row.map(csvField).join(','))
+          .join('\r\n') + '\r\n',
+        force,
+      );
     }
     return { output, sheets: names, formulas, errors, notAvailable };
   } finally {

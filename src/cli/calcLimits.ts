@@ -112,7 +112,7 @@ function readDirectory(buf: Buffer, input: string): ZipEntry[] {
     let localHeaderOffset = buf.readUInt32LE(at + 42);
     const name = buf.toString('utf8', at + 46, Math.min(buf.length, at + 46 + nameLength));
     // ZIP64 extra field (id 1): the 8-byte values of whichever sizes are full, in this order.
-    for (let e = at + 46 + nameLength; e + 4 <= Math.min(buf.length, at + 46 + nameLength + extraLength); ) {
+    for (let e = at + 46 + nameLength; e + 4 <= Math.min(buf.length, at + 46 + nameLength + extraLength);) {
       const id = buf.readUInt16LE(e);
       const size = buf.readUInt16LE(e + 2);
       if (id === 1) {
@@ -383,7 +383,8 @@ export function checkWorkbookPackage(buf: Buffer, input: string): string[] {
   for (const m of (small('xl/_rels/workbook.xml.rels') ?? '').matchAll(/<Relationship\b([^<>]*)>/g)) {
     const id = attribute(m[1], 'Id');
     const target = attribute(m[1], 'Target');
-    if (id !== undefined && target !== undefined) rels.set(id, { target: decodeXml(target), external: /\sTargetMode="External"/.test(m[1]), worksheet: /\sType="[^"]*\/worksheet"/.test(m[1]) });
+    if (id !== undefined && target !== undefined)
+      rels.set(id, { target: decodeXml(target), external: /\sTargetMode="External"/.test(m[1]), worksheet: /\sType="[^"]*\/worksheet"/.test(m[1]) });
   }
   const sheetOfPart = new Map<string, string>();
   const worksheets: string[] = [];

@@ -22,7 +22,9 @@ export interface CompositionInput {
     readonly deltaCpJ?: readonly (number | string)[] | string;
     readonly totalMm: number | string;
   }[];
-  readonly forms?: readonly ({ readonly form: string; readonly mM: number | string } | { readonly form: string; readonly grams: number | string; readonly volumeMl: number | string })[];
+  readonly forms?: readonly (
+    { readonly form: string; readonly mM: number | string } | { readonly form: string; readonly grams: number | string; readonly volumeMl: number | string }
+  )[];
   readonly strongIonsMm?: Readonly<Record<string, number | string>>;
   readonly userSubstances?: readonly Record<string, unknown>[];
 }
@@ -94,10 +96,19 @@ export function toComposition(raw: unknown): Composition {
     const s = needObject(entry, at, 'an acid–base system object');
     checkKeys(s, KEYS.system, `${at}.`);
     const pKa = numberList(s.pKa, `${at}.pKa`);
-    const lists = { deltaHkJ: s.deltaHkJ === undefined ? [] : numberList(s.deltaHkJ, `${at}.deltaHkJ`), deltaCpJ: s.deltaCpJ === undefined ? [] : numberList(s.deltaCpJ, `${at}.deltaCpJ`) };
+    const lists = {
+      deltaHkJ: s.deltaHkJ === undefined ? [] : numberList(s.deltaHkJ, `${at}.deltaHkJ`),
+      deltaCpJ: s.deltaCpJ === undefined ? [] : numberList(s.deltaCpJ, `${at}.deltaCpJ`),
+    };
     for (const key of ['deltaHkJ', 'deltaCpJ'] as const) {
       if (lists[key].length > 0 && lists[key].length !== pKa.length) {
-        throw new ChemError('invalid-input', 'listLengthMismatch', MESSAGES.listLengthMismatch(`${at}.${key}`, pKa.length, lists[key].length), `${at}.${key}`, `${pKa.length} values`);
+        throw new ChemError(
+          'invalid-input',
+          'listLengthMismatch',
+          MESSAGES.listLengthMismatch(`${at}.${key}`, pKa.length, lists[key].length),
+          `${at}.${key}`,
+          `${pKa.length} values`,
+        );
       }
     }
     return {
@@ -122,7 +133,8 @@ export function toComposition(raw: unknown): Composition {
       checkKeys(f, KEYS.form, `${at}.`);
       const form = library.findForm(needText(f.form, `${at}.form`), `${at}.form`);
       if (f.mM !== undefined) return { form, concentrationM: requireNumberField('amountMm', f.mM, `${at}.mM`) / 1000 };
-      if (f.grams === undefined) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${at}.mM`, 'mM, or grams and volumeMl'), `${at}.mM`, 'mM, or grams and volumeMl');
+      if (f.grams === undefined)
+        throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${at}.mM`, 'mM, or grams and volumeMl'), `${at}.mM`, 'mM, or grams and volumeMl');
       const grams = readQuantity(`${at}.grams`, f.grams, 'fraction');
       if (!(grams >= 0)) throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(`${at}.grams`, grams, 'grams of 0 or more'), `${at}.grams`, '0 or more');
       const volumeMl = requireNumberField('volumeMl', f.volumeMl, `${at}.volumeMl`);

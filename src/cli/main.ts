@@ -68,7 +68,18 @@ Example (our own): proton-ledger solve --json '{"forms": [{"form": "tris base", 
 
 function recipeHelp(): string {
   const rows = FIELDS.filter((f) => f.scope === 'recipe').map((f) => {
-    const def = f.kind === 'number' ? (f.default !== undefined ? String(f.default) : (f.defaultText ?? (f.required ? 'required' : '—'))) : f.kind === 'choice' ? f.default : f.kind === 'text' ? (f.required ? 'required' : (f.defaultText ?? '—')) : '—';
+    const def =
+      f.kind === 'number'
+        ? f.default !== undefined
+          ? String(f.default)
+          : (f.defaultText ?? (f.required ? 'required' : '—'))
+        : f.kind === 'choice'
+          ? f.default
+          : f.kind === 'text'
+            ? f.required
+              ? 'required'
+              : (f.defaultText ?? '—')
+            : '—';
     return `  ${f.name.padEnd(32)} ${allowedOf(f)}; default: ${def}. ${f.description}`;
   });
   return [
@@ -102,7 +113,12 @@ A batch (JSON object; the recipe as for proton-ledger recipe):
   tolerance         {"ph", "concentrationPercent", "conductivityPercent", "meterPh"}
   reading           (correct) {"ph", "temperatureC", "volumeMl"}: the meter now
   counterTitrant    (correct) {"form", "concentrationM"}: after an overshoot
-${FIELDS.filter((f) => f.scope === 'batch').map((f) => `  ${f.name.padEnd(32)} ${allowedOf(f)}; default: ${f.kind === 'number' && f.default !== undefined ? f.default : ((f as { defaultText?: string }).defaultText ?? '—')}. ${f.description}`).join('\n')}
+${FIELDS.filter((f) => f.scope === 'batch')
+  .map(
+    (f) =>
+      `  ${f.name.padEnd(32)} ${allowedOf(f)}; default: ${f.kind === 'number' && f.default !== undefined ? f.default : ((f as { defaultText?: string }).defaultText ?? '—')}. ${f.description}`,
+  )
+  .join('\n')}
 
 as-made prints the check (components, predictions, checks with pass/fail, warnings) and exits 1 when the batch fails.
 correct prints what to add next, a safe first portion, the end-point reading and, off the plan, the likely causes.
@@ -190,7 +206,8 @@ async function batchCommand(command: 'recipe' | 'solve', args: string[], write: 
 /** Writes a recipe's batch record (.xlsx and .html); the workbook libraries load only here. */
 async function recordCommand(args: string[], write: (text: string) => void): Promise<number> {
   const xlsx = optionValue(args, '-o');
-  if (!xlsx || extname(xlsx).toLowerCase() !== '.xlsx') throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('-o', 'the record file to write, ending .xlsx'), '-o', 'a path ending .xlsx');
+  if (!xlsx || extname(xlsx).toLowerCase() !== '.xlsx')
+    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('-o', 'the record file to write, ending .xlsx'), '-o', 'a path ending .xlsx');
   const html = optionValue(args, '--html') ?? xlsx.replace(/\.xlsx$/i, '.html');
   const text = readText(args, write, 'record');
   if (text === undefined) return 0;

@@ -37,7 +37,14 @@ function shelfFrom(text: string, file: string): StockInput[] {
     throw new ChemError('invalid-input', 'notJson', MESSAGES.notJson(`${file}: ${(e as Error).message}`), '--shelf', 'a JSON list of stocks');
   }
   const list = Array.isArray(parsed) ? parsed : (parsed as { stocks?: unknown })?.stocks;
-  if (!Array.isArray(list)) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('--shelf', 'a JSON list of stocks, or an object with a "stocks" list'), '--shelf', 'a JSON list of stocks');
+  if (!Array.isArray(list))
+    throw new ChemError(
+      'invalid-input',
+      'missingValue',
+      MESSAGES.missingValue('--shelf', 'a JSON list of stocks, or an object with a "stocks" list'),
+      '--shelf',
+      'a JSON list of stocks',
+    );
   return list as StockInput[];
 }
 

@@ -41,7 +41,13 @@ function checkKeys(value: Record<string, unknown>, prefix: string): void {
     const nested = [...PATHS].some((p) => p.startsWith(`${path}.`));
     if (nested && isObject(inner)) checkKeys(inner, path);
     else if (nested && !(path === 'titrant' && typeof inner === 'string')) {
-      throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(path, `an object with ${[...PATHS].filter((p) => p.startsWith(`${path}.`)).join(', ')}`), path, 'an object');
+      throw new ChemError(
+        'invalid-input',
+        'missingValue',
+        MESSAGES.missingValue(path, `an object with ${[...PATHS].filter((p) => p.startsWith(`${path}.`)).join(', ')}`),
+        path,
+        'an object',
+      );
     }
   }
 }
@@ -53,7 +59,14 @@ function checkKeys(value: Record<string, unknown>, prefix: string): void {
  * @throws ChemError naming the key as written
  */
 export function toRecipeInput(raw: unknown): { recipe: RecipeInput; userSubstances: Record<string, unknown>[] | undefined } {
-  if (!isObject(raw)) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('recipe', 'a JSON object such as {"buffer": "HEPES", "targetPh": 7.4, "concentrationMm": 25, "volumeMl": 500}'), 'recipe', 'an object');
+  if (!isObject(raw))
+    throw new ChemError(
+      'invalid-input',
+      'missingValue',
+      MESSAGES.missingValue('recipe', 'a JSON object such as {"buffer": "HEPES", "targetPh": 7.4, "concentrationMm": 25, "volumeMl": 500}'),
+      'recipe',
+      'an object',
+    );
   checkKeys(raw, '');
   const { userSubstances, ...rest } = raw;
   const users = readUserSubstances(userSubstances);

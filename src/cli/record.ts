@@ -65,7 +65,11 @@ export interface RecordSummary {
  */
 export async function writeRecord(input: RecipeInput, plan: RecipePlan, out: { xlsx?: string; html?: string }, version: string, actuals?: BatchActuals): Promise<RecordSummary> {
   const book = new PreviewWorkbook(createFormulaEngine({ Sheet1: [] }));
-  const port = new PreviewAdapter(book, () => ({ sheet: 'Sheet1', range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }), () => undefined);
+  const port = new PreviewAdapter(
+    book,
+    () => ({ sheet: 'Sheet1', range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }),
+    () => undefined,
+  );
   const sheet = await writeBatchRecord(port, input, plan, version);
   const layout = batchRecordLayout(input, plan, version);
   if (actuals) fillRecord(book, sheet, layout.inputs, actuals);
@@ -75,7 +79,15 @@ export async function writeRecord(input: RecipeInput, plan: RecipePlan, out: { x
     wb.creator = `Proton Ledger ${version}`;
     wb.lastModifiedBy = 'Proton Ledger';
     const ws = wb.addWorksheet(sheet, {
-      pageSetup: { paperSize: PAPER_A4, orientation: 'portrait', fitToPage: true, fitToWidth: 1, fitToHeight: 1, printArea: rangeAddress(layout.printArea), margins: { left: 0.5, right: 0.5, top: 0.5, bottom: 0.5, header: 0.3, footer: 0.3 } },
+      pageSetup: {
+        paperSize: PAPER_A4,
+        orientation: 'portrait',
+        fitToPage: true,
+        fitToWidth: 1,
+        fitToHeight: 1,
+        printArea: rangeAddress(layout.printArea),
+        margins: { left: 0.5, right: 0.5, top: 0.5, bottom: 0.5, header: 0.3, footer: 0.3 },
+      },
     });
     const { rows, cols } = book.dimensions(sheet);
     for (let c = 0; c < cols; c++) ws.getColumn(c + 1).width = book.columnWidth(sheet, c);
@@ -95,7 +107,8 @@ export async function writeRecord(input: RecipeInput, plan: RecipePlan, out: { x
           cell.value = result as ExcelJS.CellValue;
         }
         if (meta?.numberFormat) cell.numFmt = meta.numberFormat;
-        if (meta?.style && BOLD.has(meta.style)) cell.font = { bold: true, ...(meta.style === 'title' ? { size: 14 } : {}), ...(meta.style === 'caution' ? { color: { argb: 'FF8A1C1C' } } : {}) };
+        if (meta?.style && BOLD.has(meta.style))
+          cell.font = { bold: true, ...(meta.style === 'title' ? { size: 14 } : {}), ...(meta.style === 'caution' ? { color: { argb: 'FF8A1C1C' } } : {}) };
         const fill = meta?.style ? FILLS[meta.style] : undefined;
         if (fill) cell.fill = { type: 'pattern', pattern: 'solid', fgColor: { argb: fill } };
         if (meta?.style === 'input') cell.border = { bottom: { style: 'thin', color: { argb: 'FF9DBDB5' } } };

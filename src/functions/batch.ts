@@ -37,14 +37,21 @@ export interface ActualsRange {
  */
 export function readActualsRange(range: unknown): ActualsRange {
   const rows = isBlank(range) ? [] : toRange(range).filter((row) => !row.every(isBlank));
-  if (rows.length > MAX_ACTUALS_ROWS) throw invalid('tooManyRows', ACTUALS_ARGUMENT, SHEET_MESSAGES.tooManyRows(ACTUALS_ARGUMENT, rows.length, MAX_ACTUALS_ROWS), `up to ${MAX_ACTUALS_ROWS} rows`);
+  if (rows.length > MAX_ACTUALS_ROWS)
+    throw invalid('tooManyRows', ACTUALS_ARGUMENT, SHEET_MESSAGES.tooManyRows(ACTUALS_ARGUMENT, rows.length, MAX_ACTUALS_ROWS), `up to ${MAX_ACTUALS_ROWS} rows`);
   const actuals: Record<string, unknown> = {};
   const tolerances: Record<string, unknown> = {};
   const bench: Record<string, unknown> = {};
   const weighed: WeighedActual[] = [];
   const seen = new Set<string>();
   for (const row of rows) {
-    if (row.length < 2) throw invalid('tooFewColumns', ACTUALS_ARGUMENT, SHEET_MESSAGES.tooFewColumns(ACTUALS_ARGUMENT, row.length, 'two or three: a name, its value, and a form’s purity'), 'two or three columns');
+    if (row.length < 2)
+      throw invalid(
+        'tooFewColumns',
+        ACTUALS_ARGUMENT,
+        SHEET_MESSAGES.tooFewColumns(ACTUALS_ARGUMENT, row.length, 'two or three: a name, its value, and a form’s purity'),
+        'two or three columns',
+      );
     const name = toText(ACTUALS_ARGUMENT, row[0]);
     const value = row[1];
     const f = batchFieldOf(name);

@@ -38,9 +38,7 @@ export const MAX_AMOUNT_MM = MAX_FORM_CONCENTRATION_M * 1000;
 
 /** What a name in a composition stands for. */
 type Ingredient =
-  | { readonly kind: 'form'; readonly name: string }
-  | { readonly kind: 'system'; readonly system: Omit<AcidBaseSystem, 'totalM'> }
-  | { readonly kind: 'ion'; readonly ion: string };
+  { readonly kind: 'form'; readonly name: string } | { readonly kind: 'system'; readonly system: Omit<AcidBaseSystem, 'totalM'> } | { readonly kind: 'ion'; readonly ion: string };
 
 const ingredientCache = new WeakMap<SubstanceLibrary, Map<string, Ingredient>>();
 const compositionCache = new WeakMap<SubstanceLibrary, Lru<Composition>>();

@@ -91,7 +91,8 @@ export function engineFormula(formula: string): string {
 
 /** What is wrong with a formula's text, in plain words, and where (a 1-based character of the formula as written). */
 export interface FormulaProblem {
-  readonly code: 'unclosedText' | 'unclosedBracket' | 'strayBracket' | 'nothingAfter' | 'nothingBefore' | 'unknownFunction' | 'emptyFormula' | 'tooLong' | 'tooDeep' | 'tooManyOperators';
+  readonly code:
+    'unclosedText' | 'unclosedBracket' | 'strayBracket' | 'nothingAfter' | 'nothingBefore' | 'unknownFunction' | 'emptyFormula' | 'tooLong' | 'tooDeep' | 'tooManyOperators';
   readonly at?: number;
   readonly message: string;
 }

@@ -9,8 +9,24 @@
  * In Excel every name carries the add-in's namespace (PROTON, set in manifest.xml):
  * `=PROTON.PH.OF(A2:B4)`.
  */
- 
-import { ChemError, MESSAGES, warning, apparentPKa, capacity, conductivityAt, solutionWarnings, idealOsmolarity, debyeHuckelA, pKaAt, solvePh, speciate, titrantForPh, afterDilution, atTemperature } from '../chem';
+
+import {
+  ChemError,
+  MESSAGES,
+  warning,
+  apparentPKa,
+  capacity,
+  conductivityAt,
+  solutionWarnings,
+  idealOsmolarity,
+  debyeHuckelA,
+  pKaAt,
+  solvePh,
+  speciate,
+  titrantForPh,
+  afterDilution,
+  atTemperature,
+} from '../chem';
 import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toField, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
 import { recipeOptions } from './recipeOptions';
@@ -75,7 +91,18 @@ export function ph(composition: any[][], temperatureC?: any, activityModel?: any
  * @param [userSubstances] Range of your own substances.
  * @returns Titrant stock to add, mL.
  */
-export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, targetPh: any, titrant: any, titrantConcentrationM: any, temperatureC?: any, activityModel?: any, salts?: any[][], userSubstances?: any[][]): number {
+export function titrantMl(
+  form: any,
+  concentrationMm: any,
+  finalVolumeMl: any,
+  targetPh: any,
+  titrant: any,
+  titrantConcentrationM: any,
+  temperatureC?: any,
+  activityModel?: any,
+  salts?: any[][],
+  userSubstances?: any[][],
+): number {
   return memoised('TITRANT.ML', [form, concentrationMm, finalVolumeMl, targetPh, titrant, titrantConcentrationM, temperatureC, activityModel, salts, userSubstances], () => {
     const s = setup(temperatureC, activityModel, userSubstances);
     const formName = toText('form', form);
@@ -109,7 +136,12 @@ export function titrantMl(form: any, concentrationMm: any, finalVolumeMl: any, t
  */
 export function capacityOf(composition: any[][], measure?: any, temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
   return memoised('CAPACITY', [composition, measure, temperatureC, activityModel, userSubstances], () => {
-    const which = toChoice<'base' | 'acid' | 'beta'>('measure', measure, { base: ['mmbase', 'basemm', 'mm', 'mm/0.1ph'], acid: ['mmacid', 'acidmm'], beta: ['β', 'm/ph', 'mperph', 'mol/l/ph'] }, 'base');
+    const which = toChoice<'base' | 'acid' | 'beta'>(
+      'measure',
+      measure,
+      { base: ['mmbase', 'basemm', 'mm', 'mm/0.1ph'], acid: ['mmacid', 'acidmm'], beta: ['β', 'm/ph', 'mperph', 'mol/l/ph'] },
+      'base',
+    );
     const result = capacity(solution(composition, temperatureC, activityModel, userSubstances));
     if (which === 'acid') return result.acidMmPerTenthPh;
     if (which === 'beta') return result.betaMPerPh;
@@ -208,7 +240,11 @@ export function grams(form: any, concentrationMm: any, volumeMl: any, purity?: a
  * @returns Ionic strength, mM.
  */
 export function ionicStrengthMm(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
-  return memoised('IONIC.STRENGTH.MM', [composition, temperatureC, activityModel, userSubstances], () => speciate(solution(composition, temperatureC, activityModel, userSubstances)).ionicStrengthM * 1000);
+  return memoised(
+    'IONIC.STRENGTH.MM',
+    [composition, temperatureC, activityModel, userSubstances],
+    () => speciate(solution(composition, temperatureC, activityModel, userSubstances)).ionicStrengthM * 1000,
+  );
 }
 
 /**
@@ -222,7 +258,11 @@ export function ionicStrengthMm(composition: any[][], temperatureC?: any, activi
  * @returns Ideal osmolarity, mOsm/L.
  */
 export function osmolarityIdeal(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
-  return memoised('OSMOLARITY.IDEAL', [composition, temperatureC, activityModel, userSubstances], () => idealOsmolarity(speciate(solution(composition, temperatureC, activityModel, userSubstances))) * 1000);
+  return memoised(
+    'OSMOLARITY.IDEAL',
+    [composition, temperatureC, activityModel, userSubstances],
+    () => idealOsmolarity(speciate(solution(composition, temperatureC, activityModel, userSubstances))) * 1000,
+  );
 }
 
 /**
@@ -254,7 +294,11 @@ export function conductivity(composition: any[][], temperatureC?: any, activityM
  * @returns Osmolality, mOsm/kg.
  */
 export function osmolality(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): number {
-  return memoised('OSMOLALITY', [composition, temperatureC, activityModel, userSubstances], () => speciate(solution(composition, temperatureC, activityModel, userSubstances)).osmolalityMosmKg);
+  return memoised(
+    'OSMOLALITY',
+    [composition, temperatureC, activityModel, userSubstances],
+    () => speciate(solution(composition, temperatureC, activityModel, userSubstances)).osmolalityMosmKg,
+  );
 }
 
 /**
@@ -281,7 +325,17 @@ export function warnings(composition: any[][], temperatureC?: any, activityModel
       const others = s.library.hydrateAlternatives(name);
       if (others.length === 0) continue;
       const used = s.library.findForm(name);
-      found.push(warning('hydrateAssumed', MESSAGES.hydrateAssumed(name, used.name, used.molarMass, others.map((f) => `${f.name} (${f.molarMass.toFixed(2)} g/mol)`))));
+      found.push(
+        warning(
+          'hydrateAssumed',
+          MESSAGES.hydrateAssumed(
+            name,
+            used.name,
+            used.molarMass,
+            others.map((f) => `${f.name} (${f.molarMass.toFixed(2)} g/mol)`),
+          ),
+        ),
+      );
     }
     if (found.length === 0) return 'none';
     return `${found.length} warning${found.length === 1 ? '' : 's'}: ${found.map((w, i) => `(${i + 1}) ${w.message}`).join(' ')}`;
@@ -301,7 +355,8 @@ export function warnings(composition: any[][], temperatureC?: any, activityModel
 export function species(composition: any[][], temperatureC?: any, activityModel?: any, userSubstances?: any[][]): any[][] {
   return memoised('SPECIES', [composition, temperatureC, activityModel, userSubstances], () => {
     const result = speciate(solution(composition, temperatureC, activityModel, userSubstances));
-    if (result.species.length > SPECIES_TABLE_ROWS - 1) throw invalid('tooManySpecies', 'composition', SHEET_MESSAGES.tooManySpecies(result.species.length, SPECIES_TABLE_ROWS - 1));
+    if (result.species.length > SPECIES_TABLE_ROWS - 1)
+      throw invalid('tooManySpecies', 'composition', SHEET_MESSAGES.tooManySpecies(result.species.length, SPECIES_TABLE_ROWS - 1));
     const rows: (string | number)[][] = [[...SPECIES_TABLE_HEADER]];
     for (const sp of result.species) rows.push([sp.name, sp.concentrationM * 1000, sp.activity * 1000, sp.charge]);
     return rows;
@@ -316,7 +371,13 @@ export function species(composition: any[][], temperatureC?: any, activityModel?
  * @returns One column of names.
  */
 export function substances(userSubstances?: any[][]): string[][] {
-  return memoised('SUBSTANCES', [userSubstances], () => column(libraryFor(userSubstances).list().map((r) => r.name)));
+  return memoised('SUBSTANCES', [userSubstances], () =>
+    column(
+      libraryFor(userSubstances)
+        .list()
+        .map((r) => r.name),
+    ),
+  );
 }
 
 /**
@@ -375,7 +436,8 @@ function recipePlan(args: readonly any[]): RecipePlan {
  */
 function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC: any, salts: any, options: any): RecipeInput {
   const { input: chosen, written } = recipeOptions(options);
-  if (!isBlank(useTemperatureC) && written.has('useTemperatureC')) throw new ChemError('invalid-input', 'givenTwice', MESSAGES.givenTwice('useTemperatureC'), 'useTemperatureC', 'the argument or the option, once');
+  if (!isBlank(useTemperatureC) && written.has('useTemperatureC'))
+    throw new ChemError('invalid-input', 'givenTwice', MESSAGES.givenTwice('useTemperatureC'), 'useTemperatureC', 'the argument or the option, once');
   checkRowLimit('salts', salts);
   const saltRows = isBlankRange(salts) ? [] : toRange(salts).filter((row) => !row.every(isBlank));
   if (saltRows.length > 0 && written.has('salts')) throw new ChemError('invalid-input', 'givenTwice', MESSAGES.givenTwice('salts'), 'salts', 'the argument or the option, once');
@@ -418,7 +480,16 @@ function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl:
  * @param [userSubstances] Range of your own substances.
  * @returns One row of recipe figures.
  */
-export function recipeRow(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC?: any, salts?: any[][], options?: any[][], userSubstances?: any[][]): any[][] {
+export function recipeRow(
+  buffer: any,
+  targetPh: any,
+  concentrationMm: any,
+  volumeMl: any,
+  useTemperatureC?: any,
+  salts?: any[][],
+  options?: any[][],
+  userSubstances?: any[][],
+): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('RECIPE.ROW', args, () => {
     return [recipeRowValues(recipePlan(args))];
@@ -439,7 +510,16 @@ export function recipeRow(buffer: any, targetPh: any, concentrationMm: any, volu
  * @param [userSubstances] Range of your own substances.
  * @returns The recipe, one line per row.
  */
-export function recipe(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, useTemperatureC?: any, salts?: any[][], options?: any[][], userSubstances?: any[][]): any[][] {
+export function recipe(
+  buffer: any,
+  targetPh: any,
+  concentrationMm: any,
+  volumeMl: any,
+  useTemperatureC?: any,
+  salts?: any[][],
+  options?: any[][],
+  userSubstances?: any[][],
+): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('RECIPE', args, () => {
     const plan = recipePlan(args);
@@ -539,7 +619,9 @@ export function mixVolumes(stocks: any[][], targets: any[][], volumeMl: any, tar
       else rows.push([c.name, Number((c.grams ?? 0).toPrecision(4)), 'g', c.finalText ?? '']);
     }
     const correction = plan.components.find((c) => c.role === 'titrant');
-    rows.push(correction ? [`pH correction: ${correction.name}`, printedVolume(correction.millilitres ?? 0), 'mL', `to pH ${plan.targetPh}`] : ['pH correction: none', 0, 'mL', '']);
+    rows.push(
+      correction ? [`pH correction: ${correction.name}`, printedVolume(correction.millilitres ?? 0), 'mL', `to pH ${plan.targetPh}`] : ['pH correction: none', 0, 'mL', ''],
+    );
     const water = plan.components.find((c) => c.role === 'water');
     rows.push(['water, to final volume', printedVolume(water?.millilitres ?? 0), 'mL', '']);
     rows.push([`predicted pH at ${plan.useTemperatureC} °C`, plan.predictions.pHAtUse, 'pH', '']);
@@ -563,7 +645,17 @@ export function mixVolumes(stocks: any[][], targets: any[][], volumeMl: any, tar
  * @param [userSubstances] Range of your own substances.
  * @returns The checks, one per row, and the verdict.
  */
-export function asMadeCheck(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, actuals: any[][], useTemperatureC?: any, salts?: any[][], options?: any[][], userSubstances?: any[][]): any[][] {
+export function asMadeCheck(
+  buffer: any,
+  targetPh: any,
+  concentrationMm: any,
+  volumeMl: any,
+  actuals: any[][],
+  useTemperatureC?: any,
+  salts?: any[][],
+  options?: any[][],
+  userSubstances?: any[][],
+): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('AS.MADE', [...args, actuals], () => {
     const plan = recipePlan(args);
@@ -595,7 +687,14 @@ export function mixPh(stocks: any[][], volumes: any[][], finalVolumeMl: any, tem
     const list = volumesFrom(volumes);
     const finalMl = toField('finalVolumeMl', finalVolumeMl);
     const takenMl = list.reduce((sum, v) => sum + v.millilitres, 0);
-    if (takenMl > finalMl) throw new ChemError('infeasible-target', 'stocksDoNotFit', MESSAGES.stocksDoNotFit(takenMl, finalMl, list.map((v) => `${v.stock} ${v.millilitres} mL`).join(', ')), VOLUMES_ARGUMENT, `at most ${finalMl} mL in all`);
+    if (takenMl > finalMl)
+      throw new ChemError(
+        'infeasible-target',
+        'stocksDoNotFit',
+        MESSAGES.stocksDoNotFit(takenMl, finalMl, list.map((v) => `${v.stock} ${v.millilitres} mL`).join(', ')),
+        VOLUMES_ARGUMENT,
+        `at most ${finalMl} mL in all`,
+      );
     return solvePh(mixByVolumes(shelf, list, finalMl, s.temperatureC, s.model).composition);
   });
 }
@@ -617,7 +716,19 @@ export function mixPh(stocks: any[][], volumes: any[][], finalVolumeMl: any, tem
  * @param [userSubstances] Range of your own substances.
  * @returns One row: what to add, how much, the first portion, and the readings.
  */
-export function titrantNext(buffer: any, targetPh: any, concentrationMm: any, volumeMl: any, titrantAddedMl: any, readingPh: any, useTemperatureC?: any, salts?: any[][], options?: any[][], actuals?: any[][], userSubstances?: any[][]): any[][] {
+export function titrantNext(
+  buffer: any,
+  targetPh: any,
+  concentrationMm: any,
+  volumeMl: any,
+  titrantAddedMl: any,
+  readingPh: any,
+  useTemperatureC?: any,
+  salts?: any[][],
+  options?: any[][],
+  actuals?: any[][],
+  userSubstances?: any[][],
+): any[][] {
   const args = [buffer, targetPh, concentrationMm, volumeMl, useTemperatureC, salts, options, userSubstances];
   return memoised('TITRANT.NEXT', [...args, titrantAddedMl, readingPh, actuals], () => {
     const plan = recipePlan(args);

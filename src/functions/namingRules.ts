@@ -58,64 +58,64 @@ export function isCellReference(text: string): boolean {
  * both match `GetCell`. The function table includes the worksheet functions of that
  * version (SUM, INDEX …), which a custom function should not shadow either.
  */
-export const EXCEL4_MACRO_NAMES: readonly string[] = (
-  // xlf… (functions)
-  'Count Isna Iserror Sum Average Min Max Row Column Na Npv Stdev Dollar Fixed Sin Cos Tan Atan Pi Sqrt Exp Ln Log10 Abs Int Sign Round ' +
-  'Lookup Index Rept Mid Len Value True False And Or Not Mod Dcount Dsum Daverage Dmin Dmax Dstdev Var Dvar Text Linest Trend Logest Growth ' +
-  'Goto Halt Pv Fv Nper Pmt Rate Mirr Irr Rand Match Date Time Day Month Year Weekday Hour Minute Second Now Areas Rows Columns Offset ' +
-  'Absref Relref Argument Search Transpose Error Step Type Echo SetName Caller Deref Windows Series Documents ActiveCell Selection Result ' +
-  'Atan2 Asin Acos Choose Hlookup Vlookup Links Input Isref GetFormula GetName SetValue Log Exec Char Lower Upper Proper Left Right Exact ' +
-  'Trim Replace Substitute Code Names Directory Find Cell Iserr Istext Isnumber Isblank T N Fopen Fclose Fsize Freadln Fread Fwriteln ' +
-  'Fwrite Fpos Datevalue Timevalue Sln Syd Ddb GetDef Reftext Textref Indirect Register Call AddBar AddMenu AddCommand EnableCommand ' +
-  'CheckCommand RenameCommand ShowBar DeleteMenu DeleteCommand GetChartItem DialogBox Clean Mdeterm Minverse Mmult Files Ipmt Ppmt Counta ' +
-  'CancelKey Initiate Request Poke Execute Terminate Restart Help GetBar Product Fact GetCell GetWorkspace GetWindow GetDocument Dproduct ' +
-  'Isnontext GetNote Note Stdevp Varp Dstdevp Dvarp Trunc Islogical Dcounta DeleteBar Unregister Usdollar Findb Searchb Replaceb Leftb ' +
-  'Rightb Midb Lenb Roundup Rounddown Asc Dbcs Rank Address Days360 Today Vdb Median Sumproduct Sinh Cosh Tanh Asinh Acosh Atanh Dget ' +
-  'CreateObject Volatile LastError CustomUndo CustomRepeat FormulaConvert GetLinkInfo TextBox Info Group GetObject Db Pause Resume ' +
-  'Frequency AddToolbar DeleteToolbar ResetToolbar Evaluate GetToolbar GetTool SpellingCheck ErrorType AppTitle WindowTitle SaveToolbar ' +
-  'EnableTool PressTool RegisterId GetWorkbook Avedev Betadist Gammaln Betainv Binomdist Chidist Chiinv Combin Confidence Critbinom Even ' +
-  'Expondist Fdist Finv Fisher Fisherinv Floor Gammadist Gammainv Ceiling Hypgeomdist Lognormdist Loginv Negbinomdist Normdist Normsdist ' +
-  'Norminv Normsinv Standardize Odd Permut Poisson Tdist Weibull Sumxmy2 Sumx2my2 Sumx2py2 Chitest Correl Covar Forecast Ftest Intercept ' +
-  'Pearson Rsq Steyx Slope Ttest Prob Devsq Geomean Harmean Sumsq Kurt Skew Ztest Large Small Quartile Percentile Percentrank Mode ' +
-  'Trimmean Tinv MovieCommand GetMovie Concatenate Power PivotAddData GetPivotTable GetPivotField GetPivotItem Radians Degrees Subtotal ' +
-  'Sumif Countif Countblank ScenarioGet OptionsListsGet Ispmt Datedif Datestring Numberstring Roman OpenDialog SaveDialog ' +
-  // xlc… (command equivalents)
-  'Beep Open OpenLinks CloseAll Save SaveAs FileDelete PageSetup Print PrinterSetup Quit NewWindow ArrangeAll WindowSize WindowMove Full ' +
-  'Close Run SetPrintArea SetPrintTitles SetPageBreak RemovePageBreak Font Display ProtectDocument Precision A1R1c1 CalculateNow ' +
-  'Calculation DataFind Extract DataDelete SetDatabase SetCriteria Sort DataSeries Table FormatNumber Alignment Style Border ' +
-  'CellProtection ColumnWidth Undo Cut Copy Paste Clear PasteSpecial EditDelete Insert FillRight FillDown DefineName CreateNames ' +
-  'FormulaGoto FormulaFind SelectLastCell ShowActiveCell GalleryArea GalleryBar GalleryColumn GalleryLine GalleryPie GalleryScatter ' +
-  'Combination Preferred AddOverlay Gridlines SetPreferred Axes Legend AttachText AddArrow SelectChart SelectPlotArea Patterns MainChart ' +
-  'Overlay Scale FormatLegend FormatText EditRepeat Parse Justify Hide Unhide Workspace Formula FormulaFill FormulaArray DataFindNext ' +
-  'DataFindPrev FormulaFindNext FormulaFindPrev Activate ActivateNext ActivatePrev UnlockedNext UnlockedPrev CopyPicture Select ' +
-  'DeleteName DeleteFormat Vline Hline Vpage Hpage Vscroll Hscroll Alert New CancelCopy ShowClipboard Message PasteLink AppActivate ' +
-  'DeleteArrow RowHeight FormatMove FormatSize FormulaReplace SendKeys SelectSpecial ApplyNames ReplaceFont FreezePanes ShowInfo Split ' +
-  'OnWindow OnData DisableInput Echo Outline ListNames FileClose SaveWorkbook DataForm CopyChart OnTime Wait FormatFont FillUp FillLeft ' +
-  'DeleteOverlay Note ShortMenus SetUpdateStatus ColorPalette DeleteStyle WindowRestore WindowMaximize Error ChangeLink CalculateDocument ' +
-  'OnKey AppRestore AppMove AppSize AppMinimize AppMaximize BringToFront SendToBack MainChartType OverlayChartType SelectEnd OpenMail ' +
-  'SendMail StandardFont Consolidate SortSpecial Gallery3dArea Gallery3dColumn Gallery3dLine Gallery3dPie View3d GoalSeek Workgroup ' +
-  'FillGroup UpdateLink Promote Demote ShowDetail Ungroup ObjectProperties SaveNewObject Share ShareName Duplicate ApplyStyle ' +
-  'AssignToObject ObjectProtection HideObject SetExtract CreatePublisher SubscribeTo Attributes ShowToolbar PrintPreview EditColor ' +
-  'ShowLevels FormatMain FormatOverlay OnRecalc EditSeries DefineStyle LinePrint EnterData GalleryRadar MergeStyles EditionOptions ' +
-  'PastePicture PastePictureLink Spelling Zoom Resume InsertObject WindowMinimize Size Move SoundNote SoundPlay FormatShape ExtendPolygon ' +
-  'FormatAuto Gallery3dBar Gallery3dSurface FillAuto CustomizeToolbar AddTool EditObject OnDoubleclick OnEntry WorkbookAdd WorkbookMove ' +
-  'WorkbookCopy WorkbookOptions SaveWorkspace ChartWizard DeleteTool MoveTool WorkbookSelect WorkbookActivate AssignToTool CopyTool ' +
-  'ResetTool ConstrainNumeric PasteTool Placement FillWorkgroup WorkbookNew ScenarioCells ScenarioDelete ScenarioAdd ScenarioEdit ' +
-  'ScenarioShow ScenarioShowNext ScenarioSummary PivotTableWizard PivotFieldProperties PivotField PivotItem PivotAddFields ' +
-  'OptionsCalculation OptionsEdit OptionsView AddinManager MenuEditor AttachToolbars VbaReset OptionsChart Start VbaEnd VbaInsertFile ' +
-  'VbaProcedureDefinition VbaReferences VbaStepInto VbaStepOver VbaToggleBreakpoint VbaClearBreakpoints RoutingSlip RouteDocument ' +
-  'MailLogon InsertPicture EditTool GalleryDoughnut VbaObjectBrowser VbaDebugWindow VbaAddWatch VbaEditWatch VbaInstantWatch ChartTrend ' +
-  'PivotItemProperties WorkbookInsert OptionsTransition OptionsGeneral FilterAdvanced MailAddMailer MailDeleteMailer MailReply ' +
-  'MailReplyAll MailForward MailNextLetter DataLabel InsertTitle FontProperties MacroOptions WorkbookHide WorkbookUnhide WorkbookDelete ' +
-  'WorkbookName GalleryCustom AddChartAutoformat DeleteChartAutoformat ChartAddData AutoOutline TabOrder ShowDialog SelectAll ' +
-  'UngroupSheets SubtotalCreate SubtotalRemove RenameObject WorkbookScroll WorkbookNext WorkbookPrev WorkbookTabSplit FullScreen ' +
-  'WorkbookProtect ScrollbarProperties PivotShowPages TextToColumns FormatCharttype LinkFormat TracerDisplay TracerNavigate TracerClear ' +
-  'TracerError PivotFieldGroup PivotFieldUngroup CheckboxProperties LabelProperties ListboxProperties EditboxProperties PivotRefresh ' +
-  'LinkCombo OpenText HideDialog SetDialogFocus EnableObject PushbuttonProperties SetDialogDefault Filter FilterShowAll ClearOutline ' +
-  'FunctionWizard AddListItem SetListItem RemoveListItem SelectListItem SetControlValue SaveCopyAs OptionsListsAdd OptionsListsDelete ' +
-  'SeriesAxes SeriesX SeriesY ErrorbarX ErrorbarY FormatChart SeriesOrder MailLogoff ClearRoutingSlip AppActivateMicrosoft ' +
-  'MailEditMailer OnSheet StandardWidth ScenarioMerge SummaryInfo FindFile ActiveCellFont EnableTipwizard VbaMakeAddin MailSendMailer'
-).split(' ');
+export const EXCEL4_MACRO_NAMES: readonly string[] = // xlf… (functions)
+  (
+    'Count Isna Iserror Sum Average Min Max Row Column Na Npv Stdev Dollar Fixed Sin Cos Tan Atan Pi Sqrt Exp Ln Log10 Abs Int Sign Round ' +
+    'Lookup Index Rept Mid Len Value True False And Or Not Mod Dcount Dsum Daverage Dmin Dmax Dstdev Var Dvar Text Linest Trend Logest Growth ' +
+    'Goto Halt Pv Fv Nper Pmt Rate Mirr Irr Rand Match Date Time Day Month Year Weekday Hour Minute Second Now Areas Rows Columns Offset ' +
+    'Absref Relref Argument Search Transpose Error Step Type Echo SetName Caller Deref Windows Series Documents ActiveCell Selection Result ' +
+    'Atan2 Asin Acos Choose Hlookup Vlookup Links Input Isref GetFormula GetName SetValue Log Exec Char Lower Upper Proper Left Right Exact ' +
+    'Trim Replace Substitute Code Names Directory Find Cell Iserr Istext Isnumber Isblank T N Fopen Fclose Fsize Freadln Fread Fwriteln ' +
+    'Fwrite Fpos Datevalue Timevalue Sln Syd Ddb GetDef Reftext Textref Indirect Register Call AddBar AddMenu AddCommand EnableCommand ' +
+    'CheckCommand RenameCommand ShowBar DeleteMenu DeleteCommand GetChartItem DialogBox Clean Mdeterm Minverse Mmult Files Ipmt Ppmt Counta ' +
+    'CancelKey Initiate Request Poke Execute Terminate Restart Help GetBar Product Fact GetCell GetWorkspace GetWindow GetDocument Dproduct ' +
+    'Isnontext GetNote Note Stdevp Varp Dstdevp Dvarp Trunc Islogical Dcounta DeleteBar Unregister Usdollar Findb Searchb Replaceb Leftb ' +
+    'Rightb Midb Lenb Roundup Rounddown Asc Dbcs Rank Address Days360 Today Vdb Median Sumproduct Sinh Cosh Tanh Asinh Acosh Atanh Dget ' +
+    'CreateObject Volatile LastError CustomUndo CustomRepeat FormulaConvert GetLinkInfo TextBox Info Group GetObject Db Pause Resume ' +
+    'Frequency AddToolbar DeleteToolbar ResetToolbar Evaluate GetToolbar GetTool SpellingCheck ErrorType AppTitle WindowTitle SaveToolbar ' +
+    'EnableTool PressTool RegisterId GetWorkbook Avedev Betadist Gammaln Betainv Binomdist Chidist Chiinv Combin Confidence Critbinom Even ' +
+    'Expondist Fdist Finv Fisher Fisherinv Floor Gammadist Gammainv Ceiling Hypgeomdist Lognormdist Loginv Negbinomdist Normdist Normsdist ' +
+    'Norminv Normsinv Standardize Odd Permut Poisson Tdist Weibull Sumxmy2 Sumx2my2 Sumx2py2 Chitest Correl Covar Forecast Ftest Intercept ' +
+    'Pearson Rsq Steyx Slope Ttest Prob Devsq Geomean Harmean Sumsq Kurt Skew Ztest Large Small Quartile Percentile Percentrank Mode ' +
+    'Trimmean Tinv MovieCommand GetMovie Concatenate Power PivotAddData GetPivotTable GetPivotField GetPivotItem Radians Degrees Subtotal ' +
+    'Sumif Countif Countblank ScenarioGet OptionsListsGet Ispmt Datedif Datestring Numberstring Roman OpenDialog SaveDialog ' +
+    // xlc… (command equivalents)
+    'Beep Open OpenLinks CloseAll Save SaveAs FileDelete PageSetup Print PrinterSetup Quit NewWindow ArrangeAll WindowSize WindowMove Full ' +
+    'Close Run SetPrintArea SetPrintTitles SetPageBreak RemovePageBreak Font Display ProtectDocument Precision A1R1c1 CalculateNow ' +
+    'Calculation DataFind Extract DataDelete SetDatabase SetCriteria Sort DataSeries Table FormatNumber Alignment Style Border ' +
+    'CellProtection ColumnWidth Undo Cut Copy Paste Clear PasteSpecial EditDelete Insert FillRight FillDown DefineName CreateNames ' +
+    'FormulaGoto FormulaFind SelectLastCell ShowActiveCell GalleryArea GalleryBar GalleryColumn GalleryLine GalleryPie GalleryScatter ' +
+    'Combination Preferred AddOverlay Gridlines SetPreferred Axes Legend AttachText AddArrow SelectChart SelectPlotArea Patterns MainChart ' +
+    'Overlay Scale FormatLegend FormatText EditRepeat Parse Justify Hide Unhide Workspace Formula FormulaFill FormulaArray DataFindNext ' +
+    'DataFindPrev FormulaFindNext FormulaFindPrev Activate ActivateNext ActivatePrev UnlockedNext UnlockedPrev CopyPicture Select ' +
+    'DeleteName DeleteFormat Vline Hline Vpage Hpage Vscroll Hscroll Alert New CancelCopy ShowClipboard Message PasteLink AppActivate ' +
+    'DeleteArrow RowHeight FormatMove FormatSize FormulaReplace SendKeys SelectSpecial ApplyNames ReplaceFont FreezePanes ShowInfo Split ' +
+    'OnWindow OnData DisableInput Echo Outline ListNames FileClose SaveWorkbook DataForm CopyChart OnTime Wait FormatFont FillUp FillLeft ' +
+    'DeleteOverlay Note ShortMenus SetUpdateStatus ColorPalette DeleteStyle WindowRestore WindowMaximize Error ChangeLink CalculateDocument ' +
+    'OnKey AppRestore AppMove AppSize AppMinimize AppMaximize BringToFront SendToBack MainChartType OverlayChartType SelectEnd OpenMail ' +
+    'SendMail StandardFont Consolidate SortSpecial Gallery3dArea Gallery3dColumn Gallery3dLine Gallery3dPie View3d GoalSeek Workgroup ' +
+    'FillGroup UpdateLink Promote Demote ShowDetail Ungroup ObjectProperties SaveNewObject Share ShareName Duplicate ApplyStyle ' +
+    'AssignToObject ObjectProtection HideObject SetExtract CreatePublisher SubscribeTo Attributes ShowToolbar PrintPreview EditColor ' +
+    'ShowLevels FormatMain FormatOverlay OnRecalc EditSeries DefineStyle LinePrint EnterData GalleryRadar MergeStyles EditionOptions ' +
+    'PastePicture PastePictureLink Spelling Zoom Resume InsertObject WindowMinimize Size Move SoundNote SoundPlay FormatShape ExtendPolygon ' +
+    'FormatAuto Gallery3dBar Gallery3dSurface FillAuto CustomizeToolbar AddTool EditObject OnDoubleclick OnEntry WorkbookAdd WorkbookMove ' +
+    'WorkbookCopy WorkbookOptions SaveWorkspace ChartWizard DeleteTool MoveTool WorkbookSelect WorkbookActivate AssignToTool CopyTool ' +
+    'ResetTool ConstrainNumeric PasteTool Placement FillWorkgroup WorkbookNew ScenarioCells ScenarioDelete ScenarioAdd ScenarioEdit ' +
+    'ScenarioShow ScenarioShowNext ScenarioSummary PivotTableWizard PivotFieldProperties PivotField PivotItem PivotAddFields ' +
+    'OptionsCalculation OptionsEdit OptionsView AddinManager MenuEditor AttachToolbars VbaReset OptionsChart Start VbaEnd VbaInsertFile ' +
+    'VbaProcedureDefinition VbaReferences VbaStepInto VbaStepOver VbaToggleBreakpoint VbaClearBreakpoints RoutingSlip RouteDocument ' +
+    'MailLogon InsertPicture EditTool GalleryDoughnut VbaObjectBrowser VbaDebugWindow VbaAddWatch VbaEditWatch VbaInstantWatch ChartTrend ' +
+    'PivotItemProperties WorkbookInsert OptionsTransition OptionsGeneral FilterAdvanced MailAddMailer MailDeleteMailer MailReply ' +
+    'MailReplyAll MailForward MailNextLetter DataLabel InsertTitle FontProperties MacroOptions WorkbookHide WorkbookUnhide WorkbookDelete ' +
+    'WorkbookName GalleryCustom AddChartAutoformat DeleteChartAutoformat ChartAddData AutoOutline TabOrder ShowDialog SelectAll ' +
+    'UngroupSheets SubtotalCreate SubtotalRemove RenameObject WorkbookScroll WorkbookNext WorkbookPrev WorkbookTabSplit FullScreen ' +
+    'WorkbookProtect ScrollbarProperties PivotShowPages TextToColumns FormatCharttype LinkFormat TracerDisplay TracerNavigate TracerClear ' +
+    'TracerError PivotFieldGroup PivotFieldUngroup CheckboxProperties LabelProperties ListboxProperties EditboxProperties PivotRefresh ' +
+    'LinkCombo OpenText HideDialog SetDialogFocus EnableObject PushbuttonProperties SetDialogDefault Filter FilterShowAll ClearOutline ' +
+    'FunctionWizard AddListItem SetListItem RemoveListItem SelectListItem SetControlValue SaveCopyAs OptionsListsAdd OptionsListsDelete ' +
+    'SeriesAxes SeriesX SeriesY ErrorbarX ErrorbarY FormatChart SeriesOrder MailLogoff ClearRoutingSlip AppActivateMicrosoft ' +
+    'MailEditMailer OnSheet StandardWidth ScenarioMerge SummaryInfo FindFile ActiveCellFont EnableTipwizard VbaMakeAddin MailSendMailer'
+  ).split(' ');
 
 const MACRO_KEYS = new Set(EXCEL4_MACRO_NAMES.map((n) => n.toUpperCase()));
 

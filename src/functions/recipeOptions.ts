@@ -23,7 +23,6 @@ const POSITIONAL = new Set(['buffer', 'targetPh', 'concentrationMm', 'volumeMl']
 /** A recipe input built up field by field from dotted names (`titrant.form`). */
 type Loose = Record<string, unknown>;
 
-
 /**
  * Reads an options range into part of a planner input.
  *
@@ -35,9 +34,11 @@ export function recipeOptions(range: unknown): { readonly input: Partial<RecipeI
   const rows = toRange(range).filter((row) => !row.every(isBlank));
   const written = new Map<string, string>();
   const input: Loose = {};
-  if (rows.length > MAX_OPTION_ROWS) throw invalid('tooManyRows', OPTIONS_ARGUMENT, SHEET_MESSAGES.tooManyRows(OPTIONS_ARGUMENT, rows.length, MAX_OPTION_ROWS), `up to ${MAX_OPTION_ROWS} rows`);
+  if (rows.length > MAX_OPTION_ROWS)
+    throw invalid('tooManyRows', OPTIONS_ARGUMENT, SHEET_MESSAGES.tooManyRows(OPTIONS_ARGUMENT, rows.length, MAX_OPTION_ROWS), `up to ${MAX_OPTION_ROWS} rows`);
   for (const row of rows) {
-    if (row.length < 2) throw invalid('tooFewColumns', OPTIONS_ARGUMENT, SHEET_MESSAGES.tooFewColumns(OPTIONS_ARGUMENT, row.length, 'two: an option name and its value'), 'two columns');
+    if (row.length < 2)
+      throw invalid('tooFewColumns', OPTIONS_ARGUMENT, SHEET_MESSAGES.tooFewColumns(OPTIONS_ARGUMENT, row.length, 'two: an option name and its value'), 'two columns');
     const name = toText(OPTIONS_ARGUMENT, row[0]);
     const f = recipeFieldOf(name);
     if (POSITIONAL.has(f.name) || written.has(f.name)) throw new ChemError('invalid-input', 'givenTwice', MESSAGES.givenTwice(name), name, 'each option once');

@@ -32,7 +32,18 @@ import { SHEET_MESSAGES } from './messages';
 export const USER_SUBSTANCES_ARGUMENT = 'userSubstances';
 
 /** Column headings, in order (documentation and the header check). */
-export const USER_SUBSTANCE_COLUMNS = ['name', 'charge of most protonated form', 'pKa list', 'ΔH list kJ/mol', 'ΔCp list J/(K·mol)', 'form name', 'molar mass g/mol', 'counter-ions', 'protons lost', 'formula'] as const;
+export const USER_SUBSTANCE_COLUMNS = [
+  'name',
+  'charge of most protonated form',
+  'pKa list',
+  'ΔH list kJ/mol',
+  'ΔCp list J/(K·mol)',
+  'form name',
+  'molar mass g/mol',
+  'counter-ions',
+  'protons lost',
+  'formula',
+] as const;
 
 interface Parsed {
   readonly substances: UserSubstance[];
@@ -53,7 +64,10 @@ const MAX_COUNTER_ION_LENGTH = 40;
 /** Counter-ions as written: "Na+", "2 Na+", "Na+ 2", "K+; Cl-". */
 function parseCounterIons(text: string): Record<string, number> {
   const ions: Record<string, number> = {};
-  for (const part of text.split(/[;,]/).map((p) => p.trim()).filter((p) => p !== '')) {
+  for (const part of text
+    .split(/[;,]/)
+    .map((p) => p.trim())
+    .filter((p) => p !== '')) {
     if (part.length > MAX_COUNTER_ION_LENGTH) throw invalid('badCounterIons', 'counter-ions', SHEET_MESSAGES.badCounterIons(text.length > 60 ? `${text.slice(0, 60)}…` : text));
     const m = /^(\d+(?:\.\d+)?)?\s*([A-Za-z][A-Za-z0-9]*\s*[+\-−]*)\s*(\d+(?:\.\d+)?)?$/.exec(part);
     if (!m || (m[1] && m[3])) throw invalid('badCounterIons', 'counter-ions', SHEET_MESSAGES.badCounterIons(text));
@@ -96,8 +110,10 @@ function parseRows(range: readonly (readonly unknown[])[]): Parsed {
         substance = { name, chargeOfMostProtonated: charge, pKa, ...(dH.length ? { deltaHkJ: dH } : {}), ...(dCp.length ? { deltaCpJ: dCp } : {}), forms: [] };
         if (known !== undefined) {
           const first = substances[known];
-          if (first.chargeOfMostProtonated !== charge || !sameList(first.pKa, pKa)) throw invalid('userSubstanceConflict', 'userSubstances', SHEET_MESSAGES.userSubstanceConflict(name, 'charge or pKa values'));
-          if ((dH.length && !sameList(first.deltaHkJ, dH)) || (dCp.length && !sameList(first.deltaCpJ, dCp))) throw invalid('userSubstanceConflict', 'userSubstances', SHEET_MESSAGES.userSubstanceConflict(name, 'ΔH or ΔCp values'));
+          if (first.chargeOfMostProtonated !== charge || !sameList(first.pKa, pKa))
+            throw invalid('userSubstanceConflict', 'userSubstances', SHEET_MESSAGES.userSubstanceConflict(name, 'charge or pKa values'));
+          if ((dH.length && !sameList(first.deltaHkJ, dH)) || (dCp.length && !sameList(first.deltaCpJ, dCp)))
+            throw invalid('userSubstanceConflict', 'userSubstances', SHEET_MESSAGES.userSubstanceConflict(name, 'ΔH or ΔCp values'));
           substance = first;
         }
       } else {
@@ -155,7 +171,7 @@ export function libraryFor(value: unknown): SubstanceLibrary {
     library = createLibrary(parsed.substances);
   } catch (error) {
     // The core names the record by index (validation) or by name (a clash with the library).
-    const field = error instanceof ChemError ? error.field ?? '' : '';
+    const field = error instanceof ChemError ? (error.field ?? '') : '';
     const byIndex = /^userSubstances\[(\d+)\](?:\.forms\[(\d+)\])?/.exec(field);
     const byName = /^userSubstances\["(.*?)"\]/.exec(field);
     const index = byIndex ? Number(byIndex[1]) : byName ? parsed.substances.findIndex((u) => u.name === byName[1]) : -1;

@@ -102,7 +102,17 @@ export function drawChart(book: PreviewWorkbook, sheet: string, spec: ChartSpec)
   el('line', { x1: MARGIN.left, x2: MARGIN.left, y1: MARGIN.top, y2: HEIGHT - MARGIN.bottom, class: 'chart-axis' }, svg);
   const xt = el('text', { x: (MARGIN.left + WIDTH - MARGIN.right) / 2, y: HEIGHT - 8, 'text-anchor': 'middle', class: 'chart-axis-title' }, svg);
   xt.textContent = spec.xTitle;
-  const yt = el('text', { x: 14, y: (MARGIN.top + HEIGHT - MARGIN.bottom) / 2, 'text-anchor': 'middle', transform: `rotate(-90 14 ${(MARGIN.top + HEIGHT - MARGIN.bottom) / 2})`, class: 'chart-axis-title' }, svg);
+  const yt = el(
+    'text',
+    {
+      x: 14,
+      y: (MARGIN.top + HEIGHT - MARGIN.bottom) / 2,
+      'text-anchor': 'middle',
+      transform: `rotate(-90 14 ${(MARGIN.top + HEIGHT - MARGIN.bottom) / 2})`,
+      class: 'chart-axis-title',
+    },
+    svg,
+  );
   yt.textContent = spec.yTitle;
 
   series.forEach((s, i) => {

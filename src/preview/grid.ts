@@ -172,7 +172,10 @@ export class Grid {
       }
     }
     this.cellElement(this.row, this.col)?.classList.add('selected');
-    this.nameBox.textContent = range.rowCount * range.colCount > 1 ? `${cellAddress(range.row, range.col)}:${cellAddress(range.row + range.rowCount - 1, range.col + range.colCount - 1)}` : cellAddress(this.row, this.col);
+    this.nameBox.textContent =
+      range.rowCount * range.colCount > 1
+        ? `${cellAddress(range.row, range.col)}:${cellAddress(range.row + range.rowCount - 1, range.col + range.colCount - 1)}`
+        : cellAddress(this.row, this.col);
   }
 
   private showStatus(): void {
@@ -238,7 +241,8 @@ export class Grid {
   /** Copies the first row of the selection into the rows below it (Ctrl+D), or the first column rightwards (Ctrl+R). */
   fill(direction: 'down' | 'right'): void {
     const r = this.selectedRange();
-    if (direction === 'down' ? r.rowCount < 2 : r.colCount < 2) return this.tell(`Select the cells to fill: the first ${direction === 'down' ? 'row' : 'column'} of the selection is copied into the rest.`);
+    if (direction === 'down' ? r.rowCount < 2 : r.colCount < 2)
+      return this.tell(`Select the cells to fill: the first ${direction === 'down' ? 'row' : 'column'} of the selection is copied into the rest.`);
     const source = direction === 'down' ? { ...r, rowCount: 1 } : { ...r, colCount: 1 };
     const target = direction === 'down' ? { ...r, row: r.row + 1, rowCount: r.rowCount - 1 } : { ...r, col: r.col + 1, colCount: r.colCount - 1 };
     this.change('Not filled', () => this.book.fill(this.sheet, source, target));

@@ -67,7 +67,11 @@ export async function openWorkbookFile(file: File, createEngine: (sheets: Record
     throw new OpenRefused(`"${file.name}" was not opened: ${(error as Error).message}`);
   }
   for (const f of formats) book.setMeta(f.sheet, f.row, f.col, { numberFormat: f.numberFormat });
-  for (const [name, w] of Object.entries(widths)) book.setColumnWidths(name, Array.from(w, (x) => x ?? 10));
+  for (const [name, w] of Object.entries(widths))
+    book.setColumnWidths(
+      name,
+      Array.from(w, (x) => x ?? 10),
+    );
   book.setTitle(file.name.replace(/\.(xlsx|csv)$/i, ''));
   return book;
 }

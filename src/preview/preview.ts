@@ -77,7 +77,11 @@ function start(): void {
   const grid = new Grid(book, document.body);
   const restoreMs = performance.now() - restoreStarted;
 
-  const port = new PreviewAdapter(book, () => grid.selection(), (sheet) => grid.showSheet(sheet));
+  const port = new PreviewAdapter(
+    book,
+    () => grid.selection(),
+    (sheet) => grid.showSheet(sheet),
+  );
   const paneRoot = document.getElementById('pane-root') as HTMLElement;
   const showPane = document.getElementById('show-pane') as HTMLButtonElement;
   const setPaneHidden = (hidden: boolean) => {
@@ -110,7 +114,11 @@ function start(): void {
     autosave.follow(next);
   };
 
-  mountPrintView(document.querySelector('.topbar-actions') as HTMLElement, () => book, () => grid.activeSheet());
+  mountPrintView(
+    document.querySelector('.topbar-actions') as HTMLElement,
+    () => book,
+    () => grid.activeSheet(),
+  );
 
   const buttons: Record<string, () => void> = {
     'edit-undo': () => grid.undo(),

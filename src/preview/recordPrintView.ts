@@ -9,7 +9,6 @@ import { CELL_STYLE, PAGE_STYLE, PRINT_STYLES, spansRow } from '../workbook/prin
 import { printArea, printCells } from './printArea';
 import type { PreviewWorkbook } from './workbook';
 
-
 function styled<K extends keyof HTMLElementTagNameMap>(tag: K, parent: Element, css: Readonly<Record<string, string>> = {}): HTMLElementTagNameMap[K] {
   const node = document.createElement(tag);
   for (const [k, v] of Object.entries(css)) node.style.setProperty(k, v);
@@ -33,7 +32,16 @@ export function showPrintView(book: PreviewWorkbook, sheet: string): HTMLElement
   close.textContent = 'Close print view';
   close.id = 'record-print-close';
   // An A4 sheet at 96 px per inch: 210 mm × 297 mm, 12 mm margins.
-  const paper = styled('div', overlay, { background: '#fff', width: '794px', 'min-height': '1123px', margin: '0 auto', padding: '45px', 'box-sizing': 'border-box', 'box-shadow': '0 2px 8px rgba(0,0,0,0.3)', ...PAGE_STYLE });
+  const paper = styled('div', overlay, {
+    background: '#fff',
+    width: '794px',
+    'min-height': '1123px',
+    margin: '0 auto',
+    padding: '45px',
+    'box-sizing': 'border-box',
+    'box-shadow': '0 2px 8px rgba(0,0,0,0.3)',
+    ...PAGE_STYLE,
+  });
   paper.className = 'print-paper';
   const cells = printCells(book, sheet);
   const widths = Array.from({ length: cells[0]?.length ?? 0 }, (_, c) => book.columnWidth(sheet, printArea(book, sheet).col + c));

@@ -59,7 +59,15 @@ export function isSavedWorkbook(value: unknown): value is SavedWorkbook {
     typeof v.title === 'string' &&
     Array.isArray(v.sheets) &&
     v.sheets.length > 0 &&
-    v.sheets.every((s) => typeof s?.name === 'string' && Array.isArray(s.cells) && s.cells.every((row: unknown) => Array.isArray(row)) && Array.isArray(s.meta) && Array.isArray(s.widths) && Array.isArray(s.charts))
+    v.sheets.every(
+      (s) =>
+        typeof s?.name === 'string' &&
+        Array.isArray(s.cells) &&
+        s.cells.every((row: unknown) => Array.isArray(row)) &&
+        Array.isArray(s.meta) &&
+        Array.isArray(s.widths) &&
+        Array.isArray(s.charts),
+    )
   );
 }
 
@@ -245,9 +253,13 @@ export class PreviewWorkbook {
   toSaved(): SavedWorkbook {
     const sheets = this.sheetNames().map((name): SavedSheet => {
       const id = this.sheetId(name);
-      const cells = this.engine.getSheetSerialized(id).map((row, r) =>
-        row.map((content, c) => (this.engine.isCellPartOfArray({ sheet: id, row: r, col: c }) && !this.engine.doesCellHaveFormula({ sheet: id, row: r, col: c }) ? null : content)),
-      );
+      const cells = this.engine
+        .getSheetSerialized(id)
+        .map((row, r) =>
+          row.map((content, c) =>
+            this.engine.isCellPartOfArray({ sheet: id, row: r, col: c }) && !this.engine.doesCellHaveFormula({ sheet: id, row: r, col: c }) ? null : content,
+          ),
+        );
       const e = this.extras.get(name);
       return { name, cells, meta: e ? [...e.meta.entries()] : [], widths: e ? Array.from(e.widths, (w) => w ?? null) : [], charts: e ? e.charts : [] };
     });
@@ -366,7 +378,8 @@ export class PreviewWorkbook {
    */
   spillSize(sheet: string, row: number, col: number): { rows: number; cols: number } {
     const id = this.sheetId(sheet);
-    const spilled = (r: number, c: number) => this.engine.isCellPartOfArray({ sheet: id, row: r, col: c }) && this.engine.getCellFormula({ sheet: id, row: r, col: c }) === undefined;
+    const spilled = (r: number, c: number) =>
+      this.engine.isCellPartOfArray({ sheet: id, row: r, col: c }) && this.engine.getCellFormula({ sheet: id, row: r, col: c }) === undefined;
     let cols = 1;
     while (spilled(row, col + cols)) cols++;
     let rows = 1;

@@ -12,7 +12,18 @@ import { writeBatchRecord } from '../workbook/batchRecord';
 import type { WorkbookPort } from '../workbook/port';
 
 /** The recipe fields the box asks for, in order (the rest take their defaults). */
-export const RECORD_FIELDS = ['buffer', 'targetPh', 'concentrationMm', 'volumeMl', 'useTemperatureC', 'form', 'titrant.form', 'titrant.concentrationM', 'benchTemperatureC', 'salts'] as const;
+export const RECORD_FIELDS = [
+  'buffer',
+  'targetPh',
+  'concentrationMm',
+  'volumeMl',
+  'useTemperatureC',
+  'form',
+  'titrant.form',
+  'titrant.concentrationM',
+  'benchTemperatureC',
+  'salts',
+] as const;
 
 export interface BatchRecordBoxOptions {
   readonly port: WorkbookPort;
@@ -41,7 +52,10 @@ function setPath(target: Record<string, unknown>, path: string, value: unknown):
 export function mountBatchRecordBox(root: HTMLElement, options: BatchRecordBoxOptions): void {
   const box = el('section', root, { className: 'copy-box batch-record-box', id: 'batch-record' });
   el('h3', box, { text: 'Batch record' });
-  el('p', box, { className: 'hint', text: 'A sheet to print and fill in at the bench: materials with lots and actual amounts, the titrant, the meter, final checks and sign-off; a live as-made check (PROTON.AS.MADE) passes or fails the batch as it is filled in.' });
+  el('p', box, {
+    className: 'hint',
+    text: 'A sheet to print and fill in at the bench: materials with lots and actual amounts, the titrant, the meter, final checks and sign-off; a live as-made check (PROTON.AS.MADE) passes or fails the batch as it is filled in.',
+  });
   const form = el('form', box, { className: 'pane-form', id: 'batch-record-form' });
   form.noValidate = true;
   const controls = new Map<string, HTMLInputElement>();

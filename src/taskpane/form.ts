@@ -96,7 +96,8 @@ export interface TableRequest {
 export type FieldErrors = Partial<Record<FieldName, string>>;
 
 /** A failed check: a message per field, and the code of each error the input reader raised (as the functions and the command line raise them). */
-export type Checked = { readonly ok: true; readonly request: TableRequest } | { readonly ok: false; readonly errors: FieldErrors; readonly codes: Partial<Record<FieldName, string>> };
+export type Checked =
+  { readonly ok: true; readonly request: TableRequest } | { readonly ok: false; readonly errors: FieldErrors; readonly codes: Partial<Record<FieldName, string>> };
 
 /** Most salts at fixed concentrations one table holds (the rows of its salts block). */
 export const MAX_TABLE_SALTS = 6;
@@ -113,7 +114,6 @@ export function phSeries(start: number, stop: number, step: number): number[] {
   for (let i = 0; i < Math.min(count, MAX_SERIES + 1); i++) out.push(Number((start + i * step).toFixed(decimals)));
   return out;
 }
-
 
 /**
  * Checks the form. Each message names the field's meaning and what is allowed.
@@ -286,7 +286,6 @@ export function checkForm(input: FormInput): Checked {
 function unique(values: readonly number[]): number[] {
   return values.filter((v, i) => values.indexOf(v) === i);
 }
-
 
 /** Defaults of a fresh form, with the document's settings laid over them. */
 export function defaultInput(settings: Partial<PaneSettings> = {}): FormInput {

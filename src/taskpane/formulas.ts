@@ -88,7 +88,8 @@ export const amountOrBlank = (name: string, mM: string) => `=IF(${name}="","",${
 /** Titrant volume at a pH, for the curve (the chart's row of the table gives form, amounts, salt and temperature). */
 export const curveTitrantMl = (s: SettingCells, r: RowCells, ph: string) => `=IFERROR(${titrantAt(s, r, ph)},NA())`;
 /** Capacity at a pH for the capacity curve: the composition of the chart's row at that pH's titrant amount. */
-export const curveCapacity = (s: SettingCells, r: RowCells, composition: string) => `=IFERROR(${call('CAPACITY', composition, text('base'), r.useTemperatureC, s.activityModel, s.userSubstances)},NA())`;
+export const curveCapacity = (s: SettingCells, r: RowCells, composition: string) =>
+  `=IFERROR(${call('CAPACITY', composition, text('base'), r.useTemperatureC, s.activityModel, s.userSubstances)},NA())`;
 /** Apparent pKa′ of a step at the row's temperature (for the usable range, pKa′ ± the buffering half-width). */
 export const pKaPrime = (buffer: string, step: number, r: RowCells, s: SettingCells, ionicStrength: string) =>
   `=${call('PKA', buffer, String(step), r.useTemperatureC, ionicStrength, s.activityModel, s.userSubstances)}`;

@@ -27,7 +27,14 @@ function make<K extends keyof HTMLElementTagNameMap>(tag: K, props: { className?
 export function mountMixSection(section: HTMLElement, options: { readonly port: WorkbookPort; readonly onWritten?: (sheet: string) => void }): void {
   section.classList.add('mix-box');
   make('h3', { text: 'From stocks' }, section);
-  make('p', { className: 'hint', text: 'Mix a working buffer from your stock solutions: a new sheet with the mL of each stock (a live PROTON.MIX.VOLUMES formula), the pH it lands on and why.' }, section);
+  make(
+    'p',
+    {
+      className: 'hint',
+      text: 'Mix a working buffer from your stock solutions: a new sheet with the mL of each stock (a live PROTON.MIX.VOLUMES formula), the pH it lands on and why.',
+    },
+    section,
+  );
   const form = make('form', { className: 'pane-form', id: 'mix-form' }, section);
   form.noValidate = true;
   const initial = defaultMixForm();

@@ -108,9 +108,15 @@ export async function buildMixSheet(port: WorkbookPort, form: MixForm, now: Date
   rows[first + 1] = [label('Final volume (mL)'), v(plan.volumeMl)];
   rows[first + 2] = [label('Used at (°C)'), v(plan.useTemperatureC)];
   rows[first + 3] = [label('Target pH (blank: none)'), plan.targetPh === undefined ? { value: null, style: 'input' } : v(plan.targetPh)];
-  rows[MIX_LAYOUT.targetsHeaderRow] = [{ value: 'component', style: 'header' }, { value: 'final (mM, or %)', style: 'header' }];
+  rows[MIX_LAYOUT.targetsHeaderRow] = [
+    { value: 'component', style: 'header' },
+    { value: 'final (mM, or %)', style: 'header' },
+  ];
   targets.forEach((t, i) => {
-    rows[MIX_LAYOUT.firstTargetRow + i] = [v(t.component), v(t.percent !== undefined ? String(t.percent) : Number.isFinite(Number(t.concentrationMm)) ? Number(t.concentrationMm) : String(t.concentrationMm))];
+    rows[MIX_LAYOUT.firstTargetRow + i] = [
+      v(t.component),
+      v(t.percent !== undefined ? String(t.percent) : Number.isFinite(Number(t.concentrationMm)) ? Number(t.concentrationMm) : String(t.concentrationMm)),
+    ];
   });
   const lastTarget = MIX_LAYOUT.firstTargetRow + targets.length - 1;
   const tableRow = lastTarget + 2;
@@ -121,9 +127,19 @@ export async function buildMixSheet(port: WorkbookPort, form: MixForm, now: Date
   let notes = tableRow + targets.length + 6;
   rows[notes++] = [{ value: `Notes, computed ${now.toISOString().slice(0, 16).replace('T', ' ')} UTC (values: recompute by rebuilding)`, style: 'subtitle' }];
   for (const s of plan.labelShifts) {
-    rows[notes++] = [{ value: `Label of ${s.stock}: pH ${s.labelPh.toFixed(2)} at ${s.labelTemperatureC} °C → diluted alone ${s.dilutedAlonePh.toFixed(2)} → in the mix ${s.mixedAtLabelTemperaturePh.toFixed(2)} → ${s.mixedAtUsePh.toFixed(2)} at ${plan.useTemperatureC} °C`, style: 'note' }];
+    rows[notes++] = [
+      {
+        value: `Label of ${s.stock}: pH ${s.labelPh.toFixed(2)} at ${s.labelTemperatureC} °C → diluted alone ${s.dilutedAlonePh.toFixed(2)} → in the mix ${s.mixedAtLabelTemperaturePh.toFixed(2)} → ${s.mixedAtUsePh.toFixed(2)} at ${plan.useTemperatureC} °C`,
+        style: 'note',
+      },
+    ];
   }
-  rows[notes++] = [{ value: `Ionic strength ${plan.predictions.ionicStrengthM.toPrecision(3)} M; conductivity ${plan.predictions.conductivityMsPerCm.toPrecision(3)} mS/cm at ${plan.useTemperatureC} °C; ideal osmolarity ${plan.predictions.idealOsmolarityMosm.toFixed(0)} mOsm/L`, style: 'note' }];
+  rows[notes++] = [
+    {
+      value: `Ionic strength ${plan.predictions.ionicStrengthM.toPrecision(3)} M; conductivity ${plan.predictions.conductivityMsPerCm.toPrecision(3)} mS/cm at ${plan.useTemperatureC} °C; ideal osmolarity ${plan.predictions.idealOsmolarityMosm.toFixed(0)} mOsm/L`,
+      style: 'note',
+    },
+  ];
   for (const w of plan.warnings) rows[notes++] = [{ value: literal(w.message), style: 'warning' }];
   for (const c of plan.cautions) rows[notes++] = [{ value: literal(c), style: 'caution' }];
   const block: CellBlock = { row: 0, col: 0, cells: Array.from({ length: rows.length }, (_, i) => rows[i] ?? []) };

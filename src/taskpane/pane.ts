@@ -30,7 +30,11 @@ const GROUPS: readonly { legend: string; fields: readonly FieldSpec[]; id?: stri
         name: 'route',
         label: 'Made by',
         kind: 'select',
-        options: [['titrate', 'weighing one form and titrating it'], ['two-forms', 'weighing two forms (no titration)'], ['stock', 'a concentrated stock, titrated, then diluted']],
+        options: [
+          ['titrate', 'weighing one form and titrating it'],
+          ['two-forms', 'weighing two forms (no titration)'],
+          ['stock', 'a concentrated stock, titrated, then diluted'],
+        ],
       },
       { name: 'form', label: 'Form you weigh', hint: 'e.g. HEPES, tris base, sodium phosphate monobasic', list: 'list-forms' },
       { name: 'acidForm', label: 'Acid form you weigh', hint: 'e.g. sodium phosphate monobasic monohydrate', list: 'list-forms' },
@@ -42,7 +46,10 @@ const GROUPS: readonly { legend: string; fields: readonly FieldSpec[]; id?: stri
         name: 'titrantInBuffer',
         label: 'If the titrant is a form of the buffer (acetic acid into sodium acetate)',
         kind: 'select',
-        options: [['state', 'weigh the stated amount; show the total it makes'], ['hold', 'weigh less, so the stated total holds']],
+        options: [
+          ['state', 'weigh the stated amount; show the total it makes'],
+          ['hold', 'weigh less, so the stated total holds'],
+        ],
       },
       { name: 'stockFold', label: 'Stock strength (× the working buffer)', hint: 'e.g. 10 for a 10× stock', inputMode: 'decimal' },
       { name: 'stockVolumeMl', label: 'Stock to make (mL)', hint: 'Blank: as much as one batch of working buffer', inputMode: 'decimal' },
@@ -52,7 +59,15 @@ const GROUPS: readonly { legend: string; fields: readonly FieldSpec[]; id?: stri
     legend: 'Target pH at the temperature of use',
     id: 'ph-group',
     fields: [
-      { name: 'phMode', label: 'Give the pH values as', kind: 'select', options: [['range', 'a series: first, last, step'], ['list', 'a typed list']] },
+      {
+        name: 'phMode',
+        label: 'Give the pH values as',
+        kind: 'select',
+        options: [
+          ['range', 'a series: first, last, step'],
+          ['list', 'a typed list'],
+        ],
+      },
       { name: 'phStart', label: 'First pH', inputMode: 'decimal' },
       { name: 'phStop', label: 'Last pH', inputMode: 'decimal' },
       { name: 'phStep', label: 'Step', inputMode: 'decimal' },
@@ -66,7 +81,12 @@ const GROUPS: readonly { legend: string; fields: readonly FieldSpec[]; id?: stri
       { name: 'concentrationsMm', label: 'Buffer concentration (mM)', hint: 'One or more: 20; 50 (or with a unit: 0.05 M)' },
       { name: 'volumeMl', label: 'Final volume (mL)', hint: 'e.g. 1000, or 1 L', inputMode: 'decimal' },
       { name: 'salts', label: 'Salts (optional)', hint: 'Name and amount, separated by semicolons: NaCl 150 mM; KCl 2.7 mM' },
-      { name: 'saltTargetGoal', label: 'Add a salt to reach', kind: 'select', options: [['none', 'no target'], ...SALT_TARGET_GOALS.map((g): [string, string] => [g.name, g.label])] },
+      {
+        name: 'saltTargetGoal',
+        label: 'Add a salt to reach',
+        kind: 'select',
+        options: [['none', 'no target'], ...SALT_TARGET_GOALS.map((g): [string, string] => [g.name, g.label])],
+      },
       { name: 'saltTargetForm', label: 'Salt added to the target', list: 'list-forms' },
       { name: 'saltTargetValue', label: 'Target value', hint: 'In the unit of the target chosen above', inputMode: 'decimal' },
     ],
@@ -80,7 +100,12 @@ const GROUPS: readonly { legend: string; fields: readonly FieldSpec[]; id?: stri
         name: 'activityModel',
         label: 'Activity model',
         kind: 'select',
-        options: [['pitzer', 'Pitzer (default, stocks too)'], ['davies', 'Davies (dilute only)'], ['bates-guggenheim', 'Debye–Hückel, Bates–Guggenheim'], ['ideal', 'Ideal (no activity correction)']],
+        options: [
+          ['pitzer', 'Pitzer (default, stocks too)'],
+          ['davies', 'Davies (dilute only)'],
+          ['bates-guggenheim', 'Debye–Hückel, Bates–Guggenheim'],
+          ['ideal', 'Ideal (no activity correction)'],
+        ],
       },
       { name: 'userSubstances', label: 'Your substances (range, optional)', hint: "e.g. 'My substances'!A2:J20" },
     ],
@@ -134,8 +159,16 @@ export async function mountPane(root: HTMLElement, options: PaneOptions): Promis
   const form = make('form', { className: 'pane-form', id: 'recipe-form' }, root);
   form.noValidate = true;
   const substances = listSubstances();
-  datalist('list-substances', substances.filter((s) => s.kind === 'acid-base').map((s) => s.name), form);
-  datalist('list-forms', substances.flatMap((s) => s.forms), form);
+  datalist(
+    'list-substances',
+    substances.filter((s) => s.kind === 'acid-base').map((s) => s.name),
+    form,
+  );
+  datalist(
+    'list-forms',
+    substances.flatMap((s) => s.forms),
+    form,
+  );
   datalist('list-titrants', TITRANTS, form);
 
   const controls = new Map<FieldName, HTMLInputElement | HTMLSelectElement>();
@@ -239,7 +272,11 @@ export async function mountPane(root: HTMLElement, options: PaneOptions): Promis
 
   const protocolBox = make('section', { className: 'protocol-box' }, root);
   make('h3', { text: 'Bench protocol' }, protocolBox);
-  make('p', { className: 'hint', text: 'Each table has a protocol sheet: live PROTON.RECIPE formulas over one row. Select a cell in the table, give a row number, and it shows that row.' }, protocolBox);
+  make(
+    'p',
+    { className: 'hint', text: 'Each table has a protocol sheet: live PROTON.RECIPE formulas over one row. Select a cell in the table, give a row number, and it shows that row.' },
+    protocolBox,
+  );
   const protocolRow = make('div', { className: 'field field-protocolRow' }, protocolBox);
   const protocolLabel = make('label', { text: 'Table row' }, protocolRow);
   protocolLabel.htmlFor = 'protocol-row';
@@ -252,7 +289,14 @@ export async function mountPane(root: HTMLElement, options: PaneOptions): Promis
 
   const copyBox = make('section', { className: 'copy-box' }, root);
   make('h3', { text: 'Values copy' }, copyBox);
-  make('p', { className: 'hint', text: 'Copies the sheet you have selected as plain numbers on a new sheet, with a provenance block (add-in version, activity model, temperatures, constant sources, date).' }, copyBox);
+  make(
+    'p',
+    {
+      className: 'hint',
+      text: 'Copies the sheet you have selected as plain numbers on a new sheet, with a provenance block (add-in version, activity model, temperatures, constant sources, date).',
+    },
+    copyBox,
+  );
   const copyButton = make('button', { text: 'Copy selected sheet as values', id: 'values-copy' }, copyBox);
   copyButton.type = 'button';
 
@@ -261,7 +305,13 @@ export async function mountPane(root: HTMLElement, options: PaneOptions): Promis
 
   const cautions = make('section', { className: 'pane-cautions' }, root);
   make('h3', { text: 'Before you weigh' }, cautions);
-  make('p', { text: 'This is a planning aid. Verify the final pH with a calibrated meter at the working temperature; follow your safety data sheets and local rules. Strong acid and base titrants are corrosive; dissolving solid NaOH gives off heat; cacodylate contains arsenic.' }, cautions);
+  make(
+    'p',
+    {
+      text: 'This is a planning aid. Verify the final pH with a calibrated meter at the working temperature; follow your safety data sheets and local rules. Strong acid and base titrants are corrosive; dissolving solid NaOH gives off heat; cacodylate contains arsenic.',
+    },
+    cautions,
+  );
 
   const read = (): FormInput => {
     const out: Partial<Record<FieldName, string>> = {};

@@ -17,7 +17,6 @@ import type { TableRequest } from './form';
 import * as F from './formulas';
 import { COL, LAYOUT, TableRow, optionValues, rowCells, sheetCells } from './recipeTable';
 
-
 /** Where a table sheet names its protocol sheet (zero-based row and column of the name). */
 export const PROTOCOL_LINK = { row: 2, labelCol: 0, nameCol: 1 } as const;
 /** The protocol sheet's row-number cell (zero-based) and the first row of the RECIPE spill. */
@@ -94,7 +93,11 @@ export async function planRows(
  * @param rowNumber - the row shown first
  */
 export function protocolBlocks(tableSheet: string, rowCount: number, rowNumber: number, userSubstances: string): CellBlock[] {
-  const at = (ref: string) => ref.split(':').map((part) => `${quoteSheet(tableSheet)}!${part}`).join(':');
+  const at = (ref: string) =>
+    ref
+      .split(':')
+      .map((part) => `${quoteSheet(tableSheet)}!${part}`)
+      .join(':');
   const table = sheetCells(userSubstances);
   const settings: F.SettingCells = { ...table, buffer: at(table.buffer), options: at(table.options), salts: at(table.salts) };
   const first = LAYOUT.firstDataRow;
@@ -116,7 +119,11 @@ export function protocolBlocks(tableSheet: string, rowCount: number, rowNumber: 
       cells: [
         [{ value: `Bench protocol for a row of "${tableSheet}"`, style: 'title' }],
         [{ value: 'Type another row number to see its protocol. Every line is one live PROTON.RECIPE formula over that row and the table’s settings.', style: 'note' }],
-        [{ value: 'Table row', style: 'label' }, { value: rowNumber, style: 'input', numberFormat: '0' }, { value: `of ${rowCount}`, style: 'note' }],
+        [
+          { value: 'Table row', style: 'label' },
+          { value: rowNumber, style: 'input', numberFormat: '0' },
+          { value: `of ${rowCount}`, style: 'note' },
+        ],
         [
           { value: 'Row inputs', style: 'label' },
           { formula: `=${r.targetPh}`, numberFormat: '0.00', style: 'result' },

@@ -228,7 +228,8 @@ export function optionValues(request: TableRequest): (string | number | null)[][
 export const saltsRange = (): string => rangeAddress({ row: SALTS_BLOCK.row + 1, col: SALTS_BLOCK.col, rowCount: SALTS_BLOCK.rows, colCount: 2 });
 
 /** The sheet's recipe options as a range reference (labels and values, A:B). */
-const optionsRange = () => `${cellAddress(settingRow(OPTION_SETTINGS[0]), 0, true)}:${cellAddress(settingRow(OPTION_SETTINGS[OPTION_SETTINGS.length - 1]), SETTING_VALUE_COL, true)}`;
+const optionsRange = () =>
+  `${cellAddress(settingRow(OPTION_SETTINGS[0]), 0, true)}:${cellAddress(settingRow(OPTION_SETTINGS[OPTION_SETTINGS.length - 1]), SETTING_VALUE_COL, true)}`;
 
 /** The cells the row formulas read on every recipe sheet (the pane writes a protocol against them too). */
 export function sheetCells(userSubstances: string): F.SettingCells {
@@ -314,7 +315,11 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
   const base = { baseName: sheetBaseName(request), head, rows, columnWidths: [21, 16, 12, 22, 11, 11, 10, 10, 10, 13, 11, 13, 13, 11, 12, 11, 11, 60, 2] };
   // Curves and charts follow the titration of the first row: only the titrate route has one.
   if (request.route !== 'titrate') {
-    tail.push({ row: LAYOUT.tableHeaderRow - 1, col: COL.formGrams, cells: [[label('No titration curve: this route weighs its amounts (two forms) or titrates a stock; each row’s protocol has the steps.', 'note')]] });
+    tail.push({
+      row: LAYOUT.tableHeaderRow - 1,
+      col: COL.formGrams,
+      cells: [[label('No titration curve: this route weighs its amounts (two forms) or titrates a stock; each row’s protocol has the steps.', 'note')]],
+    });
     return { ...base, tail, charts: [] };
   }
 
@@ -378,7 +383,10 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
     col: curveCol,
     cells: [
       [label('Target', 'header'), label('Titrant (mL)', 'header')],
-      [{ formula: `=${first.targetPh}`, numberFormat: '0.00' }, { formula: `=${first.titrantMl}`, numberFormat: '0.00' }],
+      [
+        { formula: `=${first.targetPh}`, numberFormat: '0.00' },
+        { formula: `=${first.titrantMl}`, numberFormat: '0.00' },
+      ],
     ],
   });
   // Usable range: the planner's one criterion for buffering (pKa′ ± BUFFERING_HALF_WIDTH of the
@@ -393,11 +401,26 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
     col: curveCol,
     cells: [
       [label('Usable range', 'header'), label('pKa′', 'header')],
-      [label(bandText), { formula: F.pKaPrime(settingRef('Buffer system'), options.pKaStep, first, settings, cellAddress(LAYOUT.firstDataRow, COL.ionicStrength)), numberFormat: '0.00' }],
-      [{ formula: `=${pKaRef}-${half}`, numberFormat: '0.00' }, { formula: '=0', numberFormat: '0.00' }],
-      [{ formula: `=${pKaRef}-${half}`, numberFormat: '0.00' }, { formula: `=MAX(${capCol})`, numberFormat: '0.00' }],
-      [{ formula: `=${pKaRef}+${half}`, numberFormat: '0.00' }, { formula: `=MAX(${capCol})`, numberFormat: '0.00' }],
-      [{ formula: `=${pKaRef}+${half}`, numberFormat: '0.00' }, { formula: '=0', numberFormat: '0.00' }],
+      [
+        label(bandText),
+        { formula: F.pKaPrime(settingRef('Buffer system'), options.pKaStep, first, settings, cellAddress(LAYOUT.firstDataRow, COL.ionicStrength)), numberFormat: '0.00' },
+      ],
+      [
+        { formula: `=${pKaRef}-${half}`, numberFormat: '0.00' },
+        { formula: '=0', numberFormat: '0.00' },
+      ],
+      [
+        { formula: `=${pKaRef}-${half}`, numberFormat: '0.00' },
+        { formula: `=MAX(${capCol})`, numberFormat: '0.00' },
+      ],
+      [
+        { formula: `=${pKaRef}+${half}`, numberFormat: '0.00' },
+        { formula: `=MAX(${capCol})`, numberFormat: '0.00' },
+      ],
+      [
+        { formula: `=${pKaRef}+${half}`, numberFormat: '0.00' },
+        { formula: '=0', numberFormat: '0.00' },
+      ],
     ],
   });
   const chartTop = LAYOUT.tableHeaderRow;
@@ -417,7 +440,11 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
       xTitle: 'pH at use',
       yTitle: 'mM base per +0.1 pH',
       series: [{ name: 'capacity', x: gridRange(curveCol), y: gridRange(curveCol + 2) }],
-      xBand: { x: { row: bandTop + 1, col: curveCol, rowCount: 4, colCount: 1 }, y: { row: bandTop + 1, col: curveCol + 1, rowCount: 4, colCount: 1 }, label: `buffers well (${bandText})` },
+      xBand: {
+        x: { row: bandTop + 1, col: curveCol, rowCount: 4, colCount: 1 },
+        y: { row: bandTop + 1, col: curveCol + 1, rowCount: 4, colCount: 1 },
+        label: `buffers well (${bandText})`,
+      },
       anchor: { row: chartTop + LAYOUT.chartHeightRows + 1, col: LAYOUT.chartCol, rowCount: LAYOUT.chartHeightRows, colCount: LAYOUT.chartWidthCols },
     },
   ];

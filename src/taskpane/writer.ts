@@ -67,13 +67,18 @@ function checkNames(request: TableRequest, library: SubstanceLibrary): { errors:
     system = bufferSystemOf(library, request.buffer);
   } catch (error) {
     // The planner's own check: a strong electrolyte (NaCl) named as the buffer is told so rather than offered look-alikes.
-    errors.buffer = error instanceof ChemError && error.code === 'outOfRange' ? `${request.buffer} is a strong electrolyte, not a buffer system; give it as the salt.` : fieldMessage(error);
+    errors.buffer =
+      error instanceof ChemError && error.code === 'outOfRange' ? `${request.buffer} is a strong electrolyte, not a buffer system; give it as the salt.` : fieldMessage(error);
   }
   // A name that leaves the hydration state open is not resolved silently: the pane asks which form is on the shelf.
   const askHydrate = (field: keyof FieldErrors, typed: string): boolean => {
     const others = library.hydrateAlternatives(typed);
     if (others.length === 0) return false;
-    errors[field] = MESSAGES.hydrateAmbiguous(`"${typed}"`, typed, [library.findForm(typed), ...others].map((f) => `${f.name}, ${f.molarMass.toFixed(2)} g/mol`)).replace(/^"[^"]*": /, '');
+    errors[field] = MESSAGES.hydrateAmbiguous(
+      `"${typed}"`,
+      typed,
+      [library.findForm(typed), ...others].map((f) => `${f.name}, ${f.molarMass.toFixed(2)} g/mol`),
+    ).replace(/^"[^"]*": /, '');
     return true;
   };
   const ofSystem = (field: 'form' | 'acidForm' | 'baseForm', typed: string): string => {
@@ -130,7 +135,10 @@ function checkNames(request: TableRequest, library: SubstanceLibrary): { errors:
  * that was active (formulas on the new recipe sheet would otherwise point at that sheet's
  * own cells), and comes back sheet-qualified for the formulas.
  */
-async function libraryOfRequest(port: WorkbookPort, request: TableRequest): Promise<{ ok: true; library: SubstanceLibrary; userSubstances: string } | { ok: false; errors: FieldErrors }> {
+async function libraryOfRequest(
+  port: WorkbookPort,
+  request: TableRequest,
+): Promise<{ ok: true; library: SubstanceLibrary; userSubstances: string } | { ok: false; errors: FieldErrors }> {
   if (request.userSubstances === '') return { ok: true, library: defaultLibrary(), userSubstances: '' };
   const typed = parseRangeText(request.userSubstances);
   if (!typed) return { ok: false, errors: { userSubstances: "Give a range such as 'My substances'!A2:J20, or leave it blank." } };
@@ -225,7 +233,12 @@ export async function buildRecipeTable(port: WorkbookPort, form: FormInput, opti
   await port.writeTable(sheet, {
     row: PROTOCOL_LINK.row,
     col: PROTOCOL_LINK.labelCol,
-    cells: [[{ value: 'Protocol sheet', style: 'label' }, { value: protocol, style: 'note' }]],
+    cells: [
+      [
+        { value: 'Protocol sheet', style: 'label' },
+        { value: protocol, style: 'note' },
+      ],
+    ],
   });
   await port.saveSettings(settingsOf(checked.request)); // as typed, for the next form
   await port.activateSheet(sheet);
@@ -243,7 +256,8 @@ export async function showProtocol(port: WorkbookPort, rowNumber: number, tableS
   const [link] = await port.readValues(source, { row: PROTOCOL_LINK.row, col: PROTOCOL_LINK.labelCol, rowCount: 1, colCount: 2 });
   const protocol = link?.[1];
   const sheets = await port.sheetNames();
-  if (typeof protocol !== 'string' || !sheets.includes(protocol)) throw new Error(`"${source}" is not a recipe table with a protocol sheet: select a cell in a recipe table first.`);
+  if (typeof protocol !== 'string' || !sheets.includes(protocol))
+    throw new Error(`"${source}" is not a recipe table with a protocol sheet: select a cell in a recipe table first.`);
   const [count] = await port.readValues(protocol, { row: PROTOCOL_ROW_CELL.row, col: PROTOCOL_ROW_CELL.col + 1, rowCount: 1, colCount: 1 });
   const rows = Number(/\d+/.exec(String(count?.[0] ?? ''))?.[0] ?? NaN);
   if (!Number.isInteger(rowNumber) || rowNumber < 1 || (Number.isFinite(rows) && rowNumber > rows)) throw new Error(`Give a table row from 1 to ${rows}.`);
@@ -313,7 +327,14 @@ export async function valuesCopy(port: WorkbookPort, options: { version: string;
   const at = (label: (typeof SETTING_ROWS)[number]) => cellText(values[settingRow(label)]?.[SETTING_VALUE_COL]);
   const isRecipe = cellText(values[LAYOUT.tableHeaderRow]?.[0]) === LAYOUT.columns[0];
   const temps = isRecipe
-    ? [...new Set(values.slice(LAYOUT.firstDataRow).map((r) => r[1]).filter((v) => typeof v === 'number'))].join('; ')
+    ? [
+        ...new Set(
+          values
+            .slice(LAYOUT.firstDataRow)
+            .map((r) => r[1])
+            .filter((v) => typeof v === 'number'),
+        ),
+      ].join('; ')
     : '(not a recipe table)';
   const provenance: Provenance = {
     version: options.version,
@@ -335,7 +356,8 @@ export async function valuesCopy(port: WorkbookPort, options: { version: string;
       line.map((v): CellWrite | null => {
         if (v === null || v === '') return null;
         // The table's and protocol's notes about live formulas are not true of a copy.
-        if (typeof v === 'string' && LIVE_NOTES.some((note) => v.startsWith(note))) return { value: 'Values only: nothing on this sheet follows an input any more.', style: 'note' };
+        if (typeof v === 'string' && LIVE_NOTES.some((note) => v.startsWith(note)))
+          return { value: 'Values only: nothing on this sheet follows an input any more.', style: 'note' };
         const header = isRecipe && r === LAYOUT.tableHeaderRow;
         return { value: v, ...(header ? { style: 'header' as const } : {}), ...(typeof v === 'number' ? { numberFormat: '0.000' } : {}) };
       }),

@@ -71,7 +71,11 @@ export interface BatchRecordLayout {
 
 const v = (value: string | number, style: CellWrite['style'] = 'label', numberFormat?: string): CellWrite => ({ value, style, ...(numberFormat ? { numberFormat } : {}) });
 const blankInput = (numberFormat?: string): CellWrite => ({ value: null, style: 'input', ...(numberFormat ? { numberFormat } : {}) });
-const f = (formula: string, style: CellWrite['style'] = 'result', numberFormat?: string): CellWrite => ({ formula: `=${formula}`, style, ...(numberFormat ? { numberFormat } : {}) });
+const f = (formula: string, style: CellWrite['style'] = 'result', numberFormat?: string): CellWrite => ({
+  formula: `=${formula}`,
+  style,
+  ...(numberFormat ? { numberFormat } : {}),
+});
 const mirror = (at: CellAt) => `IF(ISBLANK(${cellAddress(at.row, at.col)}),"",${cellAddress(at.row, at.col)})`;
 
 /** The recipe options a plan was made with, as option rows (name, value), positional fields and salts left out. */
@@ -124,7 +128,11 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
   recipeLine('volumeMl', 'Final volume (mL)', plan.volumeMl);
   recipeLine('useTemperatureC', 'Use at (°C)', useT);
   const salts = plan.components.filter((c) => c.role === 'salt' && input.saltTarget === undefined);
-  const fixedSalts = Array.isArray(input.salts) ? input.salts : typeof input.salts === 'string' ? salts.map((s) => ({ form: s.name, concentrationMm: s.concentrationMm ?? 0 })) : [];
+  const fixedSalts = Array.isArray(input.salts)
+    ? input.salts
+    : typeof input.salts === 'string'
+      ? salts.map((s) => ({ form: s.name, concentrationMm: s.concentrationMm ?? 0 }))
+      : [];
   const saltStart = here();
   add(v('Salts (form, mM)', 'header'), v('', 'header'));
   for (const s of fixedSalts) add({ value: s.form, style: 'provenance' }, { value: Number(s.concentrationMm) || (s.concentrationMm as unknown as string), style: 'provenance' });
@@ -143,7 +151,14 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
   const purity: CellAt[] = [];
   for (const c of plan.components.filter((x) => x.grams !== undefined)) {
     const row = here();
-    add(v(`${c.role}: ${c.name}`), v(c.formula ?? ''), blankInput(), { value: c.purityPercent ?? 100, style: 'input', numberFormat: '0.0' }, v(`${formatGrams(c.grams!)} g`, 'result'), blankInput('0.000'));
+    add(
+      v(`${c.role}: ${c.name}`),
+      v(c.formula ?? ''),
+      blankInput(),
+      { value: c.purityPercent ?? 100, style: 'input', numberFormat: '0.0' },
+      v(`${formatGrams(c.grams!)} g`, 'result'),
+      blankInput('0.000'),
+    );
     grams.push({ form: c.name, at: { row, col: 5 } });
     purity.push({ row, col: 3 });
     actuals.push([v(c.name), f(mirror({ row, col: 5 }), 'note'), f(mirror({ row, col: 3 }), 'note')]);
@@ -152,7 +167,14 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
   let titrantStandardisedM: CellAt | undefined;
   if (t) {
     const row = here();
-    add(v(`titrant: ${t.stockM} M ${t.titrant}`), v(plan.components.find((c) => c.role === 'titrant')?.formula ?? ''), blankInput(), v('—'), v(`${formatMl(t.volumeMl)} mL`, 'result'), blankInput('0.00'));
+    add(
+      v(`titrant: ${t.stockM} M ${t.titrant}`),
+      v(plan.components.find((c) => c.role === 'titrant')?.formula ?? ''),
+      blankInput(),
+      v('—'),
+      v(`${formatMl(t.volumeMl)} mL`, 'result'),
+      blankInput('0.00'),
+    );
     titrantMl = { row, col: 5 };
     actuals.push([v('actual.titrantMl'), f(mirror(titrantMl), 'note')]);
     const srow = here();
@@ -191,7 +213,14 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
   const phCell = cellAddress(finalPh.row, finalPh.col);
   const tolCell = cellAddress(tolPh.row, tolPh.col);
   const target = cellAddress(recipeAt.targetPh.row, recipeAt.targetPh.col);
-  add(v(`pH at ${useT} °C`), v(`${plan.targetPh.toFixed(2)} ± tolerance`), blankInput('0.00'), v(''), { value: DEFAULT_PH_TOLERANCE, style: 'input', numberFormat: '0.00' }, f(`IF(ISBLANK(${phCell}),"",IF(ABS(${phCell}-${target})<=${tolCell},"PASS","FAIL"))`));
+  add(
+    v(`pH at ${useT} °C`),
+    v(`${plan.targetPh.toFixed(2)} ± tolerance`),
+    blankInput('0.00'),
+    v(''),
+    { value: DEFAULT_PH_TOLERANCE, style: 'input', numberFormat: '0.00' },
+    f(`IF(ISBLANK(${phCell}),"",IF(ABS(${phCell}-${target})<=${tolCell},"PASS","FAIL"))`),
+  );
   actuals.push([v('actual.finalPh'), f(mirror(finalPh), 'note')]);
   actuals.push([v('tolerance.ph'), f(mirror(tolPh), 'note')]);
   const krow = here();
@@ -200,7 +229,14 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
   const kCell = cellAddress(krow, 2);
   const kTol = cellAddress(krow, 4);
   const kappa = Number(p.conductivity25MsPerCm.toPrecision(4));
-  add(v('Conductivity at 25 °C (mS/cm)'), v(`${kappa} ± tolerance %`), blankInput('0.00'), v(''), { value: DEFAULT_CONDUCTIVITY_TOLERANCE_PERCENT, style: 'input', numberFormat: '0' }, f(`IF(ISBLANK(${kCell}),"",IF(ABS(${kCell}-${kappa})<=${kappa}*${kTol}/100,"PASS","FAIL"))`));
+  add(
+    v('Conductivity at 25 °C (mS/cm)'),
+    v(`${kappa} ± tolerance %`),
+    blankInput('0.00'),
+    v(''),
+    { value: DEFAULT_CONDUCTIVITY_TOLERANCE_PERCENT, style: 'input', numberFormat: '0' },
+    f(`IF(ISBLANK(${kCell}),"",IF(ABS(${kCell}-${kappa})<=${kappa}*${kTol}/100,"PASS","FAIL"))`),
+  );
   actuals.push([v('actual.conductivity25MsPerCm'), f(mirror(conductivity25), 'note')]);
   actuals.push([v('tolerance.conductivityPercent'), f(mirror(tolK), 'note')]);
   const osmolality = osmolalityOf(plan);
@@ -215,7 +251,9 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
   const checkAt = { row: here(), col: 0 };
   const actualsRange = rangeAddress({ row: 0, col: ACTUALS_COL, rowCount: actuals.length, colCount: 3 });
   const cell = (k: string) => cellAddress(recipeAt[k].row, recipeAt[k].col);
-  add(f(`${call('AS.MADE', cell('buffer'), cell('targetPh'), cell('concentrationMm'), cell('volumeMl'), actualsRange, cell('useTemperatureC'), saltRange, optionRange)}`, 'result'));
+  add(
+    f(`${call('AS.MADE', cell('buffer'), cell('targetPh'), cell('concentrationMm'), cell('volumeMl'), actualsRange, cell('useTemperatureC'), saltRange, optionRange)}`, 'result'),
+  );
   for (let i = 1; i < CHECK_ROWS; i++) add();
 
   add(v('Sign-off', 'subtitle'));
@@ -238,7 +276,18 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
     ],
     widths: [...RECORD_COLUMN_WIDTHS, 2, 30, 10, 10],
     printArea,
-    inputs: { grams, purity, ...(titrantMl ? { titrantMl } : {}), ...(titrantStandardisedM ? { titrantStandardisedM } : {}), finalVolumeMl, benchTemperatureC, meterPh, finalPh, conductivity25, tolerancePh: tolPh },
+    inputs: {
+      grams,
+      purity,
+      ...(titrantMl ? { titrantMl } : {}),
+      ...(titrantStandardisedM ? { titrantStandardisedM } : {}),
+      finalVolumeMl,
+      benchTemperatureC,
+      meterPh,
+      finalPh,
+      conductivity25,
+      tolerancePh: tolPh,
+    },
     checkAt,
   };
 }

@@ -161,7 +161,10 @@ export class ExcelAdapter implements WorkbookPort {
         band.format.line.color = '#7AA6A0';
         band.format.line.lineStyle = Excel.ChartLineStyle.dash;
       }
-      made.setPosition(rangeAddress({ ...chart.anchor, rowCount: 1, colCount: 1 }), rangeAddress({ row: chart.anchor.row + chart.anchor.rowCount - 1, col: chart.anchor.col + chart.anchor.colCount - 1, rowCount: 1, colCount: 1 }));
+      made.setPosition(
+        rangeAddress({ ...chart.anchor, rowCount: 1, colCount: 1 }),
+        rangeAddress({ row: chart.anchor.row + chart.anchor.rowCount - 1, col: chart.anchor.col + chart.anchor.colCount - 1, rowCount: 1, colCount: 1 }),
+      );
       await context.sync();
     });
   }

@@ -27,11 +27,13 @@ export class FileRefused extends Error {}
 /** The messages of a refused file. */
 export const FILE_MESSAGES = {
   textTooLong: (where: string, length: number) => `${where}: a text of ${length.toLocaleString('en-US')} characters; a cell holds up to ${MAX_CELL_CHARS.toLocaleString('en-US')}.`,
-  formulaTooLong: (where: string, length: number) => `${where}: a formula of ${length.toLocaleString('en-US')} characters; a formula may have up to ${MAX_FORMULA_CHARS.toLocaleString('en-US')}.`,
+  formulaTooLong: (where: string, length: number) =>
+    `${where}: a formula of ${length.toLocaleString('en-US')} characters; a formula may have up to ${MAX_FORMULA_CHARS.toLocaleString('en-US')}.`,
   formulaTooDeep: (where: string, depth: number, limit: number) => `${where}: a formula nested ${depth} levels deep; a formula may nest up to ${limit} levels.`,
   formulaTooManyOperators: (where: string, operators: number, limit: number) =>
     `${where}: a formula with ${operators.toLocaleString('en-US')} operators; up to ${limit} can be computed in one formula (split it over several cells).`,
-  tooManyCells: (count: number, limit: number) => `The file has more than ${limit.toLocaleString('en-US')} cells with content (at least ${count.toLocaleString('en-US')}); split it into smaller files.`,
+  tooManyCells: (count: number, limit: number) =>
+    `The file has more than ${limit.toLocaleString('en-US')} cells with content (at least ${count.toLocaleString('en-US')}); split it into smaller files.`,
 } as const;
 
 /** Refuses a formula past the formula limits, naming the cell. */

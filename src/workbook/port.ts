@@ -124,7 +124,12 @@ const FORBIDDEN_SHEET_CHARS = /[\\/?*[\]:]/g;
  * @example uniqueName('HEPES pH 7.4', ['HEPES pH 7.4']) // 'HEPES pH 7.4 (2)'
  */
 export function uniqueName(base: string, taken: readonly string[]): string {
-  const clean = base.replace(FORBIDDEN_SHEET_CHARS, ' ').replace(/\s+/g, ' ').replace(/^'+|'+$/g, '').trim() || 'Sheet';
+  const clean =
+    base
+      .replace(FORBIDDEN_SHEET_CHARS, ' ')
+      .replace(/\s+/g, ' ')
+      .replace(/^'+|'+$/g, '')
+      .trim() || 'Sheet';
   const used = new Set(taken.map((n) => n.toLowerCase()));
   const first = clean.slice(0, MAX_SHEET_NAME_LENGTH).trim();
   if (!used.has(first.toLowerCase())) return first;

@@ -32,10 +32,22 @@ export const PRINT_STYLES: Readonly<Record<CellStyle, Readonly<Record<string, st
 export const PAGE_STYLE: Readonly<Record<string, string>> = { 'font-family': 'Segoe UI, Helvetica, Arial, sans-serif', 'font-size': '7.5pt', 'line-height': '1.2', color: '#111' };
 
 /** Style of every printed cell. */
-export const CELL_STYLE: Readonly<Record<string, string>> = { padding: '1pt 3pt', 'vertical-align': 'top', overflow: 'hidden', 'white-space': 'nowrap', 'text-overflow': 'ellipsis', 'font-size': '7.5pt', 'line-height': '1.2', height: 'auto' };
+export const CELL_STYLE: Readonly<Record<string, string>> = {
+  padding: '1pt 3pt',
+  'vertical-align': 'top',
+  overflow: 'hidden',
+  'white-space': 'nowrap',
+  'text-overflow': 'ellipsis',
+  'font-size': '7.5pt',
+  'line-height': '1.2',
+  height: 'auto',
+};
 
 const escapeHtml = (s: string) => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
-const css = (o: Readonly<Record<string, string>>) => Object.entries(o).map(([k, v]) => `${k}: ${v}`).join('; ');
+const css = (o: Readonly<Record<string, string>>) =>
+  Object.entries(o)
+    .map(([k, v]) => `${k}: ${v}`)
+    .join('; ');
 
 /** True when a printed row is one long text (a title, a caution) to run across the page. */
 export function spansRow(row: readonly PrintCell[]): boolean {
@@ -62,7 +74,9 @@ export function printPageHtml(title: string, rows: readonly (readonly PrintCell[
       return `<tr>${cells.join('')}</tr>`;
     })
     .join('\n');
-  const styles = Object.entries(PRINT_STYLES).map(([k, v]) => `td.s-${k} { ${css(v)} }`).join('\n');
+  const styles = Object.entries(PRINT_STYLES)
+    .map(([k, v]) => `td.s-${k} { ${css(v)} }`)
+    .join('\n');
   return `<!doctype html>
 <html lang="en"><head><meta charset="utf-8"><title>${escapeHtml(title)}</title>
 <style>

@@ -6,7 +6,23 @@
  */
 import { ChemError } from '../../src/chem';
 import { SheetError } from '../../src/functions/errors';
-import { capacityOf, forms, grams, ionicStrengthMm, osmolarityIdeal, ph, phAtTemperature, phDiluted, pka, recipe, recipeRow, species, substances, titrantMl, warnings } from '../../src/functions/functions';
+import {
+  capacityOf,
+  forms,
+  grams,
+  ionicStrengthMm,
+  osmolarityIdeal,
+  ph,
+  phAtTemperature,
+  phDiluted,
+  pka,
+  recipe,
+  recipeRow,
+  species,
+  substances,
+  titrantMl,
+  warnings,
+} from '../../src/functions/functions';
 
 /** Each of these calls is refused after reading a little of its input; 300 ms leaves room for a loaded machine (the old name search took 7 s). */
 const CALL_BOUND_MS = 300;

@@ -138,7 +138,17 @@ describe('preview server: every request answered, never a crash', () => {
   });
 
   it('answers only to the loopback names with our port (DNS rebinding), and to each of them', async () => {
-    for (const host of ['evil.example', `evil.example:${port}`, `localhost.evil.example:${port}`, `localhost:${port + 1}`, 'localhost', `127.0.0.2:${port}`, `[::2]:${port}`, `0.0.0.0:${port}`, '']) {
+    for (const host of [
+      'evil.example',
+      `evil.example:${port}`,
+      `localhost.evil.example:${port}`,
+      `localhost:${port + 1}`,
+      'localhost',
+      `127.0.0.2:${port}`,
+      `[::2]:${port}`,
+      `0.0.0.0:${port}`,
+      '',
+    ]) {
       const reply = await get('/', host);
       expect([host, reply.status]).toEqual([host, 421]);
       expectSecurityHeaders(reply);

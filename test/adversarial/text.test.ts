@@ -43,7 +43,7 @@ describe('formula conversion for the engine (saved custom-function names)', () =
   });
 
   it('still renames saved names, behind each kind of external reference', () => {
-    expect(toEngineFormula("[1]!_xldudf_PROTON_PH_OF(A1:B2)+Other.xla!_xldudf_PROTON_GRAMS(\"NaCl\",1,1)+'Other add-in.xlam'!_xldudf_PROTON_PKA(\"tris\")")).toBe(
+    expect(toEngineFormula('[1]!_xldudf_PROTON_PH_OF(A1:B2)+Other.xla!_xldudf_PROTON_GRAMS("NaCl",1,1)+\'Other add-in.xlam\'!_xldudf_PROTON_PKA("tris")')).toBe(
       'PROTON.PH.OF(A1:B2)+PROTON.GRAMS("NaCl",1,1)+PROTON.PKA("tris")',
     );
     expect(toEngineFormula('_xlfn.XLOOKUP(1,A:A,B:B)+_xldudf_NOT_OURS(1)')).toBe('XLOOKUP(1,A:A,B:B)+_xldudf_NOT_OURS(1)');
@@ -84,7 +84,9 @@ describe('"did you mean" on long names', () => {
 });
 
 describe('user-substance columns', () => {
-  const row = (counterIons: unknown, formula: unknown = '', pKa: unknown = '7') => [['MyAmine', 0, pKa, '', '', 'MyAmine salt', formula === '' ? 100 : '', counterIons, '', formula]];
+  const row = (counterIons: unknown, formula: unknown = '', pKa: unknown = '7') => [
+    ['MyAmine', 0, pKa, '', '', 'MyAmine salt', formula === '' ? 100 : '', counterIons, '', formula],
+  ];
 
   it.each([
     ['20,000 blanks inside', `Na${' '.repeat(20_000)}x`],

@@ -59,7 +59,12 @@ describe('the grid: right answers at its edges, a clear error beyond', () => {
   }, 30000);
 
   it('the same sheet as CSV is refused: the CSV would hold the whole grid', async () => {
-    await refused(book([{ data: row(1, cell('A1', { n: 1 })) + row(1048576, cell('XFD1048576', { n: 41 })) }]), /spans 1,048,576 rows by 16,384 columns; calc writes CSV of up to 200,000 cells/, 'xlsx', 'csv');
+    await refused(
+      book([{ data: row(1, cell('A1', { n: 1 })) + row(1048576, cell('XFD1048576', { n: 41 })) }]),
+      /spans 1,048,576 rows by 16,384 columns; calc writes CSV of up to 200,000 cells/,
+      'xlsx',
+      'csv',
+    );
   }, 30000);
 
   it.each([
@@ -74,11 +79,27 @@ describe('the grid: right answers at its edges, a clear error beyond', () => {
 
 describe('merges, validation rules and array formulas over huge ranges', () => {
   it.each([
-    ['a merge over C1:XFD1048576', '<mergeCells count="1"><mergeCell ref="C1:XFD1048576"/></mergeCells>', /merged range C1:XFD1048576 covers 17,177,772,032 cells; calc reads merged ranges covering up to 50,000 cells/],
+    [
+      'a merge over C1:XFD1048576',
+      '<mergeCells count="1"><mergeCell ref="C1:XFD1048576"/></mergeCells>',
+      /merged range C1:XFD1048576 covers 17,177,772,032 cells; calc reads merged ranges covering up to 50,000 cells/,
+    ],
     ['a merge over one whole column', '<mergeCells count="1"><mergeCell ref="C1:C1048576"/></mergeCells>', /merged range C1:C1048576 covers 1,048,576 cells/],
-    ['many small merges adding up', `<mergeCells>${Array.from({ length: 30 }, (_, i) => `<mergeCell ref="A${i * 10 + 3}:XFD${i * 10 + 3}"/>`).join('')}</mergeCells>`, /calc reads merged ranges covering up to 50,000 cells in all/],
-    ['a data-validation rule over the whole sheet', '<dataValidations count="1"><dataValidation type="whole" sqref="A1:XFD1048576"><formula1>1</formula1></dataValidation></dataValidations>', /data-validation rule over A1:XFD1048576 covers 17,179,869,184 cells/],
-    ['a data-validation rule over two whole columns', '<dataValidations count="1"><dataValidation type="whole" sqref="C1:C1048576 E1:E1048576"><formula1>1</formula1></dataValidation></dataValidations>', /data-validation rule over E1:E1048576/],
+    [
+      'many small merges adding up',
+      `<mergeCells>${Array.from({ length: 30 }, (_, i) => `<mergeCell ref="A${i * 10 + 3}:XFD${i * 10 + 3}"/>`).join('')}</mergeCells>`,
+      /calc reads merged ranges covering up to 50,000 cells in all/,
+    ],
+    [
+      'a data-validation rule over the whole sheet',
+      '<dataValidations count="1"><dataValidation type="whole" sqref="A1:XFD1048576"><formula1>1</formula1></dataValidation></dataValidations>',
+      /data-validation rule over A1:XFD1048576 covers 17,179,869,184 cells/,
+    ],
+    [
+      'a data-validation rule over two whole columns',
+      '<dataValidations count="1"><dataValidation type="whole" sqref="C1:C1048576 E1:E1048576"><formula1>1</formula1></dataValidation></dataValidations>',
+      /data-validation rule over E1:E1048576/,
+    ],
   ])('%s: a clear error at once', async (_label, after, pattern) => {
     await refused(book([{ data: twoCells, after }]), pattern);
   });
@@ -88,12 +109,17 @@ describe('merges, validation rules and array formulas over huge ranges', () => {
   });
 
   it('a worksheet part the workbook does not list is still checked (the reader takes it anyway)', async () => {
-    const hidden: Part = { name: 'xl/worksheets/sheet9.xml', data: `<worksheet xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><sheetData/><mergeCells><mergeCell ref="A1:XFD1048576"/></mergeCells></worksheet>` };
+    const hidden: Part = {
+      name: 'xl/worksheets/sheet9.xml',
+      data: `<worksheet xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><sheetData/><mergeCells><mergeCell ref="A1:XFD1048576"/></mergeCells></worksheet>`,
+    };
     await refused(book([{ data: twoCells }], [hidden]), /xl\/worksheets\/sheet9\.xml": the merged range/);
   });
 
   it('a sum over a merged range counts its value once (the other cells of a merge are empty)', async () => {
-    const { code, output } = await calc(book([{ data: row(1, cell('A1', { n: 5 }) + cell('D1', { f: 'SUM(A1:C1)' })), after: '<mergeCells count="1"><mergeCell ref="A1:C1"/></mergeCells>' }]));
+    const { code, output } = await calc(
+      book([{ data: row(1, cell('A1', { n: 5 }) + cell('D1', { f: 'SUM(A1:C1)' })), after: '<mergeCells count="1"><mergeCell ref="A1:C1"/></mergeCells>' }]),
+    );
     expect(code).toBe(0);
     expect(await valueOf(output, 'D1')).toBe(5);
   });
@@ -124,7 +150,15 @@ describe('texts and formulas', () => {
     [
       'a shared text in runs',
       (t: string) =>
-        book([{ data: row(1, '<c r="A1" t="s"><v>0</v></c>') }], [{ name: 'xl/sharedStrings.xml', data: `<sst xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><si><r><t>${t.slice(0, 20000)}</t></r><r><t>${t.slice(20000)}</t></r></si></sst>` }]),
+        book(
+          [{ data: row(1, '<c r="A1" t="s"><v>0</v></c>') }],
+          [
+            {
+              name: 'xl/sharedStrings.xml',
+              data: `<sst xmlns="http://schemas.openxmlformats.org/spreadsheetml/2006/main"><si><r><t>${t.slice(0, 20000)}</t></r><r><t>${t.slice(20000)}</t></r></si></sst>`,
+            },
+          ],
+        ),
       /A shared text of the workbook: a text of 40,000 characters/,
     ],
   ])('%s over 32,767 characters is refused', async (_label, make, pattern) => {
@@ -235,12 +269,16 @@ describe('the package itself', () => {
     ['an empty file', () => Buffer.alloc(0), /no zip directory/],
     ['a zip cut in half', () => book([{ data: twoCells }]).subarray(0, 700), /not a readable \.xlsx workbook/],
     ['a zip without a workbook part', () => zip([{ name: 'hello.txt', data: 'hi' }]), /no xl\/workbook\.xml/],
-    ['a part packed with an unknown method', () => {
-      const file = book([{ data: twoCells }]);
-      const central = file.indexOf(Buffer.from([0x50, 0x4b, 0x01, 0x02]));
-      file.writeUInt16LE(99, central + 10);
-      return file;
-    }, /packed with method 99/],
+    [
+      'a part packed with an unknown method',
+      () => {
+        const file = book([{ data: twoCells }]);
+        const central = file.indexOf(Buffer.from([0x50, 0x4b, 0x01, 0x02]));
+        file.writeUInt16LE(99, central + 10);
+        return file;
+      },
+      /packed with method 99/,
+    ],
   ])('%s: a clear error', async (_label, make, pattern) => {
     await refused(make(), pattern);
   });
@@ -260,7 +298,14 @@ describe('CSV input', () => {
     ['quotes, doubled quotes, CRLF, LF and CR', 'a,"b,""c""",d\r\ne\nf\rg', [['a', 'b,"c"', 'd'], ['e'], ['f'], ['g']]],
     ['a quote in the middle of a field opens quoted text', 'x"y,z"w,v\n', [['xy,zw', 'v']]],
     ['an unterminated quote runs to the end', 'a,"b\nc', [['a', 'b\nc']]],
-    ['empty fields and a trailing separator', ',,\r\n,', [['', '', ''], ['', '']]],
+    [
+      'empty fields and a trailing separator',
+      ',,\r\n,',
+      [
+        ['', '', ''],
+        ['', ''],
+      ],
+    ],
     ['20 MB in one quoted field', `"${'q'.repeat(20 * MB)}`, [['q'.repeat(20 * MB)]]],
   ])('splits %s', (_label, text, rows) => {
     expect(parseCsv(text)).toEqual(rows);
@@ -271,9 +316,13 @@ describe('CSV input', () => {
     ['a formula of 9,000 characters', `1,=${'1+'.repeat(4500)}1\r\n`, /B1 of the CSV file: a formula of 9,002 characters/],
     ['a formula nested 4,000 deep', `=${'('.repeat(4000)}1${')'.repeat(4000)}\r\n`, /A1 of the CSV file: a formula nested 4,000 levels deep/],
     ['one field more than the limit', `${'1,'.repeat(MAX_CELLS)}1\r\n`, /The CSV file has more than 200,000 fields/],
-  ])('%s: a clear error', async (_label, text, pattern) => {
-    await refused(text, pattern, 'csv');
-  }, 30000);
+  ])(
+    '%s: a clear error',
+    async (_label, text, pattern) => {
+      await refused(text, pattern, 'csv');
+    },
+    30000,
+  );
 
   it('200 fields of 30,000 digits and a letter are read as text in linear time (each took 1.7 s)', async () => {
     const field = `${'1'.repeat(30_000)}x`;

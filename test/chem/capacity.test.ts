@@ -4,7 +4,7 @@ import { ACETATE, CITRATE, PHOSPHATE, TRIS, expectClose } from './fixtures';
 describe('buffer capacity', () => {
   const acetate: Composition = { systems: [{ ...ACETATE, totalM: 0.1 }], strongIons: { 'Na+': 0.05 } };
 
-  it('ideal model: β from the solver equals Van Slyke\'s closed form (Van Slyke 1922) within 1e-6 relative', () => {
+  it("ideal model: β from the solver equals Van Slyke's closed form (Van Slyke 1922) within 1e-6 relative", () => {
     const comp: Composition = { ...acetate, activityModel: 'ideal' };
     const c = capacity(comp);
     const vanSlyke = idealCapacityAt(comp, c.pH);
@@ -15,7 +15,7 @@ describe('buffer capacity', () => {
     expectClose('beta', idealCapacityAt({ systems: [{ ...ACETATE, totalM: 0.1 }] }, 4.756), (Math.LN10 * 0.1) / 4, 2e-4);
   });
 
-  it('polyprotic: citrate\'s ideal capacity is the variance form, positive and larger than any single step\'s share', () => {
+  it("polyprotic: citrate's ideal capacity is the variance form, positive and larger than any single step's share", () => {
     const comp: Composition = { systems: [{ ...CITRATE, totalM: 0.05 }] };
     expect(idealCapacityAt(comp, 4.8)).toBeGreaterThan((Math.LN10 * 0.05) / 4);
   });

@@ -55,12 +55,20 @@ describe('metal complexes', () => {
 });
 
 describe('every warning together', () => {
-  it('keeps the solver warnings first, then weak buffering, then metals, then the temperature against each step\'s data', () => {
+  it("keeps the solver warnings first, then weak buffering, then metals, then the temperature against each step's data", () => {
     // Acetate just past its equivalence point with a trace of sulfate (HSO4− pKa about 1.99, a value recalled from memory): nothing buffers near pH 8.
     const sulfate = { name: 'sulfate', chargeOfMostProtonated: -1, steps: [{ pKa: 1.99 }] };
     // A trace of a weak acid without ΔH° about two units above that pH (8.1): it does not buffer there, but lies close enough to be warned about at 70 °C.
     const trace = { name: 'trace acid', chargeOfMostProtonated: 0, steps: [{ pKa: 10.5 }] };
-    const c: Composition = { systems: [{ ...ACETATE, totalM: 0.05 }, { ...sulfate, totalM: 0.001 }, { ...trace, totalM: 0.0001 }], strongIons: { 'Na+': 0.85001, 'Cl-': 0.8, 'Ca2+': 0.001 }, temperatureC: 70 };
+    const c: Composition = {
+      systems: [
+        { ...ACETATE, totalM: 0.05 },
+        { ...sulfate, totalM: 0.001 },
+        { ...trace, totalM: 0.0001 },
+      ],
+      strongIons: { 'Na+': 0.85001, 'Cl-': 0.8, 'Ca2+': 0.001 },
+      temperatureC: 70,
+    };
     const result = speciate(c);
     expect(result.pH).toBeGreaterThan(7.5);
     expect(result.pH).toBeLessThan(8.5);

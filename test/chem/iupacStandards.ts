@@ -62,7 +62,10 @@ export const PRIMARY_STANDARDS: readonly PrimaryStandard[] = [
   {
     id: 'phosphate1to1',
     name: 'KH2PO4 + Na2HPO4 0.025 + 0.025 mol/kg',
-    forms: [['KH2PO4', 0.025], ['Na2HPO4', 0.025]],
+    forms: [
+      ['KH2PO4', 0.025],
+      ['Na2HPO4', 0.025],
+    ],
     pHS: [6.984, 6.951, 6.923, 6.9, 6.881, 6.865, 6.853, 6.844, 6.841, 6.838, 6.833],
     dilutionValue: 0.08,
     bufferValue: 0.029,
@@ -70,7 +73,10 @@ export const PRIMARY_STANDARDS: readonly PrimaryStandard[] = [
   {
     id: 'phosphate1to3.5',
     name: 'KH2PO4 + Na2HPO4 0.008695 + 0.03043 mol/kg',
-    forms: [['KH2PO4', 0.008695], ['Na2HPO4', 0.03043]],
+    forms: [
+      ['KH2PO4', 0.008695],
+      ['Na2HPO4', 0.03043],
+    ],
     pHS: [7.534, 7.5, 7.472, 7.448, 7.429, 7.413, 7.4, 7.389, 7.386, 7.38, 7.367],
     dilutionValue: 0.07,
     bufferValue: 0.016,
@@ -86,7 +92,10 @@ export const PRIMARY_STANDARDS: readonly PrimaryStandard[] = [
   {
     id: 'carbonate',
     name: 'NaHCO3 + Na2CO3 0.025 + 0.025 mol/kg',
-    forms: [['NaHCO3', 0.025], ['Na2CO3', 0.025]],
+    forms: [
+      ['NaHCO3', 0.025],
+      ['Na2CO3', 0.025],
+    ],
     pHS: [10.317, 10.245, 10.179, 10.118, 10.062, 10.012, 9.966, 9.925, 9.91, 9.889, 9.828],
     dilutionValue: 0.079,
     bufferValue: 0.029,

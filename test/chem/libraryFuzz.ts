@@ -18,7 +18,10 @@ export const libraryComposition: fc.Arbitrary<Composition> = fc
     activityModel: fc.constantFrom('davies' as const, 'ideal' as const, 'bates-guggenheim' as const),
   })
   .map(({ items, temperatureC, activityModel }) =>
-    library.compositionFromForms(items.map((i) => ({ form: i.form, concentrationM: i.mM / 1000 })), { temperatureC, activityModel }),
+    library.compositionFromForms(
+      items.map((i) => ({ form: i.form, concentrationM: i.mM / 1000 })),
+      { temperatureC, activityModel },
+    ),
   );
 
 /** Bound on the charge-balance residual, relative to the total ionic charge: far below any effect on a printed pH (docs/science.md, Methods). */

@@ -20,8 +20,16 @@ const PRIMARY_STANDARD_TOLERANCE = 0.015;
  */
 const PRIMARY_STANDARDS: { name: string; composition: Composition; pH: number }[] = [
   { name: 'potassium hydrogen phthalate 0.05 mol/kg', pH: pHSAt25('phthalate'), composition: { systems: [{ ...PHTHALATE, totalM: 0.05 }], strongIons: { 'K+': 0.05 } } },
-  { name: 'KH2PO4 + Na2HPO4 0.025 + 0.025 mol/kg', pH: pHSAt25('phosphate1to1'), composition: { systems: [{ ...PHOSPHATE, totalM: 0.05 }], strongIons: { 'K+': 0.025, 'Na+': 0.05 } } },
-  { name: 'KH2PO4 + Na2HPO4 0.008695 + 0.03043 mol/kg', pH: pHSAt25('phosphate1to3.5'), composition: { systems: [{ ...PHOSPHATE, totalM: 0.008695 + 0.03043 }], strongIons: { 'K+': 0.008695, 'Na+': 2 * 0.03043 } } },
+  {
+    name: 'KH2PO4 + Na2HPO4 0.025 + 0.025 mol/kg',
+    pH: pHSAt25('phosphate1to1'),
+    composition: { systems: [{ ...PHOSPHATE, totalM: 0.05 }], strongIons: { 'K+': 0.025, 'Na+': 0.05 } },
+  },
+  {
+    name: 'KH2PO4 + Na2HPO4 0.008695 + 0.03043 mol/kg',
+    pH: pHSAt25('phosphate1to3.5'),
+    composition: { systems: [{ ...PHOSPHATE, totalM: 0.008695 + 0.03043 }], strongIons: { 'K+': 0.008695, 'Na+': 2 * 0.03043 } },
+  },
   // Borax Na2B4O7·10H2O dissolves to 2 B(OH)3 + 2 B(OH)4− + 2 Na+ (common practice).
   { name: 'borax 0.01 mol/kg', pH: pHSAt25('borax'), composition: { systems: [{ ...BORATE, totalM: 0.04 }], strongIons: { 'Na+': 0.02 } } },
   { name: 'NaHCO3 + Na2CO3 0.025 + 0.025 mol/kg', pH: pHSAt25('carbonate'), composition: { systems: [{ ...CARBONATE, totalM: 0.05 }], strongIons: { 'Na+': 0.075 } } },
@@ -49,7 +57,7 @@ describe('speciate', () => {
     expectClose('I', r.ionicStrengthM, fromSpecies, 1e-12);
   });
 
-  it('mass balance: each system\'s species add up to its total', () => {
+  it("mass balance: each system's species add up to its total", () => {
     const r = speciate(buffer);
     const phos = r.species.filter((s) => s.system === 'phosphate').reduce((a, s) => a + s.concentrationM, 0);
     expectClose('phosphate total', phos, 0.05, 1e-15);
@@ -64,8 +72,20 @@ describe('speciate', () => {
   });
 
   it('apparent pKa′ of a −1 acid (phosphate step 2) falls with ionic strength, of tris (+1) rises (docs/science.md, Conventions)', () => {
-    const low = speciate({ systems: [{ ...PHOSPHATE, totalM: 0.001 }, { ...TRIS, totalM: 0.001 }], strongIons: { 'Na+': 0.0015 } });
-    const high = speciate({ systems: [{ ...PHOSPHATE, totalM: 0.001 }, { ...TRIS, totalM: 0.001 }], strongIons: { 'Na+': 0.2015, 'Cl-': 0.2 } });
+    const low = speciate({
+      systems: [
+        { ...PHOSPHATE, totalM: 0.001 },
+        { ...TRIS, totalM: 0.001 },
+      ],
+      strongIons: { 'Na+': 0.0015 },
+    });
+    const high = speciate({
+      systems: [
+        { ...PHOSPHATE, totalM: 0.001 },
+        { ...TRIS, totalM: 0.001 },
+      ],
+      strongIons: { 'Na+': 0.2015, 'Cl-': 0.2 },
+    });
     expect(high.systems[0].apparentPKa[1]).toBeLessThan(low.systems[0].apparentPKa[1] - 0.1);
     expect(high.systems[1].apparentPKa[0]).toBeGreaterThan(low.systems[1].apparentPKa[0] + 0.05);
   });

@@ -8,7 +8,7 @@ import { chemistryOf, findSystem } from '../../src/chem/library/lookup';
 const at = (name: string, temperatureC: number, totalM = 0.05) => temperatureWarnings([{ ...chemistryOf(findSystem(name)), totalM }], temperatureC);
 
 describe('temperatureWarnings', () => {
-  it('says nothing for tris at 4, 25 and 37 °C (inside Bates & Hetzer\'s 0–50 °C)', () => {
+  it("says nothing for tris at 4, 25 and 37 °C (inside Bates & Hetzer's 0–50 °C)", () => {
     for (const t of [4, 25, 37]) expect(at('tris', t)).toEqual([]);
   });
 
@@ -30,7 +30,7 @@ describe('temperatureWarnings', () => {
     expect(at('histidine', 4)).toEqual([expect.objectContaining({ code: 'noEnthalpy', steps: [1] })]);
   });
 
-  it('leaves out steps more than 3 units from the pH when it is given: histidine\'s carboxyl step in a pH 6 buffer at 4 °C', () => {
+  it("leaves out steps more than 3 units from the pH when it is given: histidine's carboxyl step in a pH 6 buffer at 4 °C", () => {
     expect(temperatureWarnings([chemistryOf(findSystem('histidine'))], 4, 'Temperature', 6)).toEqual([]);
     expect(temperatureWarnings([chemistryOf(findSystem('histidine'))], 4, 'Temperature', 4.7)).toEqual([expect.objectContaining({ code: 'noEnthalpy', steps: [1] })]);
   });

@@ -2,11 +2,11 @@ import { pKaAt } from '../../src/chem';
 import { TRIS, PHOSPHATE } from './fixtures';
 import { expectClose } from './fixtures';
 
-describe('pKa(T) by integrated van \'t Hoff with ΔCp° (Goldberg et al. 2002, eq. 5)', () => {
+describe("pKa(T) by integrated van 't Hoff with ΔCp° (Goldberg et al. 2002, eq. 5)", () => {
   it('returns the 25 °C value at 25 °C', () => {
     expectClose('tris 25', pKaAt(8.072, 47.45, -59, 25), 8.072, 1e-12);
   });
-  it('with ΔCp = 0 matches the plain van \'t Hoff form ΔpKa = ΔH/(R ln10)(1/T − 1/θ), evaluated by hand', () => {
+  it("with ΔCp = 0 matches the plain van 't Hoff form ΔpKa = ΔH/(R ln10)(1/T − 1/θ), evaluated by hand", () => {
     const t = 310.15;
     const expected = 8.072 + ((47450 / 8.314462618) * (1 / t - 1 / 298.15)) / Math.LN10;
     expectClose('tris 37 ΔCp=0', pKaAt(8.072, 47.45, 0, 37), expected, 1e-12);

@@ -13,11 +13,21 @@ function call(args: string[]): { code: number; out: any } {
 }
 
 /** Our own cold-room tris saline, titrated with 1 M HCl at 22 °C. */
-const recipe = { buffer: 'tris', targetPh: 7.5, useTemperatureC: 4, benchTemperatureC: 22, concentrationMm: 50, volumeMl: 500, form: 'tris base', titrant: 'HCl', salts: 'NaCl 150 mM' };
+const recipe = {
+  buffer: 'tris',
+  targetPh: 7.5,
+  useTemperatureC: 4,
+  benchTemperatureC: 22,
+  concentrationMm: 50,
+  volumeMl: 500,
+  form: 'tris base',
+  titrant: 'HCl',
+  salts: 'NaCl 150 mM',
+};
 const plan = planRecipe({ ...recipe, titrant: { form: 'HCl', concentrationM: 1 } });
 
 describe('proton-ledger as-made and correct', () => {
-  it('as-made prints the core\'s check and exits 0 on a pass, 1 on a fail', () => {
+  it("as-made prints the core's check and exits 0 on a pass, 1 on a fail", () => {
     const weighed = plannedAsWeighed(plan);
     const ok = call(['as-made', '--json', JSON.stringify({ recipe, actual: { weighed, titrantMl: plan.titration!.volumeMl } })]);
     expect(ok.code).toBe(0);
@@ -64,10 +74,12 @@ describe('proton-ledger record', () => {
     expect(ws.pageSetup.fitToPage).toBe(true);
     expect(ws.pageSetup.printArea).toMatch(/^A1:F\d+$/);
     let asMadeFormula = '';
-    ws.eachRow((row) => row.eachCell((cell) => {
-      const f = (cell.value as { formula?: string })?.formula;
-      if (f?.startsWith('PROTON.AS.MADE(')) asMadeFormula = f;
-    }));
+    ws.eachRow((row) =>
+      row.eachCell((cell) => {
+        const f = (cell.value as { formula?: string })?.formula;
+        if (f?.startsWith('PROTON.AS.MADE(')) asMadeFormula = f;
+      }),
+    );
     expect(asMadeFormula).toMatch(/^PROTON\.AS\.MADE\(B\d+,B\d+,B\d+,B\d+,H1:J\d+,B\d+,A\d+:B\d+,A\d+:B\d+\)$/);
   });
 

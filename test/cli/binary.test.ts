@@ -28,7 +28,12 @@ describe('the built proton-ledger binary', () => {
   // `script` (util-linux) gives the command a terminal as standard input, as a person typing it would.
   const hasScript = spawnSync('script', ['--version']).status === 0;
   (hasScript ? it : it.skip)('with a terminal and no input, prints the command’s usage instead of waiting', () => {
-    const r = spawnSync('script', ['-qec', `"${process.execPath}" "${BIN}" recipe`, '/dev/null'], { cwd: ROOT, encoding: 'utf8', timeout: 30_000, stdio: ['ignore', 'pipe', 'pipe'] });
+    const r = spawnSync('script', ['-qec', `"${process.execPath}" "${BIN}" recipe`, '/dev/null'], {
+      cwd: ROOT,
+      encoding: 'utf8',
+      timeout: 30_000,
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
     expect(r.status).toBe(0);
     expect(r.stdout).toMatch(/Usage: proton-ledger recipe/);
   });

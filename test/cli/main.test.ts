@@ -10,7 +10,11 @@ function call(args: string[]): { code: number; out: any } {
 
 describe('proton-ledger recipe: a name that leaves the hydrate open', () => {
   it('weighs the library form under that name and warns with code hydrateAssumed, naming it and its molar mass', () => {
-    const { code, out } = call(['recipe', '--json', JSON.stringify({ buffer: 'phosphate', targetPh: 7.2, concentrationMm: 50, volumeMl: 500, route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'sodium phosphate dibasic' })]);
+    const { code, out } = call([
+      'recipe',
+      '--json',
+      JSON.stringify({ buffer: 'phosphate', targetPh: 7.2, concentrationMm: 50, volumeMl: 500, route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'sodium phosphate dibasic' }),
+    ]);
     expect(code).toBe(0);
     const found = out.warnings.filter((w: { code: string }) => w.code === 'hydrateAssumed');
     expect(found).toHaveLength(1);
@@ -21,14 +25,18 @@ describe('proton-ledger recipe: a name that leaves the hydrate open', () => {
 
 describe('proton-ledger solve', () => {
   it('solves an inline composition given in mM and prints one JSON result', () => {
-    const { code, out } = call(['solve', '--json', JSON.stringify({ systems: [{ name: 'MES', chargeOfMostProtonated: 0, pKa: [6.27], totalMm: 50 }], strongIonsMm: { 'Na+': 25 }, activityModel: 'ideal' })]);
+    const { code, out } = call([
+      'solve',
+      '--json',
+      JSON.stringify({ systems: [{ name: 'MES', chargeOfMostProtonated: 0, pKa: [6.27], totalMm: 50 }], strongIonsMm: { 'Na+': 25 }, activityModel: 'ideal' }),
+    ]);
     expect(code).toBe(0);
     // Half-neutralised with the ideal model: pH = pKa within 0.001 (Henderson–Hasselbalch at 50 mM).
     expect(Math.abs(out.pH - 6.27)).toBeLessThan(0.001);
     expect(out.species.map((s: { name: string }) => s.name)).toEqual(['H+', 'OH-', 'Na+', 'MES 0', 'MES 1−']);
   });
 
-  it('adds the conductivity at the composition\'s temperature and at 25 °C, as the core computes it', () => {
+  it("adds the conductivity at the composition's temperature and at 25 °C, as the core computes it", () => {
     const composition = { systems: [], strongIonsMm: { 'K+': 10, 'Cl-': 10 }, temperatureC: 20 };
     const { code, out } = call(['solve', '--json', JSON.stringify(composition)]);
     expect(code).toBe(0);
@@ -51,7 +59,12 @@ describe('proton-ledger solve', () => {
     ['an unknown field', ['solve', '--json', '{"temperature":25}'], 'unknownField', 'temperature'],
     ['an unknown field inside a system', ['solve', '--json', '{"systems":[{"name":"x","chargeOfMostProtonated":0,"pKa":[6],"totalMM":5}]}'], 'unknownField', 'systems[0].totalMM'],
     ['a chemistry error', ['solve', '--json', '{"systems":[],"temperatureC":150,"strongIonsMm":{"Na+":1}}'], 'outOfRange', 'temperatureC'],
-    ['mismatched ΔH list', ['solve', '--json', '{"systems":[{"name":"x","chargeOfMostProtonated":0,"pKa":[4,6],"deltaHkJ":[1],"totalMm":10}]}'], 'listLengthMismatch', 'systems[0].deltaHkJ'],
+    [
+      'mismatched ΔH list',
+      ['solve', '--json', '{"systems":[{"name":"x","chargeOfMostProtonated":0,"pKa":[4,6],"deltaHkJ":[1],"totalMm":10}]}'],
+      'listLengthMismatch',
+      'systems[0].deltaHkJ',
+    ],
     ['a misspelt form', ['solve', '--json', '{"forms":[{"form":"tris bsae","mM":5}]}'], 'unknownSubstance', 'forms[0].form'],
     ['an ambiguous unit', ['solve', '--json', '{"forms":[{"form":"tris base","mM":"5 m"}]}'], 'ambiguousUnit', 'forms[0].mM'],
     ['an unknown command', ['brew'], 'unknownField', 'command'],
@@ -63,15 +76,47 @@ describe('proton-ledger solve', () => {
   });
 
   it('reads numbers with units in a composition, as the worksheet functions do', () => {
-    const typed = call(['solve', '--json', JSON.stringify({ forms: [{ form: 'tris base', mM: '0,05 M' }, { form: 'HCl', mM: '25 mM' }], temperatureC: '4 °C' })]);
-    const plain = call(['solve', '--json', JSON.stringify({ forms: [{ form: 'tris base', mM: 50 }, { form: 'HCl', mM: 25 }], temperatureC: 4 })]);
+    const typed = call([
+      'solve',
+      '--json',
+      JSON.stringify({
+        forms: [
+          { form: 'tris base', mM: '0,05 M' },
+          { form: 'HCl', mM: '25 mM' },
+        ],
+        temperatureC: '4 °C',
+      }),
+    ]);
+    const plain = call([
+      'solve',
+      '--json',
+      JSON.stringify({
+        forms: [
+          { form: 'tris base', mM: 50 },
+          { form: 'HCl', mM: 25 },
+        ],
+        temperatureC: 4,
+      }),
+    ]);
     expect(typed.out.pH).toBe(plain.out.pH);
   });
 
   it('warns when a library system is used outside the temperatures its data cover (tris at 60 °C, Bates & Hetzer measured 0–50 °C)', () => {
-    const { code, out } = call(['solve', '--json', JSON.stringify({ forms: [{ form: 'tris base', mM: 20 }, { form: 'tris HCl', mM: 30 }], temperatureC: 60 })]);
+    const { code, out } = call([
+      'solve',
+      '--json',
+      JSON.stringify({
+        forms: [
+          { form: 'tris base', mM: 20 },
+          { form: 'tris HCl', mM: 30 },
+        ],
+        temperatureC: 60,
+      }),
+    ]);
     expect(code).toBe(0);
-    expect(out.warnings).toContainEqual(expect.objectContaining({ code: 'outsideDataRange', message: expect.stringMatching(/^Temperature 60 °C lies outside 0–50 °C, the temperatures the data for tris/) }));
+    expect(out.warnings).toContainEqual(
+      expect.objectContaining({ code: 'outsideDataRange', message: expect.stringMatching(/^Temperature 60 °C lies outside 0–50 °C, the temperatures the data for tris/) }),
+    );
   });
 
   it('prints usage for help', () => {
@@ -81,13 +126,25 @@ describe('proton-ledger solve', () => {
 
 describe('proton-ledger solve with forms by name', () => {
   it('takes forms in mM or as grams in a volume: KH2PO4 + Na2HPO4 (0.025 + 0.025) solves to the IUPAC 6.865 standard within 0.015 (Buck et al. 2002)', () => {
-    const { code, out } = call(['solve', '--json', JSON.stringify({ forms: [{ form: 'KH2PO4', mM: 25 }, { form: 'Na2HPO4', grams: 0.025 * 141.96, volumeMl: 1000 }] })]);
+    const { code, out } = call([
+      'solve',
+      '--json',
+      JSON.stringify({
+        forms: [
+          { form: 'KH2PO4', mM: 25 },
+          { form: 'Na2HPO4', grams: 0.025 * 141.96, volumeMl: 1000 },
+        ],
+      }),
+    ]);
     expect(code).toBe(0);
     expect(Math.abs(out.pH - pHSAt25('phosphate1to1'))).toBeLessThan(0.015);
   });
 
   it('lists the plain-words warnings with the result: none for a phosphate buffer, metal complexes once MgCl2 joins it', () => {
-    const phosphate = [{ form: 'Na2HPO4', mM: 30 }, { form: 'NaH2PO4·H2O', mM: 20 }];
+    const phosphate = [
+      { form: 'Na2HPO4', mM: 30 },
+      { form: 'NaH2PO4·H2O', mM: 20 },
+    ];
     expect(call(['solve', '--json', JSON.stringify({ forms: phosphate })]).out.warnings).toEqual([]);
     const withMg = call(['solve', '--json', JSON.stringify({ forms: [...phosphate, { form: 'MgCl2·6H2O', mM: 2 }] })]).out;
     expect(withMg.warnings).toEqual([expect.objectContaining({ code: 'metalComplexes', message: expect.stringMatching(/^Mg2\+ with phosphate/) })]);
@@ -101,7 +158,11 @@ describe('proton-ledger solve with forms by name', () => {
 
   it('accepts user substances', () => {
     const userSubstances = [{ name: 'lab acid Y', chargeOfMostProtonated: 0, pKa: [5.5], forms: [{ name: 'lab acid Y free acid', molarMass: 100, protonsLost: 0 }] }];
-    const { code, out } = call(['solve', '--json', JSON.stringify({ forms: [{ form: 'lab acid Y free acid', mM: 10 }], strongIonsMm: { 'Na+': 5 }, userSubstances, activityModel: 'ideal' })]);
+    const { code, out } = call([
+      'solve',
+      '--json',
+      JSON.stringify({ forms: [{ form: 'lab acid Y free acid', mM: 10 }], strongIonsMm: { 'Na+': 5 }, userSubstances, activityModel: 'ideal' }),
+    ]);
     expect(code).toBe(0);
     expect(Math.abs(out.pH - 5.5)).toBeLessThan(0.01);
   });
@@ -177,12 +238,24 @@ describe('proton-ledger help, version and batches', () => {
   it('plans a CSV batch of our own what-if table: one row per input, an impossible row keeps its error and the exit code says so', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'pl-batch-'));
     const input = join(dir, 'grid.csv');
-    writeFileSync(input, ['buffer,targetPh,concentrationMm,volumeMl,useTemperatureC,titrant.form', 'HEPES,7.2,25 mM,1 L,4,NaOH', 'HEPES,"7,6",25,1000,25,NaOH', 'HEPES,7.4,25,1000,25,HCl', 'tris,8.1,50,500,4,'].join('\n'));
+    writeFileSync(
+      input,
+      [
+        'buffer,targetPh,concentrationMm,volumeMl,useTemperatureC,titrant.form',
+        'HEPES,7.2,25 mM,1 L,4,NaOH',
+        'HEPES,"7,6",25,1000,25,NaOH',
+        'HEPES,7.4,25,1000,25,HCl',
+        'tris,8.1,50,500,4,',
+      ].join('\n'),
+    );
     const out = join(dir, 'grid.jsonl');
     const result = await cli(['recipe', '--batch', input, '-o', out]);
     expect(result.code).toBe(1);
     expect(JSON.parse(result.text)).toEqual({ rows: 4, planned: 3, failed: 1, output: out });
-    const rows = readFileSync(out, 'utf8').trim().split('\n').map((l) => JSON.parse(l));
+    const rows = readFileSync(out, 'utf8')
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l));
     expect(rows.map((r) => r.row)).toEqual([1, 2, 3, 4]);
     expect(Math.abs(rows[1]['pH at use'] - 7.6)).toBeLessThan(0.001);
     // HCl lowers the pH of HEPES free acid: the target is out of reach, said in its row.
@@ -195,7 +268,19 @@ describe('proton-ledger help, version and batches', () => {
   it('writes a batch as .xlsx, and solves a JSON-lines batch of compositions', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'pl-batch-'));
     const input = join(dir, 'mixes.jsonl');
-    writeFileSync(input, [JSON.stringify({ forms: [{ form: 'tris base', mM: 50 }, { form: 'HCl', mM: 25 }] }), 'not json', JSON.stringify({ forms: [{ form: 'MES free acid', mM: '20 mM' }], temperatureC: '37 °C' })].join('\n'));
+    writeFileSync(
+      input,
+      [
+        JSON.stringify({
+          forms: [
+            { form: 'tris base', mM: 50 },
+            { form: 'HCl', mM: 25 },
+          ],
+        }),
+        'not json',
+        JSON.stringify({ forms: [{ form: 'MES free acid', mM: '20 mM' }], temperatureC: '37 °C' }),
+      ].join('\n'),
+    );
     const out = join(dir, 'mixes.xlsx');
     const result = await cli(['solve', '--batch', input, '-o', out]);
     expect(result.code).toBe(1);

@@ -11,7 +11,15 @@ function call(args: string[]): { code: number; text: string } {
   return { code, text };
 }
 
-const MIX = { volumeMl: '50 mL', useTemperatureC: '4 °C', targets: [{ component: 'tris', concentrationMm: 20 }, { component: 'NaCl', concentrationMm: '150 mM' }, { component: 'EDTA', concentrationMm: 1 }] };
+const MIX = {
+  volumeMl: '50 mL',
+  useTemperatureC: '4 °C',
+  targets: [
+    { component: 'tris', concentrationMm: 20 },
+    { component: 'NaCl', concentrationMm: '150 mM' },
+    { component: 'EDTA', concentrationMm: 1 },
+  ],
+};
 
 describe('proton-ledger mix', () => {
   it('plans from the example shelf file and prints the same plan the core gives', () => {
@@ -33,13 +41,29 @@ describe('proton-ledger mix', () => {
   });
 
   it('reports stocks that cannot fit as an infeasible target, with code and field', () => {
-    const { code, text } = call(['mix', '--shelf', SHELF_FILE, '--json', JSON.stringify({ volumeMl: 10, targets: [{ component: 'NaCl', concentrationMm: 4000 }, { component: 'KCl', concentrationMm: 1000 }] })]);
+    const { code, text } = call([
+      'mix',
+      '--shelf',
+      SHELF_FILE,
+      '--json',
+      JSON.stringify({
+        volumeMl: 10,
+        targets: [
+          { component: 'NaCl', concentrationMm: 4000 },
+          { component: 'KCl', concentrationMm: 1000 },
+        ],
+      }),
+    ]);
     expect(code).toBe(2);
     expect(JSON.parse(text).error).toMatchObject({ kind: 'infeasible-target', code: 'stocksDoNotFit', field: 'targets' });
   });
 
   it('takes the shelf from the JSON itself, and names a stock field at fault', () => {
-    const { code, text } = call(['mix', '--json', JSON.stringify({ volumeMl: 10, stocks: [{ name: 'KCl', form: 'KCl', concentration: '3 kg' }], targets: [{ component: 'KCl', concentrationMm: 100 }] })]);
+    const { code, text } = call([
+      'mix',
+      '--json',
+      JSON.stringify({ volumeMl: 10, stocks: [{ name: 'KCl', form: 'KCl', concentration: '3 kg' }], targets: [{ component: 'KCl', concentrationMm: 100 }] }),
+    ]);
     expect(code).toBe(2);
     expect(JSON.parse(text).error).toMatchObject({ kind: 'invalid-input', code: 'wrongUnit', field: 'stocks[0].concentration' });
   });

@@ -35,7 +35,17 @@ const TYPED: Record<string, string> = {
   benchTemperatureC: '22',
   salts: 'NaCl 150 mM',
 };
-const INPUT = { buffer: 'tris', targetPh: '7.5', concentrationMm: '50', volumeMl: '500', useTemperatureC: '4', form: 'tris base', titrant: { form: 'HCl', concentrationM: '1' }, benchTemperatureC: '22', salts: 'NaCl 150 mM' } as RecipeInput;
+const INPUT = {
+  buffer: 'tris',
+  targetPh: '7.5',
+  concentrationMm: '50',
+  volumeMl: '500',
+  useTemperatureC: '4',
+  form: 'tris base',
+  titrant: { form: 'HCl', concentrationM: '1' },
+  benchTemperatureC: '22',
+  salts: 'NaCl 150 mM',
+} as RecipeInput;
 
 describeBrowser('batch record in the preview (Chromium)', () => {
   let server: ChildProcess;
@@ -94,7 +104,8 @@ describeBrowser('batch record in the preview (Chromium)', () => {
     page.waitForFunction(
       ({ row, want }) => {
         for (let r = row + 1; r <= row + 24; r++) {
-          if (document.querySelector(`#grid-scroll td[data-cell="A${r}"]`)?.textContent === 'batch') return document.querySelector(`#grid-scroll td[data-cell="F${r}"]`)?.textContent === want;
+          if (document.querySelector(`#grid-scroll td[data-cell="A${r}"]`)?.textContent === 'batch')
+            return document.querySelector(`#grid-scroll td[data-cell="F${r}"]`)?.textContent === want;
         }
         return false;
       },

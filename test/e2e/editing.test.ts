@@ -132,7 +132,7 @@ describeBrowser('editing the preview workbook (Chromium)', () => {
     expect(await cell('C1').textContent()).toBe('');
   });
 
-  test('formula messages in plain words; Excel\'s exponent and doubled quotes accepted', async () => {
+  test("formula messages in plain words; Excel's exponent and doubled quotes accepted", async () => {
     await cell('G1').click();
     await page.fill('#formula-input', '=SUM(1,2');
     await page.press('#formula-input', 'Enter');

@@ -50,12 +50,12 @@ describeBrowser('opening files in the preview (Chromium)', () => {
     expect(session.pageErrors).toEqual([]);
   });
 
-  test('PROTON formulas as Excel saves them are live; Excel\'s exponent and doubled quotes are read', async () => {
+  test("PROTON formulas as Excel saves them are live; Excel's exponent and doubled quotes are read", async () => {
     const wb = new ExcelJS.Workbook();
     const ws = wb.addWorksheet('Saved by Excel');
     ws.getCell('A1').value = 'tris pKa at 25 °C';
     ws.getCell('B1').value = { formula: '_xldudf_PROTON_PKA("tris",1,25)', result: 0 } as ExcelJS.CellFormulaValue;
-    ws.getCell('B2').value = { formula: "'Other add-in.xlam'!_xldudf_PROTON_PKA(\"tris\",1,4)", result: 0 } as ExcelJS.CellFormulaValue;
+    ws.getCell('B2').value = { formula: '\'Other add-in.xlam\'!_xldudf_PROTON_PKA("tris",1,4)', result: 0 } as ExcelJS.CellFormulaValue;
     ws.getCell('B3').value = { formula: '6.022E+23/1E+23', result: 0 } as ExcelJS.CellFormulaValue;
     ws.getCell('B4').value = { formula: 'LEN("a""b")', result: 0 } as ExcelJS.CellFormulaValue;
     ws.getCell('B5').value = '=not a formula';

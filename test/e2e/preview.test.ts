@@ -157,18 +157,28 @@ describeBrowser('preview workbook in Chromium', () => {
   test('display: chart titles wrap instead of being cut, the band label sits clear of the capacity peak, warnings wrap in their column', async () => {
     const titles = await page.locator('figure.chart p.chart-title').evaluateAll((els) => els.map((e) => ({ scroll: e.scrollWidth, client: e.clientWidth, text: e.textContent })));
     for (const t of titles) expect(t.scroll).toBeLessThanOrEqual(t.client);
-    const clear = await page.locator('figure.chart').nth(1).evaluate((figure) => {
-      const label = figure.querySelector('.chart-band-label') as SVGGraphicsElement;
-      const line = figure.querySelector('.chart-line') as SVGPathElement;
-      const points = (line.getAttribute('d') ?? '').split(/[ML]/).map((p) => p.trim().split(/\s+/).map(Number)).filter((p) => p.length === 2);
-      const peak = points.reduce((a, b) => (b[1] < a[1] ? b : a));
-      const box = label.getBBox();
-      return { peakInside: peak[0] >= box.x && peak[0] <= box.x + box.width && peak[1] >= box.y - 4 && peak[1] <= box.y + box.height + 4, labelY: box.y, peakY: peak[1] };
-    });
+    const clear = await page
+      .locator('figure.chart')
+      .nth(1)
+      .evaluate((figure) => {
+        const label = figure.querySelector('.chart-band-label') as SVGGraphicsElement;
+        const line = figure.querySelector('.chart-line') as SVGPathElement;
+        const points = (line.getAttribute('d') ?? '')
+          .split(/[ML]/)
+          .map((p) => p.trim().split(/\s+/).map(Number))
+          .filter((p) => p.length === 2);
+        const peak = points.reduce((a, b) => (b[1] < a[1] ? b : a));
+        const box = label.getBBox();
+        return { peakInside: peak[0] >= box.x && peak[0] <= box.x + box.width && peak[1] >= box.y - 4 && peak[1] <= box.y + box.height + 4, labelY: box.y, peakY: peak[1] };
+      });
     expect(clear.peakInside).toBe(false);
     expect(clear.labelY).toBeGreaterThan(clear.peakY);
     // A long warning (the 4 °C rows: a temperature beyond the data of some constants, or none) shows whole in its cell.
-    const warnings = await page.locator('#grid-scroll td.style-warning span.cell-text').evaluateAll((els) => els.map((e) => ({ h: e.scrollHeight, ch: (e.parentElement as HTMLElement).clientHeight, w: e.scrollWidth, cw: (e.parentElement as HTMLElement).clientWidth })));
+    const warnings = await page
+      .locator('#grid-scroll td.style-warning span.cell-text')
+      .evaluateAll((els) =>
+        els.map((e) => ({ h: e.scrollHeight, ch: (e.parentElement as HTMLElement).clientHeight, w: e.scrollWidth, cw: (e.parentElement as HTMLElement).clientWidth })),
+      );
     for (const w of warnings) {
       expect(w.w).toBeLessThanOrEqual(w.cw);
       expect(w.h).toBeLessThanOrEqual(w.ch);
@@ -184,7 +194,10 @@ describeBrowser('preview workbook in Chromium', () => {
     // Row 3 of the table is pH 7.6 at 4 °C: the protocol's own read-back of the row.
     expect(await cell('B4').textContent()).toBe('7.60');
     expect(await cell('A6').textContent()).toBe('section');
-    const steps = await page.locator('#grid-scroll td').filter({ hasText: /^step$/ }).count();
+    const steps = await page
+      .locator('#grid-scroll td')
+      .filter({ hasText: /^step$/ })
+      .count();
     expect(steps).toBeGreaterThan(3);
     await page.screenshot({ path: join(ARTIFACTS, 'preview-protocol.png') });
     expect(pageErrors).toEqual([]);
@@ -356,7 +369,12 @@ describeBrowser('preview workbook in Chromium', () => {
     // The file is named from the workbook's title and names Proton Ledger as its application.
     expect(download.suggestedFilename()).toBe('Proton Ledger workbook.xlsx');
     const zip = new Uint8Array(readFileSync(file));
-    const app = Buffer.from(entryData(zip, zipEntries(zip)!.entries.find((e) => e.name === 'docProps/app.xml')!)).toString('utf8');
+    const app = Buffer.from(
+      entryData(
+        zip,
+        zipEntries(zip)!.entries.find((e) => e.name === 'docProps/app.xml')!,
+      ),
+    ).toString('utf8');
     expect(app).toContain('<Application>Proton Ledger</Application>');
     expect(app).not.toMatch(/Microsoft/);
     // The table's header row is frozen and printed on every page; pages fit the paper's width.

@@ -133,7 +133,10 @@ describeBrowser('the preview keeps the work (Chromium)', () => {
       '(read from localStorage, rebuild the engine and compute every formula, draw the grid):',
       `saved size: ${bytes} characters`,
       `restore times, ms: ${times.join(', ')} (median ${[...times].sort((a, b) => a - b)[1]})`,
-      `machine: ${process.platform}, ${require('os').cpus().length} cores, load average ${require('os').loadavg().map((l: number) => l.toFixed(1)).join(' ')}`,
+      `machine: ${process.platform}, ${require('os').cpus().length} cores, load average ${require('os')
+        .loadavg()
+        .map((l: number) => l.toFixed(1))
+        .join(' ')}`,
       '',
     ].join('\n');
     writeFileSync(join(ARTIFACTS, 'restore-time.txt'), note);

@@ -9,13 +9,34 @@ import { errorOf } from './errorOf';
 const SAME = 1e-12;
 
 /** Our own cold-room HEPES saline: 25 mM, pH 7.4 at 4 °C, 500 mL, adjusted at 22 °C with 1 M NaOH. */
-const options = [['form', 'HEPES free acid'], ['titrant', 'NaOH'], ['benchTemperatureC', 22]];
-const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 500, useTemperatureC: 4, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, benchTemperatureC: 22, salts: [{ form: 'NaCl', concentrationMm: 150 }] });
+const options = [
+  ['form', 'HEPES free acid'],
+  ['titrant', 'NaOH'],
+  ['benchTemperatureC', 22],
+];
+const plan = planRecipe({
+  buffer: 'HEPES',
+  targetPh: 7.4,
+  concentrationMm: 25,
+  volumeMl: 500,
+  useTemperatureC: 4,
+  form: 'HEPES free acid',
+  titrant: { form: 'NaOH', concentrationM: 1 },
+  benchTemperatureC: 22,
+  salts: [{ form: 'NaCl', concentrationMm: 150 }],
+});
 const grams = plannedAsWeighed(plan);
 
 describe('the actuals range', () => {
   it('sorts rows into forms weighed (name, grams, purity) and fields by name or label', () => {
-    const r = readActualsRange([['HEPES free acid', '2.98 g', '99.5%'], ['Titrant added (mL)', 5.1], ['tolerance.ph', 0.1], ['reading.temperatureC', 23], ['', ''], ['actual.finalPh', '']]);
+    const r = readActualsRange([
+      ['HEPES free acid', '2.98 g', '99.5%'],
+      ['Titrant added (mL)', 5.1],
+      ['tolerance.ph', 0.1],
+      ['reading.temperatureC', 23],
+      ['', ''],
+      ['actual.finalPh', ''],
+    ]);
     expect(r.weighed).toEqual([{ form: 'HEPES free acid', grams: '2.98 g', purityPercent: '99.5%' }]);
     expect(r.actuals).toEqual({ titrantMl: 5.1 });
     expect(r.tolerances).toEqual({ ph: 0.1 });
@@ -23,14 +44,21 @@ describe('the actuals range', () => {
   });
 
   it('refuses a field given twice (code givenTwice)', () => {
-    expect(errorOf(() => readActualsRange([['actual.titrantMl', 1], ['Titrant added (mL)', 2]])).code).toBe('givenTwice');
+    expect(
+      errorOf(() =>
+        readActualsRange([
+          ['actual.titrantMl', 1],
+          ['Titrant added (mL)', 2],
+        ]),
+      ).code,
+    ).toBe('givenTwice');
   });
 });
 
 describe('AS.MADE', () => {
   const actuals = [...grams.map((g) => [g.form, g.grams]), ['actual.titrantMl', plan.titration!.volumeMl]];
 
-  it('gives the core\'s check as a table, with the verdict last, and passes the planned amounts', () => {
+  it("gives the core's check as a table, with the verdict last, and passes the planned amounts", () => {
     const t = asMadeCheck('HEPES', 7.4, 25, 500, actuals, 4, [['NaCl', 150]], options);
     const core = asMade(plan, { weighed: grams, titrantMl: plan.titration!.volumeMl });
     expect(t[0]).toEqual([...AS_MADE_HEADER]);
@@ -47,7 +75,20 @@ describe('AS.MADE', () => {
   });
 
   it('is INCOMPLETE, listing what is entered, until every planned form and the titrant have an amount', () => {
-    const t = asMadeCheck('HEPES', 7.4, 25, 500, [['HEPES free acid', grams[0].grams], ['NaCl', ''], ['actual.titrantMl', '']], 4, [['NaCl', 150]], options);
+    const t = asMadeCheck(
+      'HEPES',
+      7.4,
+      25,
+      500,
+      [
+        ['HEPES free acid', grams[0].grams],
+        ['NaCl', ''],
+        ['actual.titrantMl', ''],
+      ],
+      4,
+      [['NaCl', 150]],
+      options,
+    );
     expect(t.map((r) => r[5])).toEqual(['result', 'entered', 'not entered', 'not entered', 'INCOMPLETE']);
   });
 
@@ -69,7 +110,7 @@ describe('AS.MADE', () => {
 });
 
 describe('TITRANT.NEXT', () => {
-  it('gives the core\'s next amount and first portion for a reading', () => {
+  it("gives the core's next amount and first portion for a reading", () => {
     const [row] = titrantNext('HEPES', 7.4, 25, 500, 3, 7.0, 4, [['NaCl', 150]], options);
     const c = benchCorrection(plan, { titrantMl: 3, readingPh: 7.0 });
     expect(row[0]).toBe('1 M sodium hydroxide');
@@ -82,7 +123,14 @@ describe('TITRANT.NEXT', () => {
   });
 
   it('spills 1 × 6 in the formula engine', () => {
-    const hf = createFormulaEngine({ Sheet1: [['form', 'HEPES free acid', null, 'NaCl', 150], ['titrant', 'NaOH'], ['benchTemperatureC', 22], ['=PROTON.TITRANT.NEXT("HEPES", 7.4, 25, 500, 3, 7.0, 4, D1:E1, A1:B3)']] });
+    const hf = createFormulaEngine({
+      Sheet1: [
+        ['form', 'HEPES free acid', null, 'NaCl', 150],
+        ['titrant', 'NaOH'],
+        ['benchTemperatureC', 22],
+        ['=PROTON.TITRANT.NEXT("HEPES", 7.4, 25, 500, 3, 7.0, 4, D1:E1, A1:B3)'],
+      ],
+    });
     const c = benchCorrection(plan, { titrantMl: 3, readingPh: 7.0 });
     expect(Math.abs((hf.getCellValue({ sheet: 0, row: 3, col: 1 }) as number) - c.nextMl)).toBeLessThan(SAME);
   });

@@ -57,7 +57,10 @@ describe('calc command', () => {
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.readFile(output);
     const ws = wb.getWorksheet('Prep')!;
-    const expectedPh = ph([['tris base', 50], ['NaCl', 150]]);
+    const expectedPh = ph([
+      ['tris base', 50],
+      ['NaCl', 150],
+    ]);
     expect(ws.getCell('C1').value).toBe(expectedPh);
     expect(ws.getCell('C2').value).toBe(titrantMl('tris base', 50, 1000, 7.4, 'HCl', 1));
     expect(ws.getCell('C3').value).toBeCloseTo(Math.round(expectedPh * 10) / 10 + 1, 12);
@@ -75,7 +78,12 @@ describe('calc command', () => {
     const output = join(dir, 'filled.csv');
     expect((await run(['calc', input, '-o', output])).code).toBe(0);
     const rows = parseCsv(readFileSync(output, 'utf8'));
-    expect(Number(rows[0][2])).toBe(ph([['tris base', 50], ['NaCl', 150]]));
+    expect(Number(rows[0][2])).toBe(
+      ph([
+        ['tris base', 50],
+        ['NaCl', 150],
+      ]),
+    );
     expect(rows[3][2]).toBe("'=text, not a formula");
     expect(rows[4][2]).toBe('#VALUE!');
   });

@@ -7,7 +7,10 @@ import { registerExcelFunctions, CustomFunctionsApi } from '../../src/functions/
 import metadata from '../../src/functions/metadata.json';
 
 class FakeError {
-  constructor(readonly code: string, readonly message?: string) {}
+  constructor(
+    readonly code: string,
+    readonly message?: string,
+  ) {}
 }
 
 function fakeApi() {

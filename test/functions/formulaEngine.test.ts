@@ -25,7 +25,7 @@ describe('formula engine', () => {
     hf.destroy();
   });
 
-  test('formulas as typed in Excel (any case) give the catalog\'s values; ordinary formulas mix in', () => {
+  test("formulas as typed in Excel (any case) give the catalog's values; ordinary formulas mix in", () => {
     const hf = createFormulaEngine({
       Prep: [
         ['tris base', 50, '=PROTON.PH.OF(A1:B2)', '=proton.ph.of(A1:B2, "25", "Pitzer")', '=ROUND(C1, 2)'],
@@ -34,7 +34,10 @@ describe('formula engine', () => {
     });
     const at = (row: number, col: number) => hf.getCellValue({ sheet: 0, row, col });
     clearCallCache();
-    const direct = ph([['tris base', 50], ['NaCl', 150]]);
+    const direct = ph([
+      ['tris base', 50],
+      ['NaCl', 150],
+    ]);
     expect(at(0, 2)).toBe(direct);
     expect(at(0, 3)).toBe(direct);
     expect(at(0, 4)).toBe(Math.round(direct * 100) / 100);
@@ -43,7 +46,7 @@ describe('formula engine', () => {
     hf.destroy();
   });
 
-  test('errors are the engine\'s #VALUE! / #N/A with the message; upstream errors propagate; wrong argument counts are caught', () => {
+  test("errors are the engine's #VALUE! / #N/A with the message; upstream errors propagate; wrong argument counts are caught", () => {
     const hf = createFormulaEngine({
       S: [
         ['tris base', 50, '=PROTON.PH.OF(A1:B1, 120)', '=PROTON.PH.OF(A2:B2)', '=PROTON.PH.OF(A1:B1, 1/0)', '=PROTON.PH.OF()'],
@@ -85,7 +88,11 @@ describe('formula engine', () => {
   });
 
   test('padToSpill pads ragged rows and refuses a result larger than the reserved size', () => {
-    expect(padToSpill([[1], ['a', 2]], { width: 2, height: 3 })).toEqual([[1, ''], ['a', 2], ['', '']]);
+    expect(padToSpill([[1], ['a', 2]], { width: 2, height: 3 })).toEqual([
+      [1, ''],
+      ['a', 2],
+      ['', ''],
+    ]);
     expect(padToSpill([[1, 2, 3]], { width: 2, height: 3 })).toBeInstanceOf(SheetError);
   });
 
@@ -113,7 +120,8 @@ describe('formula engine', () => {
         const composition = lib.compositionFromForms([{ form: 'tris base', concentrationM: 0.05 }], { temperatureC, activityModel: 'pitzer' });
         const expected = (titrantForPh(composition, { name: 'hydrochloric acid', strongIons: { 'Cl-': 1 } }, target).concentrationM * 1000) / 1;
         const got = values[i + 1][j + 1] as number;
-        if (Math.abs(got - expected) > GRID_RELATIVE_TOLERANCE * expected) throw new Error(`pH ${target}, ${temperatureC} °C: engine ${got}, core ${expected}, difference ${got - expected}, tolerance ${GRID_RELATIVE_TOLERANCE} relative`);
+        if (Math.abs(got - expected) > GRID_RELATIVE_TOLERANCE * expected)
+          throw new Error(`pH ${target}, ${temperatureC} °C: engine ${got}, core ${expected}, difference ${got - expected}, tolerance ${GRID_RELATIVE_TOLERANCE} relative`);
         compared++;
       }),
     );

@@ -42,7 +42,7 @@ describe('Excel forms rewritten for the engine', () => {
     expect(compute('=""&"x"')).toBe('x');
   });
 
-  test('Excel\'s saved names of PROTON functions are restored too (one function for every host)', () => {
+  test("Excel's saved names of PROTON functions are restored too (one function for every host)", () => {
     expect(engineFormula('=_xldudf_PROTON_PKA("tris", 1, 2.5E+1)')).toBe('=PROTON.PKA("tris", 1, 2.5e+1)');
     // Tris pKa at 25 °C, I = 0: 8.072 (Goldberg et al. 2002, the library's value); within 0.01 as the library rounds.
     expect(compute('=_xldudf_PROTON_PKA("tris", 1, 2.5E+1)')).toBeCloseTo(8.072, 2);

@@ -5,7 +5,25 @@
  */
 import { ACTIVITY_MODELS, afterDilution, capacity, conductivityAt, idealOsmolarity, pKaAt, solvePh, speciate, titrantForPh, HYDROCHLORIC_ACID } from '../../src/chem';
 import { defaultLibrary } from '../../src/chem/library';
-import { capacityOf, conductivity, forms, grams, ionicStrengthMm, osmolality, osmolarityIdeal, ph, phAtTemperature, phDiluted, pka, species, spillShape, substances, titrantMl, warnings, SPECIES_TABLE_ROWS } from '../../src/functions/functions';
+import {
+  capacityOf,
+  conductivity,
+  forms,
+  grams,
+  ionicStrengthMm,
+  osmolality,
+  osmolarityIdeal,
+  ph,
+  phAtTemperature,
+  phDiluted,
+  pka,
+  species,
+  spillShape,
+  substances,
+  titrantMl,
+  warnings,
+  SPECIES_TABLE_ROWS,
+} from '../../src/functions/functions';
 import { errorOf } from './errorOf';
 import { pHSAt25 } from '../chem/iupacStandards';
 import { clearCallCache } from '../../src/functions/memo';
@@ -16,9 +34,18 @@ const SAME_DIGITS = 12;
 const SCALED_DIGITS = 9;
 
 const lib = defaultLibrary();
-const TRIS_SALINE = [['tris base', 50], ['NaCl', 150]];
+const TRIS_SALINE = [
+  ['tris base', 50],
+  ['NaCl', 150],
+];
 const trisSaline = (temperatureC = 25, activityModel: 'pitzer' | 'davies' | 'ideal' | 'bates-guggenheim' = 'pitzer') =>
-  lib.compositionFromForms([{ form: 'tris base', concentrationM: 0.05 }, { form: 'NaCl', concentrationM: 0.15 }], { temperatureC, activityModel });
+  lib.compositionFromForms(
+    [
+      { form: 'tris base', concentrationM: 0.05 },
+      { form: 'NaCl', concentrationM: 0.15 },
+    ],
+    { temperatureC, activityModel },
+  );
 
 beforeEach(() => clearCallCache());
 
@@ -29,22 +56,57 @@ describe('PH.OF', () => {
   });
   test('accepts numbers as text, blank temperature and model, mixed-case names and blank rows', () => {
     const expected = solvePh(trisSaline());
-    expect(ph([['TRIS BASE', '50'], ['', ''], [' nacl ', ' 150 '], [null, null]], '', null)).toBeCloseTo(expected, SAME_DIGITS);
+    expect(
+      ph(
+        [
+          ['TRIS BASE', '50'],
+          ['', ''],
+          [' nacl ', ' 150 '],
+          [null, null],
+        ],
+        '',
+        null,
+      ),
+    ).toBeCloseTo(expected, SAME_DIGITS);
     expect(ph(TRIS_SALINE, '25', 'Pitzer')).toBeCloseTo(expected, SAME_DIGITS);
   });
   test('a system name means the system with no counter-ions; a strong-ion name adds the ion', () => {
     const direct = solvePh({ systems: [{ ...lib.compositionFromForms([{ form: 'HEPES free acid', concentrationM: 0.02 }]).systems[0] }], strongIons: { 'Na+': 0.01 } });
-    expect(ph([['HEPES', 20], ['Na+', 10]])).toBeCloseTo(direct, SAME_DIGITS);
+    expect(
+      ph([
+        ['HEPES', 20],
+        ['Na+', 10],
+      ]),
+    ).toBeCloseTo(direct, SAME_DIGITS);
   });
   test('KH2PO4 + Na2HPO4 0.025 + 0.025 mol/kg reads 6.865 at 25 °C (IUPAC 2002 primary standard, Buck et al., from the shared fixture test/chem/iupacStandards.ts; tolerance 0.02: Davies model plus molal≈molar)', () => {
-    expect(Math.abs(ph([['KH2PO4', 25], ['Na2HPO4', 25]]) - pHSAt25('phosphate1to1'))).toBeLessThan(0.02);
+    expect(
+      Math.abs(
+        ph([
+          ['KH2PO4', 25],
+          ['Na2HPO4', 25],
+        ]) - pHSAt25('phosphate1to1'),
+      ),
+    ).toBeLessThan(0.02);
   });
   test('errors: unknown name (#N/A with did-you-mean), one-column range, empty range, bad amount, bad temperature, bad model', () => {
-    const unknown = errorOf(() => ph([['tris base', 50], ['HEPSE', 10]]));
+    const unknown = errorOf(() =>
+      ph([
+        ['tris base', 50],
+        ['HEPSE', 10],
+      ]),
+    );
     expect(unknown.kind).toBe('na');
     expect(unknown.message).toMatch(/composition, row 2: .*"HEPSE".*did you mean "HEPES"/);
     expect(errorOf(() => ph([['tris base'], ['NaCl']])).message).toMatch(/composition has 1 column/);
-    expect(errorOf(() => ph([['', ''], [null, null]])).message).toMatch(/composition holds no rows/);
+    expect(
+      errorOf(() =>
+        ph([
+          ['', ''],
+          [null, null],
+        ]),
+      ).message,
+    ).toMatch(/composition holds no rows/);
     expect(errorOf(() => ph([['tris base', 'fifty']])).message).toMatch(/row 1: amount \(mM\) must be a number/);
     expect(errorOf(() => ph([['tris base', '']]))).toMatchObject({ kind: 'value', code: 'missingValue', field: 'amount (mM)' });
     expect(errorOf(() => ph([['tris base', -1]])).message).toMatch(/amount \(mM\) is -1; allowed: 0 to 20000 mM/);
@@ -84,7 +146,12 @@ describe('TITRANT.ML', () => {
     expect(dilute.message).toMatch(/too dilute/);
     expect(errorOf(() => titrantMl('tris base', 50, 1000, 7.4, 'ammonium acetate', 1)).message).toMatch(/cannot serve as a titrant/);
     expect(errorOf(() => titrantMl('tris base', 50, 1000, 15, 'HCl', 1))).toMatchObject({ kind: 'value', code: 'outOfRange', field: 'targetPh', allowed: 'pH 0 to 14' });
-    expect(errorOf(() => titrantMl('tris base', 50, 0, 7.4, 'HCl', 1))).toMatchObject({ kind: 'value', code: 'outOfRange', field: 'finalVolumeMl', allowed: '0.001 to 1,000,000 mL' });
+    expect(errorOf(() => titrantMl('tris base', 50, 0, 7.4, 'HCl', 1))).toMatchObject({
+      kind: 'value',
+      code: 'outOfRange',
+      field: 'finalVolumeMl',
+      allowed: '0.001 to 1,000,000 mL',
+    });
     expect(errorOf(() => titrantMl('tris base', 50, 1000, 7.4, '', 1)).message).toMatch(/titrant is blank/);
     expect(errorOf(() => titrantMl('tris base', 50, 1000, 7.4, 'HCl', ''))).toMatchObject({ kind: 'value', code: 'missingValue', field: 'titrantConcentrationM' });
     expect(errorOf(() => titrantMl('tris bsae', 50, 1000, 7.4, 'HCl', 1)).kind).toBe('na');
@@ -124,15 +191,23 @@ describe('PKA', () => {
   test('thermodynamic pKa at I = 0 and 25 °C: tris 8.07 (trade tables 8.06–8.08; tolerance 0.011 spans them)', () => {
     expect(Math.abs(pka('tris') - 8.07)).toBeLessThan(0.011);
   });
-  test('at I = 0 equals the van \'t Hoff pKa; with I the apparent pKa′ moves the way docs/science.md says (tris up, phosphate step 2 down)', () => {
+  test("at I = 0 equals the van 't Hoff pKa; with I the apparent pKa′ moves the way docs/science.md says (tris up, phosphate step 2 down)", () => {
     const tris = lib.findSystem('tris').steps[0];
     expect(pka('Tris HCl', '', 37)).toBeCloseTo(pKaAt(tris.pKa, tris.deltaHkJ ?? 0, tris.deltaCpJ ?? 0, 37), SAME_DIGITS);
     expect(pka('tris', 1, 25, 150)).toBeGreaterThan(pka('tris', 1, 25, 0));
     expect(pka('phosphate', 2, 25, 150)).toBeLessThan(pka('phosphate', 2, 25, 0));
     expect(pka('phosphate', 2, 25, 150, 'ideal')).toBeCloseTo(pka('phosphate', 2, 25, 0), SAME_DIGITS);
   });
-  test('agrees with the solver\'s apparent pKa′ at the ionic strength it finds (one-number models; Pitzer needs the composition, and with an ionic strength alone takes the Bates–Guggenheim form)', () => {
-    const result = speciate(lib.compositionFromForms([{ form: 'KH2PO4', concentrationM: 0.025 }, { form: 'Na2HPO4', concentrationM: 0.025 }], { activityModel: 'davies' }));
+  test("agrees with the solver's apparent pKa′ at the ionic strength it finds (one-number models; Pitzer needs the composition, and with an ionic strength alone takes the Bates–Guggenheim form)", () => {
+    const result = speciate(
+      lib.compositionFromForms(
+        [
+          { form: 'KH2PO4', concentrationM: 0.025 },
+          { form: 'Na2HPO4', concentrationM: 0.025 },
+        ],
+        { activityModel: 'davies' },
+      ),
+    );
     expect(pka('phosphate', 2, 25, result.ionicStrengthM * 1000, 'davies')).toBeCloseTo(result.systems[0].apparentPKa[1], SCALED_DIGITS);
     expect(pka('phosphate', 2, 25, 100)).toBeCloseTo(pka('phosphate', 2, 25, 100, 'bates-guggenheim'), SAME_DIGITS);
   });
@@ -189,31 +264,88 @@ describe('OSMOLALITY', () => {
 
 describe('WARNINGS', () => {
   test('says "none" for a phosphate buffer near its pKa at room temperature', () => {
-    expect(warnings([['Na2HPO4', 30], ['NaH2PO4·H2O', 20]])).toBe('none');
+    expect(
+      warnings([
+        ['Na2HPO4', 30],
+        ['NaH2PO4·H2O', 20],
+      ]),
+    ).toBe('none');
   });
   test('counts and numbers the warnings: weak buffering and calcium with citrate', () => {
-    const text = warnings([['trisodium citrate dihydrate', 10], ['CaCl2·2H2O', 2]]);
+    const text = warnings([
+      ['trisodium citrate dihydrate', 10],
+      ['CaCl2·2H2O', 2],
+    ]);
     expect(text).toMatch(/^2 warnings: \(1\) pH \d+\.\d\d is more than 1 unit from every pKa′ .* \(2\) Ca2\+ with citrate: metal–buffer complexes are not modelled/);
   });
   test('passes on the solver warnings (temperature, ionic strength) that a PH.OF cell cannot show', () => {
-    expect(warnings(TRIS_SALINE.concat([['HCl', 25]]), 80)).toMatch(/^2 warnings: \(1\) Temperature 80 °C is above 60 °C.* \(2\) Temperature 80 °C lies outside 0–50 °C, the temperatures the data for tris/);
-    expect(warnings([['NaCl', 2000], ['sodium acetate trihydrate', 50], ['acetic acid', 50]], 25, 'davies')).toMatch(/Ionic strength 2\.\d+ M is above 0\.5 M/);
-    expect(warnings([['NaCl', 5000], ['sodium acetate trihydrate', 50], ['acetic acid', 50]])).toMatch(/Ionic strength 5\.\d+ mol\/kg is above 4 mol\/kg/);
+    expect(warnings(TRIS_SALINE.concat([['HCl', 25]]), 80)).toMatch(
+      /^2 warnings: \(1\) Temperature 80 °C is above 60 °C.* \(2\) Temperature 80 °C lies outside 0–50 °C, the temperatures the data for tris/,
+    );
+    expect(
+      warnings(
+        [
+          ['NaCl', 2000],
+          ['sodium acetate trihydrate', 50],
+          ['acetic acid', 50],
+        ],
+        25,
+        'davies',
+      ),
+    ).toMatch(/Ionic strength 2\.\d+ M is above 0\.5 M/);
+    expect(
+      warnings([
+        ['NaCl', 5000],
+        ['sodium acetate trihydrate', 50],
+        ['acetic acid', 50],
+      ]),
+    ).toMatch(/Ionic strength 5\.\d+ mol\/kg is above 4 mol\/kg/);
   });
   test('warns when a system without ΔH° (malate) is used away from 25 ± 2 °C, not at 25 °C', () => {
-    expect(warnings([['malic acid', 10], ['NaOH', 10]], 4)).toMatch(/malate has no ΔH° for steps 1, 2: its pKa is held at the 25 °C value/);
-    expect(warnings([['malic acid', 10], ['NaOH', 10]], 25)).not.toMatch(/no ΔH°/);
+    expect(
+      warnings(
+        [
+          ['malic acid', 10],
+          ['NaOH', 10],
+        ],
+        4,
+      ),
+    ).toMatch(/malate has no ΔH° for steps 1, 2: its pKa is held at the 25 °C value/);
+    expect(
+      warnings(
+        [
+          ['malic acid', 10],
+          ['NaOH', 10],
+        ],
+        25,
+      ),
+    ).not.toMatch(/no ΔH°/);
   });
   test('names substances whose constants are from memory, but not the user own', () => {
     const oxalate = lib.findSystem('oxalate');
     expect(oxalate.steps.some((st) => st.checkedAgainst === 'memory')).toBe(true);
-    expect(warnings([['sodium oxalate', 20], ['oxalic acid', 20]])).toMatch(/Constants for oxalate were written from memory/);
+    expect(
+      warnings([
+        ['sodium oxalate', 20],
+        ['oxalic acid', 20],
+      ]),
+    ).toMatch(/Constants for oxalate were written from memory/);
     const user = [
       ['name', 'charge of most protonated form', 'pKa list', 'ΔH list kJ/mol', 'ΔCp list J/(K·mol)', 'form name', 'molar mass g/mol', 'counter-ions', 'protons lost', 'formula'],
       ['Lab amine', 1, '7.85', '40', '', 'Lab amine base', 131.2, '', '', ''],
       ['lab amine', '', '', '', '', 'Lab amine HCl', 167.6, 'Cl-', '', ''],
     ];
-    expect(warnings([['Lab amine base', 20], ['Lab amine HCl', 20]], '', '', user)).toBe('none');
+    expect(
+      warnings(
+        [
+          ['Lab amine base', 20],
+          ['Lab amine HCl', 20],
+        ],
+        '',
+        '',
+        user,
+      ),
+    ).toBe('none');
   });
   test('refuses bad input as the other composition functions do', () => {
     expect(errorOf(() => warnings([['no such thing', 20]]))).toMatchObject({ kind: 'na' });

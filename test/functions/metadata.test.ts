@@ -25,6 +25,11 @@ describe('function metadata', () => {
     expect(fn.helpUrl).toMatch(/^https:\/\/localhost:3000\/help\/functions\.html#/);
     expect(DOCS).toContain(`<a id="${anchor}"></a>`);
     for (const p of fn.parameters) expect(p.description && p.description.length).toBeTruthy();
-    expect(spillShape(fn.id, fn.parameters.map(() => 1)) !== undefined).toBe(fn.spills);
+    expect(
+      spillShape(
+        fn.id,
+        fn.parameters.map(() => 1),
+      ) !== undefined,
+    ).toBe(fn.spills);
   });
 });

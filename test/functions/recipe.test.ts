@@ -9,11 +9,28 @@ const SAME = 1e-12;
 const col = (name: (typeof RECIPE_ROW_HEADER)[number]) => RECIPE_ROW_HEADER.indexOf(name);
 
 describe('RECIPE.ROW', () => {
-  const options = [['form', 'HEPES free acid'], ['titrant', 'NaOH'], ['titrant.concentrationM', 1], ['benchTemperatureC', 22], ['partVolumeFraction', 0.8]];
+  const options = [
+    ['form', 'HEPES free acid'],
+    ['titrant', 'NaOH'],
+    ['titrant.concentrationM', 1],
+    ['benchTemperatureC', 22],
+    ['partVolumeFraction', 0.8],
+  ];
   const row = () => recipeRow('HEPES', 7.4, 25, 500, 4, [['NaCl', 150]], options);
 
-  it('gives the planner\'s grams, titrant band, meter reading and predictions in the header\'s order', () => {
-    const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, useTemperatureC: 4, benchTemperatureC: 22, partVolumeFraction: 0.8, salts: [{ form: 'NaCl', concentrationMm: 150 }] });
+  it("gives the planner's grams, titrant band, meter reading and predictions in the header's order", () => {
+    const plan = planRecipe({
+      buffer: 'HEPES',
+      targetPh: 7.4,
+      concentrationMm: 25,
+      volumeMl: 500,
+      form: 'HEPES free acid',
+      titrant: { form: 'NaOH', concentrationM: 1 },
+      useTemperatureC: 4,
+      benchTemperatureC: 22,
+      partVolumeFraction: 0.8,
+      salts: [{ form: 'NaCl', concentrationMm: 150 }],
+    });
     const [r] = row();
     expect(r).toHaveLength(RECIPE_ROW_HEADER.length);
     expect(Math.abs((r[col('form (g)')] as number) - plan.components[0].grams!)).toBeLessThan(SAME);
@@ -26,19 +43,37 @@ describe('RECIPE.ROW', () => {
   });
 
   it('accepts numbers as text, blank optional arguments and mixed-case names', () => {
-    const [r] = recipeRow('hepes', '7,4', '25 mM', '0.5 L', null, undefined, [['Form weighed', 'hepes FREE acid'], ['', '']], undefined);
+    const [r] = recipeRow(
+      'hepes',
+      '7,4',
+      '25 mM',
+      '0.5 L',
+      null,
+      undefined,
+      [
+        ['Form weighed', 'hepes FREE acid'],
+        ['', ''],
+      ],
+      undefined,
+    );
     expect(Math.abs((r[col('pH at use')] as number) - 7.4)).toBeLessThan(0.001);
   });
 
   it('carries warnings as text', () => {
-    const [r] = recipeRow('HEPES', 9.3, 25, 500, '', undefined, [['form', 'HEPES free acid'], ['titrant', 'NaOH']]);
+    const [r] = recipeRow('HEPES', 9.3, 25, 500, '', undefined, [
+      ['form', 'HEPES free acid'],
+      ['titrant', 'NaOH'],
+    ]);
     const plan = planRecipe({ buffer: 'HEPES', targetPh: 9.3, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } });
     expect(plan.warnings.map((w) => w.code)).toContain('weakBuffering');
     expect(r[col('warnings')]).toBe(plan.warnings.map((w) => w.message).join(' '));
   });
 
   it('weighs more of a form that is less than pure: the same grams for 0.98, 98 and "98%", pure grams ÷ 0.98', () => {
-    const mes = [['form', 'MES free acid'], ['titrant', 'NaOH']];
+    const mes = [
+      ['form', 'MES free acid'],
+      ['titrant', 'NaOH'],
+    ];
     const pure = recipeRow('MES', 6.1, 20, 1000, '', undefined, mes)[0];
     for (const purity of [0.98, 98, '98%']) {
       const [r] = recipeRow('MES', 6.1, 20, 1000, '', undefined, [...mes, ['formPurityPercent', purity]]);
@@ -51,19 +86,50 @@ describe('RECIPE.ROW', () => {
   });
 
   it('gives every route: two forms (acid and base grams, no titrant), a stock (its own meter reading, stock per batch), a salt to a target (its grams)', () => {
-    const pair = [['route', 'two-forms'], ['acidForm', 'sodium phosphate monobasic monohydrate'], ['baseForm', 'sodium phosphate dibasic heptahydrate']];
-    const two = planRecipe({ buffer: 'phosphate', targetPh: 7.0, concentrationMm: 100, volumeMl: 1000, route: 'two-forms', acidForm: 'sodium phosphate monobasic monohydrate', baseForm: 'sodium phosphate dibasic heptahydrate' });
+    const pair = [
+      ['route', 'two-forms'],
+      ['acidForm', 'sodium phosphate monobasic monohydrate'],
+      ['baseForm', 'sodium phosphate dibasic heptahydrate'],
+    ];
+    const two = planRecipe({
+      buffer: 'phosphate',
+      targetPh: 7.0,
+      concentrationMm: 100,
+      volumeMl: 1000,
+      route: 'two-forms',
+      acidForm: 'sodium phosphate monobasic monohydrate',
+      baseForm: 'sodium phosphate dibasic heptahydrate',
+    });
     const [r2] = recipeRow('phosphate', 7.0, 100, 1000, '', undefined, pair);
     expect(Math.abs((r2[col('form (g)')] as number) - two.components.find((c) => c.role === 'acid form')!.grams!)).toBeLessThan(SAME);
     expect(Math.abs((r2[col('base form (g)')] as number) - two.components.find((c) => c.role === 'base form')!.grams!)).toBeLessThan(SAME);
     expect(r2[col('titrant (mL)')]).toBe(0);
-    const stockOptions = [['route', 'stock'], ['form', 'MES free acid'], ['titrant', 'NaOH'], ['titrant.concentrationM', 10], ['stock.fold', 10], ['stock.volumeMl', 200]];
-    const stock = planRecipe({ buffer: 'MES', targetPh: 6.0, concentrationMm: 50, volumeMl: 1000, route: 'stock', form: 'MES free acid', titrant: { form: 'NaOH', concentrationM: 10 }, stock: { fold: 10, volumeMl: 200 } });
+    const stockOptions = [
+      ['route', 'stock'],
+      ['form', 'MES free acid'],
+      ['titrant', 'NaOH'],
+      ['titrant.concentrationM', 10],
+      ['stock.fold', 10],
+      ['stock.volumeMl', 200],
+    ];
+    const stock = planRecipe({
+      buffer: 'MES',
+      targetPh: 6.0,
+      concentrationMm: 50,
+      volumeMl: 1000,
+      route: 'stock',
+      form: 'MES free acid',
+      titrant: { form: 'NaOH', concentrationM: 10 },
+      stock: { fold: 10, volumeMl: 200 },
+    });
     const [rs] = recipeRow('MES', 6.0, 50, 1000, '', undefined, stockOptions);
     expect(Math.abs((rs[col('meter reads (pH)')] as number) - stock.meter.pH)).toBeLessThan(SAME);
     expect(rs[col('stock per batch (mL)')]).toBe(100);
     expect(Math.abs((rs[col('titrant (mL)')] as number) - stock.titration!.volumeMl)).toBeLessThan(SAME);
-    const [rt] = recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['saltTarget.form', 'NaCl'], ['saltTarget.ionicStrengthM', 0.15]]);
+    const [rt] = recipeRow('HEPES', 7.4, 25, 500, '', undefined, [
+      ['saltTarget.form', 'NaCl'],
+      ['saltTarget.ionicStrengthM', 0.15],
+    ]);
     const target = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 500, saltTarget: { form: 'NaCl', ionicStrengthM: 0.15 } });
     expect(Math.abs((rt[col('salt to target (g)')] as number) - target.components.find((c) => c.toTarget)!.grams!)).toBeLessThan(SAME);
     expect(Math.abs((rt[col('ionic strength (mM)')] as number) - 150)).toBeLessThan(0.01);
@@ -73,17 +139,35 @@ describe('RECIPE.ROW', () => {
   it('names the argument on bad input', () => {
     expect(errorOf(() => recipeRow('HEPES', 15, 25, 500))).toMatchObject({ kind: 'value', code: 'outOfRange', field: 'targetPh' });
     expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, 25, [['NaCl', 'lots']]))).toMatchObject({ kind: 'value', code: 'notANumber', field: 'salts row 1 (mM)' });
-    expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['titrant.concentrationM', 25]]))).toMatchObject({ kind: 'value', code: 'outOfRange', field: 'titrant.concentrationM' });
+    expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['titrant.concentrationM', 25]]))).toMatchObject({
+      kind: 'value',
+      code: 'outOfRange',
+      field: 'titrant.concentrationM',
+    });
   });
 
   it('reads an options range: names or labels, blank rows skipped, an unknown name gets "did you mean", a repeat is refused', () => {
-    const byName = recipeRow('HEPES', 7.4, 25, 500, 4, undefined, [['form', 'HEPES free acid'], ['benchTemperatureC', '22 °C']]);
-    const byLabel = recipeRow('HEPES', 7.4, 25, 500, 4, undefined, [['Form weighed', 'HEPES free acid'], ['', ''], ['Bench temp. (°C)', 22]]);
+    const byName = recipeRow('HEPES', 7.4, 25, 500, 4, undefined, [
+      ['form', 'HEPES free acid'],
+      ['benchTemperatureC', '22 °C'],
+    ]);
+    const byLabel = recipeRow('HEPES', 7.4, 25, 500, 4, undefined, [
+      ['Form weighed', 'HEPES free acid'],
+      ['', ''],
+      ['Bench temp. (°C)', 22],
+    ]);
     expect(byLabel).toEqual(byName);
     const unknown = errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['benchTemperatureF', 70]]));
     expect(unknown).toMatchObject({ kind: 'value', code: 'unknownField', field: 'benchTemperatureF' });
     expect(unknown.message).toContain('benchTemperatureC');
-    expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['form', 'HEPES free acid'], ['Form weighed', 'HEPES free acid']]))).toMatchObject({ code: 'givenTwice', field: 'Form weighed' });
+    expect(
+      errorOf(() =>
+        recipeRow('HEPES', 7.4, 25, 500, '', undefined, [
+          ['form', 'HEPES free acid'],
+          ['Form weighed', 'HEPES free acid'],
+        ]),
+      ),
+    ).toMatchObject({ code: 'givenTwice', field: 'Form weighed' });
     expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, 4, undefined, [['useTemperatureC', 4]]))).toMatchObject({ code: 'givenTwice', field: 'useTemperatureC' });
     expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['targetPh', 7]]))).toMatchObject({ code: 'givenTwice', field: 'targetPh' });
     expect(errorOf(() => recipeRow('HEPES', 7.4, 25, 500, '', undefined, [['form']]))).toMatchObject({ code: 'tooFewColumns', field: 'options' });
@@ -92,7 +176,12 @@ describe('RECIPE.ROW', () => {
 
 describe('RECIPE', () => {
   it('spills one row per line (at most 48) × 4 with amounts, meter reading, steps and cautions, and no blank padding', () => {
-    const rows = recipe('tris', 8.0, 50, 1000, 4, undefined, [['form', 'tris base'], ['titrant', 'HCl'], ['titrant.concentrationM', 6], ['benchTemperatureC', 25]]);
+    const rows = recipe('tris', 8.0, 50, 1000, 4, undefined, [
+      ['form', 'tris base'],
+      ['titrant', 'HCl'],
+      ['titrant.concentrationM', 6],
+      ['benchTemperatureC', 25],
+    ]);
     expect(rows.length).toBeLessThanOrEqual(RECIPE_TABLE_ROWS);
     expect(rows.every((r) => r.length === 4)).toBe(true);
     expect(rows.some((r) => r.every((cell) => cell === ''))).toBe(false);
@@ -101,12 +190,31 @@ describe('RECIPE', () => {
     const meter = rows.find((r) => r[0] === 'meter')!;
     // Tris adjusted at 25 °C for use at 4 °C reads well below target on the bench (common practice).
     expect(meter[2] as number).toBeLessThan(7.6);
-    expect(rows.filter((r) => r[0] === 'caution').map((r) => r[2]).join(' ')).toMatch(/hydrochloric acid: corrosive/);
+    expect(
+      rows
+        .filter((r) => r[0] === 'caution')
+        .map((r) => r[2])
+        .join(' '),
+    ).toMatch(/hydrochloric acid: corrosive/);
   });
 
-  it('lists the planner\'s predicted conductivity at the temperature of use and at 25 °C', () => {
-    const plan = planRecipe({ buffer: 'tris', targetPh: 8.0, concentrationMm: 50, volumeMl: 1000, form: 'tris base', titrant: { form: 'HCl', concentrationM: 6 }, useTemperatureC: 4, benchTemperatureC: 25 });
-    const rows = recipe('tris', 8.0, 50, 1000, 4, undefined, [['form', 'tris base'], ['titrant', 'HCl'], ['titrant.concentrationM', 6], ['benchTemperatureC', 25]]);
+  it("lists the planner's predicted conductivity at the temperature of use and at 25 °C", () => {
+    const plan = planRecipe({
+      buffer: 'tris',
+      targetPh: 8.0,
+      concentrationMm: 50,
+      volumeMl: 1000,
+      form: 'tris base',
+      titrant: { form: 'HCl', concentrationM: 6 },
+      useTemperatureC: 4,
+      benchTemperatureC: 25,
+    });
+    const rows = recipe('tris', 8.0, 50, 1000, 4, undefined, [
+      ['form', 'tris base'],
+      ['titrant', 'HCl'],
+      ['titrant.concentrationM', 6],
+      ['benchTemperatureC', 25],
+    ]);
     const atUse = rows.find((r) => r[1] === 'conductivity at 4 °C')!;
     const at25 = rows.find((r) => r[1] === 'conductivity at 25 °C')!;
     expect(Math.abs((atUse[2] as number) - plan.predictions.conductivityMsPerCm)).toBeLessThan(SAME);
@@ -139,11 +247,7 @@ describe('RECIPE', () => {
 describe('recipe functions through the formula engine', () => {
   it('RECIPE.ROW spills across a row and its pH at use solves back to the target', () => {
     const hf = createFormulaEngine({
-      Sheet1: [
-        ['NaCl', 150, null, 'form', 'HEPES free acid'],
-        [null, null, null, 'benchTemperatureC', 22],
-        ['=PROTON.RECIPE.ROW("HEPES", 7.4, 25, 500, 4, A1:B1, D1:E2)'],
-      ],
+      Sheet1: [['NaCl', 150, null, 'form', 'HEPES free acid'], [null, null, null, 'benchTemperatureC', 22], ['=PROTON.RECIPE.ROW("HEPES", 7.4, 25, 500, 4, A1:B1, D1:E2)']],
     });
     const phAtUse = hf.getCellValue({ sheet: 0, row: 2, col: col('pH at use') }) as number;
     expect(Math.abs(phAtUse - 7.4)).toBeLessThan(0.001);
@@ -151,7 +255,12 @@ describe('recipe functions through the formula engine', () => {
   });
 
   it('RECIPE spills 48 rows', () => {
-    const hf = createFormulaEngine({ Sheet1: [['form', 'MES free acid', null, '=PROTON.RECIPE("MES", 6.0, 20, 250, , , A1:B2)'], ['titrant', 'NaOH']] });
+    const hf = createFormulaEngine({
+      Sheet1: [
+        ['form', 'MES free acid', null, '=PROTON.RECIPE("MES", 6.0, 20, 250, , , A1:B2)'],
+        ['titrant', 'NaOH'],
+      ],
+    });
     expect(hf.getCellValue({ sheet: 0, row: 0, col: 3 })).toBe('section');
     expect(hf.getCellValue({ sheet: 0, row: 47, col: 3 })).toBe('');
     expect(hf.getCellValue({ sheet: 0, row: 2, col: 4 })).toMatch(/buffer: MES free acid/);

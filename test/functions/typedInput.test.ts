@@ -24,7 +24,18 @@ describe('numbers as people type them', () => {
   });
 
   it('reads units in composition amounts', () => {
-    expect(ph([['tris base', '50 mM'], ['HCl', '0.025 M']])).toBeCloseTo(ph([['tris base', 50], ['HCl', 25]]), 12);
+    expect(
+      ph([
+        ['tris base', '50 mM'],
+        ['HCl', '0.025 M'],
+      ]),
+    ).toBeCloseTo(
+      ph([
+        ['tris base', 50],
+        ['HCl', 25],
+      ]),
+      12,
+    );
   });
 
   it.each([

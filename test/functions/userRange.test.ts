@@ -26,13 +26,62 @@ beforeEach(() => clearCallCache());
 
 describe('userSubstances range', () => {
   const library = createLibrary([
-    { name: 'Lab amine', chargeOfMostProtonated: 1, pKa: [7.85], deltaHkJ: [40], forms: [{ name: 'Lab amine base', molarMass: 131.2, protonsLost: 1 }, { name: 'Lab amine HCl', molarMass: 167.6, protonsLost: 0, counterIons: { 'Cl-': 1 } }] },
+    {
+      name: 'Lab amine',
+      chargeOfMostProtonated: 1,
+      pKa: [7.85],
+      deltaHkJ: [40],
+      forms: [
+        { name: 'Lab amine base', molarMass: 131.2, protonsLost: 1 },
+        { name: 'Lab amine HCl', molarMass: 167.6, protonsLost: 0, counterIons: { 'Cl-': 1 } },
+      ],
+    },
   ]);
   test('a user form works in PH.OF exactly as the same record given to the core', () => {
-    const composition = library.compositionFromForms([{ form: 'Lab amine base', concentrationM: 0.02 }, { form: 'Lab amine HCl', concentrationM: 0.03 }]);
-    expect(ph([['lab amine base', 20], ['LAB AMINE HCL', 30]], 25, '', USER)).toBeCloseTo(solvePh(composition), SAME_DIGITS);
-    expect(ph([['Lab diacid', 10], ['Lab diacid disodium', 5]], '', '', USER)).toBeCloseTo(
-      speciate(createLibrary([{ name: 'Lab diacid', chargeOfMostProtonated: 0, pKa: [3.1, 5.9], deltaHkJ: [1, 2], deltaCpJ: [0, 0], forms: [{ name: 'Lab diacid', molarMass: 95.1, protonsLost: 0 }, { name: 'Lab diacid disodium', formula: 'C4H4Na2O4', protonsLost: 2, counterIons: { 'Na+': 2 } }] }]).compositionFromForms([{ form: 'Lab diacid', concentrationM: 0.01 }, { form: 'Lab diacid disodium', concentrationM: 0.005 }])).pH,
+    const composition = library.compositionFromForms([
+      { form: 'Lab amine base', concentrationM: 0.02 },
+      { form: 'Lab amine HCl', concentrationM: 0.03 },
+    ]);
+    expect(
+      ph(
+        [
+          ['lab amine base', 20],
+          ['LAB AMINE HCL', 30],
+        ],
+        25,
+        '',
+        USER,
+      ),
+    ).toBeCloseTo(solvePh(composition), SAME_DIGITS);
+    expect(
+      ph(
+        [
+          ['Lab diacid', 10],
+          ['Lab diacid disodium', 5],
+        ],
+        '',
+        '',
+        USER,
+      ),
+    ).toBeCloseTo(
+      speciate(
+        createLibrary([
+          {
+            name: 'Lab diacid',
+            chargeOfMostProtonated: 0,
+            pKa: [3.1, 5.9],
+            deltaHkJ: [1, 2],
+            deltaCpJ: [0, 0],
+            forms: [
+              { name: 'Lab diacid', molarMass: 95.1, protonsLost: 0 },
+              { name: 'Lab diacid disodium', formula: 'C4H4Na2O4', protonsLost: 2, counterIons: { 'Na+': 2 } },
+            ],
+          },
+        ]).compositionFromForms([
+          { form: 'Lab diacid', concentrationM: 0.01 },
+          { form: 'Lab diacid disodium', concentrationM: 0.005 },
+        ]),
+      ).pH,
       SAME_DIGITS,
     );
   });
@@ -50,12 +99,31 @@ describe('userSubstances range', () => {
     expect(forms(USER).map((r) => r[0])).toEqual(expect.arrayContaining(['Lab amine base', 'Lab amine HCl', 'Lab diacid', 'Lab diacid disodium']));
   });
   test('a blank range is the built-in library', () => {
-    expect(ph([['tris base', 50]], 25, '', [[null, null], ['', '']])).toBeCloseTo(ph([['tris base', 50]]), SAME_DIGITS);
+    expect(
+      ph([['tris base', 50]], 25, '', [
+        [null, null],
+        ['', ''],
+      ]),
+    ).toBeCloseTo(ph([['tris base', 50]]), SAME_DIGITS);
   });
   test('errors name the row: bad pKa list, conflicting repeat, clash with a library name, missing molar mass, bad counter-ions', () => {
     expect(errorOf(() => ph([['tris base', 1]], 25, '', [['X', 0, '6.1; seven', '', '', '', 100]]))).toMatchObject({ kind: 'value', code: 'notANumber', field: 'pKa list' });
-    expect(errorOf(() => ph([['tris base', 1]], 25, '', [['X', 0, '6', '', '', '', 100], ['X', 1, '6', '', '', 'X2', 100]])).message).toMatch(/^userSubstances, row 2: "X" is given twice/);
-    expect(errorOf(() => ph([['tris base', 1]], 25, '', [['X', 0, '6', '', '', 'X acid', 100], ['HEPES', 0, '7.5', '', '', 'my hepes', 238]])).message).toMatch(/^userSubstances, row 2: .*"HEPES" is already a name/);
+    expect(
+      errorOf(() =>
+        ph([['tris base', 1]], 25, '', [
+          ['X', 0, '6', '', '', '', 100],
+          ['X', 1, '6', '', '', 'X2', 100],
+        ]),
+      ).message,
+    ).toMatch(/^userSubstances, row 2: "X" is given twice/);
+    expect(
+      errorOf(() =>
+        ph([['tris base', 1]], 25, '', [
+          ['X', 0, '6', '', '', 'X acid', 100],
+          ['HEPES', 0, '7.5', '', '', 'my hepes', 238],
+        ]),
+      ).message,
+    ).toMatch(/^userSubstances, row 2: .*"HEPES" is already a name/);
     expect(errorOf(() => ph([['tris base', 1]], 25, '', [['X', 0, '6', '', '', '', '']])).message).toMatch(/^userSubstances, row 1: .*molarMass is missing/);
     expect(errorOf(() => ph([['tris base', 1]], 25, '', [['X', 0, '6', '', '', '', 100, 'sodium two']])).message).toMatch(/^userSubstances, row 1: cannot read the counter-ions/);
     expect(errorOf(() => ph([['tris base', 1]], 25, '', [['X', 0, '', '', '', '', 100]])).message).toMatch(/^userSubstances, row 1: pKa list is blank/);

@@ -110,7 +110,10 @@ export function workbookParts(sheets: readonly SheetSpec[], extra: readonly Part
     { name: '_rels/.rels', data: rootRels },
     { name: 'xl/workbook.xml', data: workbook },
     { name: 'xl/_rels/workbook.xml.rels', data: rels },
-    ...sheets.map((s, i) => ({ name: `xl/worksheets/sheet${i + 1}.xml`, data: `<?xml version="1.0" encoding="UTF-8"?><worksheet xmlns="${NS}" xmlns:r="${REL}"><sheetData>${s.data}</sheetData>${s.after ?? ''}</worksheet>` })),
+    ...sheets.map((s, i) => ({
+      name: `xl/worksheets/sheet${i + 1}.xml`,
+      data: `<?xml version="1.0" encoding="UTF-8"?><worksheet xmlns="${NS}" xmlns:r="${REL}"><sheetData>${s.data}</sheetData>${s.after ?? ''}</worksheet>`,
+    })),
     ...extra,
   ];
 }

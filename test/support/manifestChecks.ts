@@ -54,7 +54,12 @@ function elements(node: unknown, name = ''): [string, Node][] {
   if (Array.isArray(node)) return node.flatMap((n) => elements(n, name));
   if (node === null || typeof node !== 'object') return [];
   const here: [string, Node][] = name ? [[name, node as Node]] : [];
-  return [...here, ...Object.entries(node as Node).filter(([k]) => !k.startsWith('@')).flatMap(([k, v]) => elements(v, k))];
+  return [
+    ...here,
+    ...Object.entries(node as Node)
+      .filter(([k]) => !k.startsWith('@'))
+      .flatMap(([k, v]) => elements(v, k)),
+  ];
 }
 
 /**
@@ -69,7 +74,8 @@ export function manifestProblems(xml: string, origin: string, served: (path: str
   const doc = parseManifest(xml);
   const overrides = doc.VersionOverrides as Node;
   const resources = overrides.Resources as Node;
-  const table = (group: string, item: string) => new Map(asList((resources[group] as Node | undefined)?.[item] as Node[] | Node).map((n) => [String(n['@id']), String(n['@DefaultValue'])]));
+  const table = (group: string, item: string) =>
+    new Map(asList((resources[group] as Node | undefined)?.[item] as Node[] | Node).map((n) => [String(n['@id']), String(n['@DefaultValue'])]));
   const kinds = {
     url: table('bt:Urls', 'bt:Url'),
     image: table('bt:Images', 'bt:Image'),

@@ -33,7 +33,10 @@ export async function openPreview(): Promise<PreviewSession> {
   if (!haveBrowser) throw new Error(`CI=true and no Chromium at ${CHROMIUM}: the browser tests must run in CI (apt-get install -y chromium).`);
   ensureBuild();
   mkdirSync(ARTIFACTS, { recursive: true });
-  const server: ChildProcess = spawn(process.execPath, [join(ROOT, 'scripts', 'serve.js'), '--port', '0', '--no-open', '--no-pid-file'], { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'] });
+  const server: ChildProcess = spawn(process.execPath, [join(ROOT, 'scripts', 'serve.js'), '--port', '0', '--no-open', '--no-pid-file'], {
+    cwd: ROOT,
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
   const baseUrl = await new Promise<string>((resolve, reject) => {
     const timer = setTimeout(() => reject(new Error('server did not start')), 30000);
     server.stdout!.on('data', (chunk: Buffer) => {

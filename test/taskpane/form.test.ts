@@ -2,7 +2,14 @@ import { checkForm, defaultInput } from '../../src/taskpane/form';
 
 describe('pane form: numbers as people type them (the one input reader)', () => {
   it('accepts a form typed with units and decimal commas', () => {
-    const checked = checkForm({ ...defaultInput(), salts: 'NaCl 150 mM', volumeMl: '0,5 L', benchTemperatureC: '21,5 °C', useTemperaturesC: '4 °C; 25 °C', concentrationsMm: '0,025 M' });
+    const checked = checkForm({
+      ...defaultInput(),
+      salts: 'NaCl 150 mM',
+      volumeMl: '0,5 L',
+      benchTemperatureC: '21,5 °C',
+      useTemperaturesC: '4 °C; 25 °C',
+      concentrationsMm: '0,025 M',
+    });
     expect(checked.ok).toBe(true);
     if (!checked.ok) return;
     expect(checked.request.volumeMl).toBe(500);

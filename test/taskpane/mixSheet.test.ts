@@ -18,7 +18,11 @@ const SHELF = [
 function setup() {
   const book = new PreviewWorkbook(createFormulaEngine({ 'Stock shelf': SHELF }));
   let active = 'Stock shelf';
-  const port = new PreviewAdapter(book, () => ({ sheet: active, range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }), (s) => (active = s));
+  const port = new PreviewAdapter(
+    book,
+    () => ({ sheet: active, range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }),
+    (s) => (active = s),
+  );
   return { book, port, active: () => active };
 }
 
@@ -60,8 +64,14 @@ describe('mix sheet from the pane', () => {
     const form = { ...defaultMixForm(), shelf: "'Stock shelf'!A1:F4" };
     expect(await buildMixSheet(port, { ...form, shelf: 'the shelf' })).toMatchObject({ ok: false, errors: { shelf: expect.stringMatching(/^Give the range/) } });
     expect(await buildMixSheet(port, { ...form, shelf: "'Old shelf'!A1:F4" })).toMatchObject({ ok: false, errors: { shelf: expect.stringMatching(/no sheet named "Old shelf"/) } });
-    expect(await buildMixSheet(port, { ...form, targets: 'MOPS 20 mM' })).toMatchObject({ ok: false, errors: { targets: expect.stringMatching(/no stock on the shelf holds "MOPS"/) } });
-    expect(await buildMixSheet(port, { ...form, targets: 'NaCl 4000 mM; tris 900 mM' })).toMatchObject({ ok: false, errors: { targets: expect.stringMatching(/^The stocks do not fit/) } });
+    expect(await buildMixSheet(port, { ...form, targets: 'MOPS 20 mM' })).toMatchObject({
+      ok: false,
+      errors: { targets: expect.stringMatching(/no stock on the shelf holds "MOPS"/) },
+    });
+    expect(await buildMixSheet(port, { ...form, targets: 'NaCl 4000 mM; tris 900 mM' })).toMatchObject({
+      ok: false,
+      errors: { targets: expect.stringMatching(/^The stocks do not fit/) },
+    });
     expect(book.sheetNames()).toEqual(['Stock shelf']);
   });
 });

@@ -17,7 +17,11 @@ import { PreviewAdapter } from '../../src/workbook/previewAdapter';
 function setup() {
   const book = new PreviewWorkbook(createFormulaEngine({ Notes: [['our own notes']] }));
   let active = 'Notes';
-  const port = new PreviewAdapter(book, () => ({ sheet: active, range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }), (s) => (active = s));
+  const port = new PreviewAdapter(
+    book,
+    () => ({ sheet: active, range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }),
+    (s) => (active = s),
+  );
   return { book, port, active: () => active };
 }
 
@@ -57,7 +61,12 @@ describe('recipe table in the preview workbook', () => {
       titrant: { form: setting('Titrant') as string, concentrationM: setting('Titrant stock (M)') as number },
       benchTemperatureC: setting('Bench temp. (°C)') as number,
       partVolumeFraction: setting('Adjust at (fraction)') as number,
-      salts: [{ form: book.value(result.sheet, SALTS_BLOCK.row + 1, SALTS_BLOCK.col) as string, concentrationMm: book.value(result.sheet, SALTS_BLOCK.row + 1, SALTS_BLOCK.col + 1) as number }],
+      salts: [
+        {
+          form: book.value(result.sheet, SALTS_BLOCK.row + 1, SALTS_BLOCK.col) as string,
+          concentrationMm: book.value(result.sheet, SALTS_BLOCK.row + 1, SALTS_BLOCK.col + 1) as number,
+        },
+      ],
     });
     expect(Math.abs((v(COL.titrantMl) as number) - plan.titration!.volumeMl)).toBeLessThan(1e-9);
     expect(Math.abs((v(COL.meter) as number) - plan.meter.pH)).toBeLessThan(1e-9);
@@ -115,13 +124,39 @@ describe('recipe table in the preview workbook', () => {
   });
 
   test('your substances: read from the workbook, a range without a sheet taken on the active sheet and written sheet-qualified', async () => {
-    const header = ['name', 'charge of most protonated form', 'pKa list', 'ΔH list kJ/mol', 'ΔCp list J/(K·mol)', 'form name', 'molar mass g/mol', 'counter-ions', 'protons lost', 'formula'];
-    const book = new PreviewWorkbook(createFormulaEngine({
-      'Lab substances': [header, ['Lab amine', 1, '7.85', '40', '', 'Lab amine base', 131.2, '', '', ''], ['lab amine', '', '', '', '', 'Lab amine HCl', 167.6, 'Cl-', '', '']],
-    }));
+    const header = [
+      'name',
+      'charge of most protonated form',
+      'pKa list',
+      'ΔH list kJ/mol',
+      'ΔCp list J/(K·mol)',
+      'form name',
+      'molar mass g/mol',
+      'counter-ions',
+      'protons lost',
+      'formula',
+    ];
+    const book = new PreviewWorkbook(
+      createFormulaEngine({
+        'Lab substances': [header, ['Lab amine', 1, '7.85', '40', '', 'Lab amine base', 131.2, '', '', ''], ['lab amine', '', '', '', '', 'Lab amine HCl', 167.6, 'Cl-', '', '']],
+      }),
+    );
     let active = 'Lab substances';
-    const port = new PreviewAdapter(book, () => ({ sheet: active, range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }), (s) => (active = s));
-    const input = { ...defaultInput(), buffer: 'Lab amine', form: 'Lab amine base', titrant: 'HCl', phMode: 'list' as const, phList: '7.6', useTemperaturesC: '25', userSubstances: 'A1:J3' };
+    const port = new PreviewAdapter(
+      book,
+      () => ({ sheet: active, range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }),
+      (s) => (active = s),
+    );
+    const input = {
+      ...defaultInput(),
+      buffer: 'Lab amine',
+      form: 'Lab amine base',
+      titrant: 'HCl',
+      phMode: 'list' as const,
+      phList: '7.6',
+      useTemperaturesC: '25',
+      userSubstances: 'A1:J3',
+    };
     const result = await buildRecipeTable(port, input, { version: '0.1.0', now: NOW });
     expect(result.ok).toBe(true);
     if (!result.ok) return;
@@ -178,25 +213,96 @@ describe('recipe table in the preview workbook', () => {
 
   test('every route (issue 17, item 1): a 10× stock, two forms and several salts, and a salt to a target, each row the planner’s', async () => {
     const { book, port } = setup();
-    const stock = await buildRecipeTable(port, { ...defaultInput(), buffer: 'MES', form: 'MES free acid', route: 'stock', stockFold: '10', stockVolumeMl: '100 mL', titrantStockM: '10', phMode: 'list', phList: '6.0', useTemperaturesC: '25', concentrationsMm: '50', salts: '' }, { version: '0.1.0', now: NOW });
+    const stock = await buildRecipeTable(
+      port,
+      {
+        ...defaultInput(),
+        buffer: 'MES',
+        form: 'MES free acid',
+        route: 'stock',
+        stockFold: '10',
+        stockVolumeMl: '100 mL',
+        titrantStockM: '10',
+        phMode: 'list',
+        phList: '6.0',
+        useTemperaturesC: '25',
+        concentrationsMm: '50',
+        salts: '',
+      },
+      { version: '0.1.0', now: NOW },
+    );
     if (!stock.ok) throw new Error(JSON.stringify(stock));
     const row = LAYOUT.firstDataRow;
-    const plan = planRecipe({ buffer: 'MES', targetPh: 6.0, concentrationMm: 50, volumeMl: 1000, useTemperatureC: 25, route: 'stock', form: 'MES free acid', titrant: { form: 'NaOH', concentrationM: 10 }, stock: { fold: 10, volumeMl: 100 }, benchTemperatureC: 22, partVolumeFraction: 0.8 });
+    const plan = planRecipe({
+      buffer: 'MES',
+      targetPh: 6.0,
+      concentrationMm: 50,
+      volumeMl: 1000,
+      useTemperatureC: 25,
+      route: 'stock',
+      form: 'MES free acid',
+      titrant: { form: 'NaOH', concentrationM: 10 },
+      stock: { fold: 10, volumeMl: 100 },
+      benchTemperatureC: 22,
+      partVolumeFraction: 0.8,
+    });
     expect(Math.abs((book.value(stock.sheet, row, COL.titrantMl) as number) - plan.titration!.volumeMl)).toBeLessThan(1e-9);
     expect(Math.abs((book.value(stock.sheet, row, COL.meter) as number) - plan.meter.pH)).toBeLessThan(1e-9);
     expect(book.value(stock.sheet, row, COL.stockPerBatchMl)).toBe(100);
     expect(stock.sheet).toMatch(/10x stock pH 6$/);
 
-    const two = await buildRecipeTable(port, { ...defaultInput(), buffer: 'phosphate', route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'sodium phosphate dibasic heptahydrate', salts: 'NaCl 137 mM; KCl 2.7 mM', phMode: 'list', phList: '7.4', useTemperaturesC: '25', concentrationsMm: '10' }, { version: '0.1.0', now: NOW });
+    const two = await buildRecipeTable(
+      port,
+      {
+        ...defaultInput(),
+        buffer: 'phosphate',
+        route: 'two-forms',
+        acidForm: 'NaH2PO4·H2O',
+        baseForm: 'sodium phosphate dibasic heptahydrate',
+        salts: 'NaCl 137 mM; KCl 2.7 mM',
+        phMode: 'list',
+        phList: '7.4',
+        useTemperaturesC: '25',
+        concentrationsMm: '10',
+      },
+      { version: '0.1.0', now: NOW },
+    );
     if (!two.ok) throw new Error(JSON.stringify(two));
     // The settings show the forms as the library names them, not as typed.
     expect(book.value(two.sheet, settingRow('Acid form'), SETTING_VALUE_COL)).toBe('sodium phosphate monobasic monohydrate');
-    const twoPlan = planRecipe({ buffer: 'phosphate', targetPh: 7.4, concentrationMm: 10, volumeMl: 1000, useTemperatureC: 25, route: 'two-forms', acidForm: 'sodium phosphate monobasic monohydrate', baseForm: 'sodium phosphate dibasic heptahydrate', salts: [{ form: 'sodium chloride', concentrationMm: 137 }, { form: 'potassium chloride', concentrationMm: 2.7 }], benchTemperatureC: 22 });
+    const twoPlan = planRecipe({
+      buffer: 'phosphate',
+      targetPh: 7.4,
+      concentrationMm: 10,
+      volumeMl: 1000,
+      useTemperatureC: 25,
+      route: 'two-forms',
+      acidForm: 'sodium phosphate monobasic monohydrate',
+      baseForm: 'sodium phosphate dibasic heptahydrate',
+      salts: [
+        { form: 'sodium chloride', concentrationMm: 137 },
+        { form: 'potassium chloride', concentrationMm: 2.7 },
+      ],
+      benchTemperatureC: 22,
+    });
     expect(Math.abs((book.value(two.sheet, row, COL.baseFormGrams) as number) - twoPlan.components.find((c) => c.role === 'base form')!.grams!)).toBeLessThan(1e-9);
     expect(Math.abs((book.value(two.sheet, row, COL.ionicStrength) as number) - twoPlan.predictions.ionicStrengthM * 1000)).toBeLessThan(1e-9);
     expect(book.value(two.sheet, SALTS_BLOCK.row + 2, SALTS_BLOCK.col)).toBe('potassium chloride');
 
-    const target = await buildRecipeTable(port, { ...defaultInput(), salts: '', saltTargetGoal: 'idealOsmolarityMosm', saltTargetForm: 'NaCl', saltTargetValue: '300', phMode: 'list', phList: '7.4', useTemperaturesC: '25' }, { version: '0.1.0', now: NOW });
+    const target = await buildRecipeTable(
+      port,
+      {
+        ...defaultInput(),
+        salts: '',
+        saltTargetGoal: 'idealOsmolarityMosm',
+        saltTargetForm: 'NaCl',
+        saltTargetValue: '300',
+        phMode: 'list',
+        phList: '7.4',
+        useTemperaturesC: '25',
+      },
+      { version: '0.1.0', now: NOW },
+    );
     if (!target.ok) throw new Error(JSON.stringify(target));
     expect(Math.abs((book.value(target.sheet, row, COL.osmolarity) as number) - 300)).toBeLessThan(0.01);
     expect(book.value(target.sheet, row, COL.saltTargetGrams) as number).toBeGreaterThan(0);
@@ -239,12 +345,16 @@ describe('recipe table in the preview workbook', () => {
     const { book, port } = setup();
     const phases: string[] = [];
     let slices = 0;
-    const stopped = await buildRecipeTable(port, { ...defaultInput(), phStep: '0.01' }, {
-      version: '0.1.0',
-      onProgress: (_d, _t, phase) => phases.push(phase),
-      yieldToPage: async () => void slices++,
-      cancelled: () => slices >= 2,
-    });
+    const stopped = await buildRecipeTable(
+      port,
+      { ...defaultInput(), phStep: '0.01' },
+      {
+        version: '0.1.0',
+        onProgress: (_d, _t, phase) => phases.push(phase),
+        yieldToPage: async () => void slices++,
+        cancelled: () => slices >= 2,
+      },
+    );
     expect(stopped.ok).toBe(false);
     if (!stopped.ok) expect(stopped.cancelled).toBe(true);
     expect(phases[0]).toBe('planning');
@@ -253,10 +363,16 @@ describe('recipe table in the preview workbook', () => {
 
   test('a name that leaves the hydrate open is not resolved silently (issue 17, item 5): the pane asks which form is on the shelf', async () => {
     const { book, port } = setup();
-    const asked = await buildRecipeTable(port, { ...defaultInput(), buffer: 'phosphate', route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'sodium phosphate dibasic', salts: 'calcium chloride 1 mM' }, { version: '0.1.0', now: NOW });
+    const asked = await buildRecipeTable(
+      port,
+      { ...defaultInput(), buffer: 'phosphate', route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'sodium phosphate dibasic', salts: 'calcium chloride 1 mM' },
+      { version: '0.1.0', now: NOW },
+    );
     expect(asked.ok).toBe(false);
     if (asked.ok) return;
-    expect(asked.errors.baseForm).toMatch(/sodium phosphate dibasic anhydrous, 141\.9\d g\/mol.*sodium phosphate dibasic heptahydrate, 268\.0\d g\/mol.*name the one on your shelf/);
+    expect(asked.errors.baseForm).toMatch(
+      /sodium phosphate dibasic anhydrous, 141\.9\d g\/mol.*sodium phosphate dibasic heptahydrate, 268\.0\d g\/mol.*name the one on your shelf/,
+    );
     expect(asked.errors.salts).toMatch(/calcium chloride dihydrate/);
     expect(asked.errors.acidForm).toBeUndefined();
     expect(book.sheetNames()).toEqual(['Notes']);
@@ -264,10 +380,26 @@ describe('recipe table in the preview workbook', () => {
 
   test('a titrant of the buffer itself (issue 17, item 6): the row states the total it makes; the "hold" setting weighs less instead', async () => {
     const { book, port } = setup();
-    const built = await buildRecipeTable(port, { ...defaultInput(), buffer: 'acetate', form: 'sodium acetate trihydrate', titrant: 'acetic acid', phMode: 'list', phList: '4.6', useTemperaturesC: '25', concentrationsMm: '100', salts: '' }, { version: '0.1.0', now: NOW });
+    const built = await buildRecipeTable(
+      port,
+      {
+        ...defaultInput(),
+        buffer: 'acetate',
+        form: 'sodium acetate trihydrate',
+        titrant: 'acetic acid',
+        phMode: 'list',
+        phList: '4.6',
+        useTemperaturesC: '25',
+        concentrationsMm: '100',
+        salts: '',
+      },
+      { version: '0.1.0', now: NOW },
+    );
     if (!built.ok) throw new Error(JSON.stringify(built));
     const row = LAYOUT.firstDataRow;
-    expect(String(book.value(built.sheet, row, COL.warnings))).toMatch(/is itself a form of acetate: the finished buffer holds \d+(\.\d+)? mM acetate in all, not the 100 mM stated/);
+    expect(String(book.value(built.sheet, row, COL.warnings))).toMatch(
+      /is itself a form of acetate: the finished buffer holds \d+(\.\d+)? mM acetate in all, not the 100 mM stated/,
+    );
     const stated = book.value(built.sheet, row, COL.formGrams) as number;
     book.setContents(built.sheet, settingRow('Titrant of the buffer'), SETTING_VALUE_COL, [['hold']]);
     expect(String(book.value(built.sheet, row, COL.warnings))).not.toMatch(/is itself a form of acetate/);

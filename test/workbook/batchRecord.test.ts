@@ -7,12 +7,26 @@ import { batchRecordLayout, writeBatchRecord } from '../../src/workbook/batchRec
 import { PreviewAdapter } from '../../src/workbook/previewAdapter';
 
 /** Our own cold-room tris saline: 50 mM tris, pH 7.5 at 4 °C, 500 mL, adjusted at 22 °C with 1 M HCl. */
-const INPUT: RecipeInput = { buffer: 'tris', targetPh: 7.5, useTemperatureC: 4, benchTemperatureC: 22, concentrationMm: 50, volumeMl: 500, form: 'tris base', titrant: { form: 'HCl', concentrationM: 1 }, salts: [{ form: 'NaCl', concentrationMm: 150 }] };
+const INPUT: RecipeInput = {
+  buffer: 'tris',
+  targetPh: 7.5,
+  useTemperatureC: 4,
+  benchTemperatureC: 22,
+  concentrationMm: 50,
+  volumeMl: 500,
+  form: 'tris base',
+  titrant: { form: 'HCl', concentrationM: 1 },
+  salts: [{ form: 'NaCl', concentrationMm: 150 }],
+};
 const plan = planRecipe(INPUT);
 
 async function record() {
   const book = new PreviewWorkbook(createFormulaEngine({ Sheet1: [] }));
-  const port = new PreviewAdapter(book, () => ({ sheet: 'Sheet1', range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }), () => undefined);
+  const port = new PreviewAdapter(
+    book,
+    () => ({ sheet: 'Sheet1', range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }),
+    () => undefined,
+  );
   const sheet = await writeBatchRecord(port, INPUT, plan, 'test');
   const layout = batchRecordLayout(INPUT, plan, 'test');
   const set = (at: { row: number; col: number }, value: number) => book.setContents(sheet, at.row, at.col, [[value]]);

@@ -44,7 +44,11 @@ function fakeExcel(sheetNames: string[], values: unknown[][] = [[1]]) {
   };
   const seriesAdded: Record<string, unknown>[] = [];
   const series = () => {
-    const s: Record<string, unknown> = { format: { line: {} }, setXAxisValues: (r: unknown) => calls.push({ what: 'setXAxisValues', args: [r] }), setValues: (r: unknown) => calls.push({ what: 'setValues', args: [r] }) };
+    const s: Record<string, unknown> = {
+      format: { line: {} },
+      setXAxisValues: (r: unknown) => calls.push({ what: 'setXAxisValues', args: [r] }),
+      setValues: (r: unknown) => calls.push({ what: 'setValues', args: [r] }),
+    };
     seriesAdded.push(s);
     return s;
   };
@@ -74,20 +78,24 @@ function fakeExcel(sheetNames: string[], values: unknown[][] = [[1]]) {
     sync(): Promise<void>;
   };
   context.workbook.worksheets = {
-        get items() {
-          return names.map((n) => ({ name: n }));
-        },
-        load: () => undefined,
-        getItemOrNullObject: (name: string) => ({ isNullObject: !names.includes(name), load: () => undefined }),
-        getItem: (name: string) => worksheet(name),
-        add: (name: string) => {
-          calls.push({ what: 'worksheets.add', args: [name] });
-          names.push(name);
-        },
+    get items() {
+      return names.map((n) => ({ name: n }));
+    },
+    load: () => undefined,
+    getItemOrNullObject: (name: string) => ({ isNullObject: !names.includes(name), load: () => undefined }),
+    getItem: (name: string) => worksheet(name),
+    add: (name: string) => {
+      calls.push({ what: 'worksheets.add', args: [name] });
+      names.push(name);
+    },
   };
   const run = async <T>(batch: (c: Excel.RequestContext) => Promise<T>) => batch(context as unknown as Excel.RequestContext);
   const stored = new Map<string, unknown>();
-  const settings = { get: (k: string) => stored.get(k), set: (k: string, v: unknown) => void stored.set(k, v), saveAsync: (cb?: (r: { status: unknown }) => void) => cb?.({ status: 'succeeded' }) };
+  const settings = {
+    get: (k: string) => stored.get(k),
+    set: (k: string, v: unknown) => void stored.set(k, v),
+    saveAsync: (cb?: (r: { status: unknown }) => void) => cb?.({ status: 'succeeded' }),
+  };
   return { adapter: new ExcelAdapter(run, settings), calls, ranges, stored, names };
 }
 
@@ -120,8 +128,14 @@ describe('ExcelAdapter on office-addin-mock', () => {
       row: 1,
       col: 0,
       cells: [
-        [{ value: 'Target pH', style: 'header' }, { value: 'Titrant (mL)', style: 'header' }],
-        [{ value: 7.4, style: 'input', numberFormat: '0.00' }, { formula: '=PROTON.TITRANT.ML("HEPES",25,1000,A3,"NaOH",1)', numberFormat: '0.00' }],
+        [
+          { value: 'Target pH', style: 'header' },
+          { value: 'Titrant (mL)', style: 'header' },
+        ],
+        [
+          { value: 7.4, style: 'input', numberFormat: '0.00' },
+          { formula: '=PROTON.TITRANT.ML("HEPES",25,1000,A3,"NaOH",1)', numberFormat: '0.00' },
+        ],
       ],
     });
     const r = ranges.get('Prep!A2:B3')!;
@@ -174,10 +188,13 @@ describe('ExcelAdapter on office-addin-mock', () => {
   });
 
   test('a values copy: reads the used range values and writes them, with provenance, on a new sheet', async () => {
-    const { adapter, calls, ranges } = fakeExcel(['Recipe'], [
-      ['a', 1.23456],
-      [null, 2],
-    ]);
+    const { adapter, calls, ranges } = fakeExcel(
+      ['Recipe'],
+      [
+        ['a', 1.23456],
+        [null, 2],
+      ],
+    );
     const copy = await valuesCopy(adapter, { version: '0.1.0', now: new Date('2026-03-02T09:30:00Z') });
     expect(copy).toEqual({ sheet: 'Recipe values', source: 'Recipe' });
     expect(calls[0]).toEqual({ what: 'worksheets.add', args: ['Recipe values'] });

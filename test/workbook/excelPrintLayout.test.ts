@@ -7,9 +7,28 @@ import { ExcelAdapter, ExcelRun } from '../../src/workbook/excelAdapter';
 function fake(supported: boolean) {
   const page: Record<string, unknown> = {};
   const calls: string[] = [];
-  (globalThis as unknown as { Office: unknown }).Office = { context: { requirements: { isSetSupported: (set: string, version: string) => supported && set === 'ExcelApi' && version === '1.9' } } };
+  (globalThis as unknown as { Office: unknown }).Office = {
+    context: { requirements: { isSetSupported: (set: string, version: string) => supported && set === 'ExcelApi' && version === '1.9' } },
+  };
   const context = {
-    workbook: { worksheets: { getItem: (name: string) => (calls.push(`sheet ${name}`), { pageLayout: { ...{ setPrintArea: (a: string) => calls.push(`area ${a}`) }, set orientation(v: string) { page.orientation = v; }, set zoom(z: unknown) { page.zoom = z; } } }) } },
+    workbook: {
+      worksheets: {
+        getItem: (name: string) => (
+          calls.push(`sheet ${name}`),
+          {
+            pageLayout: {
+              ...{ setPrintArea: (a: string) => calls.push(`area ${a}`) },
+              set orientation(v: string) {
+                page.orientation = v;
+              },
+              set zoom(z: unknown) {
+                page.zoom = z;
+              },
+            },
+          }
+        ),
+      },
+    },
     sync: async () => undefined,
   };
   const run: ExcelRun = (batch) => batch(context as unknown as Excel.RequestContext);

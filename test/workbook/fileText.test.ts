@@ -12,7 +12,11 @@ import { xlsxFileName } from '../../src/preview/xlsx';
 
 describe('delimited text (RFC 4180)', () => {
   test('tab-separated text round-trips fields holding tabs, line breaks and quotes', () => {
-    const rows = [['HEPES', 'a\tb'], ['say "hi"', 'two\r\nlines'], ['', '7.4']];
+    const rows = [
+      ['HEPES', 'a\tb'],
+      ['say "hi"', 'two\r\nlines'],
+      ['', '7.4'],
+    ];
     const text = toTabSeparated(rows);
     expect(text).toBe('HEPES\t"a\tb"\r\n"say ""hi"""\t"two\r\nlines"\r\n\t7.4\r\n');
     expect(parseDelimited(text, '\t')).toEqual(rows);
@@ -33,13 +37,15 @@ describe('CSV cells for the engine', () => {
   });
 
   test('a formula past the nesting limit and a file past the cell budget are refused with the cell', () => {
-    expect(() => csvRows(`a\r\n=${'('.repeat(65)}1${')'.repeat(65)}\r\n`)).toThrow(new FileRefused('A2 of the CSV file: a formula nested 65 levels deep; a formula may nest up to 64 levels.'));
+    expect(() => csvRows(`a\r\n=${'('.repeat(65)}1${')'.repeat(65)}\r\n`)).toThrow(
+      new FileRefused('A2 of the CSV file: a formula nested 65 levels deep; a formula may nest up to 64 levels.'),
+    );
     expect(() => csvRows('1,2,3\r\n4,5,6\r\n', new CellBudget(5))).toThrow(FileRefused);
   });
 });
 
 describe('worksheet cells for the engine', () => {
-  test('a merged range keeps its value in its first cell only; an array formula\'s other cells are left to it; a saved PROTON name is restored', () => {
+  test("a merged range keeps its value in its first cell only; an array formula's other cells are left to it; a saved PROTON name is restored", () => {
     const ws = new ExcelJS.Workbook().addWorksheet('Prep');
     ws.getCell('A1').value = 'Cold room';
     ws.mergeCells('A1:C1');
@@ -51,7 +57,7 @@ describe('worksheet cells for the engine', () => {
 });
 
 describe('the written .xlsx names Proton Ledger', () => {
-  test('docProps/app.xml names Proton Ledger, not the library\'s default program, and the workbook still reads', async () => {
+  test("docProps/app.xml names Proton Ledger, not the library's default program, and the workbook still reads", async () => {
     const wb = new ExcelJS.Workbook();
     wb.addWorksheet('Prep').getCell('A1').value = 42;
     const written = new Uint8Array((await wb.xlsx.writeBuffer()) as ArrayBuffer);

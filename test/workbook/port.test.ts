@@ -7,7 +7,25 @@ import { PreviewAdapter } from '../../src/workbook/previewAdapter';
 const LINEAR_BOUND_MS = 500;
 
 describe('text from user input is written as text, never as a formula', () => {
-  it.each(['=HYPERLINK("http://example.invalid","x")', '+1+1', '-2+3', '@SUM(A1)', '\t=1', "'My substances'!A2:J20", '\n=1+1', '\r=1+1', '\tSUM(A1)', '＝1+1', '＋1', '－2', '＠SUM(A1)', ' =1+1', '   @SUM(A1)', '\u3000＝1', ' \t=1'])('%p gets the text mark', (text) => {
+  it.each([
+    '=HYPERLINK("http://example.invalid","x")',
+    '+1+1',
+    '-2+3',
+    '@SUM(A1)',
+    '\t=1',
+    "'My substances'!A2:J20",
+    '\n=1+1',
+    '\r=1+1',
+    '\tSUM(A1)',
+    '＝1+1',
+    '＋1',
+    '－2',
+    '＠SUM(A1)',
+    ' =1+1',
+    '   @SUM(A1)',
+    '\u3000＝1',
+    ' \t=1',
+  ])('%p gets the text mark', (text) => {
     expect(literal(text)).toBe(`'${text}`);
   });
 
@@ -31,7 +49,11 @@ describe('text from user input is written as text, never as a formula', () => {
 
   it('the preview adapter stores such a value as the text typed, not its result', async () => {
     const book = new PreviewWorkbook(createFormulaEngine({ Sheet1: [[null]] }));
-    const port = new PreviewAdapter(book, () => ({ sheet: 'Sheet1', range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }), () => undefined);
+    const port = new PreviewAdapter(
+      book,
+      () => ({ sheet: 'Sheet1', range: { row: 0, col: 0, rowCount: 1, colCount: 1 } }),
+      () => undefined,
+    );
     await port.writeTable('Sheet1', { row: 0, col: 0, cells: [[{ value: '=1+1' }, { value: '@SUM(1)' }, { formula: '=1+1' }]] });
     expect(book.value('Sheet1', 0, 0)).toBe('=1+1');
     expect(book.formula('Sheet1', 0, 0)).toBeUndefined();

@@ -133,7 +133,16 @@ export function asMade(plan: RecipePlan, actuals: BatchActuals, tolerances: Batc
   });
 
   const checks: QuantityCheck[] = [];
-  const phCheck = (key: string, label: string, value: number): QuantityCheck => ({ key, label, unit: 'pH', planned: plan.targetPh, value, deviation: value - plan.targetPh, tolerance: tol.ph, pass: Math.abs(value - plan.targetPh) <= tol.ph });
+  const phCheck = (key: string, label: string, value: number): QuantityCheck => ({
+    key,
+    label,
+    unit: 'pH',
+    planned: plan.targetPh,
+    value,
+    deviation: value - plan.targetPh,
+    tolerance: tol.ph,
+    pass: Math.abs(value - plan.targetPh) <= tol.ph,
+  });
   checks.push(phCheck('pHAtUse', `pH at ${useT} °C, as made`, predictions.pHAtUse));
   const finalPh = readNumberField('actual.finalPh', a.finalPh);
   if (finalPh !== undefined) checks.push(phCheck('measuredPhAtUse', `pH at ${useT} °C, measured`, finalPh));
@@ -142,7 +151,16 @@ export function asMade(plan: RecipePlan, actuals: BatchActuals, tolerances: Batc
     // The band of a reading: the meter's own tolerance and the pKa's uncertainty (which moves a buffer's pH about one for one).
     const band = tol.meterPh + (plan.titration?.pKaUncertainty ?? DEFAULT_PKA_UNCERTAINTY);
     const ok = Math.abs(meterRead - meterPh) <= band;
-    checks.push({ key: 'meterReading', label: `meter at ${benchT} °C, recorded against as made`, unit: 'pH', planned: meterPh, value: meterRead, deviation: meterRead - meterPh, tolerance: band, pass: ok });
+    checks.push({
+      key: 'meterReading',
+      label: `meter at ${benchT} °C, recorded against as made`,
+      unit: 'pH',
+      planned: meterPh,
+      value: meterRead,
+      deviation: meterRead - meterPh,
+      tolerance: band,
+      pass: ok,
+    });
     if (!ok) w.push(warning('readingOffAsMade', MESSAGES.readingOffAsMade(meterRead, meterPh, band), 'actual.meterPh'));
   }
   const kappaCheck = (key: string, label: string, value: number): QuantityCheck => {

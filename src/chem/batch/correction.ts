@@ -53,7 +53,13 @@ function impliedTitrantM(start: Composition, t: Titrant, readingPh: number, name
   } catch (e) {
     if (!(e instanceof ChemError) || e.kind !== 'infeasible-target') throw e;
     const startPh = solvePh(start);
-    throw new ChemError('infeasible-target', 'readingUnexplained', MESSAGES.readingUnexplained(readingPh, startPh, name, direction), 'reading.ph', direction === 'raises' ? `a reading above pH ${startPh.toFixed(2)}` : `a reading below pH ${startPh.toFixed(2)}`);
+    throw new ChemError(
+      'infeasible-target',
+      'readingUnexplained',
+      MESSAGES.readingUnexplained(readingPh, startPh, name, direction),
+      'reading.ph',
+      direction === 'raises' ? `a reading above pH ${startPh.toFixed(2)}` : `a reading below pH ${startPh.toFixed(2)}`,
+    );
   }
 }
 
@@ -113,7 +119,9 @@ export function benchCorrection(plan: RecipePlan, state: BenchState, library: Su
   if (Math.abs(temperatureC - plan.meter.benchTemperatureC) > BENCH_TEMPERATURE_SLACK_C) {
     const endPointAtPlannedT = solvePh(withConditions(now(endMol), plan.meter.benchTemperatureC));
     if (Math.abs(endPointPh - endPointAtPlannedT) >= METER_RESOLUTION_PH) {
-      warnings.push(warning('benchTemperatureOffPlan', MESSAGES.benchTemperatureOffPlan(temperatureC, plan.meter.benchTemperatureC, endPointPh, endPointAtPlannedT), 'reading.temperatureC'));
+      warnings.push(
+        warning('benchTemperatureOffPlan', MESSAGES.benchTemperatureOffPlan(temperatureC, plan.meter.benchTemperatureC, endPointPh, endPointAtPlannedT), 'reading.temperatureC'),
+      );
     }
   }
 
@@ -133,7 +141,11 @@ export function benchCorrection(plan: RecipePlan, state: BenchState, library: Su
       const factor = impliedMol / addedMol;
       if (Math.abs(factor - 1) > tp.tolerancePercent / 100 && Math.abs(factor - 1) <= STOCK_CAUSE_RANGE) {
         const fits = stockM * factor;
-        causes.push({ cause: 'stock concentration', fits, warning: warning('causeStockConcentration', MESSAGES.causeStockConcentration(fits, stockM), 'actual.titrantConcentrationM') });
+        causes.push({
+          cause: 'stock concentration',
+          fits,
+          warning: warning('causeStockConcentration', MESSAGES.causeStockConcentration(fits, stockM), 'actual.titrantConcentrationM'),
+        });
       }
     }
     for (const item of items) {
@@ -164,13 +176,27 @@ export function benchCorrection(plan: RecipePlan, state: BenchState, library: Su
   }
   if (endMol > impliedMol) {
     const nextMl = ((endMol - impliedMol) / stockM) * 1000;
-    if (nextMl > roomMl) throw new ChemError('infeasible-target', 'correctionTooLarge', MESSAGES.correctionTooLarge(nextMl, roomMl, `${stockM} M ${t.form.name}`), 'actual.titrantConcentrationM', `a stock strong enough for ${roomMl.toPrecision(3)} mL`);
+    if (nextMl > roomMl)
+      throw new ChemError(
+        'infeasible-target',
+        'correctionTooLarge',
+        MESSAGES.correctionTooLarge(nextMl, roomMl, `${stockM} M ${t.form.name}`),
+        'actual.titrantConcentrationM',
+        `a stock strong enough for ${roomMl.toPrecision(3)} mL`,
+      );
     return { action: 'add', add: t.form.name, stockM, nextMl, firstPortionMl: share * nextMl, ...base, warnings };
   }
   const counter = counterOf(s, plan, stockM, library);
   warnings.push(warning('overshoot', MESSAGES.overshoot(t.form.name, counter.name), 'reading.ph'));
   const counterMol = impliedTitrantM(now(impliedMol), counter.titrant, endPointPh, counter.name, tp.direction === 'raises' ? 'lowers' : 'raises') * volumeL;
   const nextMl = (counterMol / counter.stockM) * 1000;
-  if (nextMl > roomMl) throw new ChemError('infeasible-target', 'correctionTooLarge', MESSAGES.correctionTooLarge(nextMl, roomMl, `${counter.stockM} M ${counter.name}`), 'counterTitrant.concentrationM', `a stock strong enough for ${roomMl.toPrecision(3)} mL`);
+  if (nextMl > roomMl)
+    throw new ChemError(
+      'infeasible-target',
+      'correctionTooLarge',
+      MESSAGES.correctionTooLarge(nextMl, roomMl, `${counter.stockM} M ${counter.name}`),
+      'counterTitrant.concentrationM',
+      `a stock strong enough for ${roomMl.toPrecision(3)} mL`,
+    );
   return { action: 'counter', add: counter.name, stockM: counter.stockM, nextMl, firstPortionMl: share * nextMl, ...base, warnings };
 }

@@ -75,7 +75,14 @@ export interface AsMadeResult {
   /** True when every check with a tolerance passes. */
   readonly pass: boolean;
   readonly components: readonly ComponentCheck[];
-  readonly titrant?: { readonly name: string; readonly millilitres: number; readonly stockM: number; readonly plannedMm: number; readonly actualMm: number; readonly deviationPercent: number };
+  readonly titrant?: {
+    readonly name: string;
+    readonly millilitres: number;
+    readonly stockM: number;
+    readonly plannedMm: number;
+    readonly actualMm: number;
+    readonly deviationPercent: number;
+  };
   readonly predictions: {
     readonly pHAtUse: number;
     readonly pHAtBench: number;

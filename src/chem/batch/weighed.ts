@@ -45,9 +45,7 @@ function sameChemistry(a: LibraryForm, b: LibraryForm): boolean {
 export function siblingForms(form: LibraryForm, library: SubstanceLibrary): LibraryForm[] {
   const record = library.records().find((r) => r.name === form.substance);
   if (!record) return [];
-  return record.forms
-    .map((f) => library.findForm(f.name))
-    .filter((f) => f.name !== form.name && sameChemistry(f, form) && Math.abs(f.molarMass - form.molarMass) > 1e-6);
+  return record.forms.map((f) => library.findForm(f.name)).filter((f) => f.name !== form.name && sameChemistry(f, form) && Math.abs(f.molarMass - form.molarMass) > 1e-6);
 }
 
 /** The weighed forms as planned (planned grams and purity). */
@@ -61,7 +59,8 @@ export function plannedAsWeighed(plan: RecipePlan): WeighedActual[] {
  * @throws ChemError invalid-input for a bad mass or purity (field `actual.weighed[i].grams`), an unknown form, or a planned form with no mass given (`notWeighed`)
  */
 export function readWeighed(plan: RecipePlan, weighed: readonly WeighedActual[], library: SubstanceLibrary): { items: WeighedItem[]; warnings: ChemWarning[] } {
-  if (!Array.isArray(weighed)) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('actual.weighed', 'a list of the forms weighed with their grams'), 'actual.weighed', 'a list');
+  if (!Array.isArray(weighed))
+    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue('actual.weighed', 'a list of the forms weighed with their grams'), 'actual.weighed', 'a list');
   const planned = plannedWeighings(plan);
   const open = new Set(planned.map((_, i) => i));
   const warnings: ChemWarning[] = [];
@@ -109,7 +108,14 @@ export function shiftBuffer(c: Composition, bufferName: string, shift: number): 
     ...c,
     systems: c.systems.map((sys) =>
       sys.name === bufferName
-        ? systemAt({ name: sys.name, chargeOfMostProtonated: sys.chargeOfMostProtonated, steps: sys.steps.map((st) => ({ pKa: st.pKa + shift, deltaHkJ: st.deltaHkJ, deltaCpJ: st.deltaCpJ })) }, sys.totalM)
+        ? systemAt(
+            {
+              name: sys.name,
+              chargeOfMostProtonated: sys.chargeOfMostProtonated,
+              steps: sys.steps.map((st) => ({ pKa: st.pKa + shift, deltaHkJ: st.deltaHkJ, deltaCpJ: st.deltaCpJ })),
+            },
+            sys.totalM,
+          )
         : sys,
     ),
   };

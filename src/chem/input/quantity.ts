@@ -41,14 +41,14 @@ const UNITS: Readonly<Record<Dimension, Readonly<Record<string, number>>>> = {
     mM: 1e-3,
     'mmol/L': 1e-3,
     'mmol/l': 1e-3,
-    'µM': 1e-6,
-    'μM': 1e-6,
+    µM: 1e-6,
+    μM: 1e-6,
     uM: 1e-6,
     'µmol/L': 1e-6,
     'μmol/L': 1e-6,
     'umol/L': 1e-6,
   },
-  volume: { L: 1000, l: 1000, mL: 1, ml: 1, 'µL': 1e-3, 'μL': 1e-3, uL: 1e-3, ul: 1e-3 },
+  volume: { L: 1000, l: 1000, mL: 1, ml: 1, µL: 1e-3, μL: 1e-3, uL: 1e-3, ul: 1e-3 },
   fraction: {},
   percent: { '%': 1 },
   osmolarity: { 'mOsm/L': 1, 'Osm/L': 1000 },
@@ -208,8 +208,10 @@ export function readQuantity(field: string, value: unknown, dimension: Dimension
     if (!Number.isFinite(value)) throw new ChemError('invalid-input', 'notFinite', MESSAGES.notFinite(field, value), field, `a number in ${unit || 'plain numbers'}`);
     return value;
   }
-  if (typeof value !== 'string') throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value, EXAMPLE[dimension]), field, `a number in ${unit || 'plain numbers'}`);
-  if (value.length > MAX_NUMBER_TEXT) throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, `${value.slice(0, 20)}…`, EXAMPLE[dimension]), field, `a number in ${unit || 'plain numbers'}`);
+  if (typeof value !== 'string')
+    throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value, EXAMPLE[dimension]), field, `a number in ${unit || 'plain numbers'}`);
+  if (value.length > MAX_NUMBER_TEXT)
+    throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, `${value.slice(0, 20)}…`, EXAMPLE[dimension]), field, `a number in ${unit || 'plain numbers'}`);
   let text = value.trim();
   if (dimension === 'pH' && /^ph(?![a-z])/i.test(text)) text = text.slice(2).trimStart();
   const scanned = scanNumber(field, value, text);
@@ -217,7 +219,8 @@ export function readQuantity(field: string, value: unknown, dimension: Dimension
   const rest = text.slice(scanned.end).trim().replace(/\s+/g, ' ');
   if (rest === '') return scanned.value;
   // "7.0 7.2" is two numbers, not a number and a unit.
-  if (/^[\d.,+-]/.test(rest)) throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value, EXAMPLE[dimension]), field, `one number in ${unit || 'plain numbers'}`);
+  if (/^[\d.,+-]/.test(rest))
+    throw new ChemError('invalid-input', 'notANumber', MESSAGES.notANumber(field, value, EXAMPLE[dimension]), field, `one number in ${unit || 'plain numbers'}`);
   const factor = unitFactor(dimension, rest);
   const allowed = shownUnits(dimension);
   if (factor === 'ambiguous') {

@@ -48,7 +48,10 @@ const COUNT = /\d+(?:\.\d+)?/y;
 /** Reads a formula left to right, once: time linear in its length. */
 class Reader {
   pos = 0;
-  constructor(readonly text: string, readonly field: string) {}
+  constructor(
+    readonly text: string,
+    readonly field: string,
+  ) {}
 
   fail(detail: string): never {
     throw new ChemError('invalid-input', 'badFormula', MESSAGES.badFormula(this.field, this.text, detail), this.field, 'a formula such as Na2HPO4·7H2O or (NH4)2SO4');

@@ -148,7 +148,8 @@ class Library implements SubstanceLibrary {
   private claim(map: Map<string, unknown>, names: Map<string, string>, key: string, display: string, owner: unknown, isUser: boolean, field: string): boolean {
     const existing = map.get(key);
     if (existing !== undefined && existing !== owner) {
-      if (isUser) throw new ChemError('invalid-input', 'duplicateSubstance', MESSAGES.duplicateSubstance(field, display, names.get(key) ?? key), field, 'a name not already in the library');
+      if (isUser)
+        throw new ChemError('invalid-input', 'duplicateSubstance', MESSAGES.duplicateSubstance(field, display, names.get(key) ?? key), field, 'a name not already in the library');
       throw new Error(`Substance library: "${display}" is listed twice`);
     }
     if (existing === undefined) names.set(key, display);
@@ -163,7 +164,13 @@ class Library implements SubstanceLibrary {
         const key = nameKey(name);
         const clash = this.systemNames.get(key) ?? this.formNames.get(key);
         if (clash !== undefined) {
-          throw new ChemError('invalid-input', 'duplicateSubstance', MESSAGES.duplicateSubstance(`${field}.name`, name, clash), `${field}.name`, 'a name not already in the library');
+          throw new ChemError(
+            'invalid-input',
+            'duplicateSubstance',
+            MESSAGES.duplicateSubstance(`${field}.name`, name, clash),
+            `${field}.name`,
+            'a name not already in the library',
+          );
         }
       }
       this.userNames.add(record.name);
@@ -270,7 +277,13 @@ class Library implements SubstanceLibrary {
     };
     items.forEach((item, i) => {
       if (item === null || typeof item !== 'object') {
-        throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`items[${i}]`, 'a form and a concentration in mol/L'), `items[${i}]`, 'a form and a concentration');
+        throw new ChemError(
+          'invalid-input',
+          'missingValue',
+          MESSAGES.missingValue(`items[${i}]`, 'a form and a concentration in mol/L'),
+          `items[${i}]`,
+          'a form and a concentration',
+        );
       }
       const contribution = this.formAmount(item.form, item.concentrationM);
       for (const s of contribution.systems) {

@@ -7,15 +7,13 @@
 export const SOURCES = {
   goldberg2002:
     'R. N. Goldberg, N. Kishore, R. M. Lennen, "Thermodynamic quantities for the ionization reactions of buffers", J. Phys. Chem. Ref. Data 31 (2002) 231–370, selected values at 298.15 K, I = 0 (most underlying data span about 0–60 °C)',
-  harnedOwen1958:
-    'H. S. Harned, B. B. Owen, The Physical Chemistry of Electrolytic Solutions, 3rd ed., Reinhold (1958)',
+  harnedOwen1958: 'H. S. Harned, B. B. Owen, The Physical Chemistry of Electrolytic Solutions, 3rd ed., Reinhold (1958)',
   bates1973: 'R. G. Bates, Determination of pH, 2nd ed., Wiley (1973)',
   roy2014:
     'R. N. Roy, L. N. Roy, K. Hundley, T. Wehmeyer, L. Tebbe, "Thermodynamics of the second dissociation constants (pK2) of piperazine-N,N′-bis-2-hydroxypropanesulfonic acid (POPSO sesquisodium salt) … from (278.15 to 328.15) K", J. Biophys. Chem. 5 (2014) 143–151',
   cleggRardPitzer1994:
     'S. L. Clegg, J. A. Rard, K. S. Pitzer, "Thermodynamic properties of 0–6 mol kg−1 aqueous sulfuric acid from 273.15 to 328.15 K", J. Chem. Soc., Faraday Trans. 90 (1994) 1875–1894, eq. 21 (K of HSO4−)',
-  crcDissociation:
-    'CRC Handbook of Chemistry and Physics, "Dissociation constants of organic acids and bases" (edition not checked)',
+  crcDissociation: 'CRC Handbook of Chemistry and Physics, "Dissociation constants of organic acids and bases" (edition not checked)',
   crcSolubility:
     'CRC Handbook of Chemistry and Physics, "Aqueous solubility of inorganic compounds at various temperatures" (edition not checked), converted to grams per litre of saturated solution',
   nist46:
@@ -23,7 +21,7 @@ export const SOURCES = {
   martellSmith:
     'A. E. Martell, R. M. Smith, Critical Stability Constants, Vol. 1: Amino Acids, Plenum (1974), the ethylenebis(oxyethylenenitrilo)tetraacetic acid entry (constants at I = 0.1 M)',
   commonlyStated: 'Value commonly stated in textbooks (no primary source checked)',
-  supplierLabel: 'Molar mass as printed on common suppliers\' labels and catalogues (written from memory; checked against the formula with CIAAW 2021 atomic weights)',
+  supplierLabel: "Molar mass as printed on common suppliers' labels and catalogues (written from memory; checked against the formula with CIAAW 2021 atomic weights)",
   userDefined: 'Defined by the user',
 } as const;
 
@@ -50,7 +48,7 @@ export const COPIES = {
   hummel2005ThermoChimie:
     'The ThermoChimie database as distributed with PHREEQC (github.com/usgs-coupled/phreeqc3, database/sit.dat, version 12a), whose EDTA protonation lines cite W. Hummel, G. Anderegg, L. Rao, I. Puigdomènech, O. Tochiyama, Chemical Thermodynamics of Compounds and Complexes of U, Np, Pu, Am, Tc, Se, Ni and Zr with Selected Organic Ligands, OECD-NEA, Elsevier (2005) ("05HUM/AND"): cumulative log β and ΔH at 25 °C and I = 0, extrapolated with the SIT and with the Na+ and K+ complexes of EDTA treated as species of their own',
   royAbstracts:
-    'The abstracts (and, for J. Chem. Eng. Data 42 (1997) 41, the first page) of R. N. Roy and co-workers\' emf studies of Good buffers from 5 to 55 °C, as shown on public index and publisher pages: each gives pK2 at 25 °C (and 37 °C) or the fitted pK2(T) equation. Where an equation is given, pK, ΔH° and ΔCp° at 298.15 K are read off it by differentiation; where two temperatures are given, they are compared with the stored constants',
+    "The abstracts (and, for J. Chem. Eng. Data 42 (1997) 41, the first page) of R. N. Roy and co-workers' emf studies of Good buffers from 5 to 55 °C, as shown on public index and publisher pages: each gives pK2 at 25 °C (and 37 °C) or the fitted pK2(T) equation. Where an equation is given, pK, ΔH° and ΔCp° at 298.15 K are read off it by differentiation; where two temperatures are given, they are compared with the stored constants",
   batesAllen1960:
     'The abstract of R. G. Bates, G. F. Allen, "Acidic dissociation constant and related thermodynamic quantities for triethanolammonium ion in water from 0 to 50 °C", J. Res. Natl. Bur. Stand. 64A (1960) 343, as indexed on PubMed (PMID 32196172)',
 } as const;

@@ -56,7 +56,13 @@ function requireName(field: string, value: unknown): string {
     throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(field, 'a name'), field, 'a non-empty name');
   }
   if (value.length > MAX_NAME_LENGTH) {
-    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(field, value, `a name of at most ${MAX_NAME_LENGTH} characters`), field, `at most ${MAX_NAME_LENGTH} characters`);
+    throw new ChemError(
+      'invalid-input',
+      'outOfRange',
+      MESSAGES.outOfRange(field, value, `a name of at most ${MAX_NAME_LENGTH} characters`),
+      field,
+      `at most ${MAX_NAME_LENGTH} characters`,
+    );
   }
   return value.trim();
 }
@@ -104,13 +110,25 @@ function formFromInput(input: UserForm, field: string, substance: string, chem: 
     const computed = molarMassOf(formula, `${field}.formula`);
     // A formula is checked like a typed molar mass: C1000000000H2 is a slip, not a buffer form.
     if (!(computed <= MAX_USER_MOLAR_MASS)) {
-      throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange(`${field}.formula`, formula, `a formula of 1 to ${MAX_USER_MOLAR_MASS} g/mol (this one gives ${computed.toPrecision(4)} g/mol)`), `${field}.formula`, `1 to ${MAX_USER_MOLAR_MASS} g/mol`);
+      throw new ChemError(
+        'invalid-input',
+        'outOfRange',
+        MESSAGES.outOfRange(`${field}.formula`, formula, `a formula of 1 to ${MAX_USER_MOLAR_MASS} g/mol (this one gives ${computed.toPrecision(4)} g/mol)`),
+        `${field}.formula`,
+        `1 to ${MAX_USER_MOLAR_MASS} g/mol`,
+      );
     }
     listed = input.molarMass === undefined ? computed : requireNumber(`${field}.molarMass`, input.molarMass, 1, MAX_USER_MOLAR_MASS, `1 to ${MAX_USER_MOLAR_MASS} g/mol`);
   } else if (input.molarMass !== undefined) {
     listed = requireNumber(`${field}.molarMass`, input.molarMass, 1, MAX_USER_MOLAR_MASS, `1 to ${MAX_USER_MOLAR_MASS} g/mol`);
   } else {
-    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${field}.molarMass`, 'a formula or a molar mass in g/mol'), `${field}.molarMass`, 'a formula or a molar mass');
+    throw new ChemError(
+      'invalid-input',
+      'missingValue',
+      MESSAGES.missingValue(`${field}.molarMass`, 'a formula or a molar mass in g/mol'),
+      `${field}.molarMass`,
+      'a formula or a molar mass',
+    );
   }
   return {
     name,
@@ -156,7 +174,13 @@ export function userRecordFromInput(input: UserSubstance, field: string): Substa
   if (input.forms === undefined) {
     const z0 = input.chargeOfMostProtonated;
     if (z0 < 0 || z0 > steps.length) {
-      throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${field}.forms`, 'the forms on the shelf with their counter-ions (this substance has no neutral species)'), `${field}.forms`, 'a list of forms');
+      throw new ChemError(
+        'invalid-input',
+        'missingValue',
+        MESSAGES.missingValue(`${field}.forms`, 'the forms on the shelf with their counter-ions (this substance has no neutral species)'),
+        `${field}.forms`,
+        'a list of forms',
+      );
     }
     forms = [formFromInput({ name, formula: input.formula, molarMass: input.molarMass, protonsLost: z0 }, `${field}`, name, chem)];
   } else {

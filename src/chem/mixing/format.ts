@@ -25,11 +25,18 @@ export function formatMix(plan: MixPlan): string {
   }
   lines.push('');
   lines.push(`Predicted pH ${p.pHAtUse.toFixed(2)} at ${plan.useTemperatureC} °C; the meter reads ${p.pHAtBench.toFixed(2)} at the bench (${plan.benchTemperatureC} °C).`);
-  if (plan.correction) lines.push(`Without the correction the stocks give pH ${plan.correction.uncorrectedPh.toFixed(2)}; the ${plan.correction.stockM} M ${plan.correction.titrant} ${plan.correction.direction} it to the target ${plan.targetPh?.toFixed(2)}.`);
+  if (plan.correction)
+    lines.push(
+      `Without the correction the stocks give pH ${plan.correction.uncorrectedPh.toFixed(2)}; the ${plan.correction.stockM} M ${plan.correction.titrant} ${plan.correction.direction} it to the target ${plan.targetPh?.toFixed(2)}.`,
+    );
   const osm = p.osmolalityMosmKg !== undefined ? `, osmolality ${p.osmolalityMosmKg.toFixed(0)} mOsm/kg` : '';
-  lines.push(`Ionic strength ${p.ionicStrengthM.toPrecision(3)} M; conductivity ${p.conductivityMsPerCm.toPrecision(3)} mS/cm at ${plan.useTemperatureC} °C; ideal osmolarity ${p.idealOsmolarityMosm.toFixed(0)} mOsm/L${osm}.`);
+  lines.push(
+    `Ionic strength ${p.ionicStrengthM.toPrecision(3)} M; conductivity ${p.conductivityMsPerCm.toPrecision(3)} mS/cm at ${plan.useTemperatureC} °C; ideal osmolarity ${p.idealOsmolarityMosm.toFixed(0)} mOsm/L${osm}.`,
+  );
   for (const s of plan.labelShifts) {
-    lines.push(`Label of ${s.stock}: pH ${s.labelPh.toFixed(2)} at ${s.labelTemperatureC} °C → diluted alone ${s.dilutedAlonePh.toFixed(2)} → in the mix ${s.mixedAtLabelTemperaturePh.toFixed(2)} at ${s.labelTemperatureC} °C → ${s.mixedAtUsePh.toFixed(2)} at ${plan.useTemperatureC} °C.`);
+    lines.push(
+      `Label of ${s.stock}: pH ${s.labelPh.toFixed(2)} at ${s.labelTemperatureC} °C → diluted alone ${s.dilutedAlonePh.toFixed(2)} → in the mix ${s.mixedAtLabelTemperaturePh.toFixed(2)} at ${s.labelTemperatureC} °C → ${s.mixedAtUsePh.toFixed(2)} at ${plan.useTemperatureC} °C.`,
+    );
   }
   if (plan.warnings.length > 0) {
     lines.push('', 'Warnings:');

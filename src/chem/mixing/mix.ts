@@ -190,7 +190,18 @@ export function mixByVolumes(shelf: readonly Stock[], volumes: readonly StockVol
   const additivesM: Record<string, number> = {};
   for (const v of volumes) {
     const stock = shelf.find((s) => s.name.toLowerCase() === v.stock.toLowerCase());
-    if (!stock) throw new ChemError('invalid-input', 'noStockFor', MESSAGES.noStockFor('volumes', v.stock, shelf.map((s) => s.name)), 'volumes', shelf.map((s) => s.name).join(', '));
+    if (!stock)
+      throw new ChemError(
+        'invalid-input',
+        'noStockFor',
+        MESSAGES.noStockFor(
+          'volumes',
+          v.stock,
+          shelf.map((s) => s.name),
+        ),
+        'volumes',
+        shelf.map((s) => s.name).join(', '),
+      );
     const f = v.millilitres / finalVolumeMl;
     for (const s of stock.composition.systems) systems.push(systemAt(s, s.totalM * f));
     for (const [ion, c] of Object.entries(stock.composition.strongIons ?? {})) strongIons[ion] = (strongIons[ion] ?? 0) + c * f;
@@ -257,17 +268,30 @@ function resolveTargets(input: MixInput, shelf: readonly Stock[], library: Subst
     const at = `targets[${i}]`;
     const e = (t ?? {}) as Partial<MixTarget>;
     const name = readTextField('form', e.component, `${at}.component`);
-    if (name === undefined) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${at}.component`, 'a stock or component name'), `${at}.component`, 'a name');
+    if (name === undefined)
+      throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${at}.component`, 'a stock or component name'), `${at}.component`, 'a name');
     const stock = stockFor(name, `${at}.component`, shelf, library);
     const additive = stock?.additive ?? (stock ? undefined : findAdditive(name));
-    if (!stock && !additive) throw new ChemError('invalid-input', 'noStockFor', MESSAGES.noStockFor(`${at}.component`, name, shelf.map((s) => s.name)), `${at}.component`, shelf.map((s) => s.name).join(', '));
+    if (!stock && !additive)
+      throw new ChemError(
+        'invalid-input',
+        'noStockFor',
+        MESSAGES.noStockFor(
+          `${at}.component`,
+          name,
+          shelf.map((s) => s.name),
+        ),
+        `${at}.component`,
+        shelf.map((s) => s.name).join(', '),
+      );
     const key = stock ? `stock:${stock.name}` : `additive:${additive?.name}`;
     if (seen.has(key)) throw new ChemError('invalid-input', 'targetTwice', MESSAGES.targetTwice(`${at}.component`, name), `${at}.component`, 'each component once');
     seen.add(key);
     let finalM: number;
     let finalText: string;
     if (!isBlankValue(e.percent)) {
-      if (!additive) throw new ChemError('invalid-input', 'percentForAdditivesOnly', MESSAGES.percentForAdditivesOnly(`${at}.percent`, name), `${at}.percent`, 'a concentration in mM');
+      if (!additive)
+        throw new ChemError('invalid-input', 'percentForAdditivesOnly', MESSAGES.percentForAdditivesOnly(`${at}.percent`, name), `${at}.percent`, 'a concentration in mM');
       const pct = requireNumberField('target.percent', e.percent, `${at}.percent`);
       finalM = additiveMolarFromPercent(additive, pct);
       finalText = `${pct} ${percentBasis(additive)}`;
@@ -324,12 +348,17 @@ export function planMix(input: MixInput, library: SubstanceLibrary = defaultLibr
       const liquid = t.additive.state === 'liquid' && t.additive.densityGPerMl !== undefined;
       const ml = liquid ? grams / (t.additive.densityGPerMl as number) : grams * t.additive.specificVolumeMlPerG;
       neat.push({ additive: t.additive, grams, millilitres: ml });
-      components.push(liquid ? { role: 'additive', name: t.additive.name, millilitres: ml, grams, finalText: t.finalText, component: t.additive.name } : { role: 'additive', name: t.additive.name, grams, finalText: t.finalText, component: t.additive.name });
+      components.push(
+        liquid
+          ? { role: 'additive', name: t.additive.name, millilitres: ml, grams, finalText: t.finalText, component: t.additive.name }
+          : { role: 'additive', name: t.additive.name, grams, finalText: t.finalText, component: t.additive.name },
+      );
       takenMl += ml;
       parts.push(`${t.additive.name} ${volumeWords(ml)}`);
     }
   }
-  if (takenMl > volumeMl) throw new ChemError('infeasible-target', 'stocksDoNotFit', MESSAGES.stocksDoNotFit(takenMl, volumeMl, parts.join(', ')), 'targets', `at most ${volumeMl} mL in all`);
+  if (takenMl > volumeMl)
+    throw new ChemError('infeasible-target', 'stocksDoNotFit', MESSAGES.stocksDoNotFit(takenMl, volumeMl, parts.join(', ')), 'targets', `at most ${volumeMl} mL in all`);
 
   const mixture = mixByVolumes(shelf, volumes, volumeMl, useT, model);
   const additivesM: Record<string, number> = { ...mixture.additivesM };
@@ -352,7 +381,14 @@ export function planMix(input: MixInput, library: SubstanceLibrary = defaultLibr
     correction = { titrant: titrant.name, stockM, direction: raises ? 'raises' : 'lowers', millilitres: ml, uncorrectedPh: uncorrectedResult.pH };
     components.push({ role: 'titrant', name: `${stockM} M ${titrant.name}`, millilitres: ml });
     takenMl += ml;
-    if (takenMl > volumeMl) throw new ChemError('infeasible-target', 'stocksDoNotFit', MESSAGES.stocksDoNotFit(takenMl, volumeMl, [...parts, `${titrant.name} ${volumeWords(ml)}`].join(', ')), 'titrant.concentrationM', 'a more concentrated titrant');
+    if (takenMl > volumeMl)
+      throw new ChemError(
+        'infeasible-target',
+        'stocksDoNotFit',
+        MESSAGES.stocksDoNotFit(takenMl, volumeMl, [...parts, `${titrant.name} ${volumeWords(ml)}`].join(', ')),
+        'titrant.concentrationM',
+        'a more concentrated titrant',
+      );
     warnings.push(warning('correctionNeeded', MESSAGES.correctionNeeded(uncorrectedResult.pH, targetPh, tolerance, volumeWords(ml), `${stockM} M ${titrant.name}`), 'targetPh'));
   }
   components.push({ role: 'water', name: 'water', millilitres: volumeMl - takenMl });
@@ -380,7 +416,13 @@ export function planMix(input: MixInput, library: SubstanceLibrary = defaultLibr
   // The label people trust is the main buffer's: the titrated stock giving the most of its system.
   const main = [...labelShifts].sort((a, b) => (mixture.componentM[componentOf(shelf, b.stock)] ?? 0) - (mixture.componentM[componentOf(shelf, a.stock)] ?? 0))[0];
   if (main && Math.abs(main.mixedAtUsePh - main.labelPh) > LABEL_DIFFERENCE_PH) {
-    warnings.push(warning('mixDiffersFromLabel', MESSAGES.mixDiffersFromLabel(main.stock, main.labelPh, main.labelTemperatureC, main.mixedAtUsePh, useT, main.dilutedAlonePh, main.mixedAtLabelTemperaturePh), main.stock));
+    warnings.push(
+      warning(
+        'mixDiffersFromLabel',
+        MESSAGES.mixDiffersFromLabel(main.stock, main.labelPh, main.labelTemperatureC, main.mixedAtUsePh, useT, main.dilutedAlonePh, main.mixedAtLabelTemperaturePh),
+        main.stock,
+      ),
+    );
   }
 
   // Volumes too small to pipette, with the dilution that fixes each.
@@ -396,7 +438,13 @@ export function planMix(input: MixInput, library: SubstanceLibrary = defaultLibr
   // A titrated stock's titrant content comes from the activity model at the stock's own ionic strength.
   for (const stock of shelf) {
     if (stock.titrant && model !== 'ideal' && stock.titrant.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M && volumes.some((v) => v.stock === stock.name)) {
-      warnings.push(warning('stockBeyondActivityModel', MESSAGES.stockBeyondActivityModel(stock.name, stock.titrant.ionicStrengthM, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES[model]), stock.name));
+      warnings.push(
+        warning(
+          'stockBeyondActivityModel',
+          MESSAGES.stockBeyondActivityModel(stock.name, stock.titrant.ionicStrengthM, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES[model]),
+          stock.name,
+        ),
+      );
     }
   }
 
@@ -407,7 +455,11 @@ export function planMix(input: MixInput, library: SubstanceLibrary = defaultLibr
   const finalM: Record<string, number> = { ...mixture.componentM, ...additivesM };
   const additiveSum = additiveNames.reduce((sum, a) => sum + additivesM[a], 0);
   const osmolality = osmolalityOf(result, additiveSum);
-  const cautions = cautionLines(shelf.filter((s) => volumes.some((v) => v.stock === s.name)), neat.map((n) => n.additive), correction);
+  const cautions = cautionLines(
+    shelf.filter((s) => volumes.some((v) => v.stock === s.name)),
+    neat.map((n) => n.additive),
+    correction,
+  );
   return {
     volumeMl,
     useTemperatureC: useT,

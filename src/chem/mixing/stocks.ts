@@ -93,7 +93,8 @@ export function resolveStock(input: StockInput, at: string, library: SubstanceLi
   const name = readTextField('form', e.name, `${at}.name`);
   if (name === undefined) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${at}.name`, 'the stock’s name'), `${at}.name`, 'a name');
   const formName = readTextField('form', e.form, `${at}.form`);
-  if (formName === undefined) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${at}.form`, 'the form dissolved, or a neutral additive'), `${at}.form`, 'a form or additive name');
+  if (formName === undefined)
+    throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${at}.form`, 'the form dissolved, or a neutral additive'), `${at}.form`, 'a form or additive name');
 
   const additive = findAdditive(formName);
   let form: LibraryForm | undefined;
@@ -121,9 +122,24 @@ export function resolveStock(input: StockInput, at: string, library: SubstanceLi
   const titrantName = readTextField('titrant.form', e.titrant, `${at}.titrant`);
   const ph = readNumberField('stock.ph', e.ph, `${at}.ph`);
   if (titrantName === undefined && ph === undefined) {
-    return { name, kind: 'plain', form: lib, component, componentM, composition: library.compositionFromForms([{ form: lib, concentrationM: formM }], { activityModel }), additivesM: {} };
+    return {
+      name,
+      kind: 'plain',
+      form: lib,
+      component,
+      componentM,
+      composition: library.compositionFromForms([{ form: lib, concentrationM: formM }], { activityModel }),
+      additivesM: {},
+    };
   }
-  if (titrantName === undefined) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${at}.titrant`, 'the titrant the stock was brought to pH with (HCl, NaOH, …)'), `${at}.titrant`, 'a titrant form');
+  if (titrantName === undefined)
+    throw new ChemError(
+      'invalid-input',
+      'missingValue',
+      MESSAGES.missingValue(`${at}.titrant`, 'the titrant the stock was brought to pH with (HCl, NaOH, …)'),
+      `${at}.titrant`,
+      'a titrant form',
+    );
   if (ph === undefined) throw new ChemError('invalid-input', 'missingValue', MESSAGES.missingValue(`${at}.ph`, 'the pH the stock was brought to'), `${at}.ph`, 'a pH');
   const labelT = requireNumberField('stock.phTemperatureC', e.phTemperatureC, `${at}.phTemperatureC`);
   const titrant = titrantFromForm(library.findForm(titrantName, `${at}.titrant`), library, `${at}.titrant`);
@@ -136,7 +152,17 @@ export function resolveStock(input: StockInput, at: string, library: SubstanceLi
     throw err;
   }
   const composition = withConditions(withTitrant(before, titrant, amount.concentrationM), undefined);
-  return { name, kind: 'titrated', form: lib, component, componentM, composition, additivesM: {}, label: { ph, temperatureC: labelT }, titrant: { name: titrant.name, concentrationM: amount.concentrationM, ionicStrengthM: amount.ionicStrengthM } };
+  return {
+    name,
+    kind: 'titrated',
+    form: lib,
+    component,
+    componentM,
+    composition,
+    additivesM: {},
+    label: { ph, temperatureC: labelT },
+    titrant: { name: titrant.name, concentrationM: amount.concentrationM, ionicStrengthM: amount.ionicStrengthM },
+  };
 }
 
 /**
@@ -155,7 +181,14 @@ export function resolveShelf(inputs: readonly StockInput[], library: SubstanceLi
     const stock = resolveStock(input, `stocks[${i}]`, library, activityModel);
     const k = stock.name.toLowerCase();
     const before = seen.get(k);
-    if (before !== undefined) throw new ChemError('invalid-input', 'duplicateStock', MESSAGES.duplicateStock(`stocks[${i}].name`, stock.name, before), `stocks[${i}].name`, 'a name not used by another stock');
+    if (before !== undefined)
+      throw new ChemError(
+        'invalid-input',
+        'duplicateStock',
+        MESSAGES.duplicateStock(`stocks[${i}].name`, stock.name, before),
+        `stocks[${i}].name`,
+        'a name not used by another stock',
+      );
     seen.set(k, `stocks[${i}]`);
     return stock;
   });

@@ -28,7 +28,17 @@ export interface AmountIncrements {
   readonly totalsDown: readonly number[];
 }
 
-const scratch = { conc: [] as number[], lnGamma: [] as number[], next: [] as number[], m: [] as number[], previousL: [] as number[], previousG: [] as number[], totals: [] as number[], meanCharge: [] as number[], kp: [] as number[] };
+const scratch = {
+  conc: [] as number[],
+  lnGamma: [] as number[],
+  next: [] as number[],
+  m: [] as number[],
+  previousL: [] as number[],
+  previousG: [] as number[],
+  totals: [] as number[],
+  meanCharge: [] as number[],
+  kp: [] as number[],
+};
 /** Lengthens a scratch array with zeros to at least n entries. */
 function grow(a: number[], n: number): void {
   while (a.length < n) a.push(0);

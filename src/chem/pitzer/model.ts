@@ -123,7 +123,7 @@ export function pitzerSystem(species: readonly PitzerSpecies[], temperatureC: nu
         if (slope) {
           b0.push(p.beta0 + slope.beta0 * dT);
           b1.push(p.beta1 + slope.beta1 * dT);
-          c.push(((p.cphi + (slope.cphi ?? 0) * dT) / 2) / Math.sqrt(Math.abs(zc * za)));
+          c.push((p.cphi + (slope.cphi ?? 0) * dT) / 2 / Math.sqrt(Math.abs(zc * za)));
         } else {
           if (temperatureC !== TABLE_TEMPERATURE_C) temperatureExtrapolated = true;
           b0.push(p.beta0);
@@ -149,7 +149,7 @@ export function pitzerSystem(species: readonly PitzerSpecies[], temperatureC: nu
         const j = list[y];
         const si = species[i].ion;
         const sj = species[j].ion;
-        const theta = si && sj ? THETA_BY_KEY.get(`${si}|${sj}`) ?? 0 : 0;
+        const theta = si && sj ? (THETA_BY_KEY.get(`${si}|${sj}`) ?? 0) : 0;
         const zi = Math.abs(charges[i]);
         const zj = Math.abs(charges[j]);
         if (theta !== 0 || zi !== zj) {
@@ -506,7 +506,14 @@ export function saltCoefficients(cation: PitzerIon, anion: PitzerIon, molality: 
   const za = PITZER_ION_CHARGE[anion];
   const nuC = Math.abs(za);
   const nuA = Math.abs(zc);
-  const system = pitzerSystem([{ charge: zc, ion: cation }, { charge: za, ion: anion }], temperatureC, debyeHuckelA);
+  const system = pitzerSystem(
+    [
+      { charge: zc, ion: cation },
+      { charge: za, ion: anion },
+    ],
+    temperatureC,
+    debyeHuckelA,
+  );
   const lnGamma = [0, 0];
   const result: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 0, lnGammaKcl: 0 };
   pitzerEvaluate(system, [nuC * molality, nuA * molality], lnGamma, result);

@@ -23,15 +23,55 @@
 
 /** The ions the parameter tables know, by the names used here. */
 export type PitzerIon =
-  | 'H+' | 'Li+' | 'Na+' | 'K+' | 'Cs+' | 'NH4+' | 'trisH+' | 'Mg2+' | 'Ca2+'
-  | 'OH-' | 'Cl-' | 'Br-' | 'I-' | 'NO3-' | 'ClO4-' | 'HSO4-' | 'SO4-2' | 'H2PO4-' | 'HPO4-2' | 'PO4-3'
-  | 'HCO3-' | 'CO3-2' | 'acetate-';
+  | 'H+'
+  | 'Li+'
+  | 'Na+'
+  | 'K+'
+  | 'Cs+'
+  | 'NH4+'
+  | 'trisH+'
+  | 'Mg2+'
+  | 'Ca2+'
+  | 'OH-'
+  | 'Cl-'
+  | 'Br-'
+  | 'I-'
+  | 'NO3-'
+  | 'ClO4-'
+  | 'HSO4-'
+  | 'SO4-2'
+  | 'H2PO4-'
+  | 'HPO4-2'
+  | 'PO4-3'
+  | 'HCO3-'
+  | 'CO3-2'
+  | 'acetate-';
 
 /** Charge of every tabulated ion (facts of chemistry). */
 export const PITZER_ION_CHARGE: Readonly<Record<PitzerIon, number>> = {
-  'H+': 1, 'Li+': 1, 'Na+': 1, 'K+': 1, 'Cs+': 1, 'NH4+': 1, 'trisH+': 1, 'Mg2+': 2, 'Ca2+': 2,
-  'OH-': -1, 'Cl-': -1, 'Br-': -1, 'I-': -1, 'NO3-': -1, 'ClO4-': -1, 'HSO4-': -1, 'SO4-2': -2,
-  'H2PO4-': -1, 'HPO4-2': -2, 'PO4-3': -3, 'HCO3-': -1, 'CO3-2': -2, 'acetate-': -1,
+  'H+': 1,
+  'Li+': 1,
+  'Na+': 1,
+  'K+': 1,
+  'Cs+': 1,
+  'NH4+': 1,
+  'trisH+': 1,
+  'Mg2+': 2,
+  'Ca2+': 2,
+  'OH-': -1,
+  'Cl-': -1,
+  'Br-': -1,
+  'I-': -1,
+  'NO3-': -1,
+  'ClO4-': -1,
+  'HSO4-': -1,
+  'SO4-2': -2,
+  'H2PO4-': -1,
+  'HPO4-2': -2,
+  'PO4-3': -3,
+  'HCO3-': -1,
+  'CO3-2': -2,
+  'acetate-': -1,
 };
 
 /** First temperature derivatives at 25 °C, per kelvin. */
@@ -79,9 +119,27 @@ const viiiC = (c: number) => (c * 2) / Math.pow(3, 1.5);
 export const PITZER_BINARY: readonly PitzerBinary[] = [
   // ── 1:1, PM73 Table I (max molality as stated in P91 Table 12 where it is given there) ──
   /** HCl. PM73 Table I; HMW84 copy in pitzer.dat agrees (0.1775, 0.2945, 0.0008). dC^φ/dT: −6.213e-5 in the pytzer copy of P91, +6.213e-5 in pitzer.dat; the pytzer sign is used. */
-  { cation: 'H+', anion: 'Cl-', beta0: 0.1775, beta1: 0.2945, cphi: 0.0008, maxMolal: 4.5, slope: { beta0: -3.081e-4, beta1: 1.419e-4, cphi: -6.213e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'H+',
+    anion: 'Cl-',
+    beta0: 0.1775,
+    beta1: 0.2945,
+    cphi: 0.0008,
+    maxMolal: 4.5,
+    slope: { beta0: -3.081e-4, beta1: 1.419e-4, cphi: -6.213e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** HBr. PM73 Table I; pitzer.dat agrees. */
-  { cation: 'H+', anion: 'Br-', beta0: 0.196, beta1: 0.3564, cphi: 0.00827, maxMolal: 6, slope: { beta0: -2.049e-4, beta1: 4.467e-4, cphi: -5.685e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'H+',
+    anion: 'Br-',
+    beta0: 0.196,
+    beta1: 0.3564,
+    cphi: 0.00827,
+    maxMolal: 6,
+    slope: { beta0: -2.049e-4, beta1: 4.467e-4, cphi: -5.685e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** HI. PM73 Table I. */
   { cation: 'H+', anion: 'I-', beta0: 0.2362, beta1: 0.392, cphi: 0.0011, maxMolal: 6, source: PM73_I },
   /** HClO4. PM73 Table I. */
@@ -89,7 +147,16 @@ export const PITZER_BINARY: readonly PitzerBinary[] = [
   /** HNO3. PM73 Table I. */
   { cation: 'H+', anion: 'NO3-', beta0: 0.1119, beta1: 0.3206, cphi: 0.001, maxMolal: 3, source: PM73_I },
   /** LiCl. PM73 Table I; pitzer.dat agrees, slope too. */
-  { cation: 'Li+', anion: 'Cl-', beta0: 0.1494, beta1: 0.3074, cphi: 0.00359, maxMolal: 6, slope: { beta0: -1.685e-4, beta1: 5.366e-4, cphi: -4.52e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'Li+',
+    anion: 'Cl-',
+    beta0: 0.1494,
+    beta1: 0.3074,
+    cphi: 0.00359,
+    maxMolal: 6,
+    slope: { beta0: -1.685e-4, beta1: 5.366e-4, cphi: -4.52e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** LiBr. PM73 Table I; pitzer.dat agrees. */
   { cation: 'Li+', anion: 'Br-', beta0: 0.1748, beta1: 0.2547, cphi: 0.0053, maxMolal: 6, source: PM73_I },
   /** LiI. PM73 Table I. */
@@ -101,17 +168,71 @@ export const PITZER_BINARY: readonly PitzerBinary[] = [
   /** LiNO3. PM73 Table I. */
   { cation: 'Li+', anion: 'NO3-', beta0: 0.142, beta1: 0.278, cphi: -0.00551, maxMolal: 6, source: PM73_I },
   /** NaCl. PM73 Table I (the HMW84 value too); pitzer.dat carries a later temperature fit (β⁽⁰⁾ 0.0753 at 25 °C). */
-  { cation: 'Na+', anion: 'Cl-', beta0: 0.0765, beta1: 0.2664, cphi: 0.00127, maxMolal: 6, slope: { beta0: 7.159e-4, beta1: 7.005e-4, cphi: -10.54e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'Na+',
+    anion: 'Cl-',
+    beta0: 0.0765,
+    beta1: 0.2664,
+    cphi: 0.00127,
+    maxMolal: 6,
+    slope: { beta0: 7.159e-4, beta1: 7.005e-4, cphi: -10.54e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** NaBr. PM73 Table I; pitzer.dat agrees, slope too. */
-  { cation: 'Na+', anion: 'Br-', beta0: 0.0973, beta1: 0.2791, cphi: 0.00116, maxMolal: 9, slope: { beta0: 7.692e-4, beta1: 10.79e-4, cphi: -9.3e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'Na+',
+    anion: 'Br-',
+    beta0: 0.0973,
+    beta1: 0.2791,
+    cphi: 0.00116,
+    maxMolal: 9,
+    slope: { beta0: 7.692e-4, beta1: 10.79e-4, cphi: -9.3e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** NaI. PM73 Table I. */
-  { cation: 'Na+', anion: 'I-', beta0: 0.1195, beta1: 0.3439, cphi: 0.0018, maxMolal: 6, slope: { beta0: 8.355e-4, beta1: 8.28e-4, cphi: -8.35e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'Na+',
+    anion: 'I-',
+    beta0: 0.1195,
+    beta1: 0.3439,
+    cphi: 0.0018,
+    maxMolal: 6,
+    slope: { beta0: 8.355e-4, beta1: 8.28e-4, cphi: -8.35e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** NaOH. PM73 Table I; pitzer.dat agrees, slope too. */
-  { cation: 'Na+', anion: 'OH-', beta0: 0.0864, beta1: 0.253, cphi: 0.0044, maxMolal: 4.2, slope: { beta0: 7.0e-4, beta1: 1.34e-4, cphi: -18.94e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'Na+',
+    anion: 'OH-',
+    beta0: 0.0864,
+    beta1: 0.253,
+    cphi: 0.0044,
+    maxMolal: 4.2,
+    slope: { beta0: 7.0e-4, beta1: 1.34e-4, cphi: -18.94e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** NaClO4. PM73 Table I. */
-  { cation: 'Na+', anion: 'ClO4-', beta0: 0.0554, beta1: 0.2755, cphi: -0.00118, maxMolal: 6, slope: { beta0: 12.96e-4, beta1: 22.97e-4, cphi: -16.23e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'Na+',
+    anion: 'ClO4-',
+    beta0: 0.0554,
+    beta1: 0.2755,
+    cphi: -0.00118,
+    maxMolal: 6,
+    slope: { beta0: 12.96e-4, beta1: 22.97e-4, cphi: -16.23e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** NaNO3. PM73 Table I. */
-  { cation: 'Na+', anion: 'NO3-', beta0: 0.0068, beta1: 0.1783, cphi: -0.00072, maxMolal: 6, slope: { beta0: 12.66e-4, beta1: 20.6e-4, cphi: -23.16e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'Na+',
+    anion: 'NO3-',
+    beta0: 0.0068,
+    beta1: 0.1783,
+    cphi: -0.00072,
+    maxMolal: 6,
+    slope: { beta0: 12.66e-4, beta1: 20.6e-4, cphi: -23.16e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** NaH2PO4. PM73 Table I. */
   { cation: 'Na+', anion: 'H2PO4-', beta0: -0.0533, beta1: 0.0396, cphi: 0.00795, maxMolal: 6, source: PM73_I },
   /** Sodium acetate. PM73 Table II. */
@@ -121,17 +242,62 @@ export const PITZER_BINARY: readonly PitzerBinary[] = [
   /** NaHSO4. HMW84, as in pitzer.dat. */
   { cation: 'Na+', anion: 'HSO4-', beta0: 0.0454, beta1: 0.398, cphi: 0, maxMolal: 6, source: HMW84 },
   /** KCl. PM73 Table I; pitzer.dat carries a temperature fit (0.04808 at 25 °C). */
-  { cation: 'K+', anion: 'Cl-', beta0: 0.04835, beta1: 0.2122, cphi: -0.00084, maxMolal: 4.8, slope: { beta0: 5.794e-4, beta1: 10.71e-4, cphi: -5.095e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'K+',
+    anion: 'Cl-',
+    beta0: 0.04835,
+    beta1: 0.2122,
+    cphi: -0.00084,
+    maxMolal: 4.8,
+    slope: { beta0: 5.794e-4, beta1: 10.71e-4, cphi: -5.095e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** KBr. PM73 Table I; pitzer.dat agrees, slope too. */
-  { cation: 'K+', anion: 'Br-', beta0: 0.0569, beta1: 0.2212, cphi: -0.0018, maxMolal: 5.5, slope: { beta0: 7.39e-4, beta1: 17.4e-4, cphi: -7.004e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'K+',
+    anion: 'Br-',
+    beta0: 0.0569,
+    beta1: 0.2212,
+    cphi: -0.0018,
+    maxMolal: 5.5,
+    slope: { beta0: 7.39e-4, beta1: 17.4e-4, cphi: -7.004e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** KI. PM73 Table I. */
-  { cation: 'K+', anion: 'I-', beta0: 0.0746, beta1: 0.2517, cphi: -0.00414, maxMolal: 4.5, slope: { beta0: 9.914e-4, beta1: 11.86e-4, cphi: -9.44e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'K+',
+    anion: 'I-',
+    beta0: 0.0746,
+    beta1: 0.2517,
+    cphi: -0.00414,
+    maxMolal: 4.5,
+    slope: { beta0: 9.914e-4, beta1: 11.86e-4, cphi: -9.44e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** KOH. PM73 Table I; pitzer.dat agrees. */
   { cation: 'K+', anion: 'OH-', beta0: 0.1298, beta1: 0.32, cphi: 0.0041, maxMolal: 5.5, source: PM73_I },
   /** KNO3. PM73 Table I. */
-  { cation: 'K+', anion: 'NO3-', beta0: -0.0816, beta1: 0.0494, cphi: 0.0066, maxMolal: 3.8, slope: { beta0: 2.06e-4, beta1: 64.5e-4, cphi: 39.7e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'K+',
+    anion: 'NO3-',
+    beta0: -0.0816,
+    beta1: 0.0494,
+    cphi: 0.0066,
+    maxMolal: 3.8,
+    slope: { beta0: 2.06e-4, beta1: 64.5e-4, cphi: 39.7e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** KH2PO4. PM73 Table I. */
-  { cation: 'K+', anion: 'H2PO4-', beta0: -0.0678, beta1: -0.1042, cphi: 0, maxMolal: 1.8, slope: { beta0: 6.045e-4, beta1: 28.6e-4, cphi: -10.11e-5 }, source: `${PM73_I}; slope ${P91_12}` },
+  {
+    cation: 'K+',
+    anion: 'H2PO4-',
+    beta0: -0.0678,
+    beta1: -0.1042,
+    cphi: 0,
+    maxMolal: 1.8,
+    slope: { beta0: 6.045e-4, beta1: 28.6e-4, cphi: -10.11e-5 },
+    source: `${PM73_I}; slope ${P91_12}`,
+  },
   /** Potassium acetate. PM73 Table II. */
   { cation: 'K+', anion: 'acetate-', beta0: 0.1587, beta1: 0.3251, cphi: -0.0066, maxMolal: 3.5, source: PM73_II },
   /** KHCO3. pitzer.dat (0.0296, 0.25, −0.008). */
@@ -167,7 +333,16 @@ export const PITZER_BINARY: readonly PitzerBinary[] = [
 
   // ── 1:2 and 2:1, PM73 Table VI (HMW84 where it replaces it for speciated carbonate) ──
   /** MgCl2. PM73 Table VI (0.4698, 2.242, 0.00979). */
-  { cation: 'Mg2+', anion: 'Cl-', beta0: vi(0.4698), beta1: vi(2.242), cphi: viC(0.00979), maxMolal: 4.5, slope: { beta0: -0.194e-3, beta1: 2.78e-3 }, source: `${PM73_VI}; slope ${P91_13}` },
+  {
+    cation: 'Mg2+',
+    anion: 'Cl-',
+    beta0: vi(0.4698),
+    beta1: vi(2.242),
+    cphi: viC(0.00979),
+    maxMolal: 4.5,
+    slope: { beta0: -0.194e-3, beta1: 2.78e-3 },
+    source: `${PM73_VI}; slope ${P91_13}`,
+  },
   /** MgBr2. PM73 Table VI (0.5769, 2.337, 0.00589). */
   { cation: 'Mg2+', anion: 'Br-', beta0: vi(0.5769), beta1: vi(2.337), cphi: viC(0.00589), maxMolal: 5, source: PM73_VI },
   /** Mg(NO3)2. PM73 Table VI (0.4895, 2.113, −0.03889). */
@@ -177,7 +352,16 @@ export const PITZER_BINARY: readonly PitzerBinary[] = [
   /** Mg(HSO4)2. HMW84, as in pitzer.dat. */
   { cation: 'Mg2+', anion: 'HSO4-', beta0: 0.4746, beta1: 1.729, cphi: 0, maxMolal: 6, source: HMW84 },
   /** CaCl2. PM73 Table VI (0.4212, 2.152, −0.00064); pitzer.dat (ref. 3) gives the same β. */
-  { cation: 'Ca2+', anion: 'Cl-', beta0: vi(0.4212), beta1: vi(2.152), cphi: viC(-0.00064), maxMolal: 2.5, slope: { beta0: -0.561e-3, beta1: 2.66e-3 }, source: `${PM73_VI}; slope ${P91_13}` },
+  {
+    cation: 'Ca2+',
+    anion: 'Cl-',
+    beta0: vi(0.4212),
+    beta1: vi(2.152),
+    cphi: viC(-0.00064),
+    maxMolal: 2.5,
+    slope: { beta0: -0.561e-3, beta1: 2.66e-3 },
+    source: `${PM73_VI}; slope ${P91_13}`,
+  },
   /** CaBr2. PM73 Table VI (0.5088, 2.151, −0.00485). */
   { cation: 'Ca2+', anion: 'Br-', beta0: vi(0.5088), beta1: vi(2.151), cphi: viC(-0.00485), maxMolal: 2, source: PM73_VI },
   /** Ca(NO3)2. PM73 Table VI (0.2811, 1.879, −0.03798). */
@@ -189,7 +373,16 @@ export const PITZER_BINARY: readonly PitzerBinary[] = [
   /** Li2SO4. PM73 Table VI (0.1817, 1.694, −0.00753); pitzer.dat agrees (0.136275, 1.2705). */
   { cation: 'Li+', anion: 'SO4-2', beta0: vi(0.1817), beta1: vi(1.694), cphi: viC(-0.00753), maxMolal: 3, source: PM73_VI },
   /** Na2SO4. PM73 Table VI (0.0261, 1.484, 0.00938). */
-  { cation: 'Na+', anion: 'SO4-2', beta0: vi(0.0261), beta1: vi(1.484), cphi: viC(0.00938), maxMolal: 4, slope: { beta0: 2.367e-3, beta1: 5.63e-3 }, source: `${PM73_VI}; slope ${P91_13}` },
+  {
+    cation: 'Na+',
+    anion: 'SO4-2',
+    beta0: vi(0.0261),
+    beta1: vi(1.484),
+    cphi: viC(0.00938),
+    maxMolal: 4,
+    slope: { beta0: 2.367e-3, beta1: 5.63e-3 },
+    source: `${PM73_VI}; slope ${P91_13}`,
+  },
   /** K2SO4. PM73 Table VI (0.0666, 1.039, 0). */
   { cation: 'K+', anion: 'SO4-2', beta0: vi(0.0666), beta1: vi(1.039), cphi: 0, maxMolal: 0.7, slope: { beta0: 1.44e-3, beta1: 6.7e-3 }, source: `${PM73_VI}; slope ${P91_13}` },
   /** Cs2SO4. PM73 Table VI (0.1184, 1.481, −0.01131). */

@@ -45,7 +45,13 @@ function volumeOf(species: PitzerSpecies, systemName?: string): number {
  * @param temperatureC - °C
  * @param debyeHuckelA - log10 Debye–Hückel slope at the temperature
  */
-export function pitzerLayout(strongIonNames: readonly string[], strongConcentrations: readonly number[], systems: readonly AcidBaseChemistry[], temperatureC: number, debyeHuckelA: number): PitzerLayout {
+export function pitzerLayout(
+  strongIonNames: readonly string[],
+  strongConcentrations: readonly number[],
+  systems: readonly AcidBaseChemistry[],
+  temperatureC: number,
+  debyeHuckelA: number,
+): PitzerLayout {
   // Layouts are found by the first system's steps array (library systems share it between compositions),
   // then compared field by field: no key string to build and hash on every solve.
   const anchor: object = systems.length > 0 ? systems[0].steps : NO_SYSTEMS;
@@ -80,7 +86,15 @@ export function pitzerLayout(strongIonNames: readonly string[], strongConcentrat
       entries.push({ temperatureC, names: [...strongIonNames], systems: systems.map((sys) => ({ steps: sys.steps, name: sys.name, z0: sys.chargeOfMostProtonated })), shape });
     }
   }
-  return { system: shape.system, volumes: shape.volumes, systemStart: shape.systemStart, speciesCount: shape.speciesCount, strongConcentrations, chlorideIndex: shape.chlorideIndex, unparameterised: shape.unparameterised };
+  return {
+    system: shape.system,
+    volumes: shape.volumes,
+    systemStart: shape.systemStart,
+    speciesCount: shape.speciesCount,
+    strongConcentrations,
+    chlorideIndex: shape.chlorideIndex,
+    unparameterised: shape.unparameterised,
+  };
 }
 
 interface LayoutEntry {
@@ -117,7 +131,10 @@ const LAYOUT_BY_KEY = new Map<string, LayoutShape>();
 const LAYOUT_KEYS = 4096;
 
 function layoutShape(strongIonNames: readonly string[], systems: readonly AcidBaseChemistry[], temperatureC: number, debyeHuckelA: number): LayoutShape {
-  const species: PitzerSpecies[] = [{ charge: 1, ion: 'H+' }, { charge: -1, ion: 'OH-' }];
+  const species: PitzerSpecies[] = [
+    { charge: 1, ion: 'H+' },
+    { charge: -1, ion: 'OH-' },
+  ];
   const volumes: number[] = [volumeOf(species[0]), volumeOf(species[1])];
   for (const name of strongIonNames) {
     const ion = findStrongIon('strongIons', name);

@@ -9,8 +9,17 @@ import type { PitzerIon } from './parameters';
 
 /** Strong ions of the solver (src/chem/strongIons.ts names) that the tables know. */
 const STRONG: Readonly<Record<string, PitzerIon>> = {
-  'Na+': 'Na+', 'K+': 'K+', 'Li+': 'Li+', 'Cs+': 'Cs+', 'Mg2+': 'Mg2+', 'Ca2+': 'Ca2+',
-  'Cl-': 'Cl-', 'Br-': 'Br-', 'I-': 'I-', 'NO3-': 'NO3-', 'ClO4-': 'ClO4-',
+  'Na+': 'Na+',
+  'K+': 'K+',
+  'Li+': 'Li+',
+  'Cs+': 'Cs+',
+  'Mg2+': 'Mg2+',
+  'Ca2+': 'Ca2+',
+  'Cl-': 'Cl-',
+  'Br-': 'Br-',
+  'I-': 'I-',
+  'NO3-': 'NO3-',
+  'ClO4-': 'ClO4-',
 };
 
 /** Per library system: charge of its most protonated form, then the ion of each protonation state (undefined = neutral). */

@@ -22,10 +22,29 @@ export const VOLUME_LIMITING_SLOPE = 1.868;
  * and a 1 cm³/mol error moves a 1 M stock's molality by 0.1 %.
  */
 export const ION_VOLUME_CM3: Readonly<Partial<Record<PitzerIon, number>>> = {
-  'H+': 0, 'Li+': -0.88, 'Na+': -1.21, 'K+': 9.03, 'Cs+': 21.35, 'NH4+': 17.86, 'Mg2+': -21.17, 'Ca2+': -17.85,
-  'OH-': -4.04, 'Cl-': 17.83, 'Br-': 24.71, 'I-': 36.22, 'NO3-': 29.0, 'ClO4-': 44.12,
-  'HSO4-': 35.2, 'SO4-2': 13.98, 'H2PO4-': 29.1, 'HPO4-2': 5.3, 'PO4-3': -30.6,
-  'HCO3-': 24.3, 'CO3-2': -3.8, 'acetate-': 40.5, 'trisH+': 82.7,
+  'H+': 0,
+  'Li+': -0.88,
+  'Na+': -1.21,
+  'K+': 9.03,
+  'Cs+': 21.35,
+  'NH4+': 17.86,
+  'Mg2+': -21.17,
+  'Ca2+': -17.85,
+  'OH-': -4.04,
+  'Cl-': 17.83,
+  'Br-': 24.71,
+  'I-': 36.22,
+  'NO3-': 29.0,
+  'ClO4-': 44.12,
+  'HSO4-': 35.2,
+  'SO4-2': 13.98,
+  'H2PO4-': 29.1,
+  'HPO4-2': 5.3,
+  'PO4-3': -30.6,
+  'HCO3-': 24.3,
+  'CO3-2': -3.8,
+  'acetate-': 40.5,
+  'trisH+': 82.7,
 };
 
 /** Volumes of neutral forms of the library systems the tables name, cm³/mol (memory, same sources). */

@@ -13,10 +13,7 @@ import { RouteResult, Settled } from './settle';
 export function titrationPlan(s: Settled, made: RouteResult, volumeL: number, stockPh: number | undefined): TitrationPlan {
   const t = made.titrant!;
   const volumeMl = ((t.concentrationM * volumeL) / t.stock.concentrationM) * 1000;
-  const u =
-    s.pKaUncertainty !== undefined
-      ? s.pKaUncertainty
-      : Math.max(...s.system.steps.map((step) => step.pKaUncertainty ?? DEFAULT_PKA_UNCERTAINTY));
+  const u = s.pKaUncertainty !== undefined ? s.pKaUncertainty : Math.max(...s.system.steps.map((step) => step.pKaUncertainty ?? DEFAULT_PKA_UNCERTAINTY));
   // The amount needed with every pKa of the buffer moved by ±u, to the pH the made solution has.
   const before = t.before;
   const madePh = s.route === 'stock' ? (stockPh ?? solvePh(made.composition)) : s.targetPh;
@@ -36,7 +33,13 @@ export function titrationPlan(s: Settled, made: RouteResult, volumeL: number, st
     titrant: t.form.name,
     stockM: t.stock.concentrationM,
     // The titrate route's unadjusted pH is the pH of `before`, already solved.
-    direction: t.titrant.system ? (madePh > (s.route === 'titrate' && made.unadjustedPh !== undefined ? made.unadjustedPh : solvePh(before)) ? 'raises' : 'lowers') : chargeOf(t.titrant) > 0 ? 'raises' : 'lowers',
+    direction: t.titrant.system
+      ? madePh > (s.route === 'titrate' && made.unadjustedPh !== undefined ? made.unadjustedPh : solvePh(before))
+        ? 'raises'
+        : 'lowers'
+      : chargeOf(t.titrant) > 0
+        ? 'raises'
+        : 'lowers',
     volumeMl,
     lowMl,
     highMl,
@@ -69,7 +72,8 @@ export function checkTitrantFits(titrantMl: number, finalVolumeMl: number, partV
   const roomMl = finalVolumeMl * partVolumeFraction;
   if (!(titrantMl > roomMl)) return;
   const needed = (stockM * titrantMl) / (COMFORTABLE_TITRANT_SHARE * finalVolumeMl);
-  const suggestion = needed <= MAX_TITRANT_M ? `a ${roundedStock(needed)} M stock` : `no stock is strong enough (it would take above ${MAX_TITRANT_M} M); weigh a form nearer the target pH instead`;
+  const suggestion =
+    needed <= MAX_TITRANT_M ? `a ${roundedStock(needed)} M stock` : `no stock is strong enough (it would take above ${MAX_TITRANT_M} M); weigh a form nearer the target pH instead`;
   throw new ChemError('infeasible-target', 'titrantTooLarge', MESSAGES.titrantTooLarge(titrantMl, roomMl, stockM, suggestion), 'titrant.concentrationM', suggestion);
 }
 
@@ -84,6 +88,17 @@ export function chargeOf(t: Titrant): number {
 export function shiftSystem(c: Composition, name: string, shift: number): Composition {
   return {
     ...c,
-    systems: c.systems.map((sys): AcidBaseSystem => (sys.name === name ? systemAt({ name: sys.name, chargeOfMostProtonated: sys.chargeOfMostProtonated, steps: sys.steps.map((st) => ({ pKa: st.pKa + shift, deltaHkJ: st.deltaHkJ, deltaCpJ: st.deltaCpJ })) }, sys.totalM) : sys)),
+    systems: c.systems.map((sys): AcidBaseSystem =>
+      sys.name === name
+        ? systemAt(
+            {
+              name: sys.name,
+              chargeOfMostProtonated: sys.chargeOfMostProtonated,
+              steps: sys.steps.map((st) => ({ pKa: st.pKa + shift, deltaHkJ: st.deltaHkJ, deltaCpJ: st.deltaCpJ })),
+            },
+            sys.totalM,
+          )
+        : sys,
+    ),
   };
 }

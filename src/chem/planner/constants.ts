@@ -1,7 +1,6 @@
 /** The planner's defaults and thresholds, each with its reason (common practice where no source is named). */
 import { BUFFERING_HALF_WIDTH } from '../checks';
 
-
 /** pKa uncertainty used where the library gives none: published tables scatter by about ±0.01–0.02 (common practice, e.g. tris 8.06–8.08). */
 export const DEFAULT_PKA_UNCERTAINTY = 0.02;
 

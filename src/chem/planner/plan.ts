@@ -66,7 +66,9 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const atMeter = withConditions(scaleComposition(made.composition, 1 / s.partFraction), s.benchT);
   const meterSpeciation = fold === 1 ? undefined : speciate(atMeter);
   // A stock's own activity warnings (past the model's range, ions without Pitzer parameters) bear on the meter reading.
-  const stockWarnings = meterSpeciation ? meterSpeciation.warnings.filter((w) => ACTIVITY_RANGE_CODES.has(w.code)).map((w) => warning(w.code, MESSAGES.stockAtMeter(fold, w.message), w.field)) : [];
+  const stockWarnings = meterSpeciation
+    ? meterSpeciation.warnings.filter((w) => ACTIVITY_RANGE_CODES.has(w.code)).map((w) => warning(w.code, MESSAGES.stockAtMeter(fold, w.message), w.field))
+    : [];
   const meterPh = meterSpeciation ? meterSpeciation.pH : solvePh(atMeter);
   // The stock as made, at the temperature of use: its pH and conductivity (the stock route only).
   // Adjusted in the full volume at the temperature of use, the meter reads the stock itself.
@@ -185,7 +187,13 @@ function componentsOf(s: Settled, made: RouteResult, volumeL: number, titration:
     };
   });
   if (titration && made.titrant) {
-    out.push({ role: 'titrant', name: `${titration.stockM} M ${made.titrant.form.name}`, formula: made.titrant.form.formula, concentrationMm: made.titrant.concentrationM * 1000, millilitres: titration.volumeMl });
+    out.push({
+      role: 'titrant',
+      name: `${titration.stockM} M ${made.titrant.form.name}`,
+      formula: made.titrant.form.formula,
+      concentrationMm: made.titrant.concentrationM * 1000,
+      millilitres: titration.volumeMl,
+    });
   }
   // Solids take up volume too, so water is given as "to volume", never as a subtraction.
   out.push({ role: 'water', name: 'water, to final volume', millilitres: volumeL * 1000 });

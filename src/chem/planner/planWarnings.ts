@@ -26,7 +26,18 @@ export function hydrateWarnings(input: RecipeInput, library: SubstanceLibrary): 
     const others = library.hydrateAlternatives(name);
     if (others.length === 0) continue;
     const used = library.findForm(name, field);
-    out.push(warning('hydrateAssumed', MESSAGES.hydrateAssumed(name, used.name, used.molarMass, others.map((f) => `${f.name} (${f.molarMass.toFixed(2)} g/mol)`)), field));
+    out.push(
+      warning(
+        'hydrateAssumed',
+        MESSAGES.hydrateAssumed(
+          name,
+          used.name,
+          used.molarMass,
+          others.map((f) => `${f.name} (${f.molarMass.toFixed(2)} g/mol)`),
+        ),
+        field,
+      ),
+    );
   }
   return out;
 }
@@ -40,19 +51,29 @@ export function planWarnings(s: Settled, made: RouteResult, components: readonly
     if (titration.volumeMl < SMALLEST_TITRANT_ML) {
       const fold = Math.pow(10, Math.ceil(Math.log10(SMALLEST_TITRANT_ML / titration.volumeMl)));
       if (fold <= MAX_STOCK_DILUTION_ADVICE) {
-        w.push(warning('titrantTiny', MESSAGES.titrantTiny(titration.volumeMl * 1000, fold, titration.stockM / fold, volumeText(titration.volumeMl * fold)), 'titrant.concentrationM'));
+        w.push(
+          warning('titrantTiny', MESSAGES.titrantTiny(titration.volumeMl * 1000, fold, titration.stockM / fold, volumeText(titration.volumeMl * fold)), 'titrant.concentrationM'),
+        );
       } else {
         const unadjusted = made.unadjustedPh ?? s.targetPh;
-        w.push(warning('titrantTinyCheckMeter', MESSAGES.titrantTinyCheckMeter(titration.volumeMl * 1000, Math.abs(s.targetPh - unadjusted), MAX_STOCK_DILUTION_ADVICE, titration.stockM / MAX_STOCK_DILUTION_ADVICE), 'targetPh'));
+        w.push(
+          warning(
+            'titrantTinyCheckMeter',
+            MESSAGES.titrantTinyCheckMeter(titration.volumeMl * 1000, Math.abs(s.targetPh - unadjusted), MAX_STOCK_DILUTION_ADVICE, titration.stockM / MAX_STOCK_DILUTION_ADVICE),
+            'targetPh',
+          ),
+        );
       }
     }
-    if (titration.highMl > totalMl * s.partFraction) w.push(warning('titrantMayNotFit', MESSAGES.titrantMayNotFit(titration.highMl, totalMl * s.partFraction), 'titrant.concentrationM'));
+    if (titration.highMl > totalMl * s.partFraction)
+      w.push(warning('titrantMayNotFit', MESSAGES.titrantMayNotFit(titration.highMl, totalMl * s.partFraction), 'titrant.concentrationM'));
   }
   if (!titration && made.unadjustedPh !== undefined) w.push(warning('noTitrantNeeded', MESSAGES.noTitrantNeeded(made.unadjustedPh, s.useT, NO_TITRANT_PH), 'targetPh'));
   made.weighed.forEach((item, i) => {
     // componentsOf lists the weighed forms first, in this order, with the grams printed (purity applied).
     const grams = components[i].grams ?? 0;
-    if (grams > 0 && grams < SMALLEST_GOOD_WEIGHING_G) w.push(warning('smallWeighing', MESSAGES.smallWeighing(grams * 1000, item.form.name, SMALLEST_GOOD_WEIGHING_G * 1000), 'volumeMl'));
+    if (grams > 0 && grams < SMALLEST_GOOD_WEIGHING_G)
+      w.push(warning('smallWeighing', MESSAGES.smallWeighing(grams * 1000, item.form.name, SMALLEST_GOOD_WEIGHING_G * 1000), 'volumeMl'));
     const sol = item.form.solubility;
     if (!sol) return;
     const gPerL = (item.concentrationM * item.form.molarMass) / s.partFraction;

@@ -106,24 +106,32 @@ export function protocolSteps(plan: RecipePlan): string[] {
   const steps: string[] = [];
   steps.push(`Weigh ${weighed.map(weighLine).join('; and ')}.`);
   const dissolveMl = Math.max(0, m.partVolumeMl - (t?.volumeMl ?? 0));
-  steps.push(`Dissolve in about ${volumeText(dissolveMl)} of water, leaving room for the pH adjustment in about ${volumeText(m.partVolumeMl)} (${Math.round(m.partVolumeFraction * 100)} % of the ${volumeText(finalMl)}).`);
+  steps.push(
+    `Dissolve in about ${volumeText(dissolveMl)} of water, leaving room for the pH adjustment in about ${volumeText(m.partVolumeMl)} (${Math.round(m.partVolumeFraction * 100)} % of the ${volumeText(finalMl)}).`,
+  );
   steps.push(`Bring the solution to ${m.benchTemperatureC} °C and calibrate the pH meter at that temperature.`);
   if (t) {
     steps.push(
       `Add about ${volumeText(t.firstPortionMl)} of ${t.stockM} M ${t.titrant} (a safe first portion; expect ${volumeRange(t.lowMl, t.highMl)} in all, about ${volumeText(t.volumeMl)}), mix, then add more in small portions until the meter reads ${formatPh(m.pH)} at ${m.benchTemperatureC} °C.`,
     );
   } else {
-    steps.push(`Mix until dissolved; the meter should read ${formatPh(m.pH)} at ${m.benchTemperatureC} °C. If it is off by more than 0.05, adjust with small portions of the acid or base form, or of dilute strong acid or base.`);
+    steps.push(
+      `Mix until dissolved; the meter should read ${formatPh(m.pH)} at ${m.benchTemperatureC} °C. If it is off by more than 0.05, adjust with small portions of the acid or base form, or of dilute strong acid or base.`,
+    );
   }
   const vessel = finalMl <= LARGEST_FLASK_ML ? `a ${volumeText(finalMl)} volumetric flask or graduated vessel` : 'a graduated vessel or tank';
   steps.push(`Transfer to ${vessel}, rinse in, and bring to ${volumeText(finalMl)} with water at ${m.benchTemperatureC} °C.`);
   if (plan.stock) {
     steps.push(`Mix well. The stock reads about pH ${formatPh(plan.stock.stockPhAtUse)} at ${plan.predictions.useTemperatureC} °C; that is expected, not an error.`);
-    steps.push(`For ${volumeText(plan.volumeMl)} of working buffer, mix ${volumeText(plan.stock.stockPerBatchMl)} of stock with ${volumeText(plan.stock.waterPerBatchMl)} of water.`);
+    steps.push(
+      `For ${volumeText(plan.volumeMl)} of working buffer, mix ${volumeText(plan.stock.stockPerBatchMl)} of stock with ${volumeText(plan.stock.waterPerBatchMl)} of water.`,
+    );
   } else {
     steps.push('Mix well.');
   }
-  steps.push(`Check: at ${plan.predictions.useTemperatureC} °C the buffer should read pH ${formatPh(plan.predictions.pHAtUse)}; verify with a calibrated meter at that temperature.`);
+  steps.push(
+    `Check: at ${plan.predictions.useTemperatureC} °C the buffer should read pH ${formatPh(plan.predictions.pHAtUse)}; verify with a calibrated meter at that temperature.`,
+  );
   return steps;
 }
 
@@ -142,7 +150,8 @@ export function formatRecipe(plan: RecipePlan): string {
   const p = plan.predictions;
   const lines: string[] = [];
   lines.push(`${plan.buffer} buffer, ${plan.concentrationMm} mM, pH ${plan.targetPh} at ${p.useTemperatureC} °C, ${volumeText(plan.volumeMl)} (${plan.route})`);
-  if (plan.stock) lines.push(`Made as ${volumeText(plan.stock.stockVolumeMl)} of ${plan.stock.fold}× stock (${(plan.concentrationMm * plan.stock.fold).toPrecision(4)} mM), diluted for use`);
+  if (plan.stock)
+    lines.push(`Made as ${volumeText(plan.stock.stockVolumeMl)} of ${plan.stock.fold}× stock (${(plan.concentrationMm * plan.stock.fold).toPrecision(4)} mM), diluted for use`);
   lines.push('');
   lines.push('Amounts');
   for (const c of plan.components) {
@@ -162,7 +171,10 @@ export function formatRecipe(plan: RecipePlan): string {
   lines.push(`  osmolality              ${p.osmolalityMosmKg.toFixed(0)} mOsm/kg (Pitzer osmotic coefficient)`);
   const at25 = p.useTemperatureC === 25 ? '' : `; ${conductivityText(p.conductivity25MsPerCm)} at 25 °C`;
   lines.push(`  conductivity            ${conductivityText(p.conductivityMsPerCm)} at ${p.useTemperatureC} °C${at25}`);
-  if (plan.stock) lines.push(`  stock conductivity      ${conductivityText(plan.stock.stockConductivityMsPerCm)} at ${p.useTemperatureC} °C; ${conductivityText(plan.stock.stockConductivity25MsPerCm)} at 25 °C`);
+  if (plan.stock)
+    lines.push(
+      `  stock conductivity      ${conductivityText(plan.stock.stockConductivityMsPerCm)} at ${p.useTemperatureC} °C; ${conductivityText(plan.stock.stockConductivity25MsPerCm)} at 25 °C`,
+    );
   lines.push(`  capacity                ${p.baseMmPerTenthPh.toFixed(2)} mM base or ${p.acidMmPerTenthPh.toFixed(2)} mM acid per 0.1 pH`);
   lines.push(`  temperature             ${p.pHPerDegreeC.toFixed(4)} pH per °C`);
   lines.push(`  tenfold dilution        pH ${formatPh(p.pHAfterTenfoldDilution)}`);

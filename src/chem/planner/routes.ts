@@ -25,7 +25,17 @@ export function formContains(form: LibraryForm, system: SubstanceRecord): boolea
 
 export function requireFormOf(field: string, name: string | undefined, s: Settled): LibraryForm {
   if (name === undefined || name === '') {
-    throw new ChemError('invalid-input', 'formsOfSystem', MESSAGES.formsOfSystem(field, s.system.name, s.system.forms.map((f) => f.name)), field, s.system.forms.map((f) => f.name).join(', '));
+    throw new ChemError(
+      'invalid-input',
+      'formsOfSystem',
+      MESSAGES.formsOfSystem(
+        field,
+        s.system.name,
+        s.system.forms.map((f) => f.name),
+      ),
+      field,
+      s.system.forms.map((f) => f.name).join(', '),
+    );
   }
   const form = s.library.findForm(name);
   if (!formContains(form, s.system)) {
@@ -99,7 +109,9 @@ export function titrantTotalWarning(s: Settled, base: RouteResult): ChemWarning 
   if (!base.titrant || s.titrantInBuffer === 'hold' || s.route === 'two-forms') return undefined;
   const shared = systemMolesIn(base.titrant.form, s.system);
   if (shared === 0) return undefined;
-  const totalMm = base.weighed.filter((w) => w.role === 'buffer').reduce((sum, w) => sum + w.concentrationM * systemMolesIn(w.form, s.system), 0) * 1000 + base.titrant.concentrationM * shared * 1000;
+  const totalMm =
+    base.weighed.filter((w) => w.role === 'buffer').reduce((sum, w) => sum + w.concentrationM * systemMolesIn(w.form, s.system), 0) * 1000 +
+    base.titrant.concentrationM * shared * 1000;
   return warning('titrantAddsBuffer', MESSAGES.titrantAddsBuffer(base.titrant.form.name, s.system.name, s.concentrationM * 1000, totalMm), 'titrantInBuffer');
 }
 

@@ -31,11 +31,23 @@ export function solveWithSaltTarget(s: Settled): RouteResult {
   const shown = (x: number) => Number(x.toPrecision(4));
   const reached = measure(0);
   if (reached > target.goal) {
-    throw new ChemError('infeasible-target', 'saltTargetUnreachable', MESSAGES.saltTargetUnreachable(what, target.goal, shown(reached)), 'saltTarget', `a target above ${shown(reached)}`);
+    throw new ChemError(
+      'infeasible-target',
+      'saltTargetUnreachable',
+      MESSAGES.saltTargetUnreachable(what, target.goal, shown(reached)),
+      'saltTarget',
+      `a target above ${shown(reached)}`,
+    );
   }
   const most = measure(MAX_SALT_TARGET_M);
   if (most < target.goal) {
-    throw new ChemError('infeasible-target', 'saltTargetBeyondSalt', MESSAGES.saltTargetBeyondSalt(what, target.goal, shown(most), target.form.name, MAX_SALT_TARGET_M), 'saltTarget', `a target up to ${shown(most)}`);
+    throw new ChemError(
+      'infeasible-target',
+      'saltTargetBeyondSalt',
+      MESSAGES.saltTargetBeyondSalt(what, target.goal, shown(most), target.form.name, MAX_SALT_TARGET_M),
+      'saltTarget',
+      `a target up to ${shown(most)}`,
+    );
   }
   let lo = 0;
   let hi = MAX_SALT_TARGET_M;

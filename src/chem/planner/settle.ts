@@ -72,7 +72,13 @@ export function bufferSystemOf(library: SubstanceLibrary, name: unknown): Substa
     const key = typeof name === 'string' ? nameKey(name) : '';
     const strong = library.records().some((r) => r.kind === 'strong' && [r.name, ...r.aliases].some((n) => nameKey(n) === key)) || addsNoSystem(library, name);
     if (!strong) throw e;
-    throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('buffer', name, 'an acid–base buffer system (this is a strong electrolyte: add it as a salt)'), 'buffer', 'an acid–base buffer system');
+    throw new ChemError(
+      'invalid-input',
+      'outOfRange',
+      MESSAGES.outOfRange('buffer', name, 'an acid–base buffer system (this is a strong electrolyte: add it as a salt)'),
+      'buffer',
+      'an acid–base buffer system',
+    );
   }
   if (system.kind !== 'acid-base') {
     throw new ChemError('invalid-input', 'outOfRange', MESSAGES.outOfRange('buffer', name, 'an acid–base buffer system'), 'buffer', 'an acid–base buffer system');
@@ -122,7 +128,10 @@ export function settle(input: RecipeInput, library: SubstanceLibrary): Settled {
     pKaUncertainty: readNumberField('pKaUncertainty', input.pKaUncertainty),
     titrantInBuffer: readChoiceField('titrantInBuffer', input.titrantInBuffer) as Settled['titrantInBuffer'],
     formPurityPercent: readPurityField('formPurityPercent', input.formPurityPercent),
-    purityPercent: Object.entries(input.purityPercent ?? {}).map(([name, value]) => ({ key: nameKey(name), percent: readPurityField('formPurityPercent', value, `purityPercent.${name}`) ?? 100 })),
+    purityPercent: Object.entries(input.purityPercent ?? {}).map(([name, value]) => ({
+      key: nameKey(name),
+      percent: readPurityField('formPurityPercent', value, `purityPercent.${name}`) ?? 100,
+    })),
   };
 }
 

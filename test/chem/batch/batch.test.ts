@@ -26,12 +26,54 @@ function caught(f: () => unknown): ChemError {
 
 /** Our own recipes: a cold-room tris saline, a HEPES stock, acetate from the trihydrate, phosphate from two forms, HEPES to an osmolarity. */
 const RECIPES: [string, RecipeInput][] = [
-  ['cold-room tris saline, 1 M HCl, adjusted at 22 °C', { buffer: 'tris', targetPh: 7.5, useTemperatureC: 4, benchTemperatureC: 22, concentrationMm: 50, volumeMl: 500, form: 'tris base', titrant: { form: 'HCl', concentrationM: 1 }, salts: [{ form: 'NaCl', concentrationMm: 150 }] }],
-  ['HEPES with 5 M NaOH, 98.5 % pure', { buffer: 'HEPES', targetPh: 7.2, concentrationMm: 25, volumeMl: 250, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 5 }, formPurityPercent: 98.5 }],
-  ['acetate from the trihydrate with 1 M HCl', { buffer: 'acetate', targetPh: 4.8, concentrationMm: 100, volumeMl: 250, form: 'sodium acetate trihydrate', titrant: { form: 'HCl', concentrationM: 1 } }],
-  ['tenfold MOPS stock, 200 mL of stock', { buffer: 'MOPS', targetPh: 7.0, concentrationMm: 20, volumeMl: 1000, route: 'stock', stock: { fold: 10, volumeMl: 200 }, form: 'MOPS free acid', titrant: { form: 'NaOH', concentrationM: 5 } }],
+  [
+    'cold-room tris saline, 1 M HCl, adjusted at 22 °C',
+    {
+      buffer: 'tris',
+      targetPh: 7.5,
+      useTemperatureC: 4,
+      benchTemperatureC: 22,
+      concentrationMm: 50,
+      volumeMl: 500,
+      form: 'tris base',
+      titrant: { form: 'HCl', concentrationM: 1 },
+      salts: [{ form: 'NaCl', concentrationMm: 150 }],
+    },
+  ],
+  [
+    'HEPES with 5 M NaOH, 98.5 % pure',
+    { buffer: 'HEPES', targetPh: 7.2, concentrationMm: 25, volumeMl: 250, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 5 }, formPurityPercent: 98.5 },
+  ],
+  [
+    'acetate from the trihydrate with 1 M HCl',
+    { buffer: 'acetate', targetPh: 4.8, concentrationMm: 100, volumeMl: 250, form: 'sodium acetate trihydrate', titrant: { form: 'HCl', concentrationM: 1 } },
+  ],
+  [
+    'tenfold MOPS stock, 200 mL of stock',
+    {
+      buffer: 'MOPS',
+      targetPh: 7.0,
+      concentrationMm: 20,
+      volumeMl: 1000,
+      route: 'stock',
+      stock: { fold: 10, volumeMl: 200 },
+      form: 'MOPS free acid',
+      titrant: { form: 'NaOH', concentrationM: 5 },
+    },
+  ],
   ['phosphate from two forms', { buffer: 'phosphate', targetPh: 6.9, concentrationMm: 50, volumeMl: 1000, route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'Na2HPO4·7H2O' }],
-  ['HEPES with NaCl to 290 mOsm/L', { buffer: 'HEPES', targetPh: 7.4, concentrationMm: 10, volumeMl: 1000, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, saltTarget: { form: 'NaCl', idealOsmolarityMosm: 290 } }],
+  [
+    'HEPES with NaCl to 290 mOsm/L',
+    {
+      buffer: 'HEPES',
+      targetPh: 7.4,
+      concentrationMm: 10,
+      volumeMl: 1000,
+      form: 'HEPES free acid',
+      titrant: { form: 'NaOH', concentrationM: 1 },
+      saltTarget: { form: 'NaCl', idealOsmolarityMosm: 290 },
+    },
+  ],
 ];
 
 const asPlanned = (plan: RecipePlan): BatchActuals => ({ weighed: plannedAsWeighed(plan), ...(plan.titration ? { titrantMl: plan.titration.volumeMl } : {}) });
@@ -61,13 +103,16 @@ describe('as-made check: the planned amounts give the plan back (within 0.001 pH
     expect(asMade(plan, { ...asPlanned(plan), finalPh: plan.targetPh + 0.08 }, { ph: 0.1 }).pass).toBe(true);
   });
 
-  it('carries a planned osmolality (when the plan\'s activity model predicts one) at the plan\'s osmotic coefficient, scaled by the particles made', () => {
+  it("carries a planned osmolality (when the plan's activity model predicts one) at the plan's osmotic coefficient, scaled by the particles made", () => {
     const plan = planRecipe(RECIPES[0][1]);
     // Made as planned, the batch has the plan's osmolality.
     expect(asMade(plan, asPlanned(plan)).predictions.osmolalityMosmPerKg).toBeCloseTo(plan.predictions.osmolalityMosmKg, 9);
     const withOsmolality = { ...plan, predictions: { ...plan.predictions, osmolalityMosmKg: 371 } } as RecipePlan;
     expect(asMade(withOsmolality, asPlanned(plan)).predictions.osmolalityMosmPerKg).toBeCloseTo(371, 9);
-    const salty = asMade(withOsmolality, { ...asPlanned(plan), weighed: plannedAsWeighed(plan).map((w) => (w.form === 'sodium chloride' ? { ...w, grams: (w.grams as number) * 1.1 } : w)) });
+    const salty = asMade(withOsmolality, {
+      ...asPlanned(plan),
+      weighed: plannedAsWeighed(plan).map((w) => (w.form === 'sodium chloride' ? { ...w, grams: (w.grams as number) * 1.1 } : w)),
+    });
     expect(salty.predictions.osmolalityMosmPerKg! / 371).toBeCloseTo(salty.predictions.idealOsmolarityMosm / plan.predictions.idealOsmolarityMosm, 9);
   });
 
@@ -77,7 +122,15 @@ describe('as-made check: the planned amounts give the plan back (within 0.001 pH
     expect([e.code, e.field]).toEqual(['notWeighed', 'actual.grams']);
     const bad = caught(() => asMade(plan, { weighed: [{ form: 'tris base', grams: '3 kg/L' }], titrantMl: 20 }));
     expect(bad.field).toBe('actual.weighed[0].grams');
-    expect(asMade(plan, { weighed: [{ form: 'tris base', grams: '3028 mg' }, { form: 'NaCl', grams: 4.383 }], titrantMl: 20 }).components[0].actualMm).toBeCloseTo((3.028 / 121.135) * 2000, 1);
+    expect(
+      asMade(plan, {
+        weighed: [
+          { form: 'tris base', grams: '3028 mg' },
+          { form: 'NaCl', grams: 4.383 },
+        ],
+        titrantMl: 20,
+      }).components[0].actualMm,
+    ).toBeCloseTo((3.028 / 121.135) * 2000, 1);
   });
 });
 
@@ -109,10 +162,13 @@ describe('bench correction: a reading as expected', () => {
     expect(c.add).toBe('sodium hydroxide');
     expect(codes(c.warnings)).toContain('overshoot');
     // Rebuild: the solution the reading implies, plus the counter-titrant, read at the bench.
-    const start = library.compositionFromForms(plannedAsWeighed(plan).map((w) => ({ form: w.form, concentrationM: ((w.grams as number) * ((w.purityPercent as number) / 100)) / library.findForm(w.form).molarMass / 0.4 })), { temperatureC: 22 });
+    const start = library.compositionFromForms(
+      plannedAsWeighed(plan).map((w) => ({ form: w.form, concentrationM: ((w.grams as number) * ((w.purityPercent as number) / 100)) / library.findForm(w.form).molarMass / 0.4 })),
+      { temperatureC: 22 },
+    );
     const hcl = titrantFromForm(library.findForm('HCl'), library);
     const naoh = titrantFromForm(library.findForm('NaOH'), library);
-    const after = withTitrant(withTitrant(start, hcl, (c.effectiveTitrantMl / 1000) * 1 / 0.4), naoh, ((c.nextMl / 1000) * 0.5) / 0.4);
+    const after = withTitrant(withTitrant(start, hcl, ((c.effectiveTitrantMl / 1000) * 1) / 0.4), naoh, ((c.nextMl / 1000) * 0.5) / 0.4);
     expect(Math.abs(solvePh(after) - c.endPointPh)).toBeLessThanOrEqual(ROUND_TRIP_PH);
   });
 
@@ -129,7 +185,10 @@ describe('bench correction: a reading as expected', () => {
 
 /** The reading a meter would show for a solution of these forms (g in mL) with titrant moles, at a temperature. */
 function simulatedReading(plan: RecipePlan, grams: { form: string; grams: number; purity?: number }[], titrantMol: number, volumeMl: number, temperatureC: number): number {
-  const c = library.compositionFromForms(grams.map((g) => ({ form: g.form, concentrationM: (g.grams * (g.purity ?? 100)) / 100 / library.findForm(g.form).molarMass / (volumeMl / 1000) })), { temperatureC, activityModel: plan.activityModel });
+  const c = library.compositionFromForms(
+    grams.map((g) => ({ form: g.form, concentrationM: (g.grams * (g.purity ?? 100)) / 100 / library.findForm(g.form).molarMass / (volumeMl / 1000) })),
+    { temperatureC, activityModel: plan.activityModel },
+  );
   return solvePh(withTitrant(c, titrantFromForm(library.findForm(plan.titration!.titrant), library), titrantMol / (volumeMl / 1000)));
 }
 
@@ -157,13 +216,25 @@ describe('our own bench mishaps, each detected and explained', () => {
   it('weak titrant stock: the 1 M HCl is really 0.9 M — the reading fits 0.9 M; standardised at 0.9 M, the planned volume fails as made', () => {
     const plan = planRecipe(RECIPES[0][1]);
     const tp = plan.titration!;
-    const reading = simulatedReading(plan, plannedAsWeighed(plan).map((w) => ({ form: w.form, grams: w.grams as number })), (tp.firstPortionMl / 1000) * 0.9, plan.meter.partVolumeMl, 22);
+    const reading = simulatedReading(
+      plan,
+      plannedAsWeighed(plan).map((w) => ({ form: w.form, grams: w.grams as number })),
+      (tp.firstPortionMl / 1000) * 0.9,
+      plan.meter.partVolumeMl,
+      22,
+    );
     const c = benchCorrection(plan, { titrantMl: tp.firstPortionMl, readingPh: reading });
     expect(c.offPlan).toBe(true);
     expect(codes(c.warnings)).toContain('causeStockConcentration');
     expect(Math.abs((c.causes.find((x) => x.cause === 'stock concentration')!.fits as number) - 0.9)).toBeLessThanOrEqual(0.9 * FIT_RELATIVE);
     // The next amount from the reading, poured from the true stock, lands on the end point.
-    const rest = simulatedReading(plan, plannedAsWeighed(plan).map((w) => ({ form: w.form, grams: w.grams as number })), ((tp.firstPortionMl * 0.9) / 1000) + (c.nextMl / 1000) * 1 , plan.meter.partVolumeMl, 22);
+    const rest = simulatedReading(
+      plan,
+      plannedAsWeighed(plan).map((w) => ({ form: w.form, grams: w.grams as number })),
+      (tp.firstPortionMl * 0.9) / 1000 + (c.nextMl / 1000) * 1,
+      plan.meter.partVolumeMl,
+      22,
+    );
     expect(Math.abs(rest - c.endPointPh)).toBeLessThanOrEqual(ROUND_TRIP_PH);
 
     const r = asMade(plan, { ...asPlanned(plan), titrantConcentrationM: 0.9 });

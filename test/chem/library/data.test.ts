@@ -49,31 +49,37 @@ describe('the table as a whole', () => {
     }
   });
 
-  it.each(SUBSTANCES.filter((r) => r.kind === 'acid-base').map((r) => [r.name, r] as const))('%s: every step names the copies it was checked against, or says memory (and then carries a note)', (_name, record) => {
-    for (const s of record.steps) {
-      if (s.checkedAgainst === 'memory') {
-        expect(s.note ?? '').not.toBe('');
-        continue;
+  it.each(SUBSTANCES.filter((r) => r.kind === 'acid-base').map((r) => [r.name, r] as const))(
+    '%s: every step names the copies it was checked against, or says memory (and then carries a note)',
+    (_name, record) => {
+      for (const s of record.steps) {
+        if (s.checkedAgainst === 'memory') {
+          expect(s.note ?? '').not.toBe('');
+          continue;
+        }
+        expect(s.checkedAgainst.length).toBeGreaterThan(0);
+        for (const c of s.checkedAgainst) {
+          expect(Object.keys(COPIES)).toContain(c.copy);
+          expect(c.where.length).toBeGreaterThan(0);
+          expect(c.reads.length).toBeGreaterThan(0);
+        }
       }
-      expect(s.checkedAgainst.length).toBeGreaterThan(0);
-      for (const c of s.checkedAgainst) {
-        expect(Object.keys(COPIES)).toContain(c.copy);
-        expect(c.where.length).toBeGreaterThan(0);
-        expect(c.reads.length).toBeGreaterThan(0);
-      }
-    }
-  });
+    },
+  );
 
-  it.each(SUBSTANCES.filter((r) => r.kind === 'acid-base').map((r) => [r.name, r] as const))('%s: every step carries the temperature range its data cover, and a step without ΔH° covers 25 ± 2 °C only', (_name, record) => {
-    for (const s of record.steps) {
-      const [lo, hi] = s.temperatureRangeC;
-      expect(lo).toBeLessThan(hi);
-      expect(lo).toBeGreaterThanOrEqual(0);
-      expect(hi).toBeLessThanOrEqual(100);
-      expect(lo <= 25 && 25 <= hi).toBe(true);
-      if (s.deltaHkJ === undefined && s.pKa > 0) expect([lo, hi]).toEqual([23, 27]);
-    }
-  });
+  it.each(SUBSTANCES.filter((r) => r.kind === 'acid-base').map((r) => [r.name, r] as const))(
+    '%s: every step carries the temperature range its data cover, and a step without ΔH° covers 25 ± 2 °C only',
+    (_name, record) => {
+      for (const s of record.steps) {
+        const [lo, hi] = s.temperatureRangeC;
+        expect(lo).toBeLessThan(hi);
+        expect(lo).toBeGreaterThanOrEqual(0);
+        expect(hi).toBeLessThanOrEqual(100);
+        expect(lo <= 25 && 25 <= hi).toBe(true);
+        if (s.deltaHkJ === undefined && s.pKa > 0) expect([lo, hi]).toEqual([23, 27]);
+      }
+    },
+  );
 
   it('every listed solubility names what it was checked against, or says memory', () => {
     for (const r of SUBSTANCES) {
@@ -106,7 +112,7 @@ describe('every form', () => {
     expect(Math.abs(z)).toBeLessThan(NEUTRALITY_TOLERANCE);
   });
 
-  it.each(allForms)('%s / %s: adds known systems and strong ions, within each system\'s steps', (_substance, form) => {
+  it.each(allForms)("%s / %s: adds known systems and strong ions, within each system's steps", (_substance, form) => {
     for (const p of form.adds) {
       const sys = findSystem(p.system);
       expect(p.moles).toBeGreaterThan(0);
@@ -131,7 +137,8 @@ describe('spot checks against the named sources', () => {
   it('HEPES pKa 7.564, ΔH 20.4, ΔCp 47: Goldberg et al. 2002, selected values, entry HEPES', () => check('HEPES', 0, [7.564, 20.4, 47]));
   it('MES pKa 6.270, ΔH 14.8, ΔCp 5: Goldberg et al. 2002, selected values, entry MES', () => check('MES', 0, [6.27, 14.8, 5]));
   it('MOPS pKa 7.184, ΔH 21.1 (Goldberg et al. 2002 via the transcription), ΔCp +25 (memory of the review; the transcription gives −5)', () => check('MOPS', 0, [7.184, 21.1, 25]));
-  it('PIPES pKa 7.141, ΔH 11.2 (Goldberg et al. 2002 via the transcription), ΔCp +22 (memory of the review; the transcription gives −2)', () => check('PIPES', 0, [7.141, 11.2, 22]));
+  it('PIPES pKa 7.141, ΔH 11.2 (Goldberg et al. 2002 via the transcription), ΔCp +22 (memory of the review; the transcription gives −2)', () =>
+    check('PIPES', 0, [7.141, 11.2, 22]));
   it('phosphate H2PO4− pKa 7.198, ΔH 3.6, ΔCp −230: Goldberg et al. 2002, selected values, entry phosphoric acid step 2', () => check('phosphate', 1, [7.198, 3.6, -230]));
   it('phosphate H3PO4 pKa 2.148, ΔH −8.0, ΔCp −141: Goldberg et al. 2002, selected values, entry phosphoric acid step 1', () => check('phosphate', 0, [2.148, -8.0, -141]));
   it('phosphate HPO42− pKa 12.35, ΔH 16.0, ΔCp −242: Goldberg et al. 2002, selected values, entry phosphoric acid step 3', () => check('phosphate', 2, [12.35, 16.0, -242]));
@@ -174,7 +181,7 @@ describe('common practice', () => {
     expect(Math.abs(findForm('tris HCl').molarMass - 157.6)).toBeLessThanOrEqual(0.01);
   });
 
-  it('tris pKa is about 7.7 at 37 °C (common practice, ±0.1; van \'t Hoff with Goldberg ΔH°, ΔCp°)', () => {
+  it("tris pKa is about 7.7 at 37 °C (common practice, ±0.1; van 't Hoff with Goldberg ΔH°, ΔCp°)", () => {
     expect(Math.abs(pKaAt(tris.pKa, tris.deltaHkJ ?? 0, tris.deltaCpJ ?? 0, 37) - 7.7)).toBeLessThanOrEqual(RULE_OF_THUMB);
   });
 

@@ -71,7 +71,13 @@ describe('EDTA forms on the bench (common practice)', () => {
 
 describe('chelator warning', () => {
   it('says that EDTA binds Mg2+ and estimates the free Mg2+ that exceeds it', () => {
-    const c = compositionFromForms([{ form: 'Na2EDTA·2H2O', concentrationM: 0.001 }, { form: 'MgCl2·6H2O', concentrationM: 0.005 }], { extraStrongIons: { 'Na+': 0.002 } });
+    const c = compositionFromForms(
+      [
+        { form: 'Na2EDTA·2H2O', concentrationM: 0.001 },
+        { form: 'MgCl2·6H2O', concentrationM: 0.005 },
+      ],
+      { extraStrongIons: { 'Na+': 0.002 } },
+    );
     const w = chelatorWarning(c);
     expect(w?.code).toBe('chelatorBindsMetals');
     expect(w?.message).toContain('4.00 mM');
@@ -81,7 +87,14 @@ describe('chelator warning', () => {
 
   it('is quiet for EDTA without Mg2+ or Ca2+, and for Mg2+ with phosphate only', () => {
     expect(chelatorWarning(compositionFromForms([{ form: 'Na2EDTA·2H2O', concentrationM: 0.001 }]))).toBeUndefined();
-    expect(chelatorWarning(compositionFromForms([{ form: 'KH2PO4', concentrationM: 0.01 }, { form: 'MgCl2', concentrationM: 0.001 }]))).toBeUndefined();
+    expect(
+      chelatorWarning(
+        compositionFromForms([
+          { form: 'KH2PO4', concentrationM: 0.01 },
+          { form: 'MgCl2', concentrationM: 0.001 },
+        ]),
+      ),
+    ).toBeUndefined();
   });
 
   it('knows EGTA and says its constants are from memory', () => {

@@ -39,12 +39,18 @@ describe('finding by name', () => {
     expect(findForm('MES').name).toBe('MES free acid');
   });
 
-  it.each(['Na2HPO4·7H2O', 'Na2HPO4*7H2O', 'Na2HPO4 7H2O', 'Na2HPO4x7H2O', 'Na2HPO4 x 7H2O', 'sodium phosphate dibasic heptahydrate', 'disodium hydrogen phosphate heptahydrate', 'Na2HPO4 heptahydrate'])(
-    'reads the hydrate notation %p',
-    (name) => {
-      expect(findForm(name).name).toBe('sodium phosphate dibasic heptahydrate');
-    },
-  );
+  it.each([
+    'Na2HPO4·7H2O',
+    'Na2HPO4*7H2O',
+    'Na2HPO4 7H2O',
+    'Na2HPO4x7H2O',
+    'Na2HPO4 x 7H2O',
+    'sodium phosphate dibasic heptahydrate',
+    'disodium hydrogen phosphate heptahydrate',
+    'Na2HPO4 heptahydrate',
+  ])('reads the hydrate notation %p', (name) => {
+    expect(findForm(name).name).toBe('sodium phosphate dibasic heptahydrate');
+  });
 
   it('tells hydrates apart: NaH2PO4, ·H2O and ·2H2O are different forms with different molar masses', () => {
     const masses = ['NaH2PO4', 'NaH2PO4·H2O', 'NaH2PO4 dihydrate'].map((n) => findForm(n).molarMass);
@@ -98,7 +104,12 @@ describe('name keys and edit distance', () => {
   });
 
   it('ranks the nearest names first', () => {
-    const names = new Map([['mops', 'MOPS'], ['mopso', 'MOPSO'], ['mes', 'MES'], ['tris', 'tris']]);
+    const names = new Map([
+      ['mops', 'MOPS'],
+      ['mopso', 'MOPSO'],
+      ['mes', 'MES'],
+      ['tris', 'tris'],
+    ]);
     expect(closestNames('mosp', names)[0]).toBe('MOPS');
   });
 });
@@ -140,10 +151,13 @@ describe('what a form adds', () => {
 
 describe('compositionFromForms', () => {
   it('adds up the same system from two forms and turns counter-ions into strong ions', () => {
-    const c = compositionFromForms([
-      { form: 'KH2PO4', concentrationM: 0.025 },
-      { form: 'Na2HPO4', concentrationM: 0.025 },
-    ], { temperatureC: 37, activityModel: 'ideal' });
+    const c = compositionFromForms(
+      [
+        { form: 'KH2PO4', concentrationM: 0.025 },
+        { form: 'Na2HPO4', concentrationM: 0.025 },
+      ],
+      { temperatureC: 37, activityModel: 'ideal' },
+    );
     expect(c.systems).toHaveLength(1);
     expect(c.systems[0].name).toBe('phosphate');
     expect(c.systems[0].totalM).toBeCloseTo(0.05, 15);
@@ -190,7 +204,10 @@ describe('user substances', () => {
     expect(lib.findForm('LAX base').molarMass).toBeCloseTo(5 * 12.011 + 13 * 1.008 + 14.007 + 2 * 15.999, 9);
     expect(lib.findForm('lax hydrochloride').molarMass).toBe(155.62);
     expect(lib.list().find((r) => r.name === 'Lab amine X')?.userDefined).toBe(true);
-    const c = lib.compositionFromForms([{ form: 'LAX hydrochloride', concentrationM: 0.1 }, { form: 'NaOH', concentrationM: 0.05 }]);
+    const c = lib.compositionFromForms([
+      { form: 'LAX hydrochloride', concentrationM: 0.1 },
+      { form: 'NaOH', concentrationM: 0.05 },
+    ]);
     expect(c.systems[0]).toMatchObject({ name: 'Lab amine X', chargeOfMostProtonated: 1, totalM: 0.1, steps: [{ pKa: 7.9, deltaHkJ: 40 }] });
     expect(c.strongIons).toEqual({ 'Cl-': 0.1, 'Na+': 0.05 });
   });

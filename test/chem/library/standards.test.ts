@@ -97,7 +97,7 @@ describe('dilution values ΔpH½ of the IUPAC 2002 primary standards at 25 °C (
   });
 });
 
-describe('buffer values β of the IUPAC 2002 primary standards at 25 °C (Lange\'s Handbook Table 8.15, two copies), Bates–Guggenheim, within 5 % plus the table\'s rounding (borax explained)', () => {
+describe("buffer values β of the IUPAC 2002 primary standards at 25 °C (Lange's Handbook Table 8.15, two copies), Bates–Guggenheim, within 5 % plus the table's rounding (borax explained)", () => {
   const withinBeta = PRIMARY_STANDARDS.filter((s) => s.id !== 'borax');
   it.each(withinBeta.map((s) => [s.name, s] as const))('%s: CAPACITY(…, "beta") and the core capacity agree with the table', (name, standard) => {
     const tolerance = BETA_RELATIVE_TOLERANCE * standard.bufferValue + BETA_ROUNDING;

@@ -30,19 +30,45 @@ const PH_TOLERANCE = 0.001;
 const MIXES: { title: string; input: MixInput }[] = [
   {
     title: 'a lysis buffer used cold: tris, NaCl, EDTA, glycerol, imidazole at 4 °C, corrected to pH 7.9',
-    input: { stocks: SHELF, volumeMl: 50, useTemperatureC: 4, targetPh: 7.9, targets: [
-      { component: 'tris', concentrationMm: 50 }, { component: 'NaCl', concentrationMm: 300 }, { component: 'EDTA', concentrationMm: 1 },
-      { component: 'glycerol', percent: 10 }, { component: 'imidazole', concentrationMm: 20 }] },
+    input: {
+      stocks: SHELF,
+      volumeMl: 50,
+      useTemperatureC: 4,
+      targetPh: 7.9,
+      targets: [
+        { component: 'tris', concentrationMm: 50 },
+        { component: 'NaCl', concentrationMm: 300 },
+        { component: 'EDTA', concentrationMm: 1 },
+        { component: 'glycerol', percent: 10 },
+        { component: 'imidazole', concentrationMm: 20 },
+      ],
+    },
   },
   {
     title: 'a kinase buffer at 30 °C: HEPES, KCl, MgCl2, no pH target',
-    input: { stocks: SHELF, volumeMl: 10, useTemperatureC: 30, targets: [
-      { component: 'HEPES-NaOH 1 M pH 7.5', concentrationMm: 25 }, { component: 'KCl', concentrationMm: 100 }, { component: 'MgCl2', concentrationMm: 10 }] },
+    input: {
+      stocks: SHELF,
+      volumeMl: 10,
+      useTemperatureC: 30,
+      targets: [
+        { component: 'HEPES-NaOH 1 M pH 7.5', concentrationMm: 25 },
+        { component: 'KCl', concentrationMm: 100 },
+        { component: 'MgCl2', concentrationMm: 10 },
+      ],
+    },
   },
   {
     title: 'a gradient buffer with sucrose from a 2 M stock, raised to pH 8.5 with NaOH',
-    input: { stocks: SHELF, volumeMl: 250, targetPh: 8.5, targets: [
-      { component: 'Tris-HCl 1 M pH 8.0', concentrationMm: 20 }, { component: 'sucrose', concentrationMm: 250 }, { component: 'NaCl', concentrationMm: 100 }] },
+    input: {
+      stocks: SHELF,
+      volumeMl: 250,
+      targetPh: 8.5,
+      targets: [
+        { component: 'Tris-HCl 1 M pH 8.0', concentrationMm: 20 },
+        { component: 'sucrose', concentrationMm: 250 },
+        { component: 'NaCl', concentrationMm: 100 },
+      ],
+    },
   },
 ];
 
@@ -51,9 +77,13 @@ describe('round trips: printed volumes mixed back through the solver', () => {
     it(`${title}: concentrations within 0.1 %, pH within 0.001`, () => {
       const plan = planMix(input);
       // The correcting titrant goes on the shelf as a plain stock, so the round trip mixes only what is printed.
-      const titrantStock = plan.correction ? [{ name: `${plan.correction.stockM} M ${plan.correction.titrant}`, form: plan.correction.titrant, concentration: plan.correction.stockM }] : [];
+      const titrantStock = plan.correction
+        ? [{ name: `${plan.correction.stockM} M ${plan.correction.titrant}`, form: plan.correction.titrant, concentration: plan.correction.stockM }]
+        : [];
       const shelf = resolveShelf([...SHELF, ...titrantStock]);
-      const volumes = plan.components.filter((c) => c.role === 'stock' || c.role === 'titrant').map((c) => ({ stock: c.name, millilitres: printedVolume(c.millilitres as number) }));
+      const volumes = plan.components
+        .filter((c) => c.role === 'stock' || c.role === 'titrant')
+        .map((c) => ({ stock: c.name, millilitres: printedVolume(c.millilitres as number) }));
       const mixed = mixByVolumes(shelf, volumes, plan.volumeMl, plan.useTemperatureC);
       // The plan lists one line per target, in the targets' order.
       input.targets.forEach((t, i) => {
@@ -74,7 +104,16 @@ describe('the pH after mixing is not the tris stock’s label', () => {
   const TEMPERATURE_TOLERANCE = 0.1;
 
   it('lands more than 0.1 above the 8.0 label at 4 °C, and says why, step by step', () => {
-    const plan = planMix({ stocks: SHELF, volumeMl: 100, useTemperatureC: 4, targets: [{ component: 'tris', concentrationMm: 20 }, { component: 'NaCl', concentrationMm: 150 }, { component: 'EDTA', concentrationMm: 1 }] });
+    const plan = planMix({
+      stocks: SHELF,
+      volumeMl: 100,
+      useTemperatureC: 4,
+      targets: [
+        { component: 'tris', concentrationMm: 20 },
+        { component: 'NaCl', concentrationMm: 150 },
+        { component: 'EDTA', concentrationMm: 1 },
+      ],
+    });
     const shift = plan.labelShifts.find((s) => s.stock === 'Tris-HCl 1 M pH 8.0');
     expect(shift).toBeDefined();
     if (!shift) return;
@@ -98,19 +137,42 @@ describe('the pH after mixing is not the tris stock’s label', () => {
 
 describe('pipetting and fitting', () => {
   it('flags a stock needed in less than the smallest accurate volume, with the dilution that fixes it', () => {
-    const plan = planMix({ stocks: SHELF, volumeMl: 1, targets: [{ component: 'MgCl2', concentrationMm: 1 }, { component: 'HEPES', concentrationMm: 20 }] });
+    const plan = planMix({
+      stocks: SHELF,
+      volumeMl: 1,
+      targets: [
+        { component: 'MgCl2', concentrationMm: 1 },
+        { component: 'HEPES', concentrationMm: 20 },
+      ],
+    });
     const w = plan.warnings.find((x) => x.code === 'belowPipetteVolume');
     expect(w?.field).toBe('MgCl2 1 M');
     expect(w?.message).toContain('dilute it 10× first and take 10 µL');
   });
 
   it('follows the user’s own pipetting limit', () => {
-    const plan = planMix({ stocks: SHELF, volumeMl: 1, smallestVolumeUl: '0.5 µL', targets: [{ component: 'MgCl2', concentrationMm: 1 }, { component: 'HEPES', concentrationMm: 20 }] });
+    const plan = planMix({
+      stocks: SHELF,
+      volumeMl: 1,
+      smallestVolumeUl: '0.5 µL',
+      targets: [
+        { component: 'MgCl2', concentrationMm: 1 },
+        { component: 'HEPES', concentrationMm: 20 },
+      ],
+    });
     expect(plan.warnings.map((x) => x.code)).not.toContain('belowPipetteVolume');
   });
 
   it('refuses stocks that cannot fit in the final volume as an infeasible target', () => {
-    const attempt = () => planMix({ stocks: SHELF, volumeMl: 10, targets: [{ component: 'NaCl', concentrationMm: 3000 }, { component: 'KCl', concentrationMm: 1500 }] });
+    const attempt = () =>
+      planMix({
+        stocks: SHELF,
+        volumeMl: 10,
+        targets: [
+          { component: 'NaCl', concentrationMm: 3000 },
+          { component: 'KCl', concentrationMm: 1500 },
+        ],
+      });
     expect(attempt).toThrow(ChemError);
     try {
       attempt();
@@ -122,13 +184,22 @@ describe('pipetting and fitting', () => {
 
   it('asks which stock when two hold the same component, and takes the stock by name', () => {
     const shelf = [...SHELF, { name: 'Tris-HCl 1 M pH 7.0', form: 'tris base', concentration: '1 M', titrant: 'HCl', ph: 7.0 }];
-    expect(() => planMix({ stocks: shelf, volumeMl: 10, targets: [{ component: 'Tris', concentrationMm: 20 }] })).toThrow(expect.objectContaining({ code: 'ambiguousStock', field: 'targets[0].component' }));
+    expect(() => planMix({ stocks: shelf, volumeMl: 10, targets: [{ component: 'Tris', concentrationMm: 20 }] })).toThrow(
+      expect.objectContaining({ code: 'ambiguousStock', field: 'targets[0].component' }),
+    );
     expect(planMix({ stocks: shelf, volumeMl: 10, targets: [{ component: 'Tris-HCl 1 M pH 7.0', concentrationMm: 20 }] }).components[0].name).toBe('Tris-HCl 1 M pH 7.0');
   });
 
   it('names the target field when no stock holds a component', () => {
     try {
-      planMix({ stocks: SHELF, volumeMl: 10, targets: [{ component: 'NaCl', concentrationMm: 100 }, { component: 'MOPS', concentrationMm: 20 }] });
+      planMix({
+        stocks: SHELF,
+        volumeMl: 10,
+        targets: [
+          { component: 'NaCl', concentrationMm: 100 },
+          { component: 'MOPS', concentrationMm: 20 },
+        ],
+      });
       throw new Error('expected an error');
     } catch (e) {
       expect((e as ChemError).code).toBe('noStockFor');
@@ -139,20 +210,30 @@ describe('pipetting and fitting', () => {
 
 describe('neutral additives', () => {
   it('measures neat glycerol by volume and weighs sucrose, counting both in the ideal osmolarity', () => {
-    const plan = planMix({ stocks: [{ name: 'NaCl 5 M', form: 'NaCl', concentration: 5 }], volumeMl: 50, targets: [{ component: 'NaCl', concentrationMm: 100 }, { component: 'glycerin', percent: '5 %' }, { component: 'saccharose', concentrationMm: 100 }] });
+    const plan = planMix({
+      stocks: [{ name: 'NaCl 5 M', form: 'NaCl', concentration: 5 }],
+      volumeMl: 50,
+      targets: [
+        { component: 'NaCl', concentrationMm: 100 },
+        { component: 'glycerin', percent: '5 %' },
+        { component: 'saccharose', concentrationMm: 100 },
+      ],
+    });
     const glycerol = plan.components.find((c) => c.name === 'glycerol');
     const sucrose = plan.components.find((c) => c.name === 'sucrose');
     // 5 % v/v of 50 mL is 2.5 mL of neat glycerol; 100 mM sucrose in 50 mL is 0.005 mol × 342.3 g/mol.
     expectClose('glycerol mL', glycerol?.millilitres ?? NaN, 2.5, 1e-9);
     expectClose('sucrose g', sucrose?.grams ?? NaN, 0.005 * 342.3, 1e-9);
     // Ideal osmolarity: NaCl 2 × 100 + glycerol (2.5 mL × 1.261 g/mL / 92.09 g/mol / 0.05 L) + sucrose 100 mOsm/L.
-    expectClose('ideal osmolarity', plan.predictions.idealOsmolarityMosm, 200 + (2.5 * 1.261 / 92.09 / 0.05) * 1000 + 100, 0.5);
+    expectClose('ideal osmolarity', plan.predictions.idealOsmolarityMosm, 200 + ((2.5 * 1.261) / 92.09 / 0.05) * 1000 + 100, 0.5);
     expect(plan.warnings.map((w) => w.code)).toContain('additiveEffectNotModelled');
   });
 
   it('refuses a percentage for a component that is not an additive, and a titrant on an additive stock', () => {
     expect(() => planMix({ stocks: SHELF, volumeMl: 10, targets: [{ component: 'NaCl', percent: 1 }] })).toThrow(expect.objectContaining({ code: 'percentForAdditivesOnly' }));
-    expect(() => resolveShelf([{ name: 'glycerol 50 %', form: 'glycerol', concentration: '50 %', titrant: 'HCl', ph: 7 }])).toThrow(expect.objectContaining({ code: 'additiveNotTitrated', field: 'stocks[0].titrant' }));
+    expect(() => resolveShelf([{ name: 'glycerol 50 %', form: 'glycerol', concentration: '50 %', titrant: 'HCl', ph: 7 }])).toThrow(
+      expect.objectContaining({ code: 'additiveNotTitrated', field: 'stocks[0].titrant' }),
+    );
   });
 });
 
@@ -180,7 +261,14 @@ describe('stocks', () => {
   });
 
   it('says when a titrated stock sits beyond the activity model (0.5 M disodium EDTA at pH 8 is near 3 M ionic strength)', () => {
-    const plan = planMix({ stocks: SHELF, volumeMl: 100, targets: [{ component: 'EDTA', concentrationMm: 1 }, { component: 'NaCl', concentrationMm: 150 }] });
+    const plan = planMix({
+      stocks: SHELF,
+      volumeMl: 100,
+      targets: [
+        { component: 'EDTA', concentrationMm: 1 },
+        { component: 'NaCl', concentrationMm: 150 },
+      ],
+    });
     expect(plan.warnings.filter((w) => w.code === 'stockBeyondActivityModel').map((w) => w.field)).toEqual(['EDTA 0.5 M pH 8.0']);
     const ideal = planMix({ stocks: SHELF, volumeMl: 100, activityModel: 'ideal', targets: [{ component: 'EDTA', concentrationMm: 1 }] });
     expect(ideal.warnings.map((w) => w.code)).not.toContain('stockBeyondActivityModel');

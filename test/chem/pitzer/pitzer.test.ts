@@ -41,7 +41,7 @@ describe('temperature (Pitzer 1991, Tables 12–13 slopes, used over 0–50 °C)
     expect(Math.abs(at(50.001) - at(50))).toBeLessThan(1e-5);
   });
   it('flags a concentrated solution far from 25 °C whose parameters lack a slope', () => {
-    const acetateSaline = { systems: [{ name: 'acetate', chargeOfMostProtonated: 0, steps: [{ pKa: 4.756 }] , totalM: 1 }], strongIons: { 'Na+': 0.5 } };
+    const acetateSaline = { systems: [{ name: 'acetate', chargeOfMostProtonated: 0, steps: [{ pKa: 4.756 }], totalM: 1 }], strongIons: { 'Na+': 0.5 } };
     expect(speciate({ ...acetateSaline, temperatureC: 45 }).warnings.map((w) => w.code)).toContain('pitzerTemperature');
     expect(speciate({ ...acetateSaline, temperatureC: 30 }).warnings.map((w) => w.code)).not.toContain('pitzerTemperature');
   });
@@ -52,8 +52,13 @@ describe('thermodynamic consistency of the mixture equations (an identity, no ou
   const DERIVATIVE_TOLERANCE = 1e-6;
   it('every ln γ is the derivative of the excess Gibbs energy, in a 10× saline phosphate mixture with Eθ terms', () => {
     const species = [
-      { charge: 1, ion: 'Na+' as const }, { charge: 1, ion: 'K+' as const }, { charge: -1, ion: 'Cl-' as const },
-      { charge: -1, ion: 'H2PO4-' as const }, { charge: -2, ion: 'HPO4-2' as const }, { charge: -3, ion: 'PO4-3' as const }, { charge: -1 },
+      { charge: 1, ion: 'Na+' as const },
+      { charge: 1, ion: 'K+' as const },
+      { charge: -1, ion: 'Cl-' as const },
+      { charge: -1, ion: 'H2PO4-' as const },
+      { charge: -2, ion: 'HPO4-2' as const },
+      { charge: -3, ion: 'PO4-3' as const },
+      { charge: -1 },
     ];
     const system = pitzerSystem(species, 25, A25);
     const m = [1.6, 0.05, 1.4, 0.03, 0.09, 0.001, 0.04];
@@ -104,7 +109,14 @@ describe('concentrated stocks (default Pitzer model)', () => {
   });
 
   it('a 1 M tris stock reads higher than its tenfold dilution (a cationic acid: pKa′ rises with ionic strength); common practice: about 0.1 per tenfold (0.05 to 0.2)', () => {
-    const stock = (scale: number) => compositionFromForms([{ form: 'tris base', concentrationM: 0.4 * scale }, { form: 'tris hydrochloride', concentrationM: 0.6 * scale }], { temperatureC: 25 });
+    const stock = (scale: number) =>
+      compositionFromForms(
+        [
+          { form: 'tris base', concentrationM: 0.4 * scale },
+          { form: 'tris hydrochloride', concentrationM: 0.6 * scale },
+        ],
+        { temperatureC: 25 },
+      );
     const shift = speciate(stock(1)).pH - speciate(stock(0.1)).pH;
     if (!(shift >= 0.05 && shift <= 0.2)) throw new Error(mismatch('1 M minus 0.1 M tris pH', shift, 0.1, 0.1));
   });
@@ -142,7 +154,15 @@ describe('concentrated stocks (default Pitzer model)', () => {
 describe('titrant amounts with the Pitzer model', () => {
   it('do not depend on what was solved before (shared scratch is cleared): chloride-free phosphate with NaOH, before and after a larger citrate–phosphate saline titration', () => {
     const phosphate = compositionFromForms([{ form: 'NaH2PO4', concentrationM: 0.1 }], { temperatureC: 25 });
-    const larger = compositionFromForms([{ form: 'citric acid', concentrationM: 0.05 }, { form: 'Na2HPO4', concentrationM: 0.1 }, { form: 'NaCl', concentrationM: 0.15 }, { form: 'KCl', concentrationM: 0.003 }], { temperatureC: 25 });
+    const larger = compositionFromForms(
+      [
+        { form: 'citric acid', concentrationM: 0.05 },
+        { form: 'Na2HPO4', concentrationM: 0.1 },
+        { form: 'NaCl', concentrationM: 0.15 },
+        { form: 'KCl', concentrationM: 0.003 },
+      ],
+      { temperatureC: 25 },
+    );
     const first = titrantForPh(phosphate, SODIUM_HYDROXIDE, 7.2).concentrationM;
     titrantForPh(larger, SODIUM_HYDROXIDE, 6);
     expect(titrantForPh(phosphate, SODIUM_HYDROXIDE, 7.2).concentrationM).toBe(first);

@@ -12,7 +12,11 @@ describe('hydrate left open', () => {
 
   it('the library lists the other hydrates of a name that says none, and none for an explicit one', () => {
     const lib = defaultLibrary();
-    expect(lib.hydrateAlternatives('sodium phosphate dibasic').map((f) => f.name)).toEqual(['sodium phosphate dibasic dihydrate', 'sodium phosphate dibasic heptahydrate', 'sodium phosphate dibasic dodecahydrate']);
+    expect(lib.hydrateAlternatives('sodium phosphate dibasic').map((f) => f.name)).toEqual([
+      'sodium phosphate dibasic dihydrate',
+      'sodium phosphate dibasic heptahydrate',
+      'sodium phosphate dibasic dodecahydrate',
+    ]);
     expect(lib.hydrateAlternatives('Na2HPO4·7H2O')).toEqual([]);
     expect(lib.hydrateAlternatives('sodium phosphate dibasic anhydrous')).toEqual([]);
     // A formula states its water: Na2HPO4 is the anhydrous salt.
@@ -35,12 +39,19 @@ describe('hydrate left open', () => {
   it('GRAMS weighs the library form under the name; WARNINGS beside it names that form and its molar mass', () => {
     // 10 mM in 1 L of the anhydrous salt, 141.96 g/mol (the library's formula mass).
     expect(grams('sodium phosphate dibasic', 10, 1000)).toBeCloseTo(1.4196, 3);
-    expect(warnings([['sodium phosphate dibasic', 10]])).toMatch(/"sodium phosphate dibasic" does not say which form is weighed: sodium phosphate dibasic anhydrous \(141\.9\d g\/mol\)/);
+    expect(warnings([['sodium phosphate dibasic', 10]])).toMatch(
+      /"sodium phosphate dibasic" does not say which form is weighed: sodium phosphate dibasic anhydrous \(141\.9\d g\/mol\)/,
+    );
     expect(warnings([['Na2HPO4·7H2O', 10]])).not.toMatch(/does not say which form/);
   });
 
   it('RECIPE carries the warning in its rows', () => {
     const rows = recipe('phosphate', 7.2, 50, 1000, '', undefined, [['form', 'sodium phosphate monobasic monohydrate + sodium phosphate dibasic']]);
-    expect(rows.filter((r) => r[0] === 'warning').map((r) => r[2]).join(' ')).toMatch(/"sodium phosphate dibasic" does not say which form is weighed/);
+    expect(
+      rows
+        .filter((r) => r[0] === 'warning')
+        .map((r) => r[2])
+        .join(' '),
+    ).toMatch(/"sodium phosphate dibasic" does not say which form is weighed/);
   });
 });

@@ -25,14 +25,71 @@ function fromAmounts(plan: RecipePlan, madeVolumeMl: number): Composition {
 }
 
 const RECIPES: [string, RecipeInput][] = [
-  ['cold-room HEPES saline, NaOH, adjusted at 22 °C', { buffer: 'HEPES', targetPh: 7.4, useTemperatureC: 4, benchTemperatureC: 22, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'NaCl', concentrationMm: 150 }] }],
+  [
+    'cold-room HEPES saline, NaOH, adjusted at 22 °C',
+    {
+      buffer: 'HEPES',
+      targetPh: 7.4,
+      useTemperatureC: 4,
+      benchTemperatureC: 22,
+      concentrationMm: 25,
+      volumeMl: 500,
+      form: 'HEPES free acid',
+      titrant: { form: 'NaOH', concentrationM: 1 },
+      salts: [{ form: 'NaCl', concentrationMm: 150 }],
+    },
+  ],
   ['gel tris with 6 M HCl at 25 °C', { buffer: 'tris', targetPh: 8.3, concentrationMm: 50, volumeMl: 1000, form: 'tris base', titrant: { form: 'HCl', concentrationM: 6 } }],
-  ['acetate from sodium acetate trihydrate with 1 M HCl, 90 % part volume', { buffer: 'acetate', targetPh: 4.8, concentrationMm: 100, volumeMl: 250, form: 'sodium acetate trihydrate', titrant: { form: 'HCl', concentrationM: 1 }, partVolumeFraction: 0.9 }],
-  ['MES with 5 M NaOH at 37 °C, 98 % pure', { buffer: 'MES', targetPh: 6.1, useTemperatureC: 37, benchTemperatureC: 20, concentrationMm: 20, volumeMl: 2000, form: 'MES free acid', titrant: { form: 'NaOH', concentrationM: 5 }, purityPercent: { 'MES free acid': 98 } }],
-  ['tris base titrated with glacial-acid dilution (weak titrant: 1 M acetic acid)', { buffer: 'tris', targetPh: 7.8, concentrationMm: 40, volumeMl: 500, form: 'tris base', titrant: { form: 'acetic acid', concentrationM: 1 } }],
-  ['phosphate two forms, monohydrate and heptahydrate', { buffer: 'phosphate', targetPh: 7.0, concentrationMm: 100, volumeMl: 1000, route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'Na2HPO4·7H2O' }],
-  ['tris two forms (base and hydrochloride), at 4 °C', { buffer: 'tris', targetPh: 7.5, useTemperatureC: 4, concentrationMm: 20, volumeMl: 500, route: 'two-forms', acidForm: 'tris HCl', baseForm: 'tris base' }],
-  ['HEPES with NaCl to an ideal osmolarity of 290 mOsm/L', { buffer: 'HEPES', targetPh: 7.2, concentrationMm: 10, volumeMl: 1000, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, saltTarget: { form: 'NaCl', idealOsmolarityMosm: 290 } }],
+  [
+    'acetate from sodium acetate trihydrate with 1 M HCl, 90 % part volume',
+    {
+      buffer: 'acetate',
+      targetPh: 4.8,
+      concentrationMm: 100,
+      volumeMl: 250,
+      form: 'sodium acetate trihydrate',
+      titrant: { form: 'HCl', concentrationM: 1 },
+      partVolumeFraction: 0.9,
+    },
+  ],
+  [
+    'MES with 5 M NaOH at 37 °C, 98 % pure',
+    {
+      buffer: 'MES',
+      targetPh: 6.1,
+      useTemperatureC: 37,
+      benchTemperatureC: 20,
+      concentrationMm: 20,
+      volumeMl: 2000,
+      form: 'MES free acid',
+      titrant: { form: 'NaOH', concentrationM: 5 },
+      purityPercent: { 'MES free acid': 98 },
+    },
+  ],
+  [
+    'tris base titrated with glacial-acid dilution (weak titrant: 1 M acetic acid)',
+    { buffer: 'tris', targetPh: 7.8, concentrationMm: 40, volumeMl: 500, form: 'tris base', titrant: { form: 'acetic acid', concentrationM: 1 } },
+  ],
+  [
+    'phosphate two forms, monohydrate and heptahydrate',
+    { buffer: 'phosphate', targetPh: 7.0, concentrationMm: 100, volumeMl: 1000, route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'Na2HPO4·7H2O' },
+  ],
+  [
+    'tris two forms (base and hydrochloride), at 4 °C',
+    { buffer: 'tris', targetPh: 7.5, useTemperatureC: 4, concentrationMm: 20, volumeMl: 500, route: 'two-forms', acidForm: 'tris HCl', baseForm: 'tris base' },
+  ],
+  [
+    'HEPES with NaCl to an ideal osmolarity of 290 mOsm/L',
+    {
+      buffer: 'HEPES',
+      targetPh: 7.2,
+      concentrationMm: 10,
+      volumeMl: 1000,
+      form: 'HEPES free acid',
+      titrant: { form: 'NaOH', concentrationM: 1 },
+      saltTarget: { form: 'NaCl', idealOsmolarityMosm: 290 },
+    },
+  ],
 ];
 
 describe('recipe planner: round trips (within 0.001 pH)', () => {
@@ -51,7 +108,16 @@ describe('recipe planner: round trips (within 0.001 pH)', () => {
   });
 
   it('stock route: the printed stock amounts, diluted by the fold, give the target; the stock meter reading solves back', () => {
-    const plan = planRecipe({ buffer: 'phosphate', targetPh: 7.4, concentrationMm: 50, volumeMl: 1000, route: 'stock', stock: { fold: 10, volumeMl: 500 }, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 5 } });
+    const plan = planRecipe({
+      buffer: 'phosphate',
+      targetPh: 7.4,
+      concentrationMm: 50,
+      volumeMl: 1000,
+      route: 'stock',
+      stock: { fold: 10, volumeMl: 500 },
+      form: 'NaH2PO4·H2O',
+      titrant: { form: 'NaOH', concentrationM: 5 },
+    });
     const stock = fromAmounts(plan, plan.stock!.stockVolumeMl);
     expect(Math.abs(solvePh(scaleComposition(stock, 0.1)) - 7.4)).toBeLessThan(ROUND_TRIP_PH);
     const atBench = { ...scaleComposition(stock, 1 / plan.meter.partVolumeFraction), temperatureC: plan.meter.benchTemperatureC };
@@ -61,7 +127,21 @@ describe('recipe planner: round trips (within 0.001 pH)', () => {
   });
 
   it('stock route with the default Pitzer model: a 10× saline phosphate stock is adjusted to a meter reading several tenths below the 1× target (common practice: 10× stocks read 0.2–0.6 lower)', () => {
-    const input: RecipeInput = { buffer: 'phosphate', targetPh: 7.4, concentrationMm: 11.8, volumeMl: 1000, route: 'stock', stock: { fold: 10, volumeMl: 500 }, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 5 }, salts: [{ form: 'NaCl', concentrationMm: 137 }, { form: 'KCl', concentrationMm: 2.7 }], partVolumeFraction: 1 };
+    const input: RecipeInput = {
+      buffer: 'phosphate',
+      targetPh: 7.4,
+      concentrationMm: 11.8,
+      volumeMl: 1000,
+      route: 'stock',
+      stock: { fold: 10, volumeMl: 500 },
+      form: 'NaH2PO4·H2O',
+      titrant: { form: 'NaOH', concentrationM: 5 },
+      salts: [
+        { form: 'NaCl', concentrationMm: 137 },
+        { form: 'KCl', concentrationMm: 2.7 },
+      ],
+      partVolumeFraction: 1,
+    };
     const stock = planRecipe(input);
     const shift = stock.meter.pH - 7.4;
     expect(shift).toBeLessThan(-0.2);
@@ -73,9 +153,22 @@ describe('recipe planner: round trips (within 0.001 pH)', () => {
   });
 
   it('stock route: a concentrated HEPES stock warns that HEPES has no Pitzer parameters, for the meter reading', () => {
-    const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 200, volumeMl: 1000, route: 'stock', stock: { fold: 10, volumeMl: 500 }, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 10 } });
-    expect(plan.warnings).toContainEqual(expect.objectContaining({ code: 'pitzerFallback', message: expect.stringMatching(/^Stock \(10×\) at the meter: Ions without published Pitzer parameters \(HEPES\)/) }));
-    expect(codes(planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 20, volumeMl: 1000, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } }).warnings)).not.toContain('pitzerFallback');
+    const plan = planRecipe({
+      buffer: 'HEPES',
+      targetPh: 7.4,
+      concentrationMm: 200,
+      volumeMl: 1000,
+      route: 'stock',
+      stock: { fold: 10, volumeMl: 500 },
+      form: 'HEPES free acid',
+      titrant: { form: 'NaOH', concentrationM: 10 },
+    });
+    expect(plan.warnings).toContainEqual(
+      expect.objectContaining({ code: 'pitzerFallback', message: expect.stringMatching(/^Stock \(10×\) at the meter: Ions without published Pitzer parameters \(HEPES\)/) }),
+    );
+    expect(
+      codes(planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 20, volumeMl: 1000, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 } }).warnings),
+    ).not.toContain('pitzerFallback');
   });
 
   it('salt target: the finished buffer has the asked ideal osmolarity within 0.01 mOsm/L', () => {
@@ -85,7 +178,15 @@ describe('recipe planner: round trips (within 0.001 pH)', () => {
   });
 
   it('salt target by osmolality: HEPES saline to 290 mOsm/kg on the osmometer, within 0.01 mOsm/kg, needing more NaCl than the same ideal osmolarity', () => {
-    const input = { buffer: 'HEPES', targetPh: 7.2, concentrationMm: 10, volumeMl: 1000, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, saltTarget: { form: 'NaCl', osmolalityMosmKg: 290 } };
+    const input = {
+      buffer: 'HEPES',
+      targetPh: 7.2,
+      concentrationMm: 10,
+      volumeMl: 1000,
+      form: 'HEPES free acid',
+      titrant: { form: 'NaOH', concentrationM: 1 },
+      saltTarget: { form: 'NaCl', osmolalityMosmKg: 290 },
+    };
     const plan = planRecipe(input);
     expect(Math.abs(plan.predictions.osmolalityMosmKg - 290)).toBeLessThan(0.01);
     const grams = (p: typeof plan) => p.components.find((c) => c.name === 'sodium chloride')!.grams!;
@@ -94,7 +195,15 @@ describe('recipe planner: round trips (within 0.001 pH)', () => {
   });
 
   it('salt target by ionic strength: 0.15 M reached within 1e-6 M', () => {
-    const plan = planRecipe({ buffer: 'MOPS', targetPh: 7.2, concentrationMm: 20, volumeMl: 1000, form: 'MOPS free acid', titrant: { form: 'KOH', concentrationM: 1 }, saltTarget: { form: 'KCl', ionicStrengthM: 0.15 } });
+    const plan = planRecipe({
+      buffer: 'MOPS',
+      targetPh: 7.2,
+      concentrationMm: 20,
+      volumeMl: 1000,
+      form: 'MOPS free acid',
+      titrant: { form: 'KOH', concentrationM: 1 },
+      saltTarget: { form: 'KCl', ionicStrengthM: 0.15 },
+    });
     expect(Math.abs(plan.predictions.ionicStrengthM - 0.15)).toBeLessThan(1e-6);
   });
 });
@@ -105,21 +214,42 @@ describe('recipe planner: routes agree', () => {
     const one = planRecipe({ ...common, form: 'tris base', titrant: { form: 'HCl', concentrationM: 1 } }).composition;
     const two = planRecipe({ ...common, route: 'two-forms', acidForm: 'tris HCl', baseForm: 'tris base' }).composition;
     const tris = (c: Composition) => c.systems.filter((s) => s.name === 'tris').reduce((a, s) => a + s.totalM, 0);
-    const chloride = (c: Composition) => Object.entries(c.strongIons ?? {}).filter(([k]) => k === 'Cl-').reduce((a, [, v]) => a + v, 0);
+    const chloride = (c: Composition) =>
+      Object.entries(c.strongIons ?? {})
+        .filter(([k]) => k === 'Cl-')
+        .reduce((a, [, v]) => a + v, 0);
     expect(Math.abs(tris(one) - tris(two))).toBeLessThan(1e-12);
     expect(Math.abs(chloride(one) - chloride(two)) / chloride(one)).toBeLessThan(1e-9);
   });
 
   it('ideal model, equal acid and base forms: the mole-ratio Henderson–Hasselbalch answer (pH = pKa gives a 1:1 split within 0.1 %)', () => {
     // At 100 mM and pH near 7, [H+] and [OH−] are ~1e-7 M: re-equilibration is negligible, as HH assumes.
-    const plan = planRecipe({ buffer: 'phosphate', targetPh: 7.198, concentrationMm: 100, volumeMl: 1000, route: 'two-forms', acidForm: 'NaH2PO4', baseForm: 'Na2HPO4', activityModel: 'ideal' });
+    const plan = planRecipe({
+      buffer: 'phosphate',
+      targetPh: 7.198,
+      concentrationMm: 100,
+      volumeMl: 1000,
+      route: 'two-forms',
+      acidForm: 'NaH2PO4',
+      baseForm: 'Na2HPO4',
+      activityModel: 'ideal',
+    });
     const acid = plan.components.find((c) => c.role === 'acid form')!.concentrationMm!;
     const base = plan.components.find((c) => c.role === 'base form')!.concentrationMm!;
     expect(Math.abs(base / acid - 1)).toBeLessThan(1e-3);
   });
 
   it('ideal model at pH = pKa + 0.5: base/acid = 10^0.5 within 0.1 % (Henderson–Hasselbalch)', () => {
-    const plan = planRecipe({ buffer: 'phosphate', targetPh: 7.698, concentrationMm: 100, volumeMl: 1000, route: 'two-forms', acidForm: 'NaH2PO4', baseForm: 'Na2HPO4', activityModel: 'ideal' });
+    const plan = planRecipe({
+      buffer: 'phosphate',
+      targetPh: 7.698,
+      concentrationMm: 100,
+      volumeMl: 1000,
+      route: 'two-forms',
+      acidForm: 'NaH2PO4',
+      baseForm: 'Na2HPO4',
+      activityModel: 'ideal',
+    });
     const acid = plan.components.find((c) => c.role === 'acid form')!.concentrationMm!;
     const base = plan.components.find((c) => c.role === 'base form')!.concentrationMm!;
     expect(Math.abs(base / acid / Math.pow(10, 0.5) - 1)).toBeLessThan(1e-3);
@@ -128,7 +258,16 @@ describe('recipe planner: routes agree', () => {
 
 describe('recipe planner: common practice', () => {
   it('a tris buffer adjusted warm reads higher when cold (adjusted at 25 °C for use at 4 °C: the bench reading is lower than the target)', () => {
-    const plan = planRecipe({ buffer: 'tris', targetPh: 8.0, useTemperatureC: 4, benchTemperatureC: 25, concentrationMm: 50, volumeMl: 1000, form: 'tris base', titrant: { form: 'HCl', concentrationM: 1 } });
+    const plan = planRecipe({
+      buffer: 'tris',
+      targetPh: 8.0,
+      useTemperatureC: 4,
+      benchTemperatureC: 25,
+      concentrationMm: 50,
+      volumeMl: 1000,
+      form: 'tris base',
+      titrant: { form: 'HCl', concentrationM: 1 },
+    });
     expect(plan.meter.pH).toBeLessThan(8.0 - 0.4);
     expect(plan.predictions.pHAtBench).toBeLessThan(plan.predictions.pHAtUse - 0.4);
     expect(plan.predictions.pHPerDegreeC).toBeLessThan(-0.02);
@@ -136,9 +275,25 @@ describe('recipe planner: common practice', () => {
 
   it('a tenfold phosphate stock made to the working pH lands above it after dilution', () => {
     // 200 mM stock for 20 mM working buffer: the stock's ionic strength (≈ 0.45 M) stays within Davies' range.
-    const stockAtWorkingPh = planRecipe({ buffer: 'phosphate', targetPh: 7.2, concentrationMm: 200, volumeMl: 1000, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 10 } });
+    const stockAtWorkingPh = planRecipe({
+      buffer: 'phosphate',
+      targetPh: 7.2,
+      concentrationMm: 200,
+      volumeMl: 1000,
+      form: 'NaH2PO4·H2O',
+      titrant: { form: 'NaOH', concentrationM: 10 },
+    });
     expect(solvePh(scaleComposition(stockAtWorkingPh.composition, 0.1))).toBeGreaterThan(7.2 + 0.05);
-    const viaStockRoute = planRecipe({ buffer: 'phosphate', targetPh: 7.2, concentrationMm: 20, volumeMl: 1000, route: 'stock', stock: { fold: 10 }, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 10 } });
+    const viaStockRoute = planRecipe({
+      buffer: 'phosphate',
+      targetPh: 7.2,
+      concentrationMm: 20,
+      volumeMl: 1000,
+      route: 'stock',
+      stock: { fold: 10 },
+      form: 'NaH2PO4·H2O',
+      titrant: { form: 'NaOH', concentrationM: 10 },
+    });
     expect(viaStockRoute.stock!.stockPhAtUse).toBeLessThan(7.2 - 0.05);
   });
 });
@@ -173,7 +328,14 @@ describe('recipe planner: bench numbers', () => {
   });
 
   it('cacodylate carries its arsenic caution', () => {
-    const caco = planRecipe({ buffer: 'cacodylate', targetPh: 6.5, concentrationMm: 100, volumeMl: 100, form: 'sodium cacodylate trihydrate', titrant: { form: 'HCl', concentrationM: 1 } });
+    const caco = planRecipe({
+      buffer: 'cacodylate',
+      targetPh: 6.5,
+      concentrationMm: 100,
+      volumeMl: 100,
+      form: 'sodium cacodylate trihydrate',
+      titrant: { form: 'HCl', concentrationM: 1 },
+    });
     expect(caco.cautions.join(' ')).toMatch(/arsenic/);
   });
 
@@ -184,8 +346,13 @@ describe('recipe planner: bench numbers', () => {
   });
 
   it('user substances work like library ones', () => {
-    const library = createLibrary([{ name: 'lab amine X', chargeOfMostProtonated: 1, pKa: [8.4], deltaHkJ: [45], forms: [{ name: 'lab amine X base', molarMass: 150.2, protonsLost: 1 }] }]);
-    const p = planRecipe({ buffer: 'lab amine X', targetPh: 8.2, concentrationMm: 20, volumeMl: 100, form: 'lab amine X base', titrant: { form: 'HCl', concentrationM: 1 } }, library);
+    const library = createLibrary([
+      { name: 'lab amine X', chargeOfMostProtonated: 1, pKa: [8.4], deltaHkJ: [45], forms: [{ name: 'lab amine X base', molarMass: 150.2, protonsLost: 1 }] },
+    ]);
+    const p = planRecipe(
+      { buffer: 'lab amine X', targetPh: 8.2, concentrationMm: 20, volumeMl: 100, form: 'lab amine X base', titrant: { form: 'HCl', concentrationM: 1 } },
+      library,
+    );
     expect(Math.abs(solvePh(p.composition) - 8.2)).toBeLessThan(ROUND_TRIP_PH);
   });
 });
@@ -197,7 +364,15 @@ describe('recipe planner: warnings', () => {
   });
 
   it('warns when the ionic strength is beyond the activity model (Davies past 0.5 M; Pitzer holds there)', () => {
-    const input = { buffer: 'HEPES', targetPh: 7.4, concentrationMm: 20, volumeMl: 100, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'NaCl', concentrationMm: 1000 }] };
+    const input = {
+      buffer: 'HEPES',
+      targetPh: 7.4,
+      concentrationMm: 20,
+      volumeMl: 100,
+      form: 'HEPES free acid',
+      titrant: { form: 'NaOH', concentrationM: 1 },
+      salts: [{ form: 'NaCl', concentrationMm: 1000 }],
+    };
     expect(codes(planRecipe({ ...input, activityModel: 'davies' }).warnings)).toContain('beyondActivityModel');
     expect(codes(planRecipe(input).warnings)).not.toContain('beyondActivityModel');
     expect(codes(planRecipe(input).warnings)).not.toContain('beyondPitzerRange');
@@ -258,14 +433,50 @@ describe('recipe planner: warnings', () => {
     expect(codes(usual.warnings)).not.toContain('smallWeighing');
   });
 
-  it('warns for the temperature of use and the bench temperature against the constants\' data: malate (no ΔH°) used at 4 °C and adjusted at 20 °C; histidine at pH 6 not (only its far carboxyl step lacks ΔH°)', () => {
-    const p = planRecipe({ buffer: 'malate', targetPh: 4.5, concentrationMm: 20, volumeMl: 500, form: 'DL-malic acid', titrant: { form: 'NaOH', concentrationM: 1 }, useTemperatureC: 4, benchTemperatureC: 20 });
-    expect(p.warnings).toContainEqual(expect.objectContaining({ code: 'noEnthalpy', message: expect.stringMatching(/^malate has no ΔH° for steps 1, 2: .* at the temperature of use 4 °C/) }));
-    expect(p.warnings).toContainEqual(expect.objectContaining({ code: 'noEnthalpy', message: expect.stringMatching(/^malate has no ΔH° for steps 1, 2: .* at the bench temperature 20 °C/) }));
-    const histidine = planRecipe({ buffer: 'histidine', targetPh: 6.0, concentrationMm: 20, volumeMl: 500, form: 'L-histidine', titrant: { form: 'HCl', concentrationM: 1 }, useTemperatureC: 4, benchTemperatureC: 20 });
+  it("warns for the temperature of use and the bench temperature against the constants' data: malate (no ΔH°) used at 4 °C and adjusted at 20 °C; histidine at pH 6 not (only its far carboxyl step lacks ΔH°)", () => {
+    const p = planRecipe({
+      buffer: 'malate',
+      targetPh: 4.5,
+      concentrationMm: 20,
+      volumeMl: 500,
+      form: 'DL-malic acid',
+      titrant: { form: 'NaOH', concentrationM: 1 },
+      useTemperatureC: 4,
+      benchTemperatureC: 20,
+    });
+    expect(p.warnings).toContainEqual(
+      expect.objectContaining({ code: 'noEnthalpy', message: expect.stringMatching(/^malate has no ΔH° for steps 1, 2: .* at the temperature of use 4 °C/) }),
+    );
+    expect(p.warnings).toContainEqual(
+      expect.objectContaining({ code: 'noEnthalpy', message: expect.stringMatching(/^malate has no ΔH° for steps 1, 2: .* at the bench temperature 20 °C/) }),
+    );
+    const histidine = planRecipe({
+      buffer: 'histidine',
+      targetPh: 6.0,
+      concentrationMm: 20,
+      volumeMl: 500,
+      form: 'L-histidine',
+      titrant: { form: 'HCl', concentrationM: 1 },
+      useTemperatureC: 4,
+      benchTemperatureC: 20,
+    });
     expect(codes(histidine.warnings)).not.toContain('noEnthalpy');
-    const tris = planRecipe({ buffer: 'tris', targetPh: 7.5, concentrationMm: 50, volumeMl: 500, form: 'tris base', titrant: { form: 'HCl', concentrationM: 1 }, useTemperatureC: 55, benchTemperatureC: 22 });
-    expect(tris.warnings).toContainEqual(expect.objectContaining({ code: 'outsideDataRange', message: expect.stringMatching(/^The temperature of use 55 °C lies outside 0–50 °C, the temperatures the data for tris/) }));
+    const tris = planRecipe({
+      buffer: 'tris',
+      targetPh: 7.5,
+      concentrationMm: 50,
+      volumeMl: 500,
+      form: 'tris base',
+      titrant: { form: 'HCl', concentrationM: 1 },
+      useTemperatureC: 55,
+      benchTemperatureC: 22,
+    });
+    expect(tris.warnings).toContainEqual(
+      expect.objectContaining({
+        code: 'outsideDataRange',
+        message: expect.stringMatching(/^The temperature of use 55 °C lies outside 0–50 °C, the temperatures the data for tris/),
+      }),
+    );
     expect(texts(tris.warnings).some((w) => w.includes('bench temperature'))).toBe(false);
   });
 
@@ -276,14 +487,40 @@ describe('recipe planner: warnings', () => {
   });
 
   it('warns when a solid is above its solubility in the part volume', () => {
-    const p = planRecipe({ buffer: 'tris', targetPh: 8.0, concentrationMm: 50, volumeMl: 1000, route: 'stock', stock: { fold: 100 }, form: 'tris base', titrant: { form: 'HCl', concentrationM: 12 } });
+    const p = planRecipe({
+      buffer: 'tris',
+      targetPh: 8.0,
+      concentrationMm: 50,
+      volumeMl: 1000,
+      route: 'stock',
+      stock: { fold: 100 },
+      form: 'tris base',
+      titrant: { form: 'HCl', concentrationM: 12 },
+    });
     expect(codes(p.warnings)).toContain('aboveSolubility');
   });
 
   it('warns that metal–buffer complexes are not modelled when MgCl2 joins a phosphate recipe, not a HEPES one', () => {
-    const phosphate = planRecipe({ buffer: 'phosphate', targetPh: 7.2, concentrationMm: 50, volumeMl: 500, route: 'two-forms', acidForm: 'NaH2PO4·H2O', baseForm: 'Na2HPO4·7H2O', salts: [{ form: 'MgCl2·6H2O', concentrationMm: 2 }] });
+    const phosphate = planRecipe({
+      buffer: 'phosphate',
+      targetPh: 7.2,
+      concentrationMm: 50,
+      volumeMl: 500,
+      route: 'two-forms',
+      acidForm: 'NaH2PO4·H2O',
+      baseForm: 'Na2HPO4·7H2O',
+      salts: [{ form: 'MgCl2·6H2O', concentrationMm: 2 }],
+    });
     expect(phosphate.warnings).toContainEqual(expect.objectContaining({ code: 'metalComplexes', message: expect.stringMatching(/^Mg2\+ with phosphate/) }));
-    const hepes = planRecipe({ buffer: 'HEPES', targetPh: 7.4, concentrationMm: 20, volumeMl: 100, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'MgCl2·6H2O', concentrationMm: 2 }] });
+    const hepes = planRecipe({
+      buffer: 'HEPES',
+      targetPh: 7.4,
+      concentrationMm: 20,
+      volumeMl: 100,
+      form: 'HEPES free acid',
+      titrant: { form: 'NaOH', concentrationM: 1 },
+      salts: [{ form: 'MgCl2·6H2O', concentrationMm: 2 }],
+    });
     expect(codes(hepes.warnings)).not.toContain('metalComplexes');
   });
 
@@ -320,13 +557,37 @@ describe('recipe planner: bad input names the field and what is allowed', () => 
     ['a salt target already passed', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 10 } }, 'infeasible-target', 'saltTargetUnreachable', 'saltTarget'],
     ['a salt target with both goals', { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 300, ionicStrengthM: 0.1 } }, 'invalid-input', 'missingValue', 'saltTarget'],
     ['an osmolality target already passed', { saltTarget: { form: 'NaCl', osmolalityMosmKg: 10 } }, 'infeasible-target', 'saltTargetUnreachable', 'saltTarget'],
-    ['an osmolality target in a unit of another kind', { saltTarget: { form: 'NaCl', osmolalityMosmKg: '290 mOsm/L' } }, 'invalid-input', 'wrongUnit', 'saltTarget.osmolalityMosmKg'],
+    [
+      'an osmolality target in a unit of another kind',
+      { saltTarget: { form: 'NaCl', osmolalityMosmKg: '290 mOsm/L' } },
+      'invalid-input',
+      'wrongUnit',
+      'saltTarget.osmolalityMosmKg',
+    ],
     ['a conductivity target already passed', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 0.1 } }, 'infeasible-target', 'saltTargetUnreachable', 'saltTarget'],
     ['a conductivity target beyond the most salt tried', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 900 } }, 'infeasible-target', 'saltTargetBeyondSalt', 'saltTarget'],
-    ['an ionic-strength target a zwitterion cannot reach', { targetPh: 6.0, saltTarget: { form: 'glycine', ionicStrengthM: 0.15 } }, 'infeasible-target', 'saltTargetBeyondSalt', 'saltTarget'],
+    [
+      'an ionic-strength target a zwitterion cannot reach',
+      { targetPh: 6.0, saltTarget: { form: 'glycine', ionicStrengthM: 0.15 } },
+      'infeasible-target',
+      'saltTargetBeyondSalt',
+      'saltTarget',
+    ],
     ['a conductivity target beside another goal', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, ionicStrengthM: 0.1 } }, 'invalid-input', 'missingValue', 'saltTarget'],
-    ['a conductivity target read at 80 °C', { saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, conductivityTemperatureC: 80 } }, 'invalid-input', 'outOfRange', 'saltTarget.conductivityTemperatureC'],
-    ['a conductivity target in µS/cm beyond the most salt tried', { saltTarget: { form: 'NaCl', conductivityMsPerCm: '900000 µS/cm' } }, 'infeasible-target', 'saltTargetBeyondSalt', 'saltTarget'],
+    [
+      'a conductivity target read at 80 °C',
+      { saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, conductivityTemperatureC: 80 } },
+      'invalid-input',
+      'outOfRange',
+      'saltTarget.conductivityTemperatureC',
+    ],
+    [
+      'a conductivity target in µS/cm beyond the most salt tried',
+      { saltTarget: { form: 'NaCl', conductivityMsPerCm: '900000 µS/cm' } },
+      'infeasible-target',
+      'saltTargetBeyondSalt',
+      'saltTarget',
+    ],
   ];
   it.each(cases)('given %s', (_label, change, kind, code, field) => {
     let caught: unknown;
@@ -340,14 +601,30 @@ describe('recipe planner: bad input names the field and what is allowed', () => 
   });
 
   it('given numbers as text with units, plans exactly as with plain numbers (one input reader)', () => {
-    const typed = planRecipe({ ...good, concentrationMm: '0,025 M', volumeMl: '0.5 L', targetPh: 'pH 7,4', useTemperatureC: '25 °C', titrant: { form: 'NaOH', concentrationM: '1000 mM' }, salts: 'NaCl 150 mM; KCl 2,7 mM' });
-    const plain = planRecipe({ ...good, salts: [{ form: 'NaCl', concentrationMm: 150 }, { form: 'KCl', concentrationMm: 2.7 }] });
+    const typed = planRecipe({
+      ...good,
+      concentrationMm: '0,025 M',
+      volumeMl: '0.5 L',
+      targetPh: 'pH 7,4',
+      useTemperatureC: '25 °C',
+      titrant: { form: 'NaOH', concentrationM: '1000 mM' },
+      salts: 'NaCl 150 mM; KCl 2,7 mM',
+    });
+    const plain = planRecipe({
+      ...good,
+      salts: [
+        { form: 'NaCl', concentrationMm: 150 },
+        { form: 'KCl', concentrationMm: 2.7 },
+      ],
+    });
     expect(typed.titration?.volumeMl).toBeCloseTo(plain.titration!.volumeMl, 12);
     expect(typed.components.map((c) => c.grams)).toEqual(plain.components.map((c) => c.grams));
   });
 
   it('given two forms that cannot reach the target, says the pH span they cover', () => {
-    expect(() => planRecipe({ buffer: 'phosphate', targetPh: 9.5, concentrationMm: 50, volumeMl: 100, route: 'two-forms', acidForm: 'NaH2PO4', baseForm: 'Na2HPO4' })).toThrow(/mixing these two forms: they span pH/);
+    expect(() => planRecipe({ buffer: 'phosphate', targetPh: 9.5, concentrationMm: 50, volumeMl: 100, route: 'two-forms', acidForm: 'NaH2PO4', baseForm: 'Na2HPO4' })).toThrow(
+      /mixing these two forms: they span pH/,
+    );
   });
 
   it('the speciation of a plan is consistent with speciate()', () => {
@@ -357,7 +634,14 @@ describe('recipe planner: bad input names the field and what is allowed', () => 
 });
 
 describe('purity of the form weighed', () => {
-  const base: RecipeInput = { buffer: 'HEPES', targetPh: 7.4, concentrationMm: 25, volumeMl: 1000, titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'NaCl', concentrationMm: 150 }] };
+  const base: RecipeInput = {
+    buffer: 'HEPES',
+    targetPh: 7.4,
+    concentrationMm: 25,
+    volumeMl: 1000,
+    titrant: { form: 'NaOH', concentrationM: 1 },
+    salts: [{ form: 'NaCl', concentrationMm: 150 }],
+  };
   const grams = (p: RecipePlan, role: string) => p.components.find((c) => c.role === role)!.grams!;
 
   it('scales the buffer form the route picks, not the salt, and leaves the chemistry alone', () => {
@@ -392,7 +676,16 @@ describe('volumes as a pipette or cylinder is read', () => {
 
 describe('conductivity predictions', () => {
   it('gives κ of the finished buffer at the temperature of use and at 25 °C, the same as the core for the same composition', () => {
-    const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, useTemperatureC: 4, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, salts: [{ form: 'NaCl', concentrationMm: 150 }] });
+    const plan = planRecipe({
+      buffer: 'HEPES',
+      targetPh: 7.4,
+      useTemperatureC: 4,
+      concentrationMm: 25,
+      volumeMl: 500,
+      form: 'HEPES free acid',
+      titrant: { form: 'NaOH', concentrationM: 1 },
+      salts: [{ form: 'NaCl', concentrationMm: 150 }],
+    });
     expect(plan.predictions.conductivityMsPerCm).toBeCloseTo(conductivityAt(plan.composition).conductivityMsPerCm, 12);
     expect(plan.predictions.conductivity25MsPerCm).toBeCloseTo(conductivityAt(plan.composition, 25).conductivityMsPerCm, 12);
     // A cold buffer reads lower than at 25 °C: ions move about 2 % per °C slower.
@@ -401,7 +694,16 @@ describe('conductivity predictions', () => {
   });
 
   it('gives the stock its own κ: above the working dilution, below fold × it (ions slow down as the stock crowds them)', () => {
-    const plan = planRecipe({ buffer: 'phosphate', targetPh: 7.4, concentrationMm: 50, volumeMl: 1000, route: 'stock', stock: { fold: 10 }, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 5 } });
+    const plan = planRecipe({
+      buffer: 'phosphate',
+      targetPh: 7.4,
+      concentrationMm: 50,
+      volumeMl: 1000,
+      route: 'stock',
+      stock: { fold: 10 },
+      form: 'NaH2PO4·H2O',
+      titrant: { form: 'NaOH', concentrationM: 5 },
+    });
     const working = plan.predictions.conductivityMsPerCm;
     expect(plan.stock!.stockConductivityMsPerCm).toBeGreaterThan(working);
     expect(plan.stock!.stockConductivityMsPerCm).toBeLessThan(10 * working);
@@ -410,8 +712,16 @@ describe('conductivity predictions', () => {
 });
 
 describe('salt target by conductivity', () => {
-  it('adds NaCl until the finished buffer reads 15.0 mS/cm at 20 °C (used at 25 °C), and the plan\'s own composition reads it back', () => {
-    const plan = planRecipe({ buffer: 'tris', targetPh: 7.5, concentrationMm: 20, volumeMl: 1000, form: 'tris base', titrant: { form: 'HCl', concentrationM: 1 }, saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, conductivityTemperatureC: 20 } });
+  it("adds NaCl until the finished buffer reads 15.0 mS/cm at 20 °C (used at 25 °C), and the plan's own composition reads it back", () => {
+    const plan = planRecipe({
+      buffer: 'tris',
+      targetPh: 7.5,
+      concentrationMm: 20,
+      volumeMl: 1000,
+      form: 'tris base',
+      titrant: { form: 'HCl', concentrationM: 1 },
+      saltTarget: { form: 'NaCl', conductivityMsPerCm: 15, conductivityTemperatureC: 20 },
+    });
     expect(conductivityAt(plan.composition, 20).conductivityMsPerCm).toBeCloseTo(15, 6);
     const salt = plan.components.find((c) => c.role === 'salt');
     // About 150 mM NaCl makes 15 mS/cm at 20 °C (κ ≈ 16 mS/cm for 1 % NaCl, CRC Handbook): the amount is of that order.
@@ -421,14 +731,33 @@ describe('salt target by conductivity', () => {
   });
 
   it('reads the target at the temperature of use when no temperature is given', () => {
-    const plan = planRecipe({ buffer: 'HEPES', targetPh: 7.4, useTemperatureC: 4, concentrationMm: 25, volumeMl: 500, form: 'HEPES free acid', titrant: { form: 'NaOH', concentrationM: 1 }, saltTarget: { form: 'KCl', conductivityMsPerCm: 10 } });
+    const plan = planRecipe({
+      buffer: 'HEPES',
+      targetPh: 7.4,
+      useTemperatureC: 4,
+      concentrationMm: 25,
+      volumeMl: 500,
+      form: 'HEPES free acid',
+      titrant: { form: 'NaOH', concentrationM: 1 },
+      saltTarget: { form: 'KCl', conductivityMsPerCm: 10 },
+    });
     expect(plan.predictions.conductivityMsPerCm).toBeCloseTo(10, 6);
   });
 });
 
 describe('conductivity of a concentrated stock', () => {
   it('warns that a stock beyond 1 M ionic strength is an extrapolation of the conductivity model', () => {
-    const plan = planRecipe({ buffer: 'phosphate', targetPh: 7.4, concentrationMm: 50, volumeMl: 1000, route: 'stock', stock: { fold: 10 }, form: 'NaH2PO4·H2O', titrant: { form: 'NaOH', concentrationM: 5 }, salts: [{ form: 'NaCl', concentrationMm: 150 }] });
+    const plan = planRecipe({
+      buffer: 'phosphate',
+      targetPh: 7.4,
+      concentrationMm: 50,
+      volumeMl: 1000,
+      route: 'stock',
+      stock: { fold: 10 },
+      form: 'NaH2PO4·H2O',
+      titrant: { form: 'NaOH', concentrationM: 5 },
+      salts: [{ form: 'NaCl', concentrationMm: 150 }],
+    });
     expect(plan.warnings).toContainEqual(expect.objectContaining({ code: 'conductivityIonicStrength', message: expect.stringMatching(/^The stock: Ionic strength/) }));
   });
 });

@@ -8,13 +8,23 @@ import { planRecipe } from '../../../src/chem/planner';
 import type { RecipeInput } from '../../../src/chem/planner';
 
 /** Our own scenario: 100 mM acetate, pH 4.6 at 25 °C, 500 mL, sodium acetate trihydrate brought down with glacial acetic acid diluted to 1 M. */
-const INPUT: RecipeInput = { buffer: 'acetate', targetPh: 4.6, concentrationMm: 100, volumeMl: 500, form: 'sodium acetate trihydrate', titrant: { form: 'acetic acid', concentrationM: 1 } };
+const INPUT: RecipeInput = {
+  buffer: 'acetate',
+  targetPh: 4.6,
+  concentrationMm: 100,
+  volumeMl: 500,
+  form: 'sodium acetate trihydrate',
+  titrant: { form: 'acetic acid', concentrationM: 1 },
+};
 /** The held total matches the stated one to the secant's own tolerance (1e-9 relative), well inside this. */
 const HELD = 1e-6;
 /** The target is met by construction: the solver's pH tolerance. */
 const PH_TOLERANCE = 1e-6;
 
-const acetateMm = (input: RecipeInput) => planRecipe(input).composition.systems.filter((x) => /acet/i.test(x.name)).reduce((sum, x) => sum + x.totalM * 1000, 0);
+const acetateMm = (input: RecipeInput) =>
+  planRecipe(input)
+    .composition.systems.filter((x) => /acet/i.test(x.name))
+    .reduce((sum, x) => sum + x.totalM * 1000, 0);
 
 describe('titrant of the buffer system itself', () => {
   it('"state" (default): weighs the stated amount and warns with the total the titrant makes', () => {
