@@ -13,6 +13,9 @@
  */
 import { inflateRawSync } from 'zlib';
 import { CALC_MESSAGES } from './calcMessages';
+import { MAX_FORMULA_CHARS, MAX_FORMULA_DEPTH, MAX_FORMULA_OPERATORS, formulaShape } from '../workbook/formulaLimits';
+// One set of formula limits for every host that reads files (calc and the preview's Open).
+export { MAX_FORMULA_CHARS, MAX_FORMULA_DEPTH, MAX_FORMULA_OPERATORS };
 
 /** Largest input file, bytes. Excel sets none (memory bounds it); a prep workbook is well under 1 MB. */
 export const MAX_FILE_BYTES = 20 * 1024 * 1024;
@@ -34,16 +37,6 @@ export const MAX_RANGE_CELLS = 1_048_576;
 export const MAX_MERGED_CELLS = 50_000;
 /** Characters in one cell: Excel's limit. */
 export const MAX_CELL_CHARS = 32_767;
-/** Characters in one formula: Excel's limit. */
-export const MAX_FORMULA_CHARS = 8_192;
-/** Nesting of brackets in one formula: Excel's 64 levels of nested functions (the engine's parser recurses per level). */
-export const MAX_FORMULA_DEPTH = 64;
-/**
- * Operators (+ - * / ^ & = < >) in one formula. Excel has no such limit, but the formula
- * engine evaluates a chain of operators by recursion and ran out of stack between 1,000 and
- * 1,500 (a formula "1+1+…+1" of 8,192 characters has 4,096); 500 leaves room for nesting.
- */
-export const MAX_FORMULA_OPERATORS = 500;
 /**
  * Cells read through cell and row ranges in formulas (A1:B100, 3:7), each distinct range
  * counted once, a shared formula's range once per cell that shares it. The formula engine
@@ -187,24 +180,6 @@ function decodeXml(text: string): string {
   return text.replace(/&(?:#(x?)([0-9A-Fa-f]+)|(amp|lt|gt|quot|apos));/g, (_m, hex: string, code: string, named: string) =>
     named ? ({ amp: '&', lt: '<', gt: '>', quot: '"', apos: "'" } as Record<string, string>)[named] : String.fromCodePoint(Math.min(0x10ffff, parseInt(code, hex ? 16 : 10))),
   );
-}
-
-/** Deepest bracket nesting of a formula and its count of operators, outside its quoted texts and sheet names; one pass. */
-export function formulaShape(formula: string): { depth: number; operators: number } {
-  let depth = 0;
-  let deepest = 0;
-  let operators = 0;
-  let quote = '';
-  for (let i = 0; i < formula.length; i++) {
-    const c = formula[i];
-    if (quote) {
-      if (c === quote) quote = '';
-    } else if (c === '"' || c === "'") quote = c;
-    else if (c === '(' || c === '{') deepest = Math.max(deepest, ++depth);
-    else if (c === ')' || c === '}') depth = Math.max(0, depth - 1);
-    else if ('+-*/^&=<>'.includes(c)) operators++;
-  }
-  return { depth: deepest, operators };
 }
 
 /** Refuses a formula too deep or with too many operators for the engine (its length is checked before it is read). */
