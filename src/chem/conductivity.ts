@@ -29,12 +29,12 @@
  * References:
  * - P. Vanýsek, "Ionic conductivity and diffusion at infinite dilution", CRC Handbook of
  *   Chemistry and Physics (cations read in a copy of the 87th ed. table; anions from memory).
- * - Lange's Handbook of Chemistry, 15th ed., Table 8.32 (read in a public transcription):
+ * - Lange's Handbook of Chemistry, 15th ed., Table 8.32 (read in a public copy):
  *   the anions, and a second copy of most cations.
  * - P. H. Barry, J. Neurosci. Methods 51 (1994) 107, ion mobility table relative to K⁺ (read
- *   in a public transcription): buffer ions.
+ *   in a public copy): buffer ions.
  * - R. B. McCleskey, D. K. Nordstrom, J. N. Ryan, J. W. Ball, Geochim. Cosmochim. Acta 77
- *   (2012) 369, Table 1 (read in two public transcriptions that agree for every ion used
+ *   (2012) 369, Table 1 (read in two public copies that agree for every ion used
  *   here, except where an entry says one copy).
  * - R. A. Robinson, R. H. Stokes, Electrolyte Solutions, 2nd ed. (1959), eq. 7.36 for B1, B2.
  * - J. Kestin, M. Sokolov, W. A. Wakeham, J. Phys. Chem. Ref. Data 7 (1978) 941 (water viscosity).

@@ -72,7 +72,7 @@ export const CITRATE: AcidBaseChemistry = {
 /**
  * pK of tris-H⁺ from 0 to 50 °C as Bates & Hetzer fitted their emf measurements:
  * pK = 2981.4/T − 3.5888 + 0.005571·T (T in K). R. G. Bates, H. B. Hetzer, J. Phys. Chem.
- * 65 (1961) 667, eq. 3, as transcribed in pytzer (github.com/mvdh7/pytzer,
+ * 65 (1961) 667, eq. 3, as copied in pytzer (github.com/mvdh7/pytzer,
  * pytzer/dissociation.py, trisH_BH61); the fit reproduces their measured values to about
  * 0.001. It gives 8.848 at 0 °C against the 8.850 quoted from their table in Goldberg et
  * al. 2002 (tris literature table), a second copy at that point.

@@ -30,19 +30,19 @@ export type SourceId = keyof typeof SOURCES;
 
 /**
  * The copies library values were checked against. A copy is a place a reader can open
- * (a journal table, a primary paper, or a public transcription of one), named so that a
+ * (a journal table, a primary paper, or a public copy of one), named so that a
  * step's `checkedAgainst` list can say which copy, where in it, and what it gives. One
- * transcription is not the journal: a value checked only against a transcription says so.
+ * copy is not the journal: a value checked only against a copy says so.
  */
 export const COPIES = {
-  goldbergTranscriptionTs:
-    'A public TypeScript buffer module (a buffer calculator\'s test table headed "Goldberg, Kishore & Lennen 2002, Section 8"), found by code search, that transcribes pK, ΔH° and ΔCp° for about 30 steps. It disagrees with other copies on the ΔCp° of bis-tris, MOPS and PIPES, so it counts as one transcription, not as the journal; no value was newly taken from it in the constants audit',
+  goldbergEarlierCopyTs:
+    'A public TypeScript buffer module (a buffer calculator\'s test table headed "Goldberg, Kishore & Lennen 2002, Section 8"), found by code search, that copies pK, ΔH° and ΔCp° for about 30 steps. It disagrees with other copies on the ΔCp° of bis-tris, MOPS and PIPES, so it counts as one copy, not as the journal; no value was newly taken from it in the constants audit',
   goldbergReviewNote: 'A public source-review note quoting the TAPSO and imidazole lines of the Goldberg et al. 2002 tables (Tables 7.62 and 7.41)',
   goldbergScanAda: 'A scanned page of the Goldberg et al. 2002 review (p. 242, the ADA literature table)',
   goldbergItcTable:
     'The buffer table (enum Buffer) of a public C# isothermal-titration-calorimetry analysis program (namespace AnalysisITC), found by code search: ionization ΔH° (J/mol) and ΔCp° for about 25 buffers, matching the Goldberg et al. 2002 selected values for most; its pKa column holds rounded working values, not the thermodynamic pK',
   pytzerDissociation:
-    'The fitted equations transcribed in pytzer (github.com/mvdh7/pytzer, pytzer/dissociation.py): Bates & Hetzer 1961 eq. 3 (tris), Clegg, Rard & Pitzer 1994 eq. 21 (HSO4−), Millero 1979 (boric and carbonic acid), Plummer & Busenberg 1982 (carbonic acid), Bates & Pinching 1949 (ammonium), and the phosphoric-acid fits of Bates 1951, Bates & Acree 1943 and Schwarzenbach & Meier 1964 as given by Millero & Pierrot 1998. pK, ΔH° and ΔCp° at 298.15 K are read off each equation by differentiation (ΔH° = RT² d lnK/dT, ΔCp° = dΔH°/dT)',
+    'The fitted equations copied in pytzer (github.com/mvdh7/pytzer, pytzer/dissociation.py): Bates & Hetzer 1961 eq. 3 (tris), Clegg, Rard & Pitzer 1994 eq. 21 (HSO4−), Millero 1979 (boric and carbonic acid), Plummer & Busenberg 1982 (carbonic acid), Bates & Pinching 1949 (ammonium), and the phosphoric-acid fits of Bates 1951, Bates & Acree 1943 and Schwarzenbach & Meier 1964 as given by Millero & Pierrot 1998. pK, ΔH° and ΔCp° at 298.15 K are read off each equation by differentiation (ΔH° = RT² d lnK/dT, ΔCp° = dΔH°/dT)',
   minteqV4:
     'minteq.v4.dat, the MINTEQA2 v4 thermodynamic database distributed with PHREEQC (github.com/usgs-coupled/phreeqc3, database/minteq.v4.dat): log K and ΔH of each protonation reaction at 25 °C and I = 0, with NIST Critical Stability Constants (NIST46) named as source. Read as pKa = log K of one protonation (cumulative constants differenced) and ΔH° of ionization = −ΔH of protonation',
   hummel2005ThermoChimie:

@@ -24,8 +24,8 @@ const CRP94_RANGE_C: readonly [number, number] = [0, 55];
 /** No ΔH° known: the pKa is held at its 25 °C value, fit for 25 ± 2 °C only. */
 const NO_ENTHALPY_RANGE_C: readonly [number, number] = [23, 27];
 
-/** The Goldberg et al. 2002 selected value as the public TypeScript transcription gives it. */
-const TRANSCRIPTION: ValueCheck = { copy: 'goldbergTranscriptionTs', where: 'the entry of the same name', reads: 'pK, ΔH°, ΔCp° read line by line; same numbers as stored' };
+/** The Goldberg et al. 2002 selected value as the public TypeScript copy gives it. */
+const EARLIER_COPY: ValueCheck = { copy: 'goldbergEarlierCopyTs', where: 'the entry of the same name', reads: 'pK, ΔH°, ΔCp° read line by line; same numbers as stored' };
 
 /** A step's constants and where they come from, by name (so that ΔH° and ΔCp° cannot be swapped unnoticed). */
 interface StepData {
@@ -59,10 +59,10 @@ function step(d: StepData): SourcedStep {
 
 type GoldbergData = Omit<StepData, 'source' | 'checkedAgainst' | 'temperatureRangeC'> & { readonly temperatureRangeC?: readonly [number, number] };
 
-/** Goldberg et al. 2002, checked against the public transcription and any further copies named in `also`. */
+/** Goldberg et al. 2002, checked against the public copy and any further copies named in `also`. */
 const gv = (d: GoldbergData & { deltaHkJ: number; deltaCpJ: number; also?: readonly ValueCheck[] }) => {
   const { also, ...rest } = d;
-  return step({ ...rest, source: 'goldberg2002', checkedAgainst: [TRANSCRIPTION, ...(also ?? [])], temperatureRangeC: d.temperatureRangeC ?? GOLDBERG_RANGE_C });
+  return step({ ...rest, source: 'goldberg2002', checkedAgainst: [EARLIER_COPY, ...(also ?? [])], temperatureRangeC: d.temperatureRangeC ?? GOLDBERG_RANGE_C });
 };
 /** Goldberg et al. 2002, written from memory (no copy found). */
 const gm = (d: GoldbergData) =>
@@ -217,12 +217,12 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
         deltaHkJ: 28.4,
         deltaCpJ: 27,
         checkedAgainst: [
-          { ...TRANSCRIPTION, reads: 'pK 6.484 and ΔH° 28.4 as stored; gives ΔCp° −7' },
+          { ...EARLIER_COPY, reads: 'pK 6.484 and ΔH° 28.4 as stored; gives ΔCp° −7' },
           { copy: 'goldbergItcTable', where: 'Buffer table, Bis-Tris', reads: 'ΔH° 28400 J/mol, ΔCp° +27: same as stored' },
           { copy: 'royAbstracts', where: 'J. Biophys. Chem. 5 (2014) 118, pKa = 921.66/T + 14.0007 − 1.86197 ln T', reads: 'pKa 6.4828, ΔH° 28.273 kJ/mol, ΔCp° +36 at 298.15 K' },
         ],
         temperatureRangeC: ROY_RANGE_C,
-        note: "Copies disagree on ΔCp°: +27 (the ITC table, and the review as remembered) and +36 (Roy et al. 2014, measured after the review) against −7 (the transcription). +27, the review's selected value, kept; the sign of −7 is contradicted by every other copy.",
+        note: "Copies disagree on ΔCp°: +27 (the ITC table, and the review as remembered) and +36 (Roy et al. 2014, measured after the review) against −7 (the copy). +27, the review's selected value, kept; the sign of −7 is contradicted by every other copy.",
       }),
     ],
     forms: [
@@ -297,11 +297,11 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
         deltaHkJ: 11.2,
         deltaCpJ: 22,
         checkedAgainst: [
-          { ...TRANSCRIPTION, reads: 'pK 7.141 and ΔH° 11.2 as stored; gives ΔCp° −2' },
+          { ...EARLIER_COPY, reads: 'pK 7.141 and ΔH° 11.2 as stored; gives ΔCp° −2' },
           { copy: 'goldbergItcTable', where: 'Buffer table, PIPES', reads: 'ΔH° 11200 J/mol, ΔCp° +22: same as stored' },
         ],
         temperatureRangeC: GOLDBERG_RANGE_C,
-        note: 'Copies disagree on ΔCp°: +22 (the ITC table, and the review as remembered) against −2 (the transcription). +22 chosen, as for bis-tris and MOPS.',
+        note: 'Copies disagree on ΔCp°: +22 (the ITC table, and the review as remembered) against −2 (the copy). +22 chosen, as for bis-tris and MOPS.',
       }),
     ],
     forms: [
@@ -371,11 +371,11 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
         deltaHkJ: 25.0,
         deltaCpJ: 38,
         checkedAgainst: [
-          { ...TRANSCRIPTION, reads: 'ΔH° 25.0 and ΔCp° 38 as stored; gives pK 6.90' },
+          { ...EARLIER_COPY, reads: 'ΔH° 25.0 and ΔCp° 38 as stored; gives pK 6.90' },
           { copy: 'royAbstracts', where: 'J. Chem. Thermodyn. 29 (1997) 1323, pK2 = 432.25/T + 22.99923 − 3.08415 ln T', reads: 'pK 6.877, ΔH° 25.88 kJ/mol, ΔCp° 59 at 298.15 K' },
         ],
         temperatureRangeC: ROY_RANGE_C,
-        note: "pK 6.88 from Roy et al. 1997 (6.877), where the transcription gives 6.90. ΔH° and ΔCp° disagree: 25.0 and 38 (the transcription) against 25.88 and 59 (Roy et al.); the transcription's kept for now (over 5–37 °C the difference moves pK by under 0.012).",
+        note: "pK 6.88 from Roy et al. 1997 (6.877), where the copy gives 6.90. ΔH° and ΔCp° disagree: 25.0 and 38 (the copy) against 25.88 and 59 (Roy et al.); the copy's kept for now (over 5–37 °C the difference moves pK by under 0.012).",
       }),
     ],
     forms: [
@@ -421,11 +421,11 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
         deltaHkJ: 21.1,
         deltaCpJ: 25,
         checkedAgainst: [
-          { ...TRANSCRIPTION, reads: 'pK 7.184 and ΔH° 21.1 as stored; gives ΔCp° −5' },
+          { ...EARLIER_COPY, reads: 'pK 7.184 and ΔH° 21.1 as stored; gives ΔCp° −5' },
           { copy: 'goldbergItcTable', where: 'Buffer table, MOPS', reads: 'ΔH° 22200 J/mol, ΔCp° +25' },
         ],
         temperatureRangeC: GOLDBERG_RANGE_C,
-        note: 'Copies disagree. ΔCp°: +25 (the ITC table, and the review as remembered) against −5 (the transcription); +25 chosen, as for bis-tris and PIPES. ΔH°: 21.1 (the transcription, and the review as remembered) against 22.2 (the ITC table); 21.1 kept (over 4–37 °C the difference moves pK by under 0.02).',
+        note: 'Copies disagree. ΔCp°: +25 (the ITC table, and the review as remembered) against −5 (the copy); +25 chosen, as for bis-tris and PIPES. ΔH°: 21.1 (the copy, and the review as remembered) against 22.2 (the ITC table); 21.1 kept (over 4–37 °C the difference moves pK by under 0.02).',
       }),
     ],
     forms: [

@@ -7,11 +7,11 @@
  * - PM73: K. S. Pitzer, G. Mayorga, J. Phys. Chem. 77 (1973) 2300, Tables I (1:1), II
  *   (organic 1:1), VI (1:2, 2:1; tabulated as (4/3)β⁽⁰⁾, (4/3)β⁽¹⁾, (2^{5/2}/3)C^φ and
  *   converted here), VIII (1:3; tabulated as (3/2)β, (3^{3/2}/2)C^φ). Read in the
- *   transcription of the journal tables in the pytzer package (mvdh7/pytzer,
+ *   copy of the journal tables in the pytzer package (mvdh7/pytzer,
  *   pytzer/tables.py and parameters.py, PM73_TableI/VI/VIII and bC_*_PM73).
  * - P91: K. S. Pitzer (ed.), Activity Coefficients in Electrolyte Solutions, 2nd ed.
  *   (1991), ch. 3, Tables 12 and 13: first temperature derivatives at 25 °C. Read in the
- *   same pytzer transcription (P91_Ch3_T12, P91_Ch3_T13_I).
+ *   same pytzer copy (P91_Ch3_T12, P91_Ch3_T13_I).
  * - HMW84: C. E. Harvie, N. Møller, J. H. Weare, Geochim. Cosmochim. Acta 48 (1984) 723,
  *   Tables 1–3. Read in PHREEQC's pitzer.dat (TonyAppelo/phreeqc3, database/pitzer.dat),
  *   whose constant lines carry the 1984 values (that they are HMW84's is from memory of the

@@ -5,7 +5,7 @@
  * Source: R. A. Robinson, R. H. Stokes, Electrolyte Solutions, 2nd ed. (revised),
  * Butterworths 1959, Appendix 8.10 (molal scale, 25 °C). Written down from memory of that
  * appendix; no copy of the appendix was found to read. Cross-check: Pitzer & Mayorga's 1973
- * parameters (read in a transcription of their tables, see src/chem/pitzer/parameters.ts)
+ * parameters (read in a copy of their tables, see src/chem/pitzer/parameters.ts)
  * were fitted to these same tables, and reproduce every value below within 1.5 %; a
  * misremembered entry would stand out against them.
  */
