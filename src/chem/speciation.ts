@@ -25,6 +25,7 @@ import { ChemWarning, warning } from './warnings';
 import { selfConsistentIonicStrength } from './ionicStrength';
 import { PitzerEvaluation, pitzerEvaluate } from './pitzer/model';
 import { H_INDEX, OH_INDEX, PitzerLayout, STRONG_START, pitzerLayout } from './pitzer/prepared';
+import { gammaChange, mixedConstants, nextGammas } from './pitzer/iteration';
 import { waterKgPerLitre } from './pitzer/volumes';
 import { STRONG_IONS, findStrongIon } from './strongIons';
 import { pKw } from './water';
@@ -280,11 +281,7 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
   for (let it = 1; it <= MAX_PITZER_ITERATIONS; it++) {
     const gH = Math.exp(lnGamma[H_INDEX]) / w;
     const gOH = Math.exp(lnGamma[OH_INDEX]) / w;
-    for (let j = 0; j < p.totals.length; j++) {
-      const first = p.firstStep[j];
-      const base = layout.systemStart[j];
-      for (let k = 0; k < p.stepCount[j]; k++) kp[first + k] = p.ka[first + k] * Math.exp(lnGamma[base + k] - lnGamma[base + k + 1]);
-    }
+    mixedConstants(p, layout, lnGamma, kp);
     x = solveChargeBalance(p, kp, gH, gOH, x, counter);
     const aH = Math.exp(x);
     conc[H_INDEX] = aH / gH;
@@ -305,18 +302,7 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
     for (let i = 0; i < n; i++) m[i] = conc[i] / w;
     pitzerEvaluate(layout.system, m, next, result);
     applyPhConvention(layout, result.lnGammaKcl, next);
-    // What moves the pH: γ(H⁺), γ(OH⁻), and each buffer species' γ weighted by its share of its system
-    // (a trace form's γ hardly enters the charge balance); strong ions' γ do not enter it at all.
-    let delta = Math.max(Math.abs(next[H_INDEX] - lnGamma[H_INDEX]), Math.abs(next[OH_INDEX] - lnGamma[OH_INDEX]));
-    for (let j = 0; j < p.totals.length; j++) {
-      const total = p.totals[j];
-      if (total === 0) continue;
-      const base = layout.systemStart[j];
-      for (let k = 0; k <= p.stepCount[j]; k++) {
-        const d = (Math.abs(next[base + k] - lnGamma[base + k]) * conc[base + k]) / total;
-        if (d > delta) delta = d;
-      }
-    }
+    const delta = gammaChange(p, layout, p.totals, conc, lnGamma, next);
     // The map contracts by r = δ₂/δ₁, read off the first plain step (about 1e-5 for a buffer in saline, 1e-3 where
     // the buffers' charge moves the ionic strength): the new γ are then within r·δ of the fixed point, and one
     // last pH solve with them (a single Newton step from here) finishes.
@@ -326,33 +312,7 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
       finalPass = true;
       continue;
     }
-    if (delta >= previousDelta) {
-      for (let i = 0; i < n; i++) lnGamma[i] += 0.5 * (next[i] - lnGamma[i]);
-    } else if (it > 1) {
-      // Anderson mixing of depth one: the residual is nearly one mode (the ionic strength), so a secant step
-      // along it removes most of what is left: L ← G_k − θ(G_k − G_{k−1}), θ = F_k·ΔF/|ΔF|².
-      let num = 0;
-      let den = 0;
-      for (let i = 0; i < n; i++) {
-        const f = next[i] - lnGamma[i];
-        const df = f - (previousG[i] - previousL[i]);
-        num += f * df;
-        den += df * df;
-      }
-      const theta = den > 0 ? num / den : 0;
-      for (let i = 0; i < n; i++) {
-        const g = next[i];
-        previousL[i] = lnGamma[i];
-        lnGamma[i] = g - theta * (g - previousG[i]);
-        previousG[i] = g;
-      }
-    } else {
-      for (let i = 0; i < n; i++) {
-        previousL[i] = lnGamma[i];
-        previousG[i] = next[i];
-        lnGamma[i] = next[i];
-      }
-    }
+    nextGammas(n, lnGamma, next, previousL, previousG, delta, previousDelta, it);
     previousDelta = delta;
   }
   throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The activity-coefficient iteration', MAX_PITZER_ITERATIONS));

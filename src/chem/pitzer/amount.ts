@@ -17,6 +17,7 @@ import { ionicStrengthFactor } from '../activity';
 import { PitzerEvaluation, pitzerEvaluate } from './model';
 import { H_INDEX, OH_INDEX, STRONG_START } from './prepared';
 import { waterKgPerLitre } from './volumes';
+import { gammaChange, mixedConstants, nextGammas } from './iteration';
 
 /** How the amount c enters the composition: per mole of c ≥ 0 (up) and per mole of −c for c < 0 (down). */
 export interface AmountIncrements {
@@ -146,11 +147,7 @@ export function pitzerAmountAtPh(p: PreparedComposition, inc: AmountIncrements, 
   for (let it = 1; it <= MAX_PITZER_ITERATIONS; it++) {
     const gH = Math.exp(lnGamma[H_INDEX]) / w;
     const gOH = Math.exp(lnGamma[OH_INDEX]) / w;
-    for (let j = 0; j < nSystems; j++) {
-      const first = p.firstStep[j];
-      const base = layout.systemStart[j];
-      for (let k = 0; k < p.stepCount[j]; k++) kp[first + k] = p.ka[first + k] * Math.exp(lnGamma[base + k] - lnGamma[base + k + 1]);
-    }
+    mixedConstants(p, layout, lnGamma, kp);
     // Charge balance at the current amount and its slope in the amount: linear at fixed γ, so one Newton step solves it.
     fill(c, gH, gOH);
     let f = conc[H_INDEX] - conc[OH_INDEX];
@@ -169,16 +166,7 @@ export function pitzerAmountAtPh(p: PreparedComposition, inc: AmountIncrements, 
     for (let i = 0; i < n; i++) m[i] = Math.max(0, conc[i]) / w;
     pitzerEvaluate(layout.system, m, next, result);
     applyPhConvention(layout, result.lnGammaKcl, next);
-    let delta = Math.max(Math.abs(next[H_INDEX] - lnGamma[H_INDEX]), Math.abs(next[OH_INDEX] - lnGamma[OH_INDEX]));
-    for (let j = 0; j < nSystems; j++) {
-      const total = totals[j];
-      if (total <= 0) continue;
-      const base = layout.systemStart[j];
-      for (let k = 0; k <= p.stepCount[j]; k++) {
-        const d = (Math.abs(next[base + k] - lnGamma[base + k]) * conc[base + k]) / total;
-        if (d > delta) delta = d;
-      }
-    }
+    const delta = gammaChange(p, layout, totals, conc, lnGamma, next);
     // As in the pH solve (speciation.ts): the contraction read off the first plain step decides when the new γ are
     // close enough for a last linear step; Anderson (depth one) steps remove the ionic-strength mode the amount drives.
     if (it === 2) contraction = delta / previousDelta;
@@ -187,31 +175,7 @@ export function pitzerAmountAtPh(p: PreparedComposition, inc: AmountIncrements, 
       finalPass = true;
       continue;
     }
-    if (delta >= previousDelta) {
-      for (let i = 0; i < n; i++) lnGamma[i] += 0.5 * (next[i] - lnGamma[i]);
-    } else if (it > 1) {
-      let num = 0;
-      let den = 0;
-      for (let i = 0; i < n; i++) {
-        const f = next[i] - lnGamma[i];
-        const df = f - (previousG[i] - previousL[i]);
-        num += f * df;
-        den += df * df;
-      }
-      const theta = den > 0 ? num / den : 0;
-      for (let i = 0; i < n; i++) {
-        const g = next[i];
-        previousL[i] = lnGamma[i];
-        lnGamma[i] = g - theta * (g - previousG[i]);
-        previousG[i] = g;
-      }
-    } else {
-      for (let i = 0; i < n; i++) {
-        previousL[i] = lnGamma[i];
-        previousG[i] = next[i];
-        lnGamma[i] = next[i];
-      }
-    }
+    nextGammas(n, lnGamma, next, previousL, previousG, delta, previousDelta, it);
     previousDelta = delta;
   }
   throw new ChemError('no-convergence', 'noConvergence', MESSAGES.noConvergence('The titrant amount', MAX_PITZER_ITERATIONS));
