@@ -31,7 +31,7 @@ import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toField, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
 import { recipeOptions } from './recipeOptions';
 import { RECIPE_ROW_HEADER, recipeRowValues } from './recipeRow';
-import { DEFAULT_PART_VOLUME_FRACTION, RecipeInput, RecipePlan, checkTitrantFits, planRecipe } from '../chem/planner';
+import { DEFAULT_PART_VOLUME_FRACTION, RecipeInput, RecipePlan, checkTitrantFits, hydrateWarning, planRecipe } from '../chem/planner';
 import { volumeText } from '../chem/planner/protocol';
 import { checkRowLimit, compositionFrom, formAlone } from './composition';
 import { invalid } from './errors';
@@ -322,20 +322,8 @@ export function warnings(composition: any[][], temperatureC?: any, activityModel
     for (const row of toRange(composition)) {
       const name = row[0];
       if (typeof name !== 'string') continue;
-      const others = s.library.hydrateAlternatives(name);
-      if (others.length === 0) continue;
-      const used = s.library.findForm(name);
-      found.push(
-        warning(
-          'hydrateAssumed',
-          MESSAGES.hydrateAssumed(
-            name,
-            used.name,
-            used.molarMass,
-            others.map((f) => `${f.name} (${f.molarMass.toFixed(2)} g/mol)`),
-          ),
-        ),
-      );
+      const w = hydrateWarning(s.library, name);
+      if (w) found.push(w);
     }
     if (found.length === 0) return 'none';
     return `${found.length} warning${found.length === 1 ? '' : 's'}: ${found.map((w, i) => `(${i + 1}) ${w.message}`).join(' ')}`;

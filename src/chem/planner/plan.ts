@@ -40,7 +40,7 @@ export * from './constants';
 export { bufferSystemOf } from './settle';
 export { formContains } from './routes';
 export { checkTitrantFits } from './band';
-export { hydrateWarnings } from './planWarnings';
+export { hydrateWarning, hydrateWarnings } from './planWarnings';
 
 /**
  * Plans a buffer recipe.

@@ -9,6 +9,25 @@ import { SMALLEST_TITRANT_ML, NO_TITRANT_PH, MAX_STOCK_DILUTION_ADVICE, SMALLEST
 import { RouteResult, Settled } from './settle';
 
 /**
+ * The warning for one name that leaves the hydration state open, or undefined when the name
+ * says which form it is: the form weighed, its molar mass, and the other forms listed.
+ *
+ * @param field - the input the name came from, when there is one
+ */
+export function hydrateWarning(library: SubstanceLibrary, name: string, field?: string): ChemWarning | undefined {
+  const others = library.hydrateAlternatives(name);
+  if (others.length === 0) return undefined;
+  const used = library.findForm(name, field);
+  const message = MESSAGES.hydrateAssumed(
+    name,
+    used.name,
+    used.molarMass,
+    others.map((f) => `${f.name} (${f.molarMass.toFixed(2)} g/mol)`),
+  );
+  return warning('hydrateAssumed', message, field);
+}
+
+/**
  * A name that leaves the hydration state open (`sodium phosphate dibasic`) is weighed as the
  * form the library lists under it (docs/substances.md); the plan says which, with its molar
  * mass, and names the other forms, so a heptahydrate on the shelf is not weighed as anhydrous.
@@ -23,21 +42,8 @@ export function hydrateWarnings(input: RecipeInput, library: SubstanceLibrary): 
   if (typeof input.saltTarget?.form === 'string') typed.push({ name: input.saltTarget.form, field: 'saltTarget.form' });
   const out: ChemWarning[] = [];
   for (const { name, field } of typed) {
-    const others = library.hydrateAlternatives(name);
-    if (others.length === 0) continue;
-    const used = library.findForm(name, field);
-    out.push(
-      warning(
-        'hydrateAssumed',
-        MESSAGES.hydrateAssumed(
-          name,
-          used.name,
-          used.molarMass,
-          others.map((f) => `${f.name} (${f.molarMass.toFixed(2)} g/mol)`),
-        ),
-        field,
-      ),
-    );
+    const w = hydrateWarning(library, name, field);
+    if (w) out.push(w);
   }
   return out;
 }
