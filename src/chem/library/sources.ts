@@ -11,6 +11,8 @@ export const SOURCES = {
   bates1973: 'R. G. Bates, Determination of pH, 2nd ed., Wiley (1973)',
   roy2014:
     'R. N. Roy, L. N. Roy, K. Hundley, T. Wehmeyer, L. Tebbe, "Thermodynamics of the second dissociation constants (pK2) of piperazine-N,N′-bis-2-hydroxypropanesulfonic acid (POPSO sesquisodium salt) … from (278.15 to 328.15) K", J. Biophys. Chem. 5 (2014) 143–151',
+  roy1997:
+    'R. N. Roy and co-workers, emf study of the second dissociation constant of MOPSO from 5 to 55 °C, J. Chem. Thermodyn. 29 (1997) 1323 (the fitted pK2(T) equation as its abstract gives it)',
   cleggRardPitzer1994:
     'S. L. Clegg, J. A. Rard, K. S. Pitzer, "Thermodynamic properties of 0–6 mol kg−1 aqueous sulfuric acid from 273.15 to 328.15 K", J. Chem. Soc., Faraday Trans. 90 (1994) 1875–1894, eq. 21 (K of HSO4−)',
   crcDissociation: 'CRC Handbook of Chemistry and Physics, "Dissociation constants of organic acids and bases" (edition not checked)',
@@ -35,8 +37,6 @@ export type SourceId = keyof typeof SOURCES;
  * copy is not the journal: a value checked only against a copy says so.
  */
 export const COPIES = {
-  goldbergEarlierCopyTs:
-    'A public TypeScript buffer module (a buffer calculator\'s test table headed "Goldberg, Kishore & Lennen 2002, Section 8"), found by code search, that copies pK, ΔH° and ΔCp° for about 30 steps. It disagrees with other copies on the ΔCp° of bis-tris, MOPS and PIPES, so it counts as one copy, not as the journal; no value was newly taken from it in the constants audit',
   goldbergReviewNote: 'A public source-review note quoting the TAPSO and imidazole lines of the Goldberg et al. 2002 tables (Tables 7.62 and 7.41)',
   goldbergScanAda: 'A scanned page of the Goldberg et al. 2002 review (p. 242, the ADA literature table)',
   goldbergItcTable:

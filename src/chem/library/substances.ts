@@ -24,9 +24,6 @@ const CRP94_RANGE_C: readonly [number, number] = [0, 55];
 /** No ΔH° known: the pKa is held at its 25 °C value, fit for 25 ± 2 °C only. */
 const NO_ENTHALPY_RANGE_C: readonly [number, number] = [23, 27];
 
-/** The Goldberg et al. 2002 selected value as the public TypeScript copy gives it. */
-const EARLIER_COPY: ValueCheck = { copy: 'goldbergEarlierCopyTs', where: 'the entry of the same name', reads: 'pK, ΔH°, ΔCp° read line by line; same numbers as stored' };
-
 /** A step's constants and where they come from, by name (so that ΔH° and ΔCp° cannot be swapped unnoticed). */
 interface StepData {
   readonly source: SourceId;
@@ -59,10 +56,10 @@ function step(d: StepData): SourcedStep {
 
 type GoldbergData = Omit<StepData, 'source' | 'checkedAgainst' | 'temperatureRangeC'> & { readonly temperatureRangeC?: readonly [number, number] };
 
-/** Goldberg et al. 2002, checked against the public copy and any further copies named in `also`. */
-const gv = (d: GoldbergData & { deltaHkJ: number; deltaCpJ: number; also?: readonly ValueCheck[] }) => {
+/** Goldberg et al. 2002, checked against the copies named in `also` (at least one). */
+const gv = (d: GoldbergData & { deltaHkJ: number; deltaCpJ: number; also: readonly [ValueCheck, ...ValueCheck[]] }) => {
   const { also, ...rest } = d;
-  return step({ ...rest, source: 'goldberg2002', checkedAgainst: [EARLIER_COPY, ...(also ?? [])], temperatureRangeC: d.temperatureRangeC ?? GOLDBERG_RANGE_C });
+  return step({ ...rest, source: 'goldberg2002', checkedAgainst: also, temperatureRangeC: d.temperatureRangeC ?? GOLDBERG_RANGE_C });
 };
 /** Goldberg et al. 2002, written from memory (no copy found). */
 const gm = (d: GoldbergData) =>
@@ -217,12 +214,11 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
         deltaHkJ: 28.4,
         deltaCpJ: 27,
         checkedAgainst: [
-          { ...EARLIER_COPY, reads: 'pK 6.484 and ΔH° 28.4 as stored; gives ΔCp° −7' },
           { copy: 'goldbergItcTable', where: 'Buffer table, Bis-Tris', reads: 'ΔH° 28400 J/mol, ΔCp° +27: same as stored' },
           { copy: 'royAbstracts', where: 'J. Biophys. Chem. 5 (2014) 118, pKa = 921.66/T + 14.0007 − 1.86197 ln T', reads: 'pKa 6.4828, ΔH° 28.273 kJ/mol, ΔCp° +36 at 298.15 K' },
         ],
         temperatureRangeC: ROY_RANGE_C,
-        note: "Copies disagree on ΔCp°: +27 (the ITC table, and the review as remembered) and +36 (Roy et al. 2014, measured after the review) against −7 (the copy). +27, the review's selected value, kept; the sign of −7 is contradicted by every other copy.",
+        note: "Copies disagree on ΔCp°: +27 (the ITC table, and the review as remembered) against +36 (Roy et al. 2014, measured after the review). +27, the review's selected value, kept.",
       }),
     ],
     forms: [
@@ -296,12 +292,9 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
         pKa: 7.141,
         deltaHkJ: 11.2,
         deltaCpJ: 22,
-        checkedAgainst: [
-          { ...EARLIER_COPY, reads: 'pK 7.141 and ΔH° 11.2 as stored; gives ΔCp° −2' },
-          { copy: 'goldbergItcTable', where: 'Buffer table, PIPES', reads: 'ΔH° 11200 J/mol, ΔCp° +22: same as stored' },
-        ],
+        checkedAgainst: [{ copy: 'goldbergItcTable', where: 'Buffer table, PIPES', reads: 'ΔH° 11200 J/mol, ΔCp° +22: same as stored' }],
         temperatureRangeC: GOLDBERG_RANGE_C,
-        note: 'Copies disagree on ΔCp°: +22 (the ITC table, and the review as remembered) against −2 (the copy). +22 chosen, as for bis-tris and MOPS.',
+        note: 'ΔCp° +22 as the ITC table gives it (and the review as remembered).',
       }),
     ],
     forms: [
@@ -365,17 +358,16 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     chargeOfMostProtonated: 0,
     steps: [
       step({
-        source: 'goldberg2002',
-        entry: 'MOPSO',
-        pKa: 6.88,
-        deltaHkJ: 25.0,
-        deltaCpJ: 38,
+        source: 'roy1997',
+        entry: 'MOPSO, pK2',
+        pKa: 6.877,
+        deltaHkJ: 25.88,
+        deltaCpJ: 59,
         checkedAgainst: [
-          { ...EARLIER_COPY, reads: 'ΔH° 25.0 and ΔCp° 38 as stored; gives pK 6.90' },
           { copy: 'royAbstracts', where: 'J. Chem. Thermodyn. 29 (1997) 1323, pK2 = 432.25/T + 22.99923 − 3.08415 ln T', reads: 'pK 6.877, ΔH° 25.88 kJ/mol, ΔCp° 59 at 298.15 K' },
         ],
         temperatureRangeC: ROY_RANGE_C,
-        note: "pK 6.88 from Roy et al. 1997 (6.877), where the copy gives 6.90. ΔH° and ΔCp° disagree: 25.0 and 38 (the copy) against 25.88 and 59 (Roy et al.); the copy's kept for now (over 5–37 °C the difference moves pK by under 0.012).",
+        note: 'All three constants read off the fitted equation of Roy et al. 1997 at 298.15 K (the review as remembered gives pK 6.90, ΔH° 25.0, ΔCp° 38, which lie 0.015–0.030 above the equation over 5–37 °C; these three follow it within 0.0005 from 5 to 55 °C).',
       }),
     ],
     forms: [
@@ -420,12 +412,9 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
         pKa: 7.184,
         deltaHkJ: 21.1,
         deltaCpJ: 25,
-        checkedAgainst: [
-          { ...EARLIER_COPY, reads: 'pK 7.184 and ΔH° 21.1 as stored; gives ΔCp° −5' },
-          { copy: 'goldbergItcTable', where: 'Buffer table, MOPS', reads: 'ΔH° 22200 J/mol, ΔCp° +25' },
-        ],
+        checkedAgainst: [{ copy: 'goldbergItcTable', where: 'Buffer table, MOPS', reads: 'ΔH° 22200 J/mol, ΔCp° +25' }],
         temperatureRangeC: GOLDBERG_RANGE_C,
-        note: 'Copies disagree. ΔCp°: +25 (the ITC table, and the review as remembered) against −5 (the copy); +25 chosen, as for bis-tris and PIPES. ΔH°: 21.1 (the copy, and the review as remembered) against 22.2 (the ITC table); 21.1 kept (over 4–37 °C the difference moves pK by under 0.02).',
+        note: 'ΔH° 21.1 is the review as remembered (memory); the ITC table gives 22.2. 21.1 kept: over 4–37 °C the difference moves pK by under 0.02. ΔCp° +25 as the ITC table gives it.',
       }),
     ],
     forms: [
@@ -1093,7 +1082,7 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     chargeOfMostProtonated: 1,
     steps: [
       gm({ entry: 'glycylglycine, H2L+ ⇌ HL±', pKa: 3.14, deltaHkJ: 0.11, deltaCpJ: -120 }),
-      gv({ entry: 'glycylglycine, HL± ⇌ L−', pKa: 8.265, deltaHkJ: 43.4, deltaCpJ: -16 }),
+      gm({ entry: 'glycylglycine, HL± ⇌ L−', pKa: 8.265, deltaHkJ: 43.4, deltaCpJ: -16 }),
     ],
     forms: [
       form({
@@ -1627,8 +1616,8 @@ export const SUBSTANCES: readonly SubstanceRecord[] = [
     aliases: ['succinic acid', 'butanedioic acid'],
     chargeOfMostProtonated: 0,
     steps: [
-      gv({ entry: 'succinic acid, H2L ⇌ HL−', pKa: 4.207, deltaHkJ: 3.0, deltaCpJ: -121 }),
-      gv({ entry: 'succinic acid, HL− ⇌ L2−', pKa: 5.636, deltaHkJ: -0.5, deltaCpJ: -217 }),
+      gm({ entry: 'succinic acid, H2L ⇌ HL−', pKa: 4.207, deltaHkJ: 3.0, deltaCpJ: -121 }),
+      gm({ entry: 'succinic acid, HL− ⇌ L2−', pKa: 5.636, deltaHkJ: -0.5, deltaCpJ: -217 }),
     ],
     forms: [
       form({

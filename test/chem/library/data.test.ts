@@ -200,6 +200,15 @@ describe('common practice', () => {
     expectClose(`tris pKa at ${t} °C`, pKaAt(tris.pKa, tris.deltaHkJ ?? 0, tris.deltaCpJ ?? 0, t), trisPKaBatesHetzer(t), BATES_HETZER_TOLERANCE);
   });
 
+  /** Roy et al. fit their emf points to a few thousandths; 0.002 leaves room for the three constants being rounded from their fit. */
+  const ROY_FIT_TOLERANCE = 0.002;
+  /** MOPSO pK2(T) as fitted by Roy et al., J. Chem. Thermodyn. 29 (1997) 1323 (the equation as the abstract gives it). */
+  const mopsoRoy1997 = (t: number) => 432.25 / (t + 273.15) + 22.99923 - 3.08415 * Math.log(t + 273.15);
+  it.each([5, 15, 25, 37, 45, 55])('MOPSO pKa at %d °C: Roy et al. 1997 (J. Chem. Thermodyn. 29, 1323, pK2(T) fit), within 0.002', (t) => {
+    const s = findSystem('MOPSO').steps[0];
+    expectClose(`MOPSO pKa at ${t} °C`, pKaAt(s.pKa, s.deltaHkJ ?? 0, s.deltaCpJ ?? 0, t), mopsoRoy1997(t), ROY_FIT_TOLERANCE);
+  });
+
   it('phosphate step 2 moves far less with temperature than tris (common practice: under a fifth, 4–37 °C)', () => {
     const p = findSystem('phosphate').steps[1];
     const shift = (s: typeof p) => Math.abs(pKaAt(s.pKa, s.deltaHkJ ?? 0, s.deltaCpJ ?? 0, 4) - pKaAt(s.pKa, s.deltaHkJ ?? 0, s.deltaCpJ ?? 0, 37));
