@@ -25,10 +25,10 @@ import { basename, dirname, extname, join, resolve } from 'path';
 import ExcelJS from 'exceljs';
 import { AlwaysSparse, DetailedCellError, HyperFormula } from 'hyperformula';
 import { createFormulaEngine } from '../functions/formulaEngine';
-import { engineFormula } from '../functions/formulaText';
-import { literal } from '../workbook/port';
+import { CellBudget, csvRows, FileRefused, worksheetRows } from '../workbook/fileCells';
+import { cellAddress, literal } from '../workbook/port';
 import { CALC_MESSAGES } from './calcMessages';
-import { InputRefused, MAX_CELL_CHARS, MAX_CELLS, MAX_COLUMNS, MAX_FILE_BYTES, MAX_ROWS, RangeBudget, checkFormula, checkWorkbookPackage } from './calcLimits';
+import { InputRefused, MAX_CELLS, MAX_COLUMNS, MAX_FILE_BYTES, MAX_ROWS, RangeBudget, checkWorkbookPackage } from './calcLimits';
 
 const USAGE = 'Usage: proton-ledger calc <input.xlsx|input.csv> -o <output.xlsx|output.csv> [--sheet NAME] [--force]';
 
@@ -120,9 +120,6 @@ export function writeFileAtomically(output: string, data: string | Uint8Array, f
 
 /** Error values a .xlsx cell can hold; others from the engine are written as #VALUE! with a note. */
 const XLSX_ERRORS = new Set(['#N/A', '#REF!', '#NAME?', '#DIV/0!', '#NULL!', '#VALUE!', '#NUM!']);
-/** Day 0 of Excel's 1900 date system (serial 1 = 1900-01-01, with Excel's 1900 leap-year quirk folded in). */
-const EXCEL_EPOCH_MS = Date.UTC(1899, 11, 30);
-const MS_PER_DAY = 86400000;
 
 /** A formula error found while calculating. */
 export interface CalcError {
@@ -150,97 +147,25 @@ interface SheetInput {
   readonly cells: readonly (readonly [number, number])[];
 }
 
-function columnLetters(col: number): string {
-  let s = '';
-  for (let n = col + 1; n > 0; n = Math.floor((n - 1) / 26)) s = String.fromCharCode(65 + ((n - 1) % 26)) + s;
-  return s;
+/** Where a grid's cells are: the engine is asked about these and no others. */
+function gridCells(grid: Grid): [number, number][] {
+  const cells: [number, number][] = [];
+  // forEach skips the holes of a sparse row, so a value in the last column costs one visit, not sixteen thousand.
+  grid.forEach((row, r) => row.forEach((value, c) => value !== null && value !== undefined && cells.push([r, c])));
+  return cells;
 }
 
-/** Text for the engine: an apostrophe keeps it text even if it looks like a formula or number. */
-function engineText(text: string): string {
-  return `'${text}`;
-}
-
-function cellInput(cell: ExcelJS.Cell, where: string): unknown {
-  // A merged range holds its value in its first cell; the others are empty (exceljs reports the first cell's value for each).
-  if (cell.type === ExcelJS.ValueType.Merge) return null;
-  const v = cell.value;
-  if (v === null || v === undefined) return null;
-  if (typeof v === 'number' || typeof v === 'boolean') return v;
-  if (typeof v === 'string') return engineText(v);
-  if (v instanceof Date) return (v.getTime() - EXCEL_EPOCH_MS) / MS_PER_DAY;
-  if (typeof v === 'object') {
-    if ('formula' in v || 'sharedFormula' in v) {
-      const formula = cell.formula;
-      if (!formula) return null;
-      checkFormula(formula, where);
-      return `=${engineFormula(formula.replace(/^=/, ''))}`;
-    }
-    if ('richText' in v) return engineText(v.richText.map((r) => r.text).join(''));
-    if ('error' in v) return v.error;
-    if ('text' in v) return engineText(String(v.text));
-  }
-  return null;
-}
-
-/** Cells of an array formula's range other than its first: Excel stores cached values there; the engine spills into them. */
-function arrayCovered(sheet: ExcelJS.Worksheet): Set<string> {
-  const covered = new Set<string>();
-  sheet.eachRow({ includeEmpty: false }, (row) => {
-    row.eachCell({ includeEmpty: false }, (cell) => {
-      const v = cell.value as { shareType?: string; ref?: string } | null;
-      if (v && typeof v === 'object' && v.shareType === 'array' && v.ref) {
-        const [a, b] = v.ref.split(':');
-        if (!b) return;
-        const start = sheet.getCell(a);
-        const end = sheet.getCell(b);
-        for (let r = Number(start.row); r <= Number(end.row); r++) {
-          for (let c = Number(start.col); c <= Number(end.col); c++) if (r !== Number(start.row) || c !== Number(start.col)) covered.add(`${r},${c}`);
-        }
-      }
-    });
-  });
-  return covered;
-}
-
+/** A sheet's cells, read as every host reads a worksheet (src/workbook/fileCells.ts). */
 function sheetInput(sheet: ExcelJS.Worksheet): SheetInput {
-  const grid: Grid = [];
-  const cells: [number, number][] = [];
-  const covered = arrayCovered(sheet);
-  sheet.eachRow({ includeEmpty: false }, (row, rowNumber) => {
-    row.eachCell({ includeEmpty: false }, (cell, colNumber) => {
-      if (covered.has(`${rowNumber},${colNumber}`)) return;
-      const value = cellInput(cell, `${sheet.name}!${cell.address}`);
-      if (value === null) return;
-      (grid[rowNumber - 1] ??= [])[colNumber - 1] = value;
-      cells.push([rowNumber - 1, colNumber - 1]);
-    });
-  });
-  // The engine wants a row array for every row; rows stay sparse, so a value in the last cell costs one row array per row, not a grid.
-  for (let r = 0; r < grid.length; r++) grid[r] ??= [];
-  return { grid, cells };
+  const grid = worksheetRows(sheet);
+  return { grid, cells: gridCells(grid) };
 }
 
-/** A CSV file's cells for the engine, each field within Excel's limits. */
+/** A CSV file's cells, read as every host reads a CSV file, within calc's cell budget and with the ranges its formulas read counted. */
 function csvSheetInput(text: string): SheetInput {
-  const rows = parseCsv(text);
-  const cells: [number, number][] = [];
   const ranges = new RangeBudget();
-  const grid = rows.map((row, r) =>
-    row.map((field, c) => {
-      if (field === '') return null;
-      if (cells.length >= MAX_CELLS) throw new InputRefused(CALC_MESSAGES.tooManyFields(cells.length + 1, MAX_CELLS));
-      const where = `${columnLetters(c)}${r + 1} of the CSV file`;
-      if (field.length > MAX_CELL_CHARS) throw new InputRefused(CALC_MESSAGES.textTooLong(where, field.length, MAX_CELL_CHARS));
-      if (field.startsWith('=')) {
-        checkFormula(field, where);
-        ranges.count(field, where);
-      }
-      cells.push([r, c]);
-      return csvInput(field);
-    }),
-  );
-  return { grid, cells };
+  const grid = csvRows(text, new CellBudget(MAX_CELLS), (formula, where) => ranges.count(formula, where));
+  return { grid, cells: gridCells(grid) };
 }
 
 /**
@@ -262,74 +187,6 @@ function engineCells(hf: HyperFormula, sheet: number, input: SheetInput): [numbe
     for (let r = row; r < row + height; r++) for (let c = col; c < col + width; c++) if (r !== row || c !== col) out.push([r, c]);
   }
   return out;
-}
-
-/**
- * Splits CSV text (RFC 4180: quotes, doubled quotes, CRLF) into rows of strings. A quote
- * opens quoted text wherever it stands; inside, a doubled quote is one quote. Fields are
- * cut from the text in whole runs, never built a character at a time (that makes a chain of
- * one small string per character: 19 MB of text took 770 MB).
- */
-export function parseCsv(text: string): string[][] {
-  const rows: string[][] = [];
-  let row: string[] = [];
-  let pieces: string[] = [];
-  let quoted = false;
-  const n = text.length;
-  let i = 0;
-  const endField = () => {
-    row.push(pieces.length === 1 ? pieces[0] : pieces.join(''));
-    pieces = [];
-  };
-  while (i < n) {
-    if (quoted) {
-      const q = text.indexOf('"', i);
-      if (q < 0) {
-        pieces.push(text.slice(i));
-        i = n;
-      } else if (text.charCodeAt(q + 1) === 34) {
-        pieces.push(text.slice(i, q + 1));
-        i = q + 2;
-      } else {
-        pieces.push(text.slice(i, q));
-        quoted = false;
-        i = q + 1;
-      }
-      continue;
-    }
-    let j = i;
-    let c = 0;
-    while (j < n && (c = text.charCodeAt(j)) !== 44 && c !== 10 && c !== 13 && c !== 34) j++;
-    if (j > i) pieces.push(text.slice(i, j));
-    if (j >= n) break;
-    if (c === 34) quoted = true;
-    else {
-      endField();
-      if (c !== 44) {
-        if (c === 13 && text.charCodeAt(j + 1) === 10) j++;
-        rows.push(row);
-        row = [];
-      }
-    }
-    i = j + 1;
-  }
-  if (pieces.join('') !== '' || row.length > 0) {
-    endField();
-    rows.push(row);
-  }
-  return rows;
-}
-
-/** A plain number as CSV writes it; no two parts can match the same digits, so it reads in one pass (30,000 digits then a letter took 1.7 s with "\d+\.?\d*"). */
-const PLAIN_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
-
-/** A CSV field for the engine: "=…" is a formula, "'…" literal text, a plain number a number, anything else text. */
-function csvInput(field: string): unknown {
-  if (field === '') return null;
-  if (field.startsWith('=')) return `=${engineFormula(field.slice(1))}`;
-  if (field.startsWith("'")) return engineText(field.slice(1));
-  if (PLAIN_NUMBER.test(field.trim())) return Number(field);
-  return engineText(field);
 }
 
 /** A value as one CSV field; text that a spreadsheet would read as a formula gets an apostrophe. */
@@ -355,7 +212,7 @@ function recordErrors(hf: HyperFormula, sheetId: number, sheetName: string, cell
   // Row by row, as a reader scans the sheet.
   found.sort((a, b) => a.row - b.row || a.col - b.col);
   for (const { row, col, error } of found) {
-    const cell = `${sheetName}!${columnLetters(col)}${row + 1}`;
+    const cell = `${sheetName}!${cellAddress(row, col)}`;
     // NA() (and IF(…, NA())) gives #N/A with no message: a gap by design, as chart data uses it; every PROTON #N/A says why.
     if (error.value === '#N/A' && !error.message) notAvailable.push(cell);
     else errors.push({ cell, value: error.value, message: error.message });
@@ -406,11 +263,11 @@ async function readInput(input: string, isWorkbook: boolean): Promise<{ workbook
       workbook.eachSheet((ws) => (sheets[ws.name] = sheetInput(ws)));
     } else {
       workbook.addWorksheet('Sheet1');
-      sheets.Sheet1 = csvSheetInput(readFileSync(input, 'utf8').replace(/^\uFEFF/, ''));
+      sheets.Sheet1 = csvSheetInput(readFileSync(input, 'utf8'));
     }
     return { workbook, sheets };
   } catch (e) {
-    if (e instanceof InputRefused) throw new CalcFailure(e.message, 'input');
+    if (e instanceof InputRefused || e instanceof FileRefused) throw new CalcFailure(e.message, 'input');
     if (e instanceof CalcFailure) throw e;
     throw new CalcFailure(CALC_MESSAGES.cannotRead(input, (e as NodeJS.ErrnoException).code ?? (e as Error).message), 'input');
   }

@@ -32,7 +32,6 @@ export const CALC_MESSAGES = {
     `${input}: the sheet "${sheet}" is stored as ${part}; calc reads worksheets stored as xl/worksheets/sheet<number>.xml (save the workbook again from a spreadsheet program).`,
   sheetNotRead: (input: string, sheets: readonly string[]) => `${input}: the sheet(s) ${sheets.map((s) => `"${s}"`).join(', ')} could not be read; nothing was written.`,
   noSheets: (input: string) => `${input} holds no worksheets.`,
-  tooManyFields: (fields: number, limit: number) => `The CSV file has more than ${count(limit)} fields (at least ${count(fields)}); calc evaluates up to ${count(limit)} cells.`,
   csvTooLarge: (sheet: string, rows: number, columns: number, limit: number) =>
     `Sheet "${sheet}" spans ${count(rows)} rows by ${count(columns)} columns; calc writes CSV of up to ${count(limit)} cells (write .xlsx instead).`,
 } as const;

@@ -10,7 +10,7 @@ import { tmpdir } from 'os';
 import { join } from 'path';
 import ExcelJS from 'exceljs';
 import { main } from '../../src/cli/main';
-import { parseCsv } from '../../src/cli/calc';
+import { parseCsv } from '../../src/workbook/delimited';
 import { MAX_CELL_CHARS, MAX_CELLS, MAX_FORMULA_CHARS, MAX_FORMULA_DEPTH, MAX_FORMULA_OPERATORS, MAX_MERGED_CELLS, rangeCells } from '../../src/cli/calcLimits';
 import { cell, Part, repeated, row, SHEET_HEAD, SHEET_TAIL, SheetSpec, workbookParts, zip } from '../support/craftWorkbook';
 
@@ -296,7 +296,7 @@ describe('the package itself', () => {
 describe('CSV input', () => {
   it.each([
     ['quotes, doubled quotes, CRLF, LF and CR', 'a,"b,""c""",d\r\ne\nf\rg', [['a', 'b,"c"', 'd'], ['e'], ['f'], ['g']]],
-    ['a quote in the middle of a field opens quoted text', 'x"y,z"w,v\n', [['xy,zw', 'v']]],
+    ['a quote in the middle of a field kept as written, as spreadsheet programs read it (one reader with the preview)', 'x"y,z"w,v\n', [['x"y', 'z"w', 'v']]],
     ['an unterminated quote runs to the end', 'a,"b\nc', [['a', 'b\nc']]],
     [
       'empty fields and a trailing separator',
@@ -315,7 +315,7 @@ describe('CSV input', () => {
     ['a field of 40,000 characters', `a,${'b'.repeat(40_000)}\r\n`, /B1 of the CSV file: a text of 40,000 characters/],
     ['a formula of 9,000 characters', `1,=${'1+'.repeat(4500)}1\r\n`, /B1 of the CSV file: a formula of 9,002 characters/],
     ['a formula nested 4,000 deep', `=${'('.repeat(4000)}1${')'.repeat(4000)}\r\n`, /A1 of the CSV file: a formula nested 4,000 levels deep/],
-    ['one field more than the limit', `${'1,'.repeat(MAX_CELLS)}1\r\n`, /The CSV file has more than 200,000 fields/],
+    ['one field more than the limit', `${'1,'.repeat(MAX_CELLS)}1\r\n`, /The file has more than 200,000 cells with content/],
   ])(
     '%s: a clear error',
     async (_label, text, pattern) => {

@@ -7,7 +7,7 @@ import { tmpdir } from 'os';
 import { join } from 'path';
 import ExcelJS from 'exceljs';
 import { main } from '../../src/cli/main';
-import { parseCsv } from '../../src/cli/calc';
+import { parseCsv } from '../../src/workbook/delimited';
 import { ph, titrantMl, grams } from '../../src/functions/functions';
 
 const dir = mkdtempSync(join(tmpdir(), 'proton-calc-'));
