@@ -6,7 +6,6 @@
  * nested ones, e.g. `titrant.form`), or JSON lines (one object per line). Output: CSV, JSON
  * lines, or .xlsx (written through exceljs, loaded only for that).
  */
-import { parse } from 'csv-parse/sync';
 import { stringify } from 'csv-stringify/sync';
 import { ChemError } from '../chem';
 import { setFieldPath } from '../chem/input';
@@ -15,6 +14,7 @@ import { RECIPE_ROW_HEADER, recipeRowValues } from '../functions/recipeRow';
 import { toRecipeInput } from './recipeInput';
 import { libraryFor } from './compositionInput';
 import { solveComposition } from './solve';
+import { parseCsv } from '../workbook/delimited';
 
 /** Most rows one batch may hold (a what-if grid of 100 × 100 fits). */
 export const MAX_BATCH_ROWS = 100_000;
@@ -54,12 +54,10 @@ export function readBatch(text: string): BatchInput[] {
     if (out.length > MAX_BATCH_ROWS) throw tooMany(out.length);
     return out;
   }
-  let records: string[][];
-  try {
-    records = parse(text, { bom: true, relax_column_count: true, skip_empty_lines: true, trim: true }) as string[][];
-  } catch (e) {
-    throw new ChemError('invalid-input', 'notANumber', `The batch is neither JSON lines nor CSV: ${(e as Error).message}`, 'batch', 'CSV with a header row, or JSON lines');
-  }
+  // The one CSV reader of every host (src/workbook/delimited.ts); fields trimmed, rows with nothing in them skipped.
+  const records = parseCsv(text.replace(/^\uFEFF/, ''))
+    .map((row) => row.map((field) => field.trim()))
+    .filter((row) => row.some((field) => field !== ''));
   if (records.length === 0) return [];
   const [header, ...rows] = records;
   if (rows.length > MAX_BATCH_ROWS) throw tooMany(rows.length);

@@ -265,6 +265,19 @@ describe('proton-ledger help, version and batches', () => {
     expect(csv.text.split('\n')[0]).toMatch(/^row,form \(g\),base form \(g\),titrant \(mL\)/);
   });
 
+  it('reads a batch CSV as a spreadsheet program saved it (byte-order mark, CRLF, a blank line, padded fields) with the reader calc and the preview use', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'pl-batch-'));
+    const input = join(dir, 'saved.csv');
+    writeFileSync(input, '\uFEFFbuffer,targetPh,concentrationMm,volumeMl\r\n MES , 6.1 ,"20 mM", 250 \r\n,,,\r\nMOPS,7.2,20,250\r\n');
+    const result = await cli(['recipe', '--batch', input, '-o', join(dir, 'out.jsonl')]);
+    expect(JSON.parse(result.text)).toMatchObject({ rows: 2, planned: 2, failed: 0 });
+    const rows = readFileSync(join(dir, 'out.jsonl'), 'utf8')
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l));
+    expect(Math.abs(rows[0]['pH at use'] - 6.1)).toBeLessThan(0.001);
+  });
+
   it('writes a batch as .xlsx, and solves a JSON-lines batch of compositions', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'pl-batch-'));
     const input = join(dir, 'mixes.jsonl');
