@@ -120,6 +120,11 @@ export function incompleteTable(plan: RecipePlan, read: ActualsRange): (number |
 /** Columns of TITRANT.NEXT. */
 export const TITRANT_NEXT_HEADER = ['add', 'next (mL)', 'first portion (mL)', 'end point reads (pH)', 'expected now (pH)', 'note'] as const;
 
+/** What TITRANT.NEXT says before the bench has a reading: nothing to add yet, and what the meter should read at the end point as planned. */
+export function waitingRow(plan: RecipePlan): (number | string)[] {
+  return ['waiting for a reading', '', '', plan.meter.pH, '', SHEET_MESSAGES.waitingForReading()];
+}
+
 /** The correction as one row. */
 export function titrantNextRow(c: BenchCorrection): (number | string)[] {
   const what = c.action === 'on-target' ? 'nothing' : `${c.stockM} M ${c.add}`;

@@ -41,7 +41,7 @@ import { libraryFor, userRowCount } from './userRange';
 import { MixInput, mixByVolumes, planMix, printedVolume, resolveShelf } from '../chem/mixing';
 import { VOLUMES_ARGUMENT, onShelf, shelfFrom, targetsFrom, volumesFrom } from './stockRange';
 import { BenchState, asMade, benchCorrection } from '../chem/batch';
-import { AS_MADE_HEADER, AS_MADE_ROWS, TITRANT_NEXT_HEADER, asMadeTable, incompleteTable, readActualsRange, titrantNextRow } from './batch';
+import { AS_MADE_HEADER, AS_MADE_ROWS, TITRANT_NEXT_HEADER, asMadeTable, incompleteTable, readActualsRange, titrantNextRow, waitingRow } from './batch';
 
 /** Most rows of the SPECIES table, header included. Excel spills only the rows a solution has; the formula engine, which sizes arrays before computing, pads to this (formulaEngine.ts). 29 species covers H⁺, OH⁻, the strong ions and several polyprotic systems. */
 export const SPECIES_TABLE_ROWS = 30;
@@ -695,8 +695,8 @@ export function mixPh(stocks: any[][], volumes: any[][], finalVolumeMl: any, tem
  * @param targetPh pH wanted at the temperature of use.
  * @param concentrationMm Buffer concentration in the final solution, mM.
  * @param volumeMl Final volume, mL.
- * @param titrantAddedMl Titrant added so far, mL (all portions together).
- * @param readingPh What the meter reads now.
+ * @param titrantAddedMl Titrant added so far, mL (all portions together; blank: waits for a reading).
+ * @param readingPh What the meter reads now (blank: waits for a reading).
  * @param [useTemperatureC] Temperature of use, °C (blank: 25).
  * @param [salts] Two columns: salt form and mM (e.g. "NaCl", 150).
  * @param [options] Two columns: option name and value, as for RECIPE.
@@ -721,6 +721,8 @@ export function titrantNext(
   return memoised('TITRANT.NEXT', [...args, titrantAddedMl, readingPh, actuals], () => {
     const plan = recipePlan(args);
     const read = readActualsRange(actuals);
+    // A record sheet asks before the bench has read the meter: a blank amount or reading waits, it is not an error.
+    if (isBlank(titrantAddedMl) || isBlank(readingPh)) return [waitingRow(plan)];
     const state: BenchState = {
       ...read.bench,
       ...(read.actuals.titrantConcentrationM === undefined ? {} : { titrantConcentrationM: read.actuals.titrantConcentrationM }),

@@ -21,6 +21,7 @@ export const SHEET_MESSAGES = {
   recipeTooLong: (rows: number, limit: number) => `The recipe needs ${rows} rows, more than the ${limit} this table shows; print it with the command line instead.`,
   resultLargerThanSpill: (rows: number, columns: number, spillRows: number, spillColumns: number) =>
     `The result has ${rows} × ${columns} cells, more than the ${spillRows} × ${spillColumns} this formula engine sized for it; please report it.`,
+  waitingForReading: () => 'Enter the titrant added so far and what the meter reads now; the next amount appears here.',
   unexpected: (detail: string) => `Unexpected failure (please report it): ${detail}`,
 } as const;
 

@@ -10,6 +10,9 @@
  * on the sheet (buffer, target, concentration, volume, temperature, salts, options), so the
  * check's formula reads it from there and the record stands alone.
  *
+ * While the pH is adjusted, the bench enters the titrant added so far and the meter's reading,
+ * and a live PROTON.TITRANT.NEXT row says what to add next (it waits while either is blank).
+ *
  * The check reads a three-column actuals block right of the print area (name, value, purity);
  * each of its cells mirrors an input cell with `IF(ISBLANK(cell), "", cell)`, so an input not
  * yet filled is blank to the check rather than 0.
@@ -17,7 +20,7 @@
 import { osmolalityOf } from '../chem/batch';
 import { DEFAULT_PKA_UNCERTAINTY, RecipeInput, RecipePlan } from '../chem/planner';
 import { formatGrams, formatMl } from '../chem/planner/protocol';
-import { AS_MADE_ROWS } from '../functions/batch';
+import { AS_MADE_ROWS, TITRANT_NEXT_HEADER } from '../functions/batch';
 import { call } from '../taskpane/formulas';
 import { CellBlock, CellWrite, RangeRef, WorkbookPort, cellAddress, rangeAddress } from './port';
 
@@ -49,6 +52,8 @@ export interface RecordInputs {
   readonly finalPh: CellAt;
   readonly conductivity25: CellAt;
   readonly tolerancePh: CellAt;
+  /** With a titrant: where the bench enters the titrant added so far and the reading now, and where the next amount (PROTON.TITRANT.NEXT, 1 × 6) appears. */
+  readonly adjusting?: { readonly titrantAddedMl: CellAt; readonly readingPh: CellAt; readonly nextAt: CellAt };
 }
 
 export interface CellAt {
@@ -196,12 +201,25 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
   add(v('Bench temperature (°C)'), v('planned'), v(plan.meter.benchTemperatureC, 'result', '0.0'), v('actual'), blankInput('0.0'));
   const benchTemperatureC = { row: brow, col: 4 };
   actuals.push([v('actual.benchTemperatureC'), f(mirror(benchTemperatureC), 'note')]);
+  let nextRecipeRow: number | undefined;
   const band = (t?.pKaUncertainty ?? DEFAULT_PKA_UNCERTAINTY) + 0.03;
   const mrow = here();
   add(v(`Meter reads in ${formatMl(plan.meter.partVolumeMl)} mL`), v(`pH ${plan.meter.pH.toFixed(2)} ± ${band.toFixed(2)}`, 'result'), v(''), v('actual'), blankInput('0.00'));
   const meterPh = { row: mrow, col: 4 };
   actuals.push([v('actual.meterPh'), f(mirror(meterPh), 'note')]);
-  if (t) add(v(`First portion ${formatMl(t.firstPortionMl)} mL; expected ${formatMl(t.lowMl)}–${formatMl(t.highMl)} mL in all`, 'note'));
+  // The bench's read-back of the mirrored bench temperature: the correction reads the meter at it.
+  actuals.push([v('reading.temperatureC'), f(mirror(benchTemperatureC), 'note')]);
+  let adjusting: RecordInputs['adjusting'];
+  if (t) {
+    add(v(`First portion ${formatMl(t.firstPortionMl)} mL; expected ${formatMl(t.lowMl)}–${formatMl(t.highMl)} mL in all`, 'note'));
+    // While adjusting: the titrant added so far and the meter's reading now give the next amount (PROTON.TITRANT.NEXT), live.
+    const wrow = here();
+    add(v('While adjusting: titrant added so far (mL)'), blankInput('0.00'), v('meter reads now'), blankInput('0.00'));
+    adjusting = { titrantAddedMl: { row: wrow, col: 1 }, readingPh: { row: wrow, col: 3 }, nextAt: { row: wrow + 2, col: 0 } };
+    add(...TITRANT_NEXT_HEADER.map((h) => v(h, 'header')));
+    nextRecipeRow = here();
+    add();
+  }
   add();
 
   // Final checks with acceptance ranges.
@@ -251,6 +269,15 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
   const checkAt = { row: here(), col: 0 };
   const actualsRange = rangeAddress({ row: 0, col: ACTUALS_COL, rowCount: actuals.length, colCount: 3 });
   const cell = (k: string) => cellAddress(recipeAt[k].row, recipeAt[k].col);
+  if (adjusting && nextRecipeRow !== undefined) {
+    const recipeCells = [cell('buffer'), cell('targetPh'), cell('concentrationMm'), cell('volumeMl')];
+    rows[nextRecipeRow] = [
+      f(
+        call('TITRANT.NEXT', ...recipeCells, mirror(adjusting.titrantAddedMl), mirror(adjusting.readingPh), cell('useTemperatureC'), saltRange, optionRange, actualsRange),
+        'result',
+      ),
+    ];
+  }
   add(
     f(`${call('AS.MADE', cell('buffer'), cell('targetPh'), cell('concentrationMm'), cell('volumeMl'), actualsRange, cell('useTemperatureC'), saltRange, optionRange)}`, 'result'),
   );
@@ -287,6 +314,7 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
       finalPh,
       conductivity25,
       tolerancePh: tolPh,
+      ...(adjusting ? { adjusting } : {}),
     },
     checkAt,
   };

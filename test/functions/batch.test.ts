@@ -118,6 +118,19 @@ describe('TITRANT.NEXT', () => {
     expect(Math.abs((row[2] as number) - c.firstPortionMl)).toBeLessThan(SAME);
   });
 
+  it('waits, with no number to act on, while the titrant so far or the reading is blank (a record sheet asks before the meter is read)', () => {
+    for (const [added, reading] of [
+      [null, null],
+      [3, ''],
+      ['', 7.0],
+    ]) {
+      const [row] = titrantNext('HEPES', 7.4, 25, 500, added, reading, 4, [['NaCl', 150]], options);
+      expect(row[0]).toBe('waiting for a reading');
+      expect([row[1], row[2], row[4]]).toEqual(['', '', '']);
+      expect(Math.abs((row[3] as number) - plan.meter.pH)).toBeLessThan(SAME);
+    }
+  });
+
   it('names the argument in an error (field readingPh)', () => {
     expect(errorOf(() => titrantNext('HEPES', 7.4, 25, 500, 3, 'seven', 4, [['NaCl', 150]], options)).field).toBe('readingPh');
   });

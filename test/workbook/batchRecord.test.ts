@@ -1,4 +1,4 @@
-import { asMade, plannedAsWeighed } from '../../src/chem/batch';
+import { asMade, benchCorrection, plannedAsWeighed } from '../../src/chem/batch';
 import { planRecipe, RecipeInput } from '../../src/chem/planner';
 import { AS_MADE_ROWS } from '../../src/functions/batch';
 import { createFormulaEngine } from '../../src/functions/formulaEngine';
@@ -60,6 +60,23 @@ describe('batch record sheet (written through the port, computed by the formula 
     expect(core.pass).toBe(false);
     // The final pH line stays blank until a pH is entered.
     expect(book.value(sheet, layout.inputs.finalPh.row, 5)).toBe('');
+  });
+
+  it("says what to add next while the pH is adjusted: waits until the titrant so far and the reading are entered, then gives the core's correction at the bench temperature entered", async () => {
+    const { set, layout, book, sheet } = await record();
+    const at = layout.inputs.adjusting!;
+    const row = () => [0, 1, 2, 3, 4, 5].map((c) => book.value(sheet, at.nextAt.row, at.nextAt.col + c));
+    expect(row()[0]).toBe('waiting for a reading');
+    expect(Math.abs((row()[3] as number) - plan.meter.pH)).toBeLessThan(1e-12);
+    set(at.titrantAddedMl, 15);
+    expect(row()[0]).toBe('waiting for a reading');
+    set(at.readingPh, 7.6);
+    set(layout.inputs.benchTemperatureC, 21);
+    const core = benchCorrection(plan, { titrantMl: 15, readingPh: 7.6, temperatureC: 21 });
+    expect(row()[0]).toBe('1 M hydrochloric acid');
+    expect(Math.abs((row()[1] as number) - core.nextMl)).toBeLessThan(1e-9);
+    expect(Math.abs((row()[2] as number) - core.firstPortionMl)).toBeLessThan(1e-9);
+    expect(Math.abs((row()[3] as number) - core.endPointPh)).toBeLessThan(1e-9);
   });
 
   it('a measured final pH outside the tolerance fails its own line and the batch; a wider tolerance passes both', async () => {
