@@ -151,7 +151,9 @@ export const MESSAGES = {
   causeStockConcentration: (effectiveM: number, statedM: number) =>
     `Likely cause, the titrant stock: the reading fits a stock of ${effectiveM.toPrecision(3)} M rather than ${statedM} M; standardise it.`,
   causeHydrate: (plannedForm: string, otherForm: string) =>
-    `Likely cause, the form weighed: the reading fits ${otherForm} weighed in place of ${plannedForm} (another hydrate or salt form); check the bottle's label.`,
+    `Likely cause, the form weighed: the reading fits ${otherForm} weighed in place of ${plannedForm} (another hydrate of the same salt); check the bottle's label.`,
+  causeSaltForm: (plannedForm: string, otherForm: string) =>
+    `Likely cause, the bottle: the reading fits ${otherForm} weighed in place of ${plannedForm} (another form of the same buffer, with a different proton or counter-ion content); check the label against the recipe.`,
   causeTemperature: (fittedC: number, statedC: number) =>
     `Likely cause, the temperature: the reading fits the solution at ${fittedC.toFixed(1)} °C rather than ${statedC} °C; read the thermometer in the solution and let it settle.`,
   causeCalibration: (offsetPh: number, nearPh: number) =>

@@ -28,7 +28,7 @@ import { Titrant, titrantForPh, withTitrant } from '../titration';
 import { ChemWarning, warning } from '../warnings';
 import { BENCH_TEMPERATURE_SLACK_C, METER_RESOLUTION_PH } from './asMade';
 import { BenchCorrection, BenchState, LikelyCause } from './types';
-import { WeighedItem, madeVolumeMlOf, plannedAsWeighed, readWeighed, shiftBuffer, siblingForms, titrantOf, weighedComposition } from './weighed';
+import { WeighedItem, madeVolumeMlOf, plannedAsWeighed, readWeighed, shiftBuffer, saltForms, siblingForms, titrantOf, weighedComposition } from './weighed';
 
 /** Off the plan, the first portion is this share of the next amount: the model was wrong once, so approach in halves (our rule). */
 export const OFF_PLAN_PORTION_SHARE = 0.5;
@@ -155,6 +155,13 @@ export function benchCorrection(plan: RecipePlan, state: BenchState, library: Su
         const ph = solvePh(now(addedMol, weighedComposition(plan, swapped, volumeMl, temperatureC, library)));
         if (Math.abs(ph - readingPh) <= fitTol) {
           causes.push({ cause: 'hydrate', fits: other.name, warning: warning('causeHydrate', MESSAGES.causeHydrate(item.form.name, other.name), 'actual.weighed') });
+        }
+      }
+      for (const other of saltForms(item.form, library)) {
+        const swapped: WeighedItem[] = items.map((x) => (x === item ? { ...x, form: other, moles: (x.moles * x.form.molarMass) / other.molarMass } : x));
+        const ph = solvePh(now(addedMol, weighedComposition(plan, swapped, volumeMl, temperatureC, library)));
+        if (Math.abs(ph - readingPh) <= fitTol) {
+          causes.push({ cause: 'salt form', fits: other.name, warning: warning('causeSaltForm', MESSAGES.causeSaltForm(item.form.name, other.name), 'actual.weighed') });
         }
       }
     }

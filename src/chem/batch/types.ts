@@ -119,7 +119,7 @@ export interface BenchState {
 
 /** A likely cause of a reading off the plan, with the value that would explain it. */
 export interface LikelyCause {
-  readonly cause: 'stock concentration' | 'hydrate' | 'temperature' | 'calibration';
+  readonly cause: 'stock concentration' | 'hydrate' | 'salt form' | 'temperature' | 'calibration';
   readonly warning: ChemWarning;
   /** The stock M, the other form's name, the °C or the pH offset that fits the reading. */
   readonly fits: number | string;

@@ -48,6 +48,13 @@ export function siblingForms(form: LibraryForm, library: SubstanceLibrary): Libr
   return record.forms.map((f) => library.findForm(f.name)).filter((f) => f.name !== form.name && sameChemistry(f, form) && Math.abs(f.molarMass - form.molarMass) > 1e-6);
 }
 
+/** Other forms of the same substance with another chemistry (the free acid for its sodium salt, tris base for tris HCl): a bottle picked up for the planned one. */
+export function saltForms(form: LibraryForm, library: SubstanceLibrary): LibraryForm[] {
+  const record = library.records().find((r) => r.name === form.substance);
+  if (!record) return [];
+  return record.forms.map((f) => library.findForm(f.name)).filter((f) => f.name !== form.name && !sameChemistry(f, form));
+}
+
 /** The weighed forms as planned (planned grams and purity). */
 export function plannedAsWeighed(plan: RecipePlan): WeighedActual[] {
   return plannedWeighings(plan).map((c) => ({ form: c.name, grams: c.grams!, purityPercent: c.purityPercent ?? 100 }));

@@ -193,6 +193,19 @@ function simulatedReading(plan: RecipePlan, grams: { form: string; grams: number
 }
 
 describe('our own bench mishaps, each detected and explained', () => {
+  it('wrong bottle: tris hydrochloride weighed by the tris base plan — the reading points to the salt form, not to a hydrate', () => {
+    const plan = planRecipe(RECIPES[0][1]);
+    const planned = plan.components.filter((c) => c.grams !== undefined);
+    const weighed = planned.map((c) => ({ form: c.name === 'tris base' ? 'tris hydrochloride' : c.name, grams: c.grams! }));
+    const first = plan.titration!.firstPortionMl;
+    const reading = simulatedReading(plan, weighed, (first / 1000) * 1, plan.meter.partVolumeMl, plan.meter.benchTemperatureC);
+    const c = benchCorrection(plan, { titrantMl: first, readingPh: reading });
+    expect(c.offPlan).toBe(true);
+    expect(codes(c.warnings)).toEqual(expect.arrayContaining(['readingOffPlan', 'causeSaltForm', 'causeCalibration']));
+    expect(c.causes.find((x) => x.cause === 'salt form')!.fits).toBe('tris hydrochloride');
+    expect(codes(c.warnings)).not.toContain('causeHydrate');
+  });
+
   it('wrong hydrate: anhydrous sodium acetate weighed by the trihydrate plan — the as-made check fails the amount and names the form; the reading points to the hydrate', () => {
     const plan = planRecipe(RECIPES[2][1]);
     const planned = plan.components[0];
