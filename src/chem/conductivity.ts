@@ -12,14 +12,15 @@
  * between the two ions of a 1:1 salt and scaled by z² per mole of ion (as in Onsager's
  * equation for any binary salt), and relaxation B1·λ° times r_i, Onsager's factor
  * |z₁z₂| q/(1 + √q) for the salt of ion i with the solution's mean counter-ion, relative
- * to its 1:1 value (r = 1 in any mixture of 1:1 salts), with an ion-size denominator 1 + B√I as in the extended form of Robinson &
- * Stokes (Electrolyte Solutions, 2nd ed. 1959, ch. 7) and in the per-ion equation of
+ * to its 1:1 value (r = 1 in any mixture of 1:1 salts); and an ion-size denominator
+ * 1 + B√I as in the extended form of Robinson & Stokes (Electrolyte Solutions, 2nd ed.
+ * 1959, ch. 7) and in the per-ion equation of
  * McCleskey et al. (2012). B1 and B2 follow from the water's permittivity, viscosity and
  * temperature; B = 1.5 (L/mol)^½ is McCleskey's fitted value for K⁺ and Cl⁻.
  *
- * Temperature: λ°_i(T) = λ°_i(25 °C) × r_i(T). For the ions McCleskey et al. (2012) fitted
- * from 0 to 95 °C, r_i is the ratio of their λ°(t) polynomial to its 25 °C value; for every
- * other ion r = η(25 °C)/η(T) (Walden's rule, best for large ions such as the buffer ions).
+ * Temperature: λ°_i(T) = λ°_i(25 °C) × s_i(T). For the ions McCleskey et al. (2012) fitted
+ * from 0 to 95 °C, s_i is the ratio of their λ°(t) polynomial to its 25 °C value; for every
+ * other ion s = η(25 °C)/η(T) (Walden's rule, best for large ions such as the buffer ions).
  *
  * Special cases: neutral species and zwitterions of net charge 0 carry no current. An ion
  * with no published λ° gets a stated default per unit charge and is listed in `estimates`.
