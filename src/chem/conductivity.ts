@@ -6,18 +6,21 @@
  * molar conductivity of the ion per mole of ion, S cm² mol⁻¹; Σ c λ then comes out in
  * mS/cm). Each ion's conductivity falls with the ionic strength I (mol/L) as
  *
- *   λ_i = λ°_i(T) − A_i(T) √I / (1 + B √I),   A_i = z_i² (B1(T) λ°_i(T) + B2(T)/2),
+ *   λ_i = λ°_i(T) − A_i(T) √I / (1 + B √I),   A_i = r_i B1(T) λ°_i(T) + z_i² B2(T)/2,
  *
- * the Debye–Hückel–Onsager limiting law written ion by ion (relaxation B1·λ° and
- * electrophoresis B2, split between the two ions of a 1:1 salt and scaled by z² for other
- * charges), with an ion-size denominator 1 + B√I as in the extended form of Robinson &
- * Stokes (Electrolyte Solutions, 2nd ed. 1959, ch. 7) and in the per-ion equation of
+ * the Debye–Hückel–Onsager limiting law written ion by ion: electrophoresis B2, split
+ * between the two ions of a 1:1 salt and scaled by z² per mole of ion (as in Onsager's
+ * equation for any binary salt), and relaxation B1·λ° times r_i, Onsager's factor
+ * |z₁z₂| q/(1 + √q) for the salt of ion i with the solution's mean counter-ion, relative
+ * to its 1:1 value (r = 1 in any mixture of 1:1 salts); and an ion-size denominator
+ * 1 + B√I as in the extended form of Robinson & Stokes (Electrolyte Solutions, 2nd ed.
+ * 1959, ch. 7) and in the per-ion equation of
  * McCleskey et al. (2012). B1 and B2 follow from the water's permittivity, viscosity and
  * temperature; B = 1.5 (L/mol)^½ is McCleskey's fitted value for K⁺ and Cl⁻.
  *
- * Temperature: λ°_i(T) = λ°_i(25 °C) × r_i(T). For the ions McCleskey et al. (2012) fitted
- * from 0 to 95 °C, r_i is the ratio of their λ°(t) polynomial to its 25 °C value; for every
- * other ion r = η(25 °C)/η(T) (Walden's rule, best for large ions such as the buffer ions).
+ * Temperature: λ°_i(T) = λ°_i(25 °C) × s_i(T). For the ions McCleskey et al. (2012) fitted
+ * from 0 to 95 °C, s_i is the ratio of their λ°(t) polynomial to its 25 °C value; for every
+ * other ion s = η(25 °C)/η(T) (Walden's rule, best for large ions such as the buffer ions).
  *
  * Special cases: neutral species and zwitterions of net charge 0 carry no current. An ion
  * with no published λ° gets a stated default per unit charge and is listed in `estimates`.
@@ -255,6 +258,40 @@ export function onsagerCoefficients(temperatureC: number): { b1: number; b2: num
   return { b1: 8.204e5 / Math.pow(epsT, 1.5), b2: 82.48 / (etaPoise * Math.sqrt(epsT)) };
 }
 
+/** Onsager's relaxation factor |z₁z₂| q/(1 + √q) of a 1:1 salt (q = ½): the factor B1 already carries. */
+const RELAXATION_1_1 = 0.5 / (1 + Math.SQRT1_2);
+
+/** The counter-ions an ion moves against, as one mean ion: charge and λ° per equivalent, averaged over the opposite ions weighted by their equivalents. */
+export interface MeanCounterIon {
+  readonly charge: number;
+  readonly lambdaPerEquivalent: number;
+}
+
+/**
+ * Relaxation factor of an ion relative to a 1:1 salt.
+ *
+ * Method: Onsager's limiting law for a binary salt of charges z₁, z₂ carries the relaxation
+ * term |z₁z₂| q/(1 + √q) · B′λ°, with q = |z₁z₂|/(|z₁| + |z₂|) · (λ₁ + λ₂)/(|z₂|λ₁ + |z₁|λ₂)
+ * and λ per equivalent (Robinson & Stokes 1959, eq. 7.36 (memory)); B1 is that term for
+ * z = 1 (q = ½). In a mixture the ion is paired with the mean counter-ion of the solution:
+ * exact for a single salt (Na₂HPO₄: r = 1.85 for both ions, where z² scaling gave 4 for
+ * HPO₄²⁻ and 1 for Na⁺) and 1 in any mixture of 1:1 salts.
+ *
+ * @param charge - |z| of the ion
+ * @param lambdaPerEquivalent - its λ° per equivalent, S cm² mol⁻¹
+ * @param counter - the mean counter-ion (none: no relaxation partner, factor 1)
+ * @returns r, 1 for a 1:1 salt
+ */
+export function relaxationFactor(charge: number, lambdaPerEquivalent: number, counter: MeanCounterIon | undefined): number {
+  if (!counter) return 1;
+  const z1 = charge;
+  const z2 = counter.charge;
+  const l1 = lambdaPerEquivalent;
+  const l2 = counter.lambdaPerEquivalent;
+  const q = ((z1 * z2) / (z1 + z2)) * ((l1 + l2) / (z2 * l1 + z1 * l2));
+  return (z1 * z2 * q) / (1 + Math.sqrt(q)) / RELAXATION_1_1;
+}
+
 function entryOf(name: string, system: string | undefined, charge: number): IonEntry | undefined {
   if (system === undefined) return STRONG_ION_LAMBDA[name];
   return SYSTEM_ION_LAMBDA[`${system}|${charge}`];
@@ -281,20 +318,40 @@ export function conductivityOf(result: SpeciationResult): ConductivityResult {
   const walden = waterViscosity(25) / waterViscosity(t);
   const sqrtI = Math.sqrt(Math.max(0, result.ionicStrengthM));
   const x = sqrtI / (1 + ION_SIZE_B * sqrtI);
+  // λ° of every charged species first: each ion's relaxation term needs its counter-ions'.
+  const charged = result.species
+    .filter((s) => s.charge !== 0 && s.concentrationM !== 0)
+    .map((s) => {
+      const entry = entryOf(s.name, s.system, s.charge);
+      const z = Math.abs(s.charge);
+      const lambda25 = entry?.lambda25 ?? DEFAULT_LAMBDA_PER_CHARGE * z;
+      return { s, z, estimated: entry === undefined, lambda0: lambda25 * temperatureRatio(entry, t, walden) };
+    });
+  const meanIon = (sign: number): MeanCounterIon | undefined => {
+    let equivalents = 0;
+    let charge = 0;
+    let lambda = 0;
+    for (const c of charged) {
+      if (Math.sign(c.s.charge) !== sign) continue;
+      const eq = c.s.concentrationM * c.z;
+      equivalents += eq;
+      charge += eq * c.z;
+      lambda += eq * (c.lambda0 / c.z);
+    }
+    return equivalents > 0 ? { charge: charge / equivalents, lambdaPerEquivalent: lambda / equivalents } : undefined;
+  };
+  const meanCation = meanIon(1);
+  const meanAnion = meanIon(-1);
   const ions: IonConductivity[] = [];
   let total = 0;
-  for (const s of result.species) {
-    if (s.charge === 0 || s.concentrationM === 0) continue;
-    const entry = entryOf(s.name, s.system, s.charge);
-    const z = Math.abs(s.charge);
-    const lambda25 = entry?.lambda25 ?? DEFAULT_LAMBDA_PER_CHARGE * z;
-    const lambda0 = lambda25 * temperatureRatio(entry, t, walden);
-    const slope = z * z * (b1 * lambda0 + b2 / 2);
+  for (const { s, z, estimated, lambda0 } of charged) {
+    const r = relaxationFactor(z, lambda0 / z, s.charge > 0 ? meanAnion : meanCation);
+    const slope = r * b1 * lambda0 + (z * z * b2) / 2;
     // The ion-size denominator keeps λ positive at any I; the floor guards an extrapolation far beyond 1 M.
     const lambda = Math.max(0, lambda0 - slope * x);
     const contribution = s.concentrationM * lambda;
     total += contribution;
-    ions.push({ species: s.name, charge: s.charge, concentrationM: s.concentrationM, lambda, contributionMsPerCm: contribution, estimated: entry === undefined });
+    ions.push({ species: s.name, charge: s.charge, concentrationM: s.concentrationM, lambda, contributionMsPerCm: contribution, estimated });
   }
   const estimates: ConductivityEstimate[] = ions
     .filter((i) => i.estimated)

@@ -455,7 +455,7 @@ function recipeInput(buffer: any, targetPh: any, concentrationMm: any, volumeMl:
 }
 
 /**
- * One row of a recipe table on any route: grams of the form (of the acid and the base form, weighing two), titrant mL with its band, what the meter must read at the bench (of the stock itself, making a stock), pH at use, capacity, ionic strength, ideal osmolarity, grams of a salt added to a target, stock per batch and warnings. Spills 1 row × 14 columns.
+ * One row of a recipe table on any route: grams of the form (of the acid and the base form, weighing two), titrant mL with its band, what the meter must read at the bench (of the stock itself, making a stock), pH at use, capacity, ionic strength, ideal osmolarity, osmolality (mOsm/kg), conductivity (mS/cm) at the temperature of use and at 25 °C, grams of a salt added to a target, stock per batch and warnings. Spills 1 row × 17 columns.
  * @customfunction RECIPE.ROW RECIPE.ROW
  * @helpurl https://localhost:3000/help/functions.html#recipe-row
  * @param buffer Buffer system (e.g. "HEPES", "tris", "phosphate").

@@ -17,6 +17,9 @@ export const RECIPE_ROW_HEADER = [
   'acid per 0.1 pH (mM)',
   'ionic strength (mM)',
   'ideal osmolarity (mOsm/L)',
+  'osmolality (mOsm/kg)',
+  'conductivity at use temp. (mS/cm)',
+  'conductivity at 25 °C (mS/cm)',
   'salt to target (g)',
   'stock per batch (mL)',
   'warnings',
@@ -26,7 +29,9 @@ export const RECIPE_ROW_HEADER = [
  * A plan's row: grams of the buffer's form (the acid form on the two-forms route, with the
  * base form's grams beside it; blank on the other routes), titrant mL and its band, the meter
  * reading (of the stock itself on the stock route), pH at use, capacity both ways, ionic
- * strength (mM), ideal osmolarity, grams of a salt added to a target (blank without one),
+ * strength (mM), ideal osmolarity, osmolality as an osmometer reads it, the predicted
+ * conductivity at the temperature of use and at 25 °C (of the finished buffer: the working
+ * dilution on the stock route), grams of a salt added to a target (blank without one),
  * stock per batch of working buffer (blank off the stock route) and the warnings as text.
  *
  * @param plan - a plan from planRecipe
@@ -49,6 +54,9 @@ export function recipeRowValues(plan: RecipePlan): (number | string)[] {
     p.acidMmPerTenthPh,
     p.ionicStrengthM * 1000,
     p.idealOsmolarityMosm,
+    p.osmolalityMosmKg,
+    p.conductivityMsPerCm,
+    p.conductivity25MsPerCm,
     plan.components.find((c) => c.toTarget)?.grams ?? '',
     plan.stock?.stockPerBatchMl ?? '',
     plan.warnings.map((w) => w.message).join(' '),

@@ -82,15 +82,18 @@ export const LAYOUT = {
     'Capacity (mM acid per −0.1 pH)',
     'Ionic strength (mM)',
     'Ideal osmolarity (mOsm/L)',
+    'Osmolality (mOsm/kg)',
+    'Conductivity at use temp. (mS/cm)',
+    'Conductivity at 25 °C (mS/cm)',
     'Salt to target (g)',
     'Stock per batch (mL)',
     'Warnings',
   ],
-  chartCol: 19,
+  chartCol: 22,
   chartWidthCols: 9,
   chartHeightRows: 17,
   /** First column of the working area to the right of the charts. */
-  workCol: 29,
+  workCol: 32,
 } as const;
 
 export const COL = {
@@ -110,13 +113,16 @@ export const COL = {
   capacityAcid: 12,
   ionicStrength: 13,
   osmolarity: 14,
-  saltTargetGrams: 15,
-  stockPerBatchMl: 16,
-  warnings: 17,
+  osmolality: 15,
+  conductivity: 16,
+  conductivity25: 17,
+  saltTargetGrams: 18,
+  stockPerBatchMl: 19,
+  warnings: 20,
 } as const;
 
 /** Number formats of the RECIPE.ROW spill, in its column order (form g … warnings). */
-const RECIPE_ROW_FORMATS = ['0.000', '0.000', '0.00', '0.00', '0.00', '0.00', '0.00', '0.00', '0.00', '0.0', '0', '0.000', '0.0', ''] as const;
+const RECIPE_ROW_FORMATS = ['0.000', '0.000', '0.00', '0.00', '0.00', '0.00', '0.00', '0.00', '0.00', '0.0', '0', '0', '0.00', '0.00', '0.000', '0.0', ''] as const;
 
 /** The table's headers for a route: the result columns say what they hold on that route. */
 export function columnsFor(route: TableRoute): string[] {
@@ -312,7 +318,7 @@ export function planRecipeSheet(request: TableRequest, options: { builtWith: str
     const cells: CellWrite[] = [input(tr.targetPh, '0.00'), input(tr.useTemperatureC, '0.0'), input(tr.concentrationMm, '0.0'), input(request.volumeMl, '0.0'), ...spill];
     return { row, col: 0, cells: [cells] };
   });
-  const base = { baseName: sheetBaseName(request), head, rows, columnWidths: [21, 16, 12, 22, 11, 11, 10, 10, 10, 13, 11, 13, 13, 11, 12, 11, 11, 60, 2] };
+  const base = { baseName: sheetBaseName(request), head, rows, columnWidths: [21, 16, 12, 22, 11, 11, 10, 10, 10, 13, 11, 13, 13, 11, 12, 12, 14, 13, 11, 11, 60, 2] };
   // Curves and charts follow the titration of the first row: only the titrate route has one.
   if (request.route !== 'titrate') {
     tail.push({

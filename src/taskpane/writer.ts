@@ -10,7 +10,7 @@ import { libraryFor } from '../functions/userRange';
 import { CellBlock, CellValue, CellWrite, PaneSettings, WorkbookPort, parseRangeText, qualifiedAddress, uniqueName } from '../workbook/port';
 import { checkForm, FormInput, FieldErrors, settingsOf, TableRequest } from './form';
 import { PROTOCOL_LINK, PROTOCOL_ROW_CELL, PROTOCOL_WIDTHS, UnmakeableRow, planRows, protocolBlocks } from './protocol';
-import { planRecipeSheet, SETTING_ROWS, SETTING_VALUE_COL, settingRow, tableRows, LAYOUT } from './recipeTable';
+import { COL, planRecipeSheet, SETTING_ROWS, SETTING_VALUE_COL, settingRow, tableRows, LAYOUT } from './recipeTable';
 
 /**
  * Table rows written per port call: keeps each Excel batch small, and each recalculation of
@@ -366,7 +366,11 @@ export async function valuesCopy(port: WorkbookPort, options: { version: string;
   for (let i = 0; i < copy.cells.length; i += ROWS_PER_BATCH) {
     await port.writeTable(sheet, { row: copy.row + i, col: 0, cells: copy.cells.slice(i, i + ROWS_PER_BATCH) });
   }
-  await port.setColumnWidths(sheet, [24, 11, 9, 9, 11, 11, 11, 10, 10, 10, 13, 11, 13, 11, 12, 44]);
+  // The labels' column wide, the table's result columns narrow, its warnings column wide.
+  await port.setColumnWidths(
+    sheet,
+    Array.from({ length: COL.warnings + 1 }, (_, i) => (i === 0 ? 24 : i === COL.warnings ? 44 : 11)),
+  );
   await port.activateSheet(sheet);
   return { sheet, source };
 }

@@ -1,6 +1,8 @@
 import { conductivityAt, conductivityOf, speciate, waterDensity, waterViscosity } from '../../src/chem';
 import type { Composition } from '../../src/chem';
+import { relaxationFactor } from '../../src/chem/conductivity';
 import { PHOSPHATE, expectClose } from './fixtures';
+import { CRC_TABLE_TEMPERATURE_C, K2HPO4, KH2PO4, NA2HPO4, NACL, TableRow, molarityOf, tableRow } from './crcConductivityTable';
 
 /** Warnings are compared by code (and field), never by message text. */
 const codes = (ws: readonly { code: string }[]) => ws.map((w) => w.code);
@@ -15,6 +17,10 @@ const KCL_1_TOLERANCE = 0.05;
 const KCL_TEMPERATURE_TOLERANCE = 0.015;
 /** NaCl molar conductivities up to 0.1 mol/L: the same model with Na⁺ for K⁺. */
 const NACL_TOLERANCE = 0.03;
+/** NaCl 0.09–0.35 mol/L at 20 °C against the CRC mass-percent table: values of three figures, the density conversion, and the ion-size term's extrapolation beyond 0.1 M. */
+const NACL_CRC_TOLERANCE = 0.03;
+/** Phosphate salts 0.03–0.15 mol/L: λ° of H₂PO₄⁻ and HPO₄²⁻ are uncertain by several percent, the model forms no ion pairs, and the table gives two or three figures. */
+const PHOSPHATE_CRC_TOLERANCE = 0.05;
 /** Water viscosity against the IAPWS values: the Kestin fit is good to about 0.1 % over 0–60 °C. */
 const VISCOSITY_TOLERANCE = 0.002;
 
@@ -73,6 +79,53 @@ describe('NaCl molar conductivity at 25 °C (Vanýsek, CRC Handbook, "Equivalent
   ])('%p mol/L: Λ = %p S cm²/mol within 3 %', (c, expected) => {
     const k = conductivityAt(salt('Na+', 'Cl-', c, 25)).conductivityMsPerCm;
     expectRelative(`Λ(NaCl ${c} M)`, k / c, expected, NACL_TOLERANCE);
+  });
+});
+
+/** The solution of a table row at 20 °C: the salt's ions, or its phosphate with its cations. */
+function tableSolution(r: TableRow): Composition {
+  const c = molarityOf(r);
+  const cations = { [r.salt.cation]: r.salt.cationsPerFormula * c };
+  if (r.salt.anion === 'Cl-') return { systems: [], strongIons: { ...cations, 'Cl-': c }, temperatureC: CRC_TABLE_TEMPERATURE_C };
+  return { systems: [{ ...PHOSPHATE, totalM: c }], strongIons: cations, temperatureC: CRC_TABLE_TEMPERATURE_C };
+}
+
+describe('NaCl above 0.1 mol/L at 20 °C (CRC Handbook, "Electrical conductivity of aqueous solutions", copy in ugognw/pchemdb; densities from CRC "Concentrative properties of aqueous solutions", copy in amosonabike/CRC-Solution-Properties-)', () => {
+  it.each([0.5, 1, 2])('%p % NaCl reads the published κ within 3 %', (massPercent) => {
+    const r = tableRow(NACL, massPercent);
+    const k = conductivityAt(tableSolution(r)).conductivityMsPerCm;
+    expectRelative(`κ(NaCl ${massPercent} %, ${molarityOf(r).toFixed(4)} M, 20 °C)`, k, r.conductivityMsPerCm, NACL_CRC_TOLERANCE);
+  });
+});
+
+describe('phosphate salts at 20 °C (CRC Handbook, "Electrical conductivity of aqueous solutions", copy in ugognw/pchemdb; densities from CRC "Concentrative properties of aqueous solutions", copy in amosonabike/CRC-Solution-Properties-)', () => {
+  it.each([
+    ['KH2PO4', 0.5, KH2PO4],
+    ['KH2PO4', 1, KH2PO4],
+    ['KH2PO4', 2, KH2PO4],
+    ['K2HPO4', 0.5, K2HPO4],
+    ['K2HPO4', 1, K2HPO4],
+    ['K2HPO4', 2, K2HPO4],
+    ['Na2HPO4', 1, NA2HPO4],
+    ['Na2HPO4', 2, NA2HPO4],
+  ] as const)('%s %p % reads the published κ within 5 %', (formula, massPercent, salt) => {
+    const r = tableRow(salt, massPercent);
+    const k = conductivityAt(tableSolution(r)).conductivityMsPerCm;
+    expectRelative(`κ(${formula} ${massPercent} %, ${molarityOf(r).toFixed(4)} M, 20 °C)`, k, r.conductivityMsPerCm, PHOSPHATE_CRC_TOLERANCE);
+  });
+});
+
+describe("Onsager's relaxation factor for unsymmetrical salts (Robinson & Stokes 1959, eq. 7.36)", () => {
+  it('is 1 for a 1:1 salt whatever the two ions', () => {
+    expectClose('r(1:1)', relaxationFactor(1, 50.1, { charge: 1, lambdaPerEquivalent: 76.3 }), 1, 1e-12);
+  });
+
+  it('is the same for both ions of a 2:1 salt: 1.85 for Na₂HPO₄ by hand from eq. 7.36, where z² scaling gave 4 for HPO₄²⁻ and 1 for Na⁺', () => {
+    // Na⁺ 50.1 and ½HPO₄²⁻ 57 S cm²/mol per equivalent: q = (2/3)·107.1/157.2 = 0.4542, r = 2q/(1 + √q)/0.2929 = 1.853.
+    const na = relaxationFactor(1, 50.1, { charge: 2, lambdaPerEquivalent: 57 });
+    const hpo4 = relaxationFactor(2, 57, { charge: 1, lambdaPerEquivalent: 50.1 });
+    expectClose('r(Na⁺) = r(HPO₄²⁻)', na, hpo4, 1e-12);
+    expectClose('r(Na₂HPO₄)', na, 1.853, 0.001);
   });
 });
 

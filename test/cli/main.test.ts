@@ -261,8 +261,12 @@ describe('proton-ledger help, version and batches', () => {
     // HCl lowers the pH of HEPES free acid: the target is out of reach, said in its row.
     expect(rows[2].error).toMatchObject({ kind: 'infeasible-target', code: 'unreachablePh' });
     expect(rows[3]['titrant (mL)']).toBeGreaterThan(0);
+    // QC figures: the 4 °C row's conductivity at use reads below its conductivity at 25 °C.
+    expect(rows[0]['conductivity at use temp. (mS/cm)']).toBeLessThan(rows[0]['conductivity at 25 °C (mS/cm)']);
+    expect(rows[0]['osmolality (mOsm/kg)']).toBeGreaterThan(0);
     const csv = await cli(['recipe', '--batch', input]);
     expect(csv.text.split('\n')[0]).toMatch(/^row,form \(g\),base form \(g\),titrant \(mL\)/);
+    expect(csv.text.split('\n')[0]).toContain('ideal osmolarity (mOsm/L),osmolality (mOsm/kg),conductivity at use temp. (mS/cm),conductivity at 25 °C (mS/cm),salt to target (g)');
   });
 
   it('reads a batch CSV as a spreadsheet program saved it (byte-order mark, CRLF, a blank line, padded fields) with the reader calc and the preview use', async () => {

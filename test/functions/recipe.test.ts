@@ -42,6 +42,29 @@ describe('RECIPE.ROW', () => {
     expect(r[col('warnings')]).toBe('');
   });
 
+  it("gives the planner's osmolality and conductivity at the temperature of use and at 25 °C, the cold one reading lower", () => {
+    const plan = planRecipe({
+      buffer: 'HEPES',
+      targetPh: 7.4,
+      concentrationMm: 25,
+      volumeMl: 500,
+      form: 'HEPES free acid',
+      titrant: { form: 'NaOH', concentrationM: 1 },
+      useTemperatureC: 4,
+      benchTemperatureC: 22,
+      partVolumeFraction: 0.8,
+      salts: [{ form: 'NaCl', concentrationMm: 150 }],
+    });
+    const [r] = row();
+    expect(Math.abs((r[col('osmolality (mOsm/kg)')] as number) - plan.predictions.osmolalityMosmKg)).toBeLessThan(SAME);
+    expect(Math.abs((r[col('conductivity at use temp. (mS/cm)')] as number) - plan.predictions.conductivityMsPerCm)).toBeLessThan(SAME);
+    expect(Math.abs((r[col('conductivity at 25 °C (mS/cm)')] as number) - plan.predictions.conductivity25MsPerCm)).toBeLessThan(SAME);
+    // Ions move slower in cold water: κ at 4 °C is well below κ at 25 °C (about 2 % per °C, CRC).
+    expect(r[col('conductivity at use temp. (mS/cm)')] as number).toBeLessThan(0.7 * (r[col('conductivity at 25 °C (mS/cm)')] as number));
+    // Osmolality sits below the ideal osmolarity (osmotic coefficient below 1).
+    expect(r[col('osmolality (mOsm/kg)')] as number).toBeLessThan(r[col('ideal osmolarity (mOsm/L)')] as number);
+  });
+
   it('accepts numbers as text, blank optional arguments and mixed-case names', () => {
     const [r] = recipeRow(
       'hepes',
@@ -125,6 +148,9 @@ describe('RECIPE.ROW', () => {
     const [rs] = recipeRow('MES', 6.0, 50, 1000, '', undefined, stockOptions);
     expect(Math.abs((rs[col('meter reads (pH)')] as number) - stock.meter.pH)).toBeLessThan(SAME);
     expect(rs[col('stock per batch (mL)')]).toBe(100);
+    // On the stock route the conductivity columns are the working dilution's, not the stock's.
+    expect(Math.abs((rs[col('conductivity at 25 °C (mS/cm)')] as number) - stock.predictions.conductivity25MsPerCm)).toBeLessThan(SAME);
+    expect(rs[col('conductivity at 25 °C (mS/cm)')] as number).toBeLessThan(stock.stock!.stockConductivity25MsPerCm);
     expect(Math.abs((rs[col('titrant (mL)')] as number) - stock.titration!.volumeMl)).toBeLessThan(SAME);
     const [rt] = recipeRow('HEPES', 7.4, 25, 500, '', undefined, [
       ['saltTarget.form', 'NaCl'],

@@ -46,7 +46,15 @@ describe('recipe table in the preview workbook', () => {
     expect(v(COL.titrantMl) as number).toBeGreaterThan(0);
     expect(v(COL.titrantLowMl) as number).toBeLessThan(v(COL.titrantMl) as number);
     expect(v(COL.titrantHighMl) as number).toBeGreaterThan(v(COL.titrantMl) as number);
-    for (const col of [COL.meter, COL.check, COL.capacity, COL.ionicStrength, COL.osmolarity]) expect(typeof v(col)).toBe('number');
+    for (const col of [COL.meter, COL.check, COL.capacity, COL.ionicStrength, COL.osmolarity, COL.osmolality, COL.conductivity, COL.conductivity25])
+      expect(typeof v(col)).toBe('number');
+    // The QC columns sit under their headers: a conductivity in mS/cm, an osmolality in mOsm/kg.
+    expect(book.value(result.sheet, LAYOUT.tableHeaderRow, COL.conductivity)).toBe('Conductivity at use temp. (mS/cm)');
+    expect(book.value(result.sheet, LAYOUT.tableHeaderRow, COL.conductivity25)).toBe('Conductivity at 25 °C (mS/cm)');
+    expect(book.value(result.sheet, LAYOUT.tableHeaderRow, COL.warnings)).toBe('Warnings');
+    // One number format per spill column: the conductivities to 0.01 mS/cm, the warnings styled as warnings.
+    expect(book.meta(result.sheet, row, COL.conductivity)?.numberFormat).toBe('0.00');
+    expect(book.meta(result.sheet, row, COL.warnings)?.style).toBe('warning');
     // Check column: the row's recipe (salt included) solves back to its target within 0.001 pH.
     expect(Math.abs((v(COL.check) as number) - 7.0)).toBeLessThan(0.001);
     // The table's titrant volume is the planner's, salt included.
@@ -461,5 +469,19 @@ describe('the settings block is the row formulas’ options range', () => {
     const { recipeFieldOf } = jest.requireActual('../../src/chem/input') as typeof import('../../src/chem/input');
     const { OPTION_SETTINGS } = jest.requireActual('../../src/taskpane/recipeTable') as typeof import('../../src/taskpane/recipeTable');
     for (const label of OPTION_SETTINGS) expect(recipeFieldOf(label).label).toBe(label);
+  });
+});
+
+describe('the table’s result columns are RECIPE.ROW’s spill', () => {
+  it('has one header, one COL entry and one number format per RECIPE.ROW column, in its order, the charts clear of the warnings', () => {
+    const { RECIPE_ROW_HEADER } = jest.requireActual('../../src/functions/recipeRow') as typeof import('../../src/functions/recipeRow');
+    expect(LAYOUT.columns).toHaveLength(COL.formGrams + RECIPE_ROW_HEADER.length);
+    expect(COL.warnings).toBe(COL.formGrams + RECIPE_ROW_HEADER.indexOf('warnings'));
+    expect(COL.osmolality).toBe(COL.formGrams + RECIPE_ROW_HEADER.indexOf('osmolality (mOsm/kg)'));
+    expect(COL.conductivity).toBe(COL.formGrams + RECIPE_ROW_HEADER.indexOf('conductivity at use temp. (mS/cm)'));
+    expect(COL.conductivity25).toBe(COL.formGrams + RECIPE_ROW_HEADER.indexOf('conductivity at 25 °C (mS/cm)'));
+    expect(COL.saltTargetGrams).toBe(COL.formGrams + RECIPE_ROW_HEADER.indexOf('salt to target (g)'));
+    expect(COL.stockPerBatchMl).toBe(COL.formGrams + RECIPE_ROW_HEADER.indexOf('stock per batch (mL)'));
+    expect(LAYOUT.chartCol).toBeGreaterThan(COL.warnings);
   });
 });
