@@ -20,7 +20,7 @@
 import { osmolalityOf } from '../chem/batch';
 import { DEFAULT_PKA_UNCERTAINTY, RecipeInput, RecipePlan } from '../chem/planner';
 import { formatGrams, formatMl } from '../chem/planner/protocol';
-import { AS_MADE_ROWS, TITRANT_NEXT_HEADER } from '../functions/batch';
+import { AS_MADE_ROWS } from '../functions/batch';
 import { call } from '../taskpane/formulas';
 import { CellBlock, CellWrite, RangeRef, WorkbookPort, cellAddress, rangeAddress } from './port';
 
@@ -32,6 +32,8 @@ const PRINT_COLUMNS = RECORD_COLUMN_WIDTHS.length;
 const ACTUALS_COL = PRINT_COLUMNS + 1;
 /** Rows kept for the check's spill: the most AS.MADE spills. */
 const CHECK_ROWS = AS_MADE_ROWS;
+/** TITRANT.NEXT's columns (TITRANT_NEXT_HEADER), worded to fit the printed columns. */
+const RECORD_NEXT_HEADER = ['add', 'next (mL)', 'first portion (mL)', 'end point (pH)', 'expected (pH)', 'note'] as const;
 /** Acceptance of a pH electrode's slope after calibration, % of the Nernst slope (common practice: 95–105 %). */
 export const ELECTRODE_SLOPE_RANGE_PERCENT = [95, 105] as const;
 /** Default acceptance: pH ± this at use, conductivity ± this % (the declared defaults of tolerance.ph and tolerance.conductivityPercent). */
@@ -214,9 +216,9 @@ export function batchRecordLayout(input: RecipeInput, plan: RecipePlan, version 
     add(v(`First portion ${formatMl(t.firstPortionMl)} mL; expected ${formatMl(t.lowMl)}–${formatMl(t.highMl)} mL in all`, 'note'));
     // While adjusting: the titrant added so far and the meter's reading now give the next amount (PROTON.TITRANT.NEXT), live.
     const wrow = here();
-    add(v('While adjusting: titrant added so far (mL)'), blankInput('0.00'), v('meter reads now'), blankInput('0.00'));
+    add(v('Titrant so far (mL)'), blankInput('0.00'), v('meter reads now'), blankInput('0.00'));
     adjusting = { titrantAddedMl: { row: wrow, col: 1 }, readingPh: { row: wrow, col: 3 }, nextAt: { row: wrow + 2, col: 0 } };
-    add(...TITRANT_NEXT_HEADER.map((h) => v(h, 'header')));
+    add(...RECORD_NEXT_HEADER.map((h) => v(h, 'header')));
     nextRecipeRow = here();
     add();
   }
