@@ -46,7 +46,7 @@ describe('the README example batch', () => {
       const shown = numberIn(cells[k]);
       if (!shown) continue;
       // Half a unit in the last digit shown, plus float slack.
-      expect(Math.abs(shown.value - expected[k])).toBeLessThanOrEqual(0.5 * 10 ** -shown.decimals + 1e-9);
+      expect(Math.abs(shown.value - (expected[k] as number))).toBeLessThanOrEqual(0.5 * 10 ** -shown.decimals + 1e-9);
     }
     if (expected[3] !== undefined) expect(cells[4].trim()).toBe(expected[3] ? 'PASS' : 'FAIL');
   });
