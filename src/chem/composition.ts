@@ -148,6 +148,36 @@ export function appendStepConstants(chem: AcidBaseChemistry, terms: VantHoffTerm
   }
 }
 
+/** What depends on the temperature alone: the same for every composition prepared at it. */
+interface TemperatureConstants {
+  readonly temperatureC: number;
+  readonly terms: VantHoffTerms;
+  /** Debye–Hückel A, thermodynamic Kw, density of water (g/cm³). */
+  readonly a: number;
+  readonly kw: number;
+  readonly waterDensity: number;
+}
+
+/** Temperatures remembered: a plan prepares a dozen compositions at three or four temperatures (use, bench, ± half a degree, 25 °C). */
+const TEMPERATURE_SLOTS = 8;
+const temperatureSlots: TemperatureConstants[] = [];
+let nextTemperatureSlot = 0;
+
+/** The temperature's constants, computed once for the last few temperatures asked (a power and a logarithm cost more than the rest of a preparation). */
+function constantsAt(temperatureC: number): TemperatureConstants {
+  for (let i = 0; i < temperatureSlots.length; i++) if (temperatureSlots[i].temperatureC === temperatureC) return temperatureSlots[i];
+  const made: TemperatureConstants = {
+    temperatureC,
+    terms: vantHoffTerms(temperatureC),
+    a: debyeHuckelA(temperatureC),
+    kw: Math.pow(10, -pKw(temperatureC)),
+    waterDensity: waterDensity(temperatureC),
+  };
+  temperatureSlots[nextTemperatureSlot] = made;
+  nextTemperatureSlot = (nextTemperatureSlot + 1) % TEMPERATURE_SLOTS;
+  return made;
+}
+
 /**
  * Validates a composition and computes its constants at the temperature.
  * Throws ChemError (invalid-input) naming the field, value and what is allowed.
@@ -188,7 +218,8 @@ export function prepare(composition: Composition): PreparedComposition {
   const stepCount: number[] = [];
   const ka: number[] = [];
   const zSquaredDiff: number[] = [];
-  const terms = vantHoffTerms(temperatureC);
+  const atT = constantsAt(temperatureC);
+  const terms = atT.terms;
   let s = 0;
   let ionicStrengthScale = 1e-7;
   for (let j = 0; j < n; j++) {
@@ -213,7 +244,7 @@ export function prepare(composition: Composition): PreparedComposition {
     strongIonicStrength += 0.5 * ion.charge * ion.charge * c;
   }
 
-  const a = debyeHuckelA(temperatureC);
+  const a = atT.a;
   const warnings: ChemWarning[] = [];
   if (temperatureC > FITTED_RANGE_MAX_C) {
     warnings.push(warning('aboveFittedRange', MESSAGES.aboveFittedRange(temperatureC, FITTED_RANGE_MAX_C), 'temperatureC'));
@@ -222,7 +253,7 @@ export function prepare(composition: Composition): PreparedComposition {
     temperatureC,
     model,
     a,
-    kw: Math.pow(10, -pKw(temperatureC)),
+    kw: atT.kw,
     totals,
     z0,
     firstStep,
@@ -234,7 +265,7 @@ export function prepare(composition: Composition): PreparedComposition {
     ionicStrengthScale: ionicStrengthScale + strongIonicStrength,
     warnings,
     source: composition,
-    waterDensity: waterDensity(temperatureC),
+    waterDensity: atT.waterDensity,
     pitzer:
       model === 'pitzer'
         ? pitzerLayout(
