@@ -23,7 +23,7 @@ import { SubstanceLibrary, defaultLibrary } from '../library/lookup';
 import { nameKey } from '../library/names';
 import { conductivityAt, conductivityOf } from '../conductivity';
 import { idealOsmolarity } from '../osmolarity';
-import { report, speciate, solvePh, solvePrepared } from '../speciation';
+import { report, speciate, solvePrepared } from '../speciation';
 import { temperatureWarnings } from '../temperatureChecks';
 import { pKaAt } from '../vantHoff';
 import { RecipeComponent, RecipeInput, RecipePlan, TitrationPlan } from './types';
@@ -69,7 +69,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const stockWarnings = meterSpeciation
     ? meterSpeciation.warnings.filter((w) => ACTIVITY_RANGE_CODES.has(w.code)).map((w) => warning(w.code, MESSAGES.stockAtMeter(fold, w.message), w.field))
     : [];
-  const meterPh = meterSpeciation ? meterSpeciation.pH : solvePh(atMeter);
+  const meterPh = meterSpeciation ? meterSpeciation.pH : phFrom(atMeter, s.targetPh);
   // The stock as made, at the temperature of use: its pH and conductivity (the stock route only).
   // Adjusted in the full volume at the temperature of use, the meter reads the stock itself.
   const meterReadsStock = s.partFraction === 1 && s.benchT === s.useT;
@@ -91,15 +91,15 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
     pHAtUse: result.pH,
     // With nothing scaled (no stock, adjusted in the full volume) the meter reads the finished buffer at the bench temperature;
     // at the bench temperature of use it is the finished buffer itself, solved above.
-    pHAtBench: fold === 1 && s.partFraction === 1 ? meterPh : s.benchT === s.useT ? result.pH : solvePh(withConditions(finished, s.benchT)),
+    pHAtBench: fold === 1 && s.partFraction === 1 ? meterPh : s.benchT === s.useT ? result.pH : phFrom(withConditions(finished, s.benchT), meterPh),
     ionicStrengthM: result.ionicStrengthM,
     idealOsmolarityMosm: idealOsmolarity(result) * 1000,
     osmolalityMosmKg: result.osmolalityMosmKg,
     baseMmPerTenthPh: cap.baseMmPerTenthPh,
     acidMmPerTenthPh: cap.acidMmPerTenthPh,
     betaMPerPh: cap.betaMPerPh,
-    pHPerDegreeC: dpHdT(finished, s.useT),
-    pHAfterTenfoldDilution: solvePh(scaleComposition(finished, 0.1)),
+    pHPerDegreeC: dpHdT(finished, s.useT, result.pH),
+    pHAfterTenfoldDilution: phFrom(scaleComposition(finished, 0.1), result.pH),
     conductivityMsPerCm: conductivity.conductivityMsPerCm,
     conductivity25MsPerCm: s.useT === 25 ? conductivity.conductivityMsPerCm : conductivityAt(finished, 25).conductivityMsPerCm,
   };
@@ -164,11 +164,20 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
 /** A plan while it is put together. */
 type Building = { -readonly [K in keyof RecipePlan]: RecipePlan[K] };
 
-/** dpH/dT of a composition at a temperature, by central difference (one-sided at 0 and 100 °C). */
-function dpHdT(c: Composition, t: number): number {
+/** dpH/dT of a composition at a temperature, by central difference (one-sided at 0 and 100 °C); each solve starts from the pH at t. */
+function dpHdT(c: Composition, t: number, pHAtT: number): number {
   const lo = Math.max(0, t - DPH_DT_STEP_C);
   const hi = Math.min(100, t + DPH_DT_STEP_C);
-  return (solvePh(withConditions(c, hi)) - solvePh(withConditions(c, lo))) / (hi - lo);
+  return (phFrom(withConditions(c, hi), pHAtT) - phFrom(withConditions(c, lo), pHAtT)) / (hi - lo);
+}
+
+/**
+ * pH of a composition, the solve's first Newton step taken from a pH already known nearby (the same
+ * solution at another temperature or dilution): a few charge-balance evaluations fewer; the bracket,
+ * tolerances and residual checks are the solver's own, unchanged.
+ */
+function phFrom(c: Composition, nearPh: number): number {
+  return solvePrepared(prepare(c), nearPh).pH;
 }
 
 function purityOf(s: Settled, form: LibraryForm, role: RecipeComponent['role']): number {
