@@ -21,9 +21,9 @@ import { SOURCES } from '../library/sources';
 import { LibraryForm } from '../library/types';
 import { SubstanceLibrary, defaultLibrary } from '../library/lookup';
 import { nameKey } from '../library/names';
-import { conductivityAt, conductivityOf } from '../conductivity';
+import { conductivityOf } from '../conductivity';
 import { idealOsmolarity } from '../osmolarity';
-import { report, speciate, solvePrepared } from '../speciation';
+import { SpeciationResult, report, solvePrepared } from '../speciation';
 import { temperatureWarnings } from '../temperatureChecks';
 import { pKaAt } from '../vantHoff';
 import { RecipeComponent, RecipeInput, RecipePlan, TitrationPlan } from './types';
@@ -64,7 +64,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
 
   // Each composition below is solved once: a speciation made for one figure gives the others their pH.
   const atMeter = withConditions(scaleComposition(made.composition, 1 / s.partFraction), s.benchT);
-  const meterSpeciation = fold === 1 ? undefined : speciate(atMeter);
+  const meterSpeciation = fold === 1 ? undefined : speciateFrom(atMeter, s.targetPh);
   // A stock's own activity warnings (past the model's range, ions without Pitzer parameters) bear on the meter reading.
   const stockWarnings = meterSpeciation
     ? meterSpeciation.warnings.filter((w) => ACTIVITY_RANGE_CODES.has(w.code)).map((w) => warning(w.code, MESSAGES.stockAtMeter(fold, w.message), w.field))
@@ -73,7 +73,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   // The stock as made, at the temperature of use: its pH and conductivity (the stock route only).
   // Adjusted in the full volume at the temperature of use, the meter reads the stock itself.
   const meterReadsStock = s.partFraction === 1 && s.benchT === s.useT;
-  const stockSpeciation = s.route !== 'stock' ? undefined : meterReadsStock && meterSpeciation ? meterSpeciation : speciate(made.composition);
+  const stockSpeciation = s.route !== 'stock' ? undefined : meterReadsStock && meterSpeciation ? meterSpeciation : speciateFrom(made.composition, s.targetPh);
   const titration = made.titrant ? titrationPlan(s, made, madeVolumeL, stockSpeciation?.pH) : undefined;
   if (titration) checkTitrantFits(titration.volumeMl, madeVolumeL * 1000, s.partFraction, titration.stockM);
 
@@ -101,7 +101,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
     pHPerDegreeC: dpHdT(finished, s.useT, result.pH),
     pHAfterTenfoldDilution: phFrom(scaleComposition(finished, 0.1), result.pH),
     conductivityMsPerCm: conductivity.conductivityMsPerCm,
-    conductivity25MsPerCm: s.useT === 25 ? conductivity.conductivityMsPerCm : conductivityAt(finished, 25).conductivityMsPerCm,
+    conductivity25MsPerCm: s.useT === 25 ? conductivity.conductivityMsPerCm : conductivityOf(speciateFrom(withConditions(finished, 25), result.pH)).conductivityMsPerCm,
   };
 
   const components = componentsOf(s, made, madeVolumeL, titration);
@@ -115,7 +115,8 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
           stockPerBatchMl: (s.volumeL * 1000) / fold,
           waterPerBatchMl: s.volumeL * 1000 * (1 - 1 / fold),
           stockConductivityMsPerCm: stockKappa.conductivityMsPerCm,
-          stockConductivity25MsPerCm: s.useT === 25 ? stockKappa.conductivityMsPerCm : conductivityAt(made.composition, 25).conductivityMsPerCm,
+          stockConductivity25MsPerCm:
+            s.useT === 25 ? stockKappa.conductivityMsPerCm : conductivityOf(speciateFrom(withConditions(made.composition, 25), stockSpeciation.pH)).conductivityMsPerCm,
         }
       : undefined;
 
@@ -178,6 +179,12 @@ function dpHdT(c: Composition, t: number, pHAtT: number): number {
  */
 function phFrom(c: Composition, nearPh: number): number {
   return solvePrepared(prepare(c), nearPh).pH;
+}
+
+/** The full speciation of a composition (as speciate), its solve started from a pH known nearby (see phFrom). */
+function speciateFrom(c: Composition, nearPh: number): SpeciationResult {
+  const p = prepare(c);
+  return report(p, solvePrepared(p, nearPh), c);
 }
 
 function purityOf(s: Settled, form: LibraryForm, role: RecipeComponent['role']): number {
