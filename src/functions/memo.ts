@@ -58,6 +58,8 @@ interface MemoNode {
 const newNode = (): MemoNode => ({ children: undefined, outcomes: undefined, own: undefined });
 let root = new Map<string, MemoNode>();
 let remembered = 0;
+/** The previous call's function, argument count, key parts before the last argument, and the node they lead to. */
+const last: { id: string; length: number; parts: unknown[]; node: MemoNode | undefined } = { id: '', length: -1, parts: [], node: undefined };
 
 /** Ranges with more rows than this are computed without being remembered. */
 const UNKEYED_ROWS = 1000;
@@ -100,21 +102,32 @@ export function memoised<T>(id: string, args: readonly unknown[], compute: () =>
   // Trailing blanks are dropped, so f(a) and f(a, , ) are one call.
   let n = args.length;
   while (n > 0 && (args[n - 1] === undefined || args[n - 1] === null)) n--;
-  for (let i = 0; i < n - 1; i++) {
-    const part = keyPart(args[i]);
-    const children: Map<unknown, MemoNode> = node.children ?? (node.children = new Map());
-    let next: MemoNode | undefined = children.get(part);
-    if (!next) children.set(part, (next = newNode()));
-    node = next;
+  // A grid's neighbouring cells differ in their last argument only: the node above it is the previous call's when
+  // every argument before it is the same (compared as they are, without a Map lookup per argument).
+  let same = id === last.id && n === last.length;
+  for (let i = 0; same && i < n - 1; i++) same = keyPart(args[i]) === last.parts[i];
+  if (same) node = last.node!;
+  else {
+    for (let i = 0; i < n - 1; i++) {
+      const part = keyPart(args[i]);
+      last.parts[i] = part;
+      const children: Map<unknown, MemoNode> = node.children ?? (node.children = new Map());
+      let next: MemoNode | undefined = children.get(part);
+      if (!next) children.set(part, (next = newNode()));
+      node = next;
+    }
+    last.id = id;
+    last.length = n;
+    last.node = node;
   }
-  const last = n > 0 ? keyPart(args[n - 1]) : BLANK;
-  let outcome = n > 0 ? node.outcomes?.get(last) : node.own;
+  const key = n > 0 ? keyPart(args[n - 1]) : BLANK;
+  let outcome = n > 0 ? node.outcomes?.get(key) : node.own;
   if (outcome === undefined) {
     outcome = run(compute);
     if (remembered >= CALL_CACHE_SIZE) clearCallCache();
     else {
       if (n === 0) node.own = outcome;
-      else (node.outcomes ?? (node.outcomes = new Map())).set(last, outcome);
+      else (node.outcomes ?? (node.outcomes = new Map())).set(key, outcome);
       remembered++;
     }
   }
@@ -126,4 +139,6 @@ export function memoised<T>(id: string, args: readonly unknown[], compute: () =>
 export function clearCallCache(): void {
   root = new Map();
   remembered = 0;
+  last.id = '';
+  last.node = undefined;
 }

@@ -37,6 +37,21 @@ describe('memoised (the call cache)', () => {
     expect(counted('H', ['7']).runs).toBe(1);
     expect(counted('K', [7]).runs).toBe(1);
   });
+  test('neighbouring calls that differ in one argument, anywhere, are told apart (a grid along either axis)', () => {
+    for (const a of [1, 2]) for (const b of [10, 20]) expect(counted('N', [a, 'x', b])).toEqual({ value: `N(${a},"x",${b})`, runs: 1 });
+    for (const b of [10, 20]) for (const a of [1, 2]) expect(counted('N', [a, 'x', b]).runs).toBe(0);
+    expect(counted('N', [1, 'y', 10]).runs).toBe(1);
+    expect(counted('M', [1, 'x', 10]).runs).toBe(1);
+    expect(counted('N', [1, 'x']).runs).toBe(1);
+    expect(counted('N', [NaN, 'x', 10]).runs).toBe(1);
+    expect(counted('N', [NaN, 'x', 10]).runs).toBe(0);
+  });
+  test('a call made while another is computed does not disturb where the outer call is kept', () => {
+    const outer = () => memoised('O', [1, 2], () => memoised('I', [3, 4], () => 'inner') + ' outer');
+    expect(outer()).toBe('inner outer');
+    expect(counted('O', [1, 2])).toEqual({ value: 'inner outer', runs: 0 });
+    expect(counted('I', [3, 4])).toEqual({ value: 'inner', runs: 0 });
+  });
   test('an error is remembered and thrown again without running the work', () => {
     let runs = 0;
     const failing = () =>
