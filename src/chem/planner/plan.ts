@@ -9,7 +9,7 @@
  * bench temperature with every concentration raised by 1/(part-volume fraction), because
  * at adjustment everything weighed and titrated sits in that smaller volume. A stock is
  * the finished buffer times its fold, so its dilution lands on target by construction.
- * A salt target is met by bisection on the salt concentration (ionic strength, ideal
+ * A salt target is met by a bracketed search on the salt concentration (ionic strength, ideal
  * osmolarity and conductivity rise with salt), re-solving the titrant at each step.
  */
 import { capacityOfPrepared, scaleComposition } from '../capacity';
