@@ -179,6 +179,75 @@ function constantsAt(temperatureC: number): TemperatureConstants {
 }
 
 /**
+ * What the solver's arrays hold that depends only on which systems a composition has, in which order: each
+ * system's charge, first step and step count, each step's z² difference, and the Ka of every step at the
+ * temperature last asked. Shared by every composition of the same systems (never changed once made).
+ */
+interface SystemsShape {
+  readonly steps: readonly (readonly AcidBaseStep[])[];
+  readonly z0: readonly number[];
+  readonly firstStep: readonly number[];
+  readonly stepCount: readonly number[];
+  readonly zSquaredDiff: readonly number[];
+  /** Largest |charge| of each system's states. */
+  readonly zMax: readonly number[];
+  kaTemperatureC: number;
+  ka: readonly number[] | undefined;
+}
+
+/** Shapes by the first system's steps array (library systems share theirs, see chemistryOf), weakly held. */
+const SHAPES = new WeakMap<object, SystemsShape[]>();
+/** Anchor for compositions of strong ions only. */
+const NO_SYSTEMS: object = {};
+/** Shapes kept per anchor before the list is emptied (companion systems a workbook puts beside one buffer). */
+const SHAPES_PER_ANCHOR = 64;
+
+function systemsShape(systems: readonly AcidBaseChemistry[]): SystemsShape {
+  const n = systems.length;
+  const anchor: object = n > 0 ? systems[0].steps : NO_SYSTEMS;
+  let list = SHAPES.get(anchor);
+  if (list) {
+    for (let e = 0; e < list.length; e++) {
+      const shape = list[e];
+      if (shape.steps.length !== n) continue;
+      let same = true;
+      for (let j = 0; same && j < n; j++) same = shape.steps[j] === systems[j].steps && shape.z0[j] === systems[j].chargeOfMostProtonated;
+      if (same) return shape;
+    }
+  } else SHAPES.set(anchor, (list = []));
+  const z0: number[] = [];
+  const firstStep: number[] = [];
+  const stepCount: number[] = [];
+  const zSquaredDiff: number[] = [];
+  const zMax: number[] = [];
+  let s = 0;
+  for (let j = 0; j < n; j++) {
+    const sys = systems[j];
+    const z = sys.chargeOfMostProtonated;
+    z0.push(z);
+    firstStep.push(s);
+    stepCount.push(sys.steps.length);
+    zMax.push(Math.max(Math.abs(z), Math.abs(z - sys.steps.length)));
+    for (let k = 0; k < sys.steps.length; k++) zSquaredDiff.push(2 * (z - k) - 1);
+    s += sys.steps.length;
+  }
+  const shape: SystemsShape = { steps: systems.map((sys) => sys.steps), z0, firstStep, stepCount, zSquaredDiff, zMax, kaTemperatureC: NaN, ka: undefined };
+  if (list.length >= SHAPES_PER_ANCHOR) list.length = 0;
+  list.push(shape);
+  return shape;
+}
+
+/** The Ka of every step at a temperature, kept on the shape for the next composition of the same systems there. */
+function kaOf(shape: SystemsShape, systems: readonly AcidBaseChemistry[], temperatureC: number, terms: VantHoffTerms): readonly number[] {
+  const ka: number[] = [];
+  const unused: number[] = [];
+  for (let j = 0; j < systems.length; j++) appendStepConstants(systems[j], terms, ka, unused);
+  shape.ka = ka;
+  shape.kaTemperatureC = temperatureC;
+  return ka;
+}
+
+/**
  * Validates a composition and computes its constants at the temperature.
  * Throws ChemError (invalid-input) naming the field, value and what is allowed.
  */
@@ -211,27 +280,17 @@ export function prepare(composition: Composition): PreparedComposition {
     if (!inRange(total, 0, MAX_CONCENTRATION_M)) requireNumber(`systems[${j}].totalM`, total, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
   }
 
+  const atT = constantsAt(temperatureC);
+  const shape = systemsShape(systems);
+  const ka = shape.ka === undefined || shape.kaTemperatureC !== temperatureC ? kaOf(shape, systems, temperatureC, atT.terms) : shape.ka;
   // Plain arrays: for the handful of entries a buffer has they allocate several times faster than typed arrays.
   const totals: number[] = [];
-  const z0: number[] = [];
-  const firstStep: number[] = [];
-  const stepCount: number[] = [];
-  const ka: number[] = [];
-  const zSquaredDiff: number[] = [];
-  const atT = constantsAt(temperatureC);
-  const terms = atT.terms;
-  let s = 0;
   let ionicStrengthScale = 1e-7;
   for (let j = 0; j < n; j++) {
-    const sys = systems[j];
-    totals.push(sys.totalM);
-    z0.push(sys.chargeOfMostProtonated);
-    firstStep.push(s);
-    stepCount.push(sys.steps.length);
-    const zMax = Math.max(Math.abs(sys.chargeOfMostProtonated), Math.abs(sys.chargeOfMostProtonated - sys.steps.length));
-    ionicStrengthScale += 0.5 * sys.totalM * zMax * zMax;
-    appendStepConstants(sys, terms, ka, zSquaredDiff);
-    s += sys.steps.length;
+    const total = systems[j].totalM;
+    totals.push(total);
+    const zMax = shape.zMax[j];
+    ionicStrengthScale += 0.5 * total * zMax * zMax;
   }
 
   let strongCharge = 0;
@@ -255,11 +314,11 @@ export function prepare(composition: Composition): PreparedComposition {
     a,
     kw: atT.kw,
     totals,
-    z0,
-    firstStep,
-    stepCount,
+    z0: shape.z0,
+    firstStep: shape.firstStep,
+    stepCount: shape.stepCount,
     ka,
-    zSquaredDiff,
+    zSquaredDiff: shape.zSquaredDiff,
     strongCharge,
     strongIonicStrength,
     ionicStrengthScale: ionicStrengthScale + strongIonicStrength,
