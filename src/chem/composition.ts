@@ -37,7 +37,10 @@ export interface AcidBaseSystem extends AcidBaseChemistry {
   readonly totalM: number;
 }
 
-/** A solution to solve. */
+/**
+ * A solution to solve. Treated as a value: what is derived from a system's steps array (its Ka at a temperature,
+ * its Pitzer layout) is kept by the array's identity, so a steps array is never changed once a composition holds it.
+ */
 export interface Composition {
   readonly systems: readonly AcidBaseSystem[];
   /** Strong ions in mol/L, keyed by ion name (`Na+`, `Cl-`, …; see STRONG_IONS). */
