@@ -139,6 +139,14 @@ type FormAloneTree = Map<string, Map<ActivityModel, Map<number, Map<number, Comp
 const formAloneCache = new WeakMap<SubstanceLibrary, { tree: FormAloneTree; size: number }>();
 /** Single-form compositions kept per library before the cache is emptied (a 100 × 100 what-if grid uses 100). */
 const FORM_ALONE_ENTRIES = 1024;
+/** The previous call's form, model and amount, and the map of temperatures they lead to. */
+const lastFormAlone: {
+  cache: { tree: FormAloneTree; size: number } | undefined;
+  form: string;
+  model: string;
+  amount: number;
+  byTemperature: Map<number, Composition> | undefined;
+} = { cache: undefined, form: '', model: '', amount: NaN, byTemperature: undefined };
 
 /**
  * A form alone at a concentration, temperature and activity model; the same object for the same four values
@@ -153,18 +161,31 @@ const FORM_ALONE_ENTRIES = 1024;
 export function formAlone(library: SubstanceLibrary, form: string, concentrationM: number, temperatureC: number, activityModel: ActivityModel): Composition {
   let cache = formAloneCache.get(library);
   if (!cache) formAloneCache.set(library, (cache = { tree: new Map(), size: 0 }));
-  let byModel = cache.tree.get(form);
-  if (!byModel) cache.tree.set(form, (byModel = new Map()));
-  let byAmount = byModel.get(activityModel);
-  if (!byAmount) byModel.set(activityModel, (byAmount = new Map()));
-  let byTemperature = byAmount.get(concentrationM);
-  if (!byTemperature) byAmount.set(concentrationM, (byTemperature = new Map()));
+  let byTemperature: Map<number, Composition>;
+  // A grid's neighbouring cells ask the same form, model and amount: the previous call's map of temperatures serves.
+  if (lastFormAlone.cache === cache && lastFormAlone.form === form && lastFormAlone.model === activityModel && lastFormAlone.amount === concentrationM) {
+    byTemperature = lastFormAlone.byTemperature!;
+  } else {
+    let byModel = cache.tree.get(form);
+    if (!byModel) cache.tree.set(form, (byModel = new Map()));
+    let byAmount = byModel.get(activityModel);
+    if (!byAmount) byModel.set(activityModel, (byAmount = new Map()));
+    let found = byAmount.get(concentrationM);
+    if (!found) byAmount.set(concentrationM, (found = new Map()));
+    byTemperature = found;
+    lastFormAlone.cache = cache;
+    lastFormAlone.form = form;
+    lastFormAlone.model = activityModel;
+    lastFormAlone.amount = concentrationM;
+    lastFormAlone.byTemperature = byTemperature;
+  }
   let c = byTemperature.get(temperatureC);
   if (!c) {
     c = library.compositionFromForms([{ form, concentrationM }], { temperatureC, activityModel });
     if (cache.size >= FORM_ALONE_ENTRIES) {
       cache.tree.clear();
       cache.size = 0;
+      lastFormAlone.cache = undefined;
       return c;
     }
     byTemperature.set(temperatureC, c);
