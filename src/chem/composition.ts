@@ -37,7 +37,10 @@ export interface AcidBaseSystem extends AcidBaseChemistry {
   readonly totalM: number;
 }
 
-/** A solution to solve. */
+/**
+ * A solution to solve. Treated as a value: what is derived from a system's steps array (its Ka at a temperature,
+ * its Pitzer layout) is kept by the array's identity, so a steps array is never changed once a composition holds it.
+ */
 export interface Composition {
   readonly systems: readonly AcidBaseSystem[];
   /** Strong ions in mol/L, keyed by ion name (`Na+`, `Cl-`, …; see STRONG_IONS). */
@@ -148,6 +151,105 @@ export function appendStepConstants(chem: AcidBaseChemistry, terms: VantHoffTerm
   }
 }
 
+/** What depends on the temperature alone: the same for every composition prepared at it. */
+interface TemperatureConstants {
+  readonly temperatureC: number;
+  readonly terms: VantHoffTerms;
+  /** Debye–Hückel A, thermodynamic Kw, density of water (g/cm³). */
+  readonly a: number;
+  readonly kw: number;
+  readonly waterDensity: number;
+}
+
+/** Temperatures remembered: a plan prepares a dozen compositions at three or four temperatures (use, bench, ± half a degree, 25 °C). */
+const TEMPERATURE_SLOTS = 8;
+const temperatureSlots: TemperatureConstants[] = [];
+let nextTemperatureSlot = 0;
+
+/** The temperature's constants, computed once for the last few temperatures asked (a power and a logarithm cost more than the rest of a preparation). */
+function constantsAt(temperatureC: number): TemperatureConstants {
+  for (let i = 0; i < temperatureSlots.length; i++) if (temperatureSlots[i].temperatureC === temperatureC) return temperatureSlots[i];
+  const made: TemperatureConstants = {
+    temperatureC,
+    terms: vantHoffTerms(temperatureC),
+    a: debyeHuckelA(temperatureC),
+    kw: Math.pow(10, -pKw(temperatureC)),
+    waterDensity: waterDensity(temperatureC),
+  };
+  temperatureSlots[nextTemperatureSlot] = made;
+  nextTemperatureSlot = (nextTemperatureSlot + 1) % TEMPERATURE_SLOTS;
+  return made;
+}
+
+/**
+ * What the solver's arrays hold that depends only on which systems a composition has, in which order: each
+ * system's charge, first step and step count, each step's z² difference, and the Ka of every step at the
+ * temperature last asked. Shared by every composition of the same systems (never changed once made).
+ */
+interface SystemsShape {
+  readonly steps: readonly (readonly AcidBaseStep[])[];
+  readonly z0: readonly number[];
+  readonly firstStep: readonly number[];
+  readonly stepCount: readonly number[];
+  readonly zSquaredDiff: readonly number[];
+  /** Largest |charge| of each system's states. */
+  readonly zMax: readonly number[];
+  kaTemperatureC: number;
+  ka: readonly number[] | undefined;
+}
+
+/** Shapes by the first system's steps array (library systems share theirs, see chemistryOf), weakly held. */
+const SHAPES = new WeakMap<object, SystemsShape[]>();
+/** Anchor for compositions of strong ions only. */
+const NO_SYSTEMS: object = {};
+/** Shapes kept per anchor before the list is emptied (companion systems a workbook puts beside one buffer). */
+const SHAPES_PER_ANCHOR = 64;
+
+function systemsShape(systems: readonly AcidBaseChemistry[]): SystemsShape {
+  const n = systems.length;
+  const anchor: object = n > 0 ? systems[0].steps : NO_SYSTEMS;
+  let list = SHAPES.get(anchor);
+  if (list) {
+    for (let e = 0; e < list.length; e++) {
+      const shape = list[e];
+      if (shape.steps.length !== n) continue;
+      let same = true;
+      for (let j = 0; same && j < n; j++) same = shape.steps[j] === systems[j].steps && shape.z0[j] === systems[j].chargeOfMostProtonated;
+      if (same) return shape;
+    }
+  } else SHAPES.set(anchor, (list = []));
+  const z0: number[] = [];
+  const firstStep: number[] = [];
+  const stepCount: number[] = [];
+  const zSquaredDiff: number[] = [];
+  const zMax: number[] = [];
+  let s = 0;
+  for (let j = 0; j < n; j++) {
+    const sys = systems[j];
+    const z = sys.chargeOfMostProtonated;
+    z0.push(z);
+    firstStep.push(s);
+    stepCount.push(sys.steps.length);
+    zMax.push(Math.max(Math.abs(z), Math.abs(z - sys.steps.length)));
+    for (let k = 0; k < sys.steps.length; k++) zSquaredDiff.push(2 * (z - k) - 1);
+    s += sys.steps.length;
+  }
+  const shape: SystemsShape = { steps: systems.map((sys) => sys.steps), z0, firstStep, stepCount, zSquaredDiff, zMax, kaTemperatureC: NaN, ka: undefined };
+  if (list.length >= SHAPES_PER_ANCHOR) list.length = 0;
+  list.push(shape);
+  return shape;
+}
+
+/** The Ka of every step at a temperature, kept on the shape for the next composition of the same systems there. */
+function kaOf(shape: SystemsShape, systems: readonly AcidBaseChemistry[], temperatureC: number, terms: VantHoffTerms): readonly number[] {
+  const ka: number[] = [];
+  const unused: number[] = [];
+  for (let j = 0; j < systems.length; j++) appendStepConstants(systems[j], terms, ka, unused);
+  shape.ka = ka;
+  shape.kaTemperatureC = temperatureC;
+  return ka;
+}
+
 /**
  * Validates a composition and computes its constants at the temperature.
  * Throws ChemError (invalid-input) naming the field, value and what is allowed.
@@ -181,26 +283,17 @@ export function prepare(composition: Composition): PreparedComposition {
     if (!inRange(total, 0, MAX_CONCENTRATION_M)) requireNumber(`systems[${j}].totalM`, total, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
   }
 
+  const atT = constantsAt(temperatureC);
+  const shape = systemsShape(systems);
+  const ka = shape.ka === undefined || shape.kaTemperatureC !== temperatureC ? kaOf(shape, systems, temperatureC, atT.terms) : shape.ka;
   // Plain arrays: for the handful of entries a buffer has they allocate several times faster than typed arrays.
   const totals: number[] = [];
-  const z0: number[] = [];
-  const firstStep: number[] = [];
-  const stepCount: number[] = [];
-  const ka: number[] = [];
-  const zSquaredDiff: number[] = [];
-  const terms = vantHoffTerms(temperatureC);
-  let s = 0;
   let ionicStrengthScale = 1e-7;
   for (let j = 0; j < n; j++) {
-    const sys = systems[j];
-    totals.push(sys.totalM);
-    z0.push(sys.chargeOfMostProtonated);
-    firstStep.push(s);
-    stepCount.push(sys.steps.length);
-    const zMax = Math.max(Math.abs(sys.chargeOfMostProtonated), Math.abs(sys.chargeOfMostProtonated - sys.steps.length));
-    ionicStrengthScale += 0.5 * sys.totalM * zMax * zMax;
-    appendStepConstants(sys, terms, ka, zSquaredDiff);
-    s += sys.steps.length;
+    const total = systems[j].totalM;
+    totals.push(total);
+    const zMax = shape.zMax[j];
+    ionicStrengthScale += 0.5 * total * zMax * zMax;
   }
 
   let strongCharge = 0;
@@ -213,7 +306,7 @@ export function prepare(composition: Composition): PreparedComposition {
     strongIonicStrength += 0.5 * ion.charge * ion.charge * c;
   }
 
-  const a = debyeHuckelA(temperatureC);
+  const a = atT.a;
   const warnings: ChemWarning[] = [];
   if (temperatureC > FITTED_RANGE_MAX_C) {
     warnings.push(warning('aboveFittedRange', MESSAGES.aboveFittedRange(temperatureC, FITTED_RANGE_MAX_C), 'temperatureC'));
@@ -222,19 +315,19 @@ export function prepare(composition: Composition): PreparedComposition {
     temperatureC,
     model,
     a,
-    kw: Math.pow(10, -pKw(temperatureC)),
+    kw: atT.kw,
     totals,
-    z0,
-    firstStep,
-    stepCount,
+    z0: shape.z0,
+    firstStep: shape.firstStep,
+    stepCount: shape.stepCount,
     ka,
-    zSquaredDiff,
+    zSquaredDiff: shape.zSquaredDiff,
     strongCharge,
     strongIonicStrength,
     ionicStrengthScale: ionicStrengthScale + strongIonicStrength,
     warnings,
     source: composition,
-    waterDensity: waterDensity(temperatureC),
+    waterDensity: atT.waterDensity,
     pitzer:
       model === 'pitzer'
         ? pitzerLayout(

@@ -7,7 +7,9 @@
  * Hosts hand values over already unwrapped: numbers, strings, booleans, null for blank.
  */
 import { ActivityModel, MESSAGES } from '../chem';
-import { Dimension, readChoiceField, readPurityField, readQuantity, readQuantityList, requireNumberField } from '../chem/input';
+// From the modules themselves rather than the input index: each call through a re-exported name costs a getter in the CommonJS build (the command line).
+import { Dimension, readQuantity, readQuantityList } from '../chem/input/quantity';
+import { readChoiceField, readPurityField, requireNumberField } from '../chem/input/fields';
 import { invalid } from './errors';
 import { SHEET_MESSAGES } from './messages';
 

@@ -130,8 +130,23 @@ export function compositionFrom(library: SubstanceLibrary, value: unknown, tempe
   return withConditions(base, temperatureC, activityModel);
 }
 
-/** Single-form compositions at their conditions, per library: a grid asks the same one for every target pH of a column. */
-const formAloneCache = new WeakMap<SubstanceLibrary, Lru<Composition>>();
+/**
+ * Single-form compositions at their conditions, per library: a grid asks the same one for every target pH of a column.
+ * Kept in Maps keyed by the values themselves (form, activity model, amount, temperature), so a cell builds no key text;
+ * emptied when it holds FORM_ALONE_ENTRIES.
+ */
+type FormAloneTree = Map<string, Map<ActivityModel, Map<number, Map<number, Composition>>>>;
+const formAloneCache = new WeakMap<SubstanceLibrary, { tree: FormAloneTree; size: number }>();
+/** Single-form compositions kept per library before the cache is emptied (a 100 × 100 what-if grid uses 100). */
+const FORM_ALONE_ENTRIES = 1024;
+/** The previous call's form, model and amount, and the map of temperatures they lead to. */
+const lastFormAlone: {
+  cache: { tree: FormAloneTree; size: number } | undefined;
+  form: string;
+  model: string;
+  amount: number;
+  byTemperature: Map<number, Composition> | undefined;
+} = { cache: undefined, form: '', model: '', amount: NaN, byTemperature: undefined };
 
 /**
  * A form alone at a concentration, temperature and activity model; the same object for the same four values
@@ -145,12 +160,36 @@ const formAloneCache = new WeakMap<SubstanceLibrary, Lru<Composition>>();
  */
 export function formAlone(library: SubstanceLibrary, form: string, concentrationM: number, temperatureC: number, activityModel: ActivityModel): Composition {
   let cache = formAloneCache.get(library);
-  if (!cache) formAloneCache.set(library, (cache = new Lru<Composition>(1024)));
-  const key = `${form}\u0000${concentrationM}\u0000${temperatureC}\u0000${activityModel}`;
-  let c = cache.get(key);
+  if (!cache) formAloneCache.set(library, (cache = { tree: new Map(), size: 0 }));
+  let byTemperature: Map<number, Composition>;
+  // A grid's neighbouring cells ask the same form, model and amount: the previous call's map of temperatures serves.
+  if (lastFormAlone.cache === cache && lastFormAlone.form === form && lastFormAlone.model === activityModel && lastFormAlone.amount === concentrationM) {
+    byTemperature = lastFormAlone.byTemperature!;
+  } else {
+    let byModel = cache.tree.get(form);
+    if (!byModel) cache.tree.set(form, (byModel = new Map()));
+    let byAmount = byModel.get(activityModel);
+    if (!byAmount) byModel.set(activityModel, (byAmount = new Map()));
+    let found = byAmount.get(concentrationM);
+    if (!found) byAmount.set(concentrationM, (found = new Map()));
+    byTemperature = found;
+    lastFormAlone.cache = cache;
+    lastFormAlone.form = form;
+    lastFormAlone.model = activityModel;
+    lastFormAlone.amount = concentrationM;
+    lastFormAlone.byTemperature = byTemperature;
+  }
+  let c = byTemperature.get(temperatureC);
   if (!c) {
     c = library.compositionFromForms([{ form, concentrationM }], { temperatureC, activityModel });
-    cache.set(key, c);
+    if (cache.size >= FORM_ALONE_ENTRIES) {
+      cache.tree.clear();
+      cache.size = 0;
+      lastFormAlone.cache = undefined;
+      return c;
+    }
+    byTemperature.set(temperatureC, c);
+    cache.size++;
   }
   return c;
 }

@@ -23,7 +23,6 @@ import {
   pKaAt,
   solvePh,
   speciate,
-  titrantForPh,
   afterDilution,
   atTemperature,
 } from '../chem';
@@ -31,7 +30,11 @@ import { titrantFromForm } from '../chem/library';
 import { isBlank, isBlankRange, toActivityModel, toChoice, toField, toNumber, toPurity, toRange, toTemperature, toText } from './coerce';
 import { recipeOptions } from './recipeOptions';
 import { RECIPE_ROW_HEADER, recipeRowValues } from './recipeRow';
-import { DEFAULT_PART_VOLUME_FRACTION, RecipeInput, RecipePlan, checkTitrantFits, hydrateWarning, planRecipe } from '../chem/planner';
+import { RecipeInput, RecipePlan, hydrateWarning, planRecipe } from '../chem/planner';
+// From their modules rather than the planner's index: a re-exported name costs a getter per call in the CommonJS build (a grid cell calls them).
+import { checkTitrantFits } from '../chem/planner/band';
+import { DEFAULT_PART_VOLUME_FRACTION } from '../chem/planner/constants';
+import { titrantForPh } from '../chem/titration';
 import { volumeText } from '../chem/planner/protocol';
 import { checkRowLimit, compositionFrom, formAlone } from './composition';
 import { invalid } from './errors';

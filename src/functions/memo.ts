@@ -40,14 +40,26 @@ type Outcome = { readonly ok: true; readonly value: unknown } | { readonly ok: f
 export const CALL_CACHE_SIZE = 10000;
 
 /**
- * Remembered calls, as a tree of Maps keyed by each argument in turn: numbers, strings and
- * booleans are Map keys as they are (turning a number into text for a string key cost more
- * than a pH solve); a range becomes its JSON text. The whole tree is dropped when it holds
- * CALL_CACHE_SIZE calls, so a long session cannot grow it without bound.
+ * Remembered calls, as a tree keyed by each argument in turn: numbers, strings and booleans
+ * are Map keys as they are (turning a number into text for a string key cost more than a pH
+ * solve); a range becomes its JSON text. A call's outcome sits in its parent's `outcomes`
+ * map under its last argument, so the cells of a grid column share one map instead of one
+ * map each. The whole tree is dropped when it holds CALL_CACHE_SIZE calls, so a long session
+ * cannot grow it without bound.
  */
-type Node = Map<unknown, Node | Outcome>;
-let root: Node = new Map();
+interface MemoNode {
+  /** Calls with more arguments, by the next argument. */
+  children: Map<unknown, MemoNode> | undefined;
+  /** Calls that end with the next argument, by that argument. */
+  outcomes: Map<unknown, Outcome> | undefined;
+  /** The call with no arguments (after trailing blanks are dropped). */
+  own: Outcome | undefined;
+}
+const newNode = (): MemoNode => ({ children: undefined, outcomes: undefined, own: undefined });
+let root = new Map<string, MemoNode>();
 let remembered = 0;
+/** The previous call's function, argument count, key parts before the last argument, and the node they lead to. */
+const last: { id: string; length: number; parts: unknown[]; node: MemoNode | undefined } = { id: '', length: -1, parts: [], node: undefined };
 
 /** Ranges with more rows than this are computed without being remembered. */
 const UNKEYED_ROWS = 1000;
@@ -62,6 +74,14 @@ function keyPart(a: unknown): unknown {
   return a;
 }
 
+function run<T>(compute: () => T): Outcome {
+  try {
+    return { ok: true, value: compute() };
+  } catch (error) {
+    return { ok: false, error };
+  }
+}
+
 /**
  * Runs `compute` unless the same function was called with the same arguments before.
  * Errors are remembered too, and re-thrown.
@@ -73,28 +93,41 @@ function keyPart(a: unknown): unknown {
 export function memoised<T>(id: string, args: readonly unknown[], compute: () => T): T {
   // A range far larger than any argument allows (a whole column passed by mistake) is not
   // worth a key: turning it into text would take longer than refusing it.
-  if (args.some((a) => Array.isArray(a) && a.length > UNKEYED_ROWS)) return compute();
-  let node = root.get(id) as Node | undefined;
-  if (!node) root.set(id, (node = new Map()));
+  for (let i = 0; i < args.length; i++) {
+    const a = args[i];
+    if (Array.isArray(a) && a.length > UNKEYED_ROWS) return compute();
+  }
+  let node: MemoNode | undefined = root.get(id);
+  if (!node) root.set(id, (node = newNode()));
   // Trailing blanks are dropped, so f(a) and f(a, , ) are one call.
   let n = args.length;
-  while (n > 0 && keyPart(args[n - 1]) === BLANK) n--;
-  for (let i = 0; i < n; i++) {
-    const part = keyPart(args[i]);
-    let next = node.get(part) as Node | undefined;
-    if (!next) node.set(part, (next = new Map()));
-    node = next;
-  }
-  let outcome = node.get(OUTCOME) as Outcome | undefined;
-  if (outcome === undefined) {
-    try {
-      outcome = { ok: true, value: compute() };
-    } catch (error) {
-      outcome = { ok: false, error };
+  while (n > 0 && (args[n - 1] === undefined || args[n - 1] === null)) n--;
+  // A grid's neighbouring cells differ in their last argument only: the node above it is the previous call's when
+  // every argument before it is the same (compared as they are, without a Map lookup per argument).
+  let same = id === last.id && n === last.length;
+  for (let i = 0; same && i < n - 1; i++) same = keyPart(args[i]) === last.parts[i];
+  if (same) node = last.node!;
+  else {
+    for (let i = 0; i < n - 1; i++) {
+      const part = keyPart(args[i]);
+      last.parts[i] = part;
+      const children: Map<unknown, MemoNode> = node.children ?? (node.children = new Map());
+      let next: MemoNode | undefined = children.get(part);
+      if (!next) children.set(part, (next = newNode()));
+      node = next;
     }
+    last.id = id;
+    last.length = n;
+    last.node = node;
+  }
+  const key = n > 0 ? keyPart(args[n - 1]) : BLANK;
+  let outcome = n > 0 ? node.outcomes?.get(key) : node.own;
+  if (outcome === undefined) {
+    outcome = run(compute);
     if (remembered >= CALL_CACHE_SIZE) clearCallCache();
     else {
-      node.set(OUTCOME, outcome);
+      if (n === 0) node.own = outcome;
+      else (node.outcomes ?? (node.outcomes = new Map())).set(key, outcome);
       remembered++;
     }
   }
@@ -102,11 +135,10 @@ export function memoised<T>(id: string, args: readonly unknown[], compute: () =>
   return outcome.value as T;
 }
 
-/** The key under which a node keeps its call's outcome (no argument can equal it). */
-const OUTCOME = Symbol('outcome');
-
 /** Forgets every remembered call (tests and benchmarks). */
 export function clearCallCache(): void {
   root = new Map();
   remembered = 0;
+  last.id = '';
+  last.node = undefined;
 }

@@ -158,6 +158,8 @@ const libraries = new Lru<SubstanceLibrary>(16);
  * @returns a library; throws with the range row at fault on a bad definition
  */
 export function libraryFor(value: unknown): SubstanceLibrary {
+  // Most calls pass no range at all: answered before any range is built.
+  if (isBlank(value)) return defaultLibrary();
   checkRowLimit(USER_SUBSTANCES_ARGUMENT, value);
   const range = toRange(value);
   if (range.every((row) => row.every(isBlank))) return defaultLibrary();

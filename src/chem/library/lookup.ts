@@ -100,17 +100,28 @@ export interface SubstanceLibrary {
  * @returns name, charge of the most protonated form, and steps (pKa, ΔH° kJ/mol, ΔCp° J K⁻¹ mol⁻¹)
  */
 export function chemistryOf(record: SubstanceRecord): AcidBaseChemistry {
-  return {
-    name: record.name,
-    chargeOfMostProtonated: record.chargeOfMostProtonated,
-    steps: record.steps.map((s) => ({
-      pKa: s.pKa,
-      ...(s.deltaHkJ === undefined ? {} : { deltaHkJ: s.deltaHkJ }),
-      ...(s.deltaCpJ === undefined ? {} : { deltaCpJ: s.deltaCpJ }),
-      temperatureRangeC: s.temperatureRangeC,
-    })),
-  };
+  let chemistry = CHEMISTRY.get(record);
+  if (!chemistry) {
+    chemistry = {
+      name: record.name,
+      chargeOfMostProtonated: record.chargeOfMostProtonated,
+      steps: record.steps.map((s) => ({
+        pKa: s.pKa,
+        ...(s.deltaHkJ === undefined ? {} : { deltaHkJ: s.deltaHkJ }),
+        ...(s.deltaCpJ === undefined ? {} : { deltaCpJ: s.deltaCpJ }),
+        temperatureRangeC: s.temperatureRangeC,
+      })),
+    };
+    CHEMISTRY.set(record, chemistry);
+  }
+  return chemistry;
 }
+
+/**
+ * Each record's chemistry, made once: every composition built from the library then shares one steps array per
+ * system, by which the solver finds the Pitzer layout it already built (src/chem/pitzer/prepared.ts).
+ */
+const CHEMISTRY = new WeakMap<SubstanceRecord, AcidBaseChemistry>();
 
 /**
  * Net charge one mole of a form would add if every system stayed in the state it was
@@ -296,6 +307,10 @@ class Library implements SubstanceLibrary {
       addIon(ion, requireNumber(`extraStrongIons.${ion}`, c, 0, MAX_FORM_CONCENTRATION_M, `0 to ${MAX_FORM_CONCENTRATION_M} mol/L`));
     }
     const systems: AcidBaseSystem[] = [...totals.values()].map((t) => systemAt(t.chemistry, t.totalM));
+    // Written literally when both conditions are given (the planner's and the grid's calls): a spread that adds a field costs more than the rest of this call.
+    if (options.temperatureC !== undefined && options.activityModel !== undefined) {
+      return { systems, strongIons: ions, temperatureC: options.temperatureC, activityModel: options.activityModel };
+    }
     return {
       systems,
       strongIons: ions,

@@ -20,10 +20,21 @@ export function titrantFromForm(form: LibraryForm, library: SubstanceLibrary, fi
   if (form.adds.length > 1) {
     throw new ChemError('invalid-input', 'notATitrant', MESSAGES.notATitrant(field, form.name), field, 'a strong acid or base, or a form of one weak acid or base');
   }
-  const portion = form.adds[0];
-  return {
-    name: form.name,
-    strongIons: form.counterIons,
-    ...(portion ? { system: chemistryOf(library.findSystem(portion.system)), systemPerMole: portion.moles } : {}),
-  };
+  let byForm = TITRANTS.get(library);
+  if (!byForm) TITRANTS.set(library, (byForm = new WeakMap()));
+  let titrant = byForm.get(form);
+  if (!titrant) {
+    const portion = form.adds[0];
+    titrant = portion
+      ? { name: form.name, strongIons: form.counterIons, system: chemistryOf(library.findSystem(portion.system)), systemPerMole: portion.moles }
+      : { name: form.name, strongIons: form.counterIons };
+    byForm.set(form, titrant);
+  }
+  return titrant;
 }
+
+/**
+ * Titrants already made, per library and form: the same object each time, so what the chemistry keeps per titrant
+ * (the prepared Pitzer setup of a composition with it) is found again for a weak titrant too.
+ */
+const TITRANTS = new WeakMap<SubstanceLibrary, WeakMap<LibraryForm, Titrant>>();

@@ -1,6 +1,6 @@
 /** The titrant's band from the pKa uncertainty and the stock tolerance, and the rule that a titrant must fit the part volume. */
 import { MAX_TITRANT_M } from '../input';
-import { AcidBaseSystem, Composition, systemAt } from '../composition';
+import { AcidBaseChemistry, AcidBaseStep, AcidBaseSystem, Composition, systemAt } from '../composition';
 import { ChemError, MESSAGES } from '../errors';
 import { solvePh } from '../speciation';
 import { findStrongIon } from '../strongIons';
@@ -87,18 +87,34 @@ export function chargeOf(t: Titrant): number {
 /** The composition with every pKa of one system moved by `shift`. */
 export function shiftSystem(c: Composition, name: string, shift: number): Composition {
   return {
-    ...c,
-    systems: c.systems.map((sys): AcidBaseSystem =>
-      sys.name === name
-        ? systemAt(
-            {
-              name: sys.name,
-              chargeOfMostProtonated: sys.chargeOfMostProtonated,
-              steps: sys.steps.map((st) => ({ pKa: st.pKa + shift, deltaHkJ: st.deltaHkJ, deltaCpJ: st.deltaCpJ })),
-            },
-            sys.totalM,
-          )
-        : sys,
-    ),
+    systems: c.systems.map((sys): AcidBaseSystem => (sys.name === name ? systemAt(shiftedChemistry(sys, shift), sys.totalM) : sys)),
+    strongIons: c.strongIons,
+    temperatureC: c.temperatureC,
+    activityModel: c.activityModel,
   };
 }
+
+/**
+ * A system's chemistry with every pKa moved by `shift`, made once per steps array and shift: library systems share
+ * their steps array (chemistryOf), so the shifted one is shared too, and the solver finds its Pitzer layout by it.
+ */
+function shiftedChemistry(sys: AcidBaseChemistry, shift: number): AcidBaseChemistry {
+  let byShift = SHIFTED.get(sys.steps);
+  if (!byShift) SHIFTED.set(sys.steps, (byShift = new Map()));
+  let shifted = byShift.get(shift);
+  if (!shifted || shifted.name !== sys.name || shifted.chargeOfMostProtonated !== sys.chargeOfMostProtonated) {
+    if (byShift.size >= SHIFTS_KEPT) byShift.clear();
+    shifted = {
+      name: sys.name,
+      chargeOfMostProtonated: sys.chargeOfMostProtonated,
+      steps: sys.steps.map((st) => ({ pKa: st.pKa + shift, deltaHkJ: st.deltaHkJ, deltaCpJ: st.deltaCpJ })),
+    };
+    byShift.set(shift, shifted);
+  }
+  return shifted;
+}
+
+/** Shifted chemistries, by the original steps array (weakly held) and the shift. */
+const SHIFTED = new WeakMap<readonly AcidBaseStep[], Map<number, AcidBaseChemistry>>();
+/** Shifts kept per steps array (a plan uses two; a user's own pKa uncertainties add a few). */
+const SHIFTS_KEPT = 64;

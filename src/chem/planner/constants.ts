@@ -37,8 +37,8 @@ export { MAX_STOCK_FOLD } from '../input';
 /** Largest salt concentration the salt-target search tries, mol/L (beyond any buffer recipe). */
 export const MAX_SALT_TARGET_M = 5;
 
-/** Bisection steps for a salt target: 60 halvings of 5 M reach 4e-18 M. */
-export const SALT_TARGET_STEPS = 60;
+/** Most steps of the salt-target search: the bracket halves at least every third step, so 180 steps reach what 60 halvings of 5 M do (4e-18 M); it stops at 1e-12 of the salt, in about ten. */
+export const SALT_TARGET_STEPS = 180;
 
 /** Step for dpH/dT by central difference, °C. */
 export const DPH_DT_STEP_C = 0.5;

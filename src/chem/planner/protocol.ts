@@ -29,14 +29,22 @@ export function cautionsFor(forms: readonly LibraryForm[]): string[] {
   const lines: string[] = [];
   const seen = new Set<string>();
   for (const form of forms) {
-    if (seen.has(form.name) || form.allCautions.length === 0) continue;
+    if (form.allCautions.length === 0 || seen.has(form.name)) continue;
     seen.add(form.name);
-    const words = form.allCautions.map((f) => FLAG_WORDS[f] ?? f).join('; ');
-    lines.push(`${form.name}: ${words}.${form.cautionText ? ` ${form.cautionText}` : ''}`);
+    let line = CAUTION_LINES.get(form);
+    if (line === undefined) {
+      const words = form.allCautions.map((f) => FLAG_WORDS[f] ?? f).join('; ');
+      line = `${form.name}: ${words}.${form.cautionText ? ` ${form.cautionText}` : ''}`;
+      CAUTION_LINES.set(form, line);
+    }
+    lines.push(line);
   }
   lines.push(GENERAL_CAUTION);
   return lines;
 }
+
+/** Each form's caution line, written once (it depends on the form alone). */
+const CAUTION_LINES = new WeakMap<LibraryForm, string>();
 
 /** Rounds for reading: 4 significant figures for masses, mL to 0.1 (0.01 below 10 mL). */
 export function formatGrams(g: number): string {

@@ -122,8 +122,8 @@ export function settle(input: RecipeInput, library: SubstanceLibrary): Settled {
     partFraction: requireNumberField('partVolumeFraction', input.partVolumeFraction),
     model: readChoiceField('activityModel', input.activityModel) as ActivityModel,
     salts,
-    ...(titrant ? { titrant } : {}),
-    ...(stock ? { stock } : {}),
+    titrant,
+    stock,
     saltTarget: settleSaltTarget(input.saltTarget, library, useT),
     pKaUncertainty: readNumberField('pKaUncertainty', input.pKaUncertainty),
     titrantInBuffer: readChoiceField('titrantInBuffer', input.titrantInBuffer) as Settled['titrantInBuffer'],
@@ -138,7 +138,7 @@ export function settle(input: RecipeInput, library: SubstanceLibrary): Settled {
 export function settleTitrant(t: NonNullable<RecipeInput['titrant']>): NonNullable<Settled['titrant']> {
   const form = readTextField('titrant.form', t?.form);
   return {
-    ...(form === undefined ? {} : { form }),
+    form,
     concentrationM: requireNumberField('titrant.concentrationM', t?.concentrationM),
     tolerancePercent: requireNumberField('titrant.tolerancePercent', t?.tolerancePercent),
   };

@@ -761,3 +761,26 @@ describe('conductivity of a concentrated stock', () => {
     expect(plan.warnings).toContainEqual(expect.objectContaining({ code: 'conductivityIonicStrength', message: expect.stringMatching(/^The stock: Ionic strength/) }));
   });
 });
+
+describe('salt target: the search stops where the salt is fixed to 1e-12 of itself', () => {
+  /** The search stops when its bracket is 1e-12 of the salt wide; the goal then moves by its slope times that, plus the solver's own rounding. */
+  const GOAL_RELATIVE = 1e-9;
+  it.each([
+    [
+      'ionic strength 0.15 M with KCl, MOPS at 4 °C',
+      { saltTarget: { form: 'KCl', ionicStrengthM: 0.15 }, useTemperatureC: 4 },
+      (p: RecipePlan) => p.predictions.ionicStrengthM,
+      0.15,
+    ],
+    [
+      'ideal osmolarity 600 mOsm/L with NaCl, MOPS at 37 °C',
+      { saltTarget: { form: 'NaCl', idealOsmolarityMosm: 600 }, useTemperatureC: 37 },
+      (p: RecipePlan) => p.predictions.idealOsmolarityMosm,
+      600,
+    ],
+    ['osmolality 290 mOsm/kg with NaCl, MOPS at 25 °C', { saltTarget: { form: 'NaCl', osmolalityMosmKg: 290 } }, (p: RecipePlan) => p.predictions.osmolalityMosmKg, 290],
+  ] as const)('%s', (_label, extra, reached, goal) => {
+    const plan = planRecipe({ buffer: 'MOPS', targetPh: 7.2, concentrationMm: 20, volumeMl: 1000, form: 'MOPS free acid', titrant: { form: 'KOH', concentrationM: 1 }, ...extra });
+    expect(Math.abs(reached(plan) - goal) / goal).toBeLessThan(GOAL_RELATIVE);
+  });
+});
