@@ -47,6 +47,24 @@ export function ionicStrengthFactor(model: ActivityModel, ionicStrengthM: number
 }
 
 /**
+ * x to an integer power n (either sign) by repeated squaring: the γ of an ion of charge z
+ * in the one-number models is γ₁^(z²), so every charge's γ, and every mixed constant's
+ * factor γ₁^(2z−1), follows from one exponential. Agrees with Math.exp(n·ln x) to a few
+ * units in the last place for the |n| ≤ 64 that occur.
+ */
+export function integerPower(x: number, n: number): number {
+  let k = n < 0 ? -n : n;
+  let base = x;
+  let result = 1;
+  while (k > 0) {
+    if (k & 1) result *= base;
+    k >>= 1;
+    if (k > 0) base *= base;
+  }
+  return n < 0 ? 1 / result : result;
+}
+
+/**
  * log10 of the activity coefficient of an ion of charge z.
  *
  * @param model - activity model

@@ -18,7 +18,7 @@
  *
  * References: docs/science.md (methods and conventions); R. G. Bates, Determination of pH (1973), ch. 3–4.
  */
-import { ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, PITZER_LIMIT_MOLAL } from './activity';
+import { integerPower, ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, PITZER_LIMIT_MOLAL } from './activity';
 import { Composition, PreparedComposition, prepare } from './composition';
 import { ChemError, MESSAGES } from './errors';
 import { ChemWarning, warning } from './warnings';
@@ -106,11 +106,27 @@ function evaluate(p: PreparedComposition, kp: number[], aH: number, gH: number, 
 
 /** Sets the mixed constants for an ionic strength; returns γ₁. */
 function conditionalConstants(p: PreparedComposition, ionicStrengthM: number, kp: number[]): number {
-  const lnG = -p.a * ionicStrengthFactor(p.model, ionicStrengthM) * Math.LN10;
+  const g1 = Math.exp(-p.a * ionicStrengthFactor(p.model, ionicStrengthM) * Math.LN10);
+  mixedConstantsAt(p, g1, kp);
+  return g1;
+}
+
+/**
+ * Mixed constants K′ = Ka·γ₁^(2z−1) at γ₁, by multiplication: the first step of a system
+ * takes γ₁^(2z₀−1), and each further step one factor γ₁⁻² more (its acid is one charge lower).
+ */
+function mixedConstantsAt(p: PreparedComposition, g1: number, kp: number[]): void {
   const ka = p.ka;
-  const zd = p.zSquaredDiff;
-  for (let s = 0; s < ka.length; s++) kp[s] = ka[s] * Math.exp(lnG * zd[s]);
-  return Math.exp(lnG);
+  const inverseSquare = 1 / (g1 * g1);
+  for (let j = 0; j < p.firstStep.length; j++) {
+    const first = p.firstStep[j];
+    const steps = p.stepCount[j];
+    let factor = integerPower(g1, p.zSquaredDiff[first]);
+    for (let s = first; s < first + steps; s++) {
+      kp[s] = ka[s] * factor;
+      factor *= inverseSquare;
+    }
+  }
 }
 
 /** Solves f(x) = 0 at fixed constants from a warm start; returns x = ln a_H and counts iterations. */
