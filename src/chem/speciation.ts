@@ -18,11 +18,11 @@
  *
  * References: docs/science.md (methods and conventions); R. G. Bates, Determination of pH (1973), ch. 3–4.
  */
-import { integerPower, ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, PITZER_LIMIT_MOLAL } from './activity';
+import { integerPower, ionicStrengthFactor, ionicStrengthFactorSlope, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, PITZER_LIMIT_MOLAL } from './activity';
 import { Composition, PreparedComposition, prepare } from './composition';
 import { ChemError, MESSAGES } from './errors';
 import { ChemWarning, warning } from './warnings';
-import { selfConsistentIonicStrength } from './ionicStrength';
+import { ROUNDING_FLOOR, selfConsistentIonicStrength } from './ionicStrength';
 import { PitzerEvaluation, pitzerEvaluate } from './pitzer/model';
 import { H_INDEX, OH_INDEX, PitzerLayout, STRONG_START, pitzerLayout } from './pitzer/prepared';
 import { gammaChange, mixedConstants, nextGammas } from './pitzer/iteration';
@@ -102,6 +102,76 @@ function evaluate(p: PreparedComposition, kp: number[], aH: number, gH: number, 
   evD = d;
   evI2 = i2;
   evDI2 = di2;
+}
+
+// Further results of `evaluateCombined`: how f and 2I move with ln γ₁ at fixed a_H.
+let evFG = 0;
+let evIG = 0;
+
+/**
+ * `evaluate` for the one-number models (γ(H⁺) = γ(OH⁻) = γ₁), with two derivatives more for
+ * the combined pH/ionic-strength step: ∂f/∂ln γ₁ and ∂(2I)/∂ln γ₁ at fixed a_H. A species of
+ * charge z has concentration ∝ γ₁^(−z²) relative to its system's total, so over a system
+ * ∂⟨g⟩/∂ln γ₁ = −(⟨z²g⟩ − ⟨z²⟩⟨g⟩); H⁺ and OH⁻ go as 1/γ₁.
+ */
+function evaluateCombined(p: PreparedComposition, kp: number[], aH: number, g1: number): void {
+  const hc = aH / g1;
+  const ohc = p.kw / (aH * g1);
+  let f = p.strongCharge + hc - ohc;
+  let d = hc + ohc;
+  let i2 = hc + ohc;
+  let di2 = hc - ohc;
+  let fg = ohc - hc;
+  let ig = -hc - ohc;
+  const inv = 1 / aH;
+  const totals = p.totals;
+  const n = totals.length;
+  for (let j = 0; j < n; j++) {
+    const c = totals[j];
+    if (c === 0) continue;
+    const first = p.firstStep[j];
+    const steps = p.stepCount[j];
+    const z = p.z0[j];
+    // Summed species by species, as in `evaluate`.
+    let t = 1;
+    let sum = 1;
+    let s1 = 0;
+    let s2 = 0;
+    let q = z;
+    let q2 = z * z;
+    let q3 = z * z * z;
+    let q4 = q2 * q2;
+    let kq2 = 0;
+    for (let k = 1; k <= steps; k++) {
+      t *= kp[first + k - 1] * inv;
+      const zk = z - k;
+      const zk2 = zk * zk;
+      sum += t;
+      s1 += k * t;
+      s2 += k * k * t;
+      q += zk * t;
+      q2 += zk2 * t;
+      q3 += zk2 * zk * t;
+      q4 += zk2 * zk2 * t;
+      kq2 += k * zk2 * t;
+    }
+    const w = c / sum;
+    const nb = s1 / sum;
+    const meanQ = q / sum;
+    const meanQ2 = q2 / sum;
+    f += w * q;
+    d += w * s2 - c * nb * nb;
+    i2 += c * meanQ2;
+    di2 -= w * kq2 - c * nb * meanQ2;
+    fg -= w * q3 - c * meanQ2 * meanQ;
+    ig -= w * q4 - c * meanQ2 * meanQ2;
+  }
+  evF = f;
+  evD = d;
+  evI2 = i2;
+  evDI2 = di2;
+  evFG = fg;
+  evIG = ig;
 }
 
 /** Sets the mixed constants for an ionic strength; returns γ₁. */
@@ -341,6 +411,115 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
 export function solvePrepared(p: PreparedComposition, guessPh = 7): EquilibriumState {
   const kp: number[] = new Array<number>(p.ka.length).fill(0);
   if (p.pitzer) return solvePitzer(p, p.pitzer, kp, guessPh);
+  if (p.model === 'ideal') return solveNested(p, kp, guessPh);
+  return solveCombined(p, kp, guessPh) ?? solveNested(p, kp, guessPh);
+}
+
+/** A Newton step in ln a(H⁺) at most this long (about 0.2 pH) hands over from the bracketed solve at the starting ionic strength to the combined step. */
+const COMBINED_SWITCH = 0.5;
+/** A combined step whose change of the ionic strength is this small (relative) ends the solve: what is left after it is ~(step)², below 1e-13. */
+const COMBINED_ACCEPT = 1e-7;
+/** Combined steps allowed before the nested iteration takes over (it converges in 2–4). */
+const MAX_COMBINED_STEPS = 30;
+const combinedCounter = { n: 0 };
+
+/**
+ * The pH and the ionic strength of a one-number model solved together.
+ *
+ * Method: first the safeguarded Newton solve in x = ln a_H at the starting ionic strength
+ * (bracketed, as in solveChargeBalance), until its Newton step is under COMBINED_SWITCH;
+ * from there Newton steps on both unknowns at once,
+ *   r₁ = f(x, I) = 0,   r₂ = ½Σz²c(x, I) + I_strong − I = 0,
+ * with the exact Jacobian (∂/∂I through ln γ₁ = −A·ln10·F(I) and the γ₁ powers in the mixed
+ * constants). Each step must shrink (in ln a_H relative to max(1, |x|), in I relative to I),
+ * keep I positive and x inside the pH bracket, and the determinant must have the sign a
+ * monotone charge balance gives it (∂f/∂x > 0, ∂r₂/∂I ≈ −1); when any of these fails, or
+ * after MAX_COMBINED_STEPS, it returns undefined and the nested iteration (solveNested,
+ * which converges for every composition) solves from scratch. Ends when the step is below
+ * NEWTON_ACCEPT in x and COMBINED_ACCEPT in I, and takes that step: Newton converges
+ * quadratically, so what is left is ~(step)².
+ */
+function solveCombined(p: PreparedComposition, kp: number[], guessPh: number): EquilibriumState | undefined {
+  const counter = combinedCounter;
+  counter.n = 0;
+  let ionicStrength = p.strongIonicStrength;
+  for (let j = 0; j < p.totals.length; j++) ionicStrength += 0.5 * p.totals[j] * p.z0[j] * p.z0[j];
+  let g1 = conditionalConstants(p, ionicStrength, kp);
+  let updates = 1;
+  let x = -guessPh * Math.LN10;
+  let lo = LN_AH_MIN;
+  let hi = LN_AH_MAX;
+  let combined = false;
+  let restarted = false;
+  let combinedSteps = 0;
+  let previousSize = Infinity;
+  const floor = ROUNDING_FLOOR * p.ionicStrengthScale;
+  const slopeScale = -p.a * Math.LN10;
+  for (let it = 0; it < MAX_PH_ITERATIONS; it++) {
+    counter.n++;
+    evaluateCombined(p, kp, Math.exp(x), g1);
+    const f = evF;
+    if (!combined) {
+      // At fixed I the charge balance is increasing in x: the bracket holds while I stays.
+      if (f < 0) lo = x;
+      else if (f > 0) hi = x;
+      const next = x - f / evD;
+      const inside = next > lo && next < hi;
+      if (!(inside && Math.abs(next - x) <= COMBINED_SWITCH)) {
+        x = inside ? next : 0.5 * (lo + hi);
+        continue;
+      }
+      // A starting I far from the species' own (none of the charged forms given, say) is replaced by theirs once,
+      // and the bracket opened again: Newton in I is poor near I = 0, where γ₁ moves as √I.
+      const speciesI = p.strongIonicStrength + 0.5 * evI2;
+      if (!restarted && !(ionicStrength > 0.5 * speciesI && ionicStrength < 2 * speciesI)) {
+        restarted = true;
+        ionicStrength = speciesI;
+        g1 = conditionalConstants(p, ionicStrength, kp);
+        updates++;
+        lo = LN_AH_MIN;
+        hi = LN_AH_MAX;
+        x = next;
+        continue;
+      }
+      combined = true;
+    }
+    if (++combinedSteps > MAX_COMBINED_STEPS) return undefined;
+    const lnGammaSlope = slopeScale * ionicStrengthFactorSlope(p.model, ionicStrength);
+    const j12 = evFG * lnGammaSlope;
+    const j21 = 0.5 * evDI2;
+    const j22 = 0.5 * evIG * lnGammaSlope - 1;
+    const r2 = p.strongIonicStrength + 0.5 * evI2 - ionicStrength;
+    const det = evD * j22 - j12 * j21;
+    const dx = (r2 * j12 - f * j22) / det;
+    const dI = (f * j21 - r2 * evD) / det;
+    const nextX = x + dx;
+    const nextI = ionicStrength + dI;
+    const size = Math.max(Math.abs(dx) / Math.max(1, Math.abs(x)), Math.abs(dI) / ionicStrength);
+    if (!(det < 0 && nextI > 0 && nextX > LN_AH_MIN + 1e-6 && nextX < LN_AH_MAX - 1e-6 && size < previousSize)) return undefined;
+    previousSize = size;
+    const done = Math.abs(dx) <= NEWTON_ACCEPT * Math.max(1, Math.abs(x)) && Math.abs(dI) <= COMBINED_ACCEPT * ionicStrength + floor;
+    x = nextX;
+    ionicStrength = nextI;
+    // The constants follow I to the last point too, so the species reported there balance their charges.
+    g1 = conditionalConstants(p, ionicStrength, kp);
+    updates++;
+    if (done) return { pH: -x / Math.LN10, ionicStrengthM: ionicStrength, gamma1: g1, mixedKa: kp, evaluations: counter.n, ionicStrengthIterations: updates };
+  }
+  return undefined;
+}
+
+/**
+ * The nested iteration: the ionic strength iterated to self-consistency (secant steps, see
+ * ionicStrength.ts) around a pH solve at fixed constants (each warm-started from the last).
+ * Converges for every composition; the combined step above hands over to it when a safeguard trips.
+ */
+export function solvePreparedNested(p: PreparedComposition, guessPh = 7): EquilibriumState {
+  const kp: number[] = new Array<number>(p.ka.length).fill(0);
+  return p.pitzer ? solvePitzer(p, p.pitzer, kp, guessPh) : solveNested(p, kp, guessPh);
+}
+
+function solveNested(p: PreparedComposition, kp: number[], guessPh: number): EquilibriumState {
   const counter = { n: 0 };
   let x = -guessPh * Math.LN10;
   let g1 = 1;
