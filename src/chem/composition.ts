@@ -7,7 +7,7 @@ import { ChemError, MESSAGES, requireInteger, requireNumber } from './errors';
 import { ChemWarning, warning } from './warnings';
 import { findStrongIon } from './strongIons';
 import { VantHoffTerms, lnKaAt, vantHoffTerms } from './vantHoff';
-import { PitzerLayout, pitzerLayout } from './pitzer/prepared';
+import { PitzerLayout, PitzerLayoutShape, layoutWith, pitzerLayoutShape } from './pitzer/prepared';
 import { debyeHuckelA, pKw, waterDensity } from './water';
 
 /** One proton-dissociation step of an acid–base system, constants at 25 °C and I = 0. */
@@ -94,7 +94,7 @@ export interface PreparedComposition {
   readonly strongIonicStrength: number;
   /** Largest ionic strength the composition could reach (every system in its most charged state), mol/L; scales rounding floors. */
   readonly ionicStrengthScale: number;
-  readonly warnings: ChemWarning[];
+  readonly warnings: readonly ChemWarning[];
   /** The composition as given (the Pitzer paths rebuild it with titrant added). */
   readonly source: Composition;
   /** Density of pure water at the temperature, g/cm³. */
@@ -149,7 +149,133 @@ export function appendStepConstants(chem: AcidBaseChemistry, terms: VantHoffTerm
 }
 
 /**
- * Validates a composition and computes its constants at the temperature.
+ * The constants of a composition's chemistry at its temperature: everything `prepare`
+ * computes that does not depend on the amounts (the systems validated, Ka of every step
+ * by van 't Hoff, Kw, the Debye–Hückel A, the density of water, the strong ions' charges,
+ * and for the Pitzer model the layout of its species). The same for every composition of
+ * the same systems and strong ions at the same temperature and activity model, so a plan,
+ * a capacity, a dilution series or a worksheet column computes it once (see chemistryOf).
+ */
+export interface ChemistryAt {
+  readonly temperatureC: number;
+  readonly model: ActivityModel;
+  readonly a: number;
+  readonly kw: number;
+  readonly waterDensity: number;
+  readonly z0: readonly number[];
+  readonly firstStep: readonly number[];
+  readonly stepCount: readonly number[];
+  readonly ka: readonly number[];
+  readonly zSquaredDiff: readonly number[];
+  /** Per system: the largest z² any of its forms has (for the rounding scale of the ionic strength). */
+  readonly zMaxSquared: readonly number[];
+  /** The strong-ion keys as given, and each one's charge. */
+  readonly strongIonNames: readonly string[];
+  readonly strongCharges: readonly number[];
+  readonly warnings: readonly ChemWarning[];
+  /** The Pitzer layout without amounts (model `pitzer` only). */
+  readonly layout?: PitzerLayoutShape;
+  /** What the constants were computed for, compared by identity (steps) and value (the rest) when found again. */
+  readonly systems: readonly AcidBaseChemistry[];
+}
+
+/** Chemistries kept, most recent first found: a plan uses about ten (temperatures, titrant added), a worksheet a handful. */
+const CHEMISTRY_RING = 64;
+const chemistryRing: (ChemistryAt | undefined)[] = new Array<ChemistryAt | undefined>(CHEMISTRY_RING).fill(undefined);
+let chemistryNext = 0;
+
+function sameChemistry(c: ChemistryAt, systems: readonly AcidBaseChemistry[], names: readonly string[], temperatureC: number, model: ActivityModel): boolean {
+  if (c.temperatureC !== temperatureC || c.model !== model || c.systems.length !== systems.length || c.strongIonNames.length !== names.length) return false;
+  for (let j = 0; j < systems.length; j++) {
+    const a = c.systems[j];
+    const b = systems[j];
+    if (a.steps !== b.steps || a.chargeOfMostProtonated !== b.chargeOfMostProtonated || a.name !== b.name) return false;
+  }
+  for (let i = 0; i < names.length; i++) if (c.strongIonNames[i] !== names[i]) return false;
+  return true;
+}
+
+/**
+ * The chemistry of a composition at its temperature and activity model: found among the
+ * last CHEMISTRY_RING computed (systems compared by their steps array, charge and name;
+ * compositions and their steps are never changed once built, so the array stands for its
+ * pKa, ΔH° and ΔCp°), or computed, validated and kept. Pure: the answer depends only on the
+ * arguments. Throws ChemError (invalid-input) for a bad system or strong-ion name.
+ *
+ * @param systems - the acid–base systems (their amounts are not read)
+ * @param strongIonNames - the strong-ion keys, in the order given
+ * @param temperatureC - °C, validated already
+ * @param model - the activity model
+ */
+export function chemistryOf(systems: readonly AcidBaseChemistry[], strongIonNames: readonly string[], temperatureC: number, model: ActivityModel): ChemistryAt {
+  const found = knownChemistry(systems, strongIonNames, temperatureC, model);
+  if (found) return found;
+  const c = computeChemistry(systems, strongIonNames, temperatureC, model);
+  chemistryRing[chemistryNext] = c;
+  chemistryNext = (chemistryNext + 1) % CHEMISTRY_RING;
+  return c;
+}
+
+/** The chemistry among those kept, or undefined. */
+function knownChemistry(systems: readonly AcidBaseChemistry[], strongIonNames: readonly string[], temperatureC: number, model: ActivityModel): ChemistryAt | undefined {
+  for (let k = 1; k <= CHEMISTRY_RING; k++) {
+    const c = chemistryRing[(chemistryNext - k + CHEMISTRY_RING) % CHEMISTRY_RING];
+    if (c === undefined) return undefined;
+    if (sameChemistry(c, systems, strongIonNames, temperatureC, model)) return c;
+  }
+  return undefined;
+}
+
+function computeChemistry(systems: readonly AcidBaseChemistry[], strongIonNames: readonly string[], temperatureC: number, model: ActivityModel): ChemistryAt {
+  const n = systems.length;
+  for (let j = 0; j < n; j++) validateChemistry('systems', systems[j], j);
+  const z0: number[] = [];
+  const firstStep: number[] = [];
+  const stepCount: number[] = [];
+  const ka: number[] = [];
+  const zSquaredDiff: number[] = [];
+  const zMaxSquared: number[] = [];
+  const terms = vantHoffTerms(temperatureC);
+  let s = 0;
+  for (let j = 0; j < n; j++) {
+    const sys = systems[j];
+    z0.push(sys.chargeOfMostProtonated);
+    firstStep.push(s);
+    stepCount.push(sys.steps.length);
+    const zMax = Math.max(Math.abs(sys.chargeOfMostProtonated), Math.abs(sys.chargeOfMostProtonated - sys.steps.length));
+    zMaxSquared.push(zMax * zMax);
+    appendStepConstants(sys, terms, ka, zSquaredDiff);
+    s += sys.steps.length;
+  }
+  const strongCharges = strongIonNames.map((name) => findStrongIon('strongIons', name).charge);
+  const a = debyeHuckelA(temperatureC);
+  const warnings: ChemWarning[] = [];
+  if (temperatureC > FITTED_RANGE_MAX_C) {
+    warnings.push(warning('aboveFittedRange', MESSAGES.aboveFittedRange(temperatureC, FITTED_RANGE_MAX_C), 'temperatureC'));
+  }
+  return {
+    temperatureC,
+    model,
+    a,
+    kw: Math.pow(10, -pKw(temperatureC)),
+    waterDensity: waterDensity(temperatureC),
+    z0,
+    firstStep,
+    stepCount,
+    ka,
+    zSquaredDiff,
+    zMaxSquared,
+    strongIonNames: strongIonNames.slice(),
+    strongCharges,
+    warnings,
+    layout: model === 'pitzer' ? pitzerLayoutShape(strongIonNames, systems, temperatureC, a) : undefined,
+    systems: systems.map((sys) => ({ name: sys.name, chargeOfMostProtonated: sys.chargeOfMostProtonated, steps: sys.steps })),
+  };
+}
+
+/**
+ * Validates a composition and computes its constants at the temperature (the chemistry
+ * part found again by chemistryOf when it was computed lately).
  * Throws ChemError (invalid-input) naming the field, value and what is allowed.
  */
 export function prepare(composition: Composition): PreparedComposition {
@@ -173,77 +299,70 @@ export function prepare(composition: Composition): PreparedComposition {
   if (systems.length === 0 && ionNames.length === 0) {
     throw new ChemError('invalid-input', 'emptyComposition', MESSAGES.emptyComposition(), 'systems');
   }
-
-  const n = systems.length;
-  for (let j = 0; j < n; j++) {
+  const known = knownChemistry(systems, ionNames, temperatureC, model);
+  if (known) return prepareWith(known, composition);
+  // New chemistry: everything is checked in the order of the composition (each system's chemistry and amount, then
+  // each strong ion's name and amount), so the first fault reported does not depend on what was computed before.
+  for (let j = 0; j < systems.length; j++) {
     validateChemistry('systems', systems[j], j);
     const total = systems[j].totalM;
     if (!inRange(total, 0, MAX_CONCENTRATION_M)) requireNumber(`systems[${j}].totalM`, total, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
   }
-
-  // Plain arrays: for the handful of entries a buffer has they allocate several times faster than typed arrays.
-  const totals: number[] = [];
-  const z0: number[] = [];
-  const firstStep: number[] = [];
-  const stepCount: number[] = [];
-  const ka: number[] = [];
-  const zSquaredDiff: number[] = [];
-  const terms = vantHoffTerms(temperatureC);
-  let s = 0;
-  let ionicStrengthScale = 1e-7;
-  for (let j = 0; j < n; j++) {
-    const sys = systems[j];
-    totals.push(sys.totalM);
-    z0.push(sys.chargeOfMostProtonated);
-    firstStep.push(s);
-    stepCount.push(sys.steps.length);
-    const zMax = Math.max(Math.abs(sys.chargeOfMostProtonated), Math.abs(sys.chargeOfMostProtonated - sys.steps.length));
-    ionicStrengthScale += 0.5 * sys.totalM * zMax * zMax;
-    appendStepConstants(sys, terms, ka, zSquaredDiff);
-    s += sys.steps.length;
-  }
-
-  let strongCharge = 0;
-  let strongIonicStrength = 0;
   for (const name of ionNames) {
-    const ion = findStrongIon('strongIons', name);
+    findStrongIon('strongIons', name);
     const c = ions[name];
     if (!inRange(c, 0, MAX_CONCENTRATION_M)) requireNumber(`strongIons.${name}`, c, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
-    strongCharge += ion.charge * c;
-    strongIonicStrength += 0.5 * ion.charge * ion.charge * c;
   }
+  return prepareWith(chemistryOf(systems, ionNames, temperatureC, model), composition);
+}
 
-  const a = debyeHuckelA(temperatureC);
-  const warnings: ChemWarning[] = [];
-  if (temperatureC > FITTED_RANGE_MAX_C) {
-    warnings.push(warning('aboveFittedRange', MESSAGES.aboveFittedRange(temperatureC, FITTED_RANGE_MAX_C), 'temperatureC'));
+/**
+ * A composition prepared with its chemistry given (from chemistryOf for the same systems,
+ * strong-ion keys, temperature and model): only the amounts are read and validated.
+ * Throws ChemError (invalid-input) for an amount out of range.
+ */
+export function prepareWith(chemistry: ChemistryAt, composition: Composition): PreparedComposition {
+  const systems = composition.systems ?? [];
+  const n = systems.length;
+  // Plain arrays filled by push: for the handful of entries a buffer has they allocate several times faster than typed arrays.
+  const totals: number[] = [];
+  let ionicStrengthScale = 1e-7;
+  for (let j = 0; j < n; j++) {
+    const total = systems[j].totalM;
+    if (!inRange(total, 0, MAX_CONCENTRATION_M)) requireNumber(`systems[${j}].totalM`, total, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
+    totals.push(total);
+    ionicStrengthScale += 0.5 * total * chemistry.zMaxSquared[j];
+  }
+  const ions = composition.strongIons ?? {};
+  const names = chemistry.strongIonNames;
+  const strongConcentrations: number[] = [];
+  let strongCharge = 0;
+  let strongIonicStrength = 0;
+  for (let i = 0; i < names.length; i++) {
+    const c = ions[names[i]];
+    if (!inRange(c, 0, MAX_CONCENTRATION_M)) requireNumber(`strongIons.${names[i]}`, c, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
+    const z = chemistry.strongCharges[i];
+    strongConcentrations.push(c);
+    strongCharge += z * c;
+    strongIonicStrength += 0.5 * z * z * c;
   }
   return {
-    temperatureC,
-    model,
-    a,
-    kw: Math.pow(10, -pKw(temperatureC)),
+    temperatureC: chemistry.temperatureC,
+    model: chemistry.model,
+    a: chemistry.a,
+    kw: chemistry.kw,
     totals,
-    z0,
-    firstStep,
-    stepCount,
-    ka,
-    zSquaredDiff,
+    z0: chemistry.z0,
+    firstStep: chemistry.firstStep,
+    stepCount: chemistry.stepCount,
+    ka: chemistry.ka,
+    zSquaredDiff: chemistry.zSquaredDiff,
     strongCharge,
     strongIonicStrength,
     ionicStrengthScale: ionicStrengthScale + strongIonicStrength,
-    warnings,
+    warnings: chemistry.warnings,
     source: composition,
-    waterDensity: waterDensity(temperatureC),
-    pitzer:
-      model === 'pitzer'
-        ? pitzerLayout(
-            ionNames,
-            ionNames.map((name) => ions[name]),
-            systems,
-            temperatureC,
-            a,
-          )
-        : undefined,
+    waterDensity: chemistry.waterDensity,
+    pitzer: chemistry.layout ? layoutWith(chemistry.layout, strongConcentrations) : undefined,
   };
 }
