@@ -101,6 +101,16 @@ export interface PreparedComposition {
   readonly waterDensity: number;
   /** The Pitzer model over this composition's species (model `pitzer` only). */
   readonly pitzer?: PitzerLayout;
+  /** Each strong ion's amount, mol/L, in the order of the keys. */
+  readonly strongConcentrations: readonly number[];
+  /** The constants this was prepared with (shared by every composition of the same chemistry). */
+  readonly chemistry: ChemistryAt;
+}
+
+/** Formats a charge the way chemists write it: 0, 1+, 2−. */
+export function chargeLabel(z: number): string {
+  if (z === 0) return '0';
+  return `${Math.abs(z)}${z > 0 ? '+' : '−'}`;
 }
 
 /** True when `v` is a number within [min, max] (NaN fails): the cheap test made before any message is built. */
@@ -175,6 +185,13 @@ export interface ChemistryAt {
   readonly warnings: readonly ChemWarning[];
   /** The Pitzer layout without amounts (model `pitzer` only). */
   readonly layout?: PitzerLayoutShape;
+  /** pKw and each step's pKa at the temperature (I = 0), for the report. */
+  readonly pKw: number;
+  readonly pKa: readonly number[];
+  /** The report's name of every species in the layout's order (H⁺, OH⁻, strong ions, each system's forms): built once. */
+  readonly speciesNames: readonly string[];
+  /** Filled on first use by a report of a one-number model: the Pitzer layout its osmotic coefficient is evaluated on. */
+  osmoticLayout?: PitzerLayoutShape;
   /** What the constants were computed for, compared by identity (steps) and value (the rest) when found again. */
   readonly systems: readonly AcidBaseChemistry[];
 }
@@ -247,7 +264,13 @@ function computeChemistry(systems: readonly AcidBaseChemistry[], strongIonNames:
     appendStepConstants(sys, terms, ka, zSquaredDiff);
     s += sys.steps.length;
   }
-  const strongCharges = strongIonNames.map((name) => findStrongIon('strongIons', name).charge);
+  const strongIons = strongIonNames.map((name) => findStrongIon('strongIons', name));
+  const strongCharges = strongIons.map((ion) => ion.charge);
+  const speciesNames = ['H+', 'OH-', ...strongIons.map((ion) => ion.name)];
+  for (const sys of systems) {
+    for (let k = 0; k <= sys.steps.length; k++) speciesNames.push(`${sys.name} ${chargeLabel(sys.chargeOfMostProtonated - k)}`);
+  }
+  const kwExponent = pKw(temperatureC);
   const a = debyeHuckelA(temperatureC);
   const warnings: ChemWarning[] = [];
   if (temperatureC > FITTED_RANGE_MAX_C) {
@@ -257,7 +280,10 @@ function computeChemistry(systems: readonly AcidBaseChemistry[], strongIonNames:
     temperatureC,
     model,
     a,
-    kw: Math.pow(10, -pKw(temperatureC)),
+    kw: Math.pow(10, -kwExponent),
+    pKw: kwExponent,
+    pKa: ka.map((k) => -Math.log10(k)),
+    speciesNames,
     waterDensity: waterDensity(temperatureC),
     z0,
     firstStep,
@@ -364,5 +390,7 @@ export function prepareWith(chemistry: ChemistryAt, composition: Composition): P
     source: composition,
     waterDensity: chemistry.waterDensity,
     pitzer: chemistry.layout ? layoutWith(chemistry.layout, strongConcentrations) : undefined,
+    strongConcentrations,
+    chemistry,
   };
 }

@@ -20,15 +20,15 @@
  */
 import { integerPower, ionicStrengthFactor, ionicStrengthFactorSlope, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, PITZER_LIMIT_MOLAL } from './activity';
 import { Composition, PreparedComposition, prepare } from './composition';
+export { chargeLabel } from './composition';
 import { ChemError, MESSAGES } from './errors';
 import { ChemWarning, warning } from './warnings';
 import { ROUNDING_FLOOR, selfConsistentIonicStrength } from './ionicStrength';
 import { PitzerEvaluation, pitzerEvaluate } from './pitzer/model';
-import { H_INDEX, OH_INDEX, PitzerLayout, STRONG_START, pitzerLayout } from './pitzer/prepared';
+import { H_INDEX, OH_INDEX, PitzerLayout, STRONG_START, layoutWith, pitzerLayoutShape } from './pitzer/prepared';
 import { gammaChange, mixedConstants, nextGammas } from './pitzer/iteration';
 import { waterKgPerLitre } from './pitzer/volumes';
-import { STRONG_IONS, findStrongIon } from './strongIons';
-import { pKw } from './water';
+import { STRONG_IONS } from './strongIons';
 
 /** Lowest pH the bracket covers: a(H⁺) = 10^−16. Beyond any aqueous buffer; a target outside is refused. */
 export const PH_BRACKET_HIGH = 16;
@@ -610,12 +610,6 @@ export interface SpeciationResult {
   readonly warnings: readonly ChemWarning[];
 }
 
-/** Formats a charge the way chemists write it: 0, 1+, 2−. */
-export function chargeLabel(z: number): string {
-  if (z === 0) return '0';
-  return `${Math.abs(z)}${z > 0 ? '+' : '−'}`;
-}
-
 /**
  * Solves a composition and reports every species.
  *
@@ -636,73 +630,72 @@ export const UNPARAMETERISED_IONIC_STRENGTH_MOLAL = 0.5;
 /** Temperature distance from 25 °C (K) beyond which parameters without a published slope earn a warning in concentrated solution. */
 export const PITZER_TEMPERATURE_WINDOW_K = 10;
 
-/** Builds the full report from a solved state. */
+/** Scratch for the one-number report's osmotic coefficient (the solver is synchronous). */
+const reportEvaluation: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
+let reportMolality: number[] = [];
+let reportLnGamma: number[] = [];
+
+/**
+ * Builds the full report from a solved state. Species names come from the chemistry (built
+ * once per chemistry); γ of the one-number models are integer powers of γ₁ and apparent pKa′
+ * follow from the pKa at the temperature and the γ, so no logarithm or power is taken per species.
+ */
 export function report(p: PreparedComposition, state: EquilibriumState, composition: Composition): SpeciationResult {
+  const chemistry = p.chemistry;
   const aH = Math.pow(10, -state.pH);
   const g1 = state.gamma1;
-  const ionNames = Object.keys(composition.strongIons ?? {});
-  const layout =
-    p.pitzer ??
-    pitzerLayout(
-      ionNames,
-      ionNames.map((name) => composition.strongIons![name]),
-      composition.systems,
-      p.temperatureC,
-      p.a,
-    );
+  let layout = p.pitzer;
+  if (!layout) {
+    chemistry.osmoticLayout ??= pitzerLayoutShape(chemistry.strongIonNames, chemistry.systems, p.temperatureC, p.a);
+    layout = layoutWith(chemistry.osmoticLayout, p.strongConcentrations);
+  }
   const n = layout.speciesCount;
   const charges = layout.system.charges;
+  const pitzer = state.pitzer;
   let conc: readonly number[];
   let waterKgPerL: number;
   let ionicStrengthMolal: number;
   let osmoticCoefficient: number;
-  const lnGamma = new Array<number>(n).fill(0);
-  if (state.pitzer) {
-    conc = state.pitzer.concentrations;
-    waterKgPerL = state.pitzer.waterKgPerL;
-    ionicStrengthMolal = state.pitzer.ionicStrengthMolal;
-    osmoticCoefficient = state.pitzer.osmoticCoefficient;
-    for (let i = 0; i < n; i++) lnGamma[i] = state.pitzer.lnGamma[i];
+  if (pitzer) {
+    conc = pitzer.concentrations;
+    waterKgPerL = pitzer.waterKgPerL;
+    ionicStrengthMolal = pitzer.ionicStrengthMolal;
+    osmoticCoefficient = pitzer.osmoticCoefficient;
   } else {
     // The pH model is a one-number model; the osmotic coefficient still comes from the Pitzer equations at the species found.
-    const c = new Array<number>(n).fill(0);
+    const c: number[] = [];
+    for (let i = 0; i < n; i++) c.push(0);
     c[H_INDEX] = aH / g1;
     c[OH_INDEX] = p.kw / (aH * g1);
-    layout.strongConcentrations.forEach((v, i) => (c[STRONG_START + i] = v));
+    const strong = p.strongConcentrations;
+    for (let i = 0; i < strong.length; i++) c[STRONG_START + i] = strong[i];
     systemConcentrations(p, layout, state.mixedKa, aH, c);
     conc = c;
     waterKgPerL = waterKgPerLitre(p.waterDensity, c, layout.volumes, state.ionicStrengthM);
-    const evaluation: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
-    pitzerEvaluate(
-      layout.system,
-      c.map((v) => v / waterKgPerL),
-      new Array<number>(n).fill(0),
-      evaluation,
-    );
-    ionicStrengthMolal = evaluation.ionicStrength;
-    osmoticCoefficient = evaluation.osmoticCoefficient;
-    const lnG1 = Math.log(g1);
-    for (let i = 0; i < n; i++) lnGamma[i] = lnG1 * charges[i] * charges[i];
+    if (reportMolality.length < n) {
+      reportMolality = new Array<number>(n).fill(0);
+      reportLnGamma = new Array<number>(n).fill(0);
+    }
+    const m = reportMolality;
+    for (let i = 0; i < n; i++) m[i] = c[i] / waterKgPerL;
+    pitzerEvaluate(layout.system, m, reportLnGamma, reportEvaluation);
+    ionicStrengthMolal = reportEvaluation.ionicStrength;
+    osmoticCoefficient = reportEvaluation.osmoticCoefficient;
   }
-  const molal = state.pitzer !== undefined;
+  const names = chemistry.speciesNames;
   const species: SpeciesAmount[] = [];
   // Species objects are written out literally, one shape with a system and one without: an object spread here cost
   // a fifth of a whole speciation.
-  const push = (i: number, name: string, system?: string, protonsLost?: number) => {
+  const strongEnd = STRONG_START + p.strongConcentrations.length;
+  for (let i = 0; i < strongEnd; i++) {
     const molality = conc[i] / waterKgPerL;
-    const activity = (molal ? molality : conc[i]) * Math.exp(lnGamma[i]);
-    if (system === undefined) species.push({ name, charge: charges[i], concentrationM: conc[i], molality, activity });
-    else species.push({ name, system, protonsLost, charge: charges[i], concentrationM: conc[i], molality, activity });
-  };
-  push(H_INDEX, 'H+');
-  push(OH_INDEX, 'OH-');
+    const z = charges[i];
+    const activity = pitzer ? molality * Math.exp(pitzer.lnGamma[i]) : conc[i] * integerPower(g1, z * z);
+    species.push({ name: names[i], charge: z, concentrationM: conc[i], molality, activity });
+  }
   let residual = p.strongCharge + conc[H_INDEX] - conc[OH_INDEX];
   let totalCharge = conc[H_INDEX] + conc[OH_INDEX];
-  ionNames.forEach((name, i) => {
-    const ion = findStrongIon('strongIons', name);
-    push(STRONG_START + i, ion.name);
-    totalCharge += Math.abs(ion.charge) * conc[STRONG_START + i];
-  });
+  for (let i = STRONG_START; i < strongEnd; i++) totalCharge += Math.abs(charges[i]) * conc[i];
   let sumMolal = 0;
   let idealOsmolarityM = 0;
   for (let i = 0; i < n; i++) {
@@ -710,34 +703,48 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     idealOsmolarityM += conc[i];
   }
   const systems: SystemSpeciation[] = [];
-  composition.systems.forEach((sys, j) => {
+  const kp = state.mixedKa;
+  const log10G1 = Math.log10(g1);
+  for (let j = 0; j < composition.systems.length; j++) {
+    const sys = composition.systems[j];
     const first = p.firstStep[j];
     const steps = p.stepCount[j];
     const start = layout.systemStart[j];
-    const weights = [1];
-    for (let k = 1; k <= steps; k++) weights.push((weights[k - 1] * state.mixedKa[first + k - 1]) / aH);
-    const sum = weights.reduce((a, b) => a + b, 0);
-    const fractions = weights.map((w) => w / sum);
+    const z0 = sys.chargeOfMostProtonated;
+    const fractions: number[] = [1];
+    let sum = 1;
+    for (let k = 1; k <= steps; k++) {
+      const w = (fractions[k - 1] * kp[first + k - 1]) / aH;
+      fractions.push(w);
+      sum += w;
+    }
     let meanCharge = 0;
-    fractions.forEach((fr, k) => {
-      const z = sys.chargeOfMostProtonated - k;
+    for (let k = 0; k <= steps; k++) {
+      const fr = fractions[k] / sum;
+      fractions[k] = fr;
+      const z = z0 - k;
       meanCharge += fr * z;
       totalCharge += Math.abs(z) * fr * sys.totalM;
-      push(start + k, `${sys.name} ${chargeLabel(z)}`, sys.name, k);
-    });
+      const i = start + k;
+      const molality = conc[i] / waterKgPerL;
+      const activity = pitzer ? molality * Math.exp(pitzer.lnGamma[i]) : conc[i] * integerPower(g1, z * z);
+      species.push({ name: names[i], system: sys.name, protonsLost: k, charge: z, concentrationM: conc[i], molality, activity });
+    }
     residual += sys.totalM * meanCharge;
-    systems.push({
-      name: sys.name,
-      totalM: sys.totalM,
-      meanCharge,
-      fractions,
-      apparentPKa: state.mixedKa.slice(first, first + steps).map((k) => -Math.log10(k)),
-    });
-  });
-  const warnings = [...p.warnings];
+    // pKa′ = pKa − log10(γ(HA)/γ(A)): with γ₁^(z²) the ratio is γ₁^(2z−1); with Pitzer, from the two ln γ.
+    const apparentPKa: number[] = [];
+    for (let k = 0; k < steps; k++) {
+      const s = first + k;
+      apparentPKa.push(pitzer ? chemistry.pKa[s] - (pitzer.lnGamma[start + k] - pitzer.lnGamma[start + k + 1]) / Math.LN10 : chemistry.pKa[s] - p.zSquaredDiff[s] * log10G1);
+    }
+    systems.push({ name: sys.name, totalM: sys.totalM, meanCharge, fractions, apparentPKa });
+  }
+  const warnings = p.warnings.slice();
   const coverage = pitzerCoverage(layout, conc, waterKgPerL, ionicStrengthMolal, composition);
-  if (p.model === 'pitzer') warnings.push(...pitzerWarnings(p, layout, coverage, ionicStrengthMolal));
-  else if (p.model !== 'ideal' && state.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M) {
+  if (p.model === 'pitzer') {
+    const more = pitzerWarnings(p, layout, coverage, ionicStrengthMolal);
+    for (let i = 0; i < more.length; i++) warnings.push(more[i]);
+  } else if (p.model !== 'ideal' && state.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M) {
     warnings.push(warning('beyondActivityModel', MESSAGES.beyondActivityModel(state.ionicStrengthM, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES[p.model]), 'activityModel'));
   }
   return {
@@ -751,7 +758,7 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     osmolalityMosmKg: osmoticCoefficient * sumMolal * 1000,
     idealOsmolarityMosmL: idealOsmolarityM * 1000,
     pitzerCoverage: coverage,
-    pKw: pKw(p.temperatureC),
+    pKw: chemistry.pKw,
     debyeHuckelA: p.a,
     species,
     systems,
