@@ -322,6 +322,8 @@ let scratchMolality: number[] = [];
 const pitzerCounter = { n: 0 };
 const pitzerResult: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
 let scratchNext: number[] = [];
+let scratchPreviousL: number[] = [];
+let scratchPreviousG: number[] = [];
 
 /**
  * The Pitzer solve: the pH at fixed activity coefficients (the same safeguarded Newton as
@@ -342,6 +344,8 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
   if (scratchMolality.length < n) {
     scratchMolality = new Array<number>(n).fill(0);
     scratchNext = new Array<number>(n).fill(0);
+    scratchPreviousL = new Array<number>(n).fill(0);
+    scratchPreviousG = new Array<number>(n).fill(0);
   }
   const m = scratchMolality;
   const next = scratchNext;
@@ -362,8 +366,9 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
   let contraction = 1;
   let ionicStrengthM = 0;
   let finalPass = false;
-  const previousL: number[] = lnGamma.slice();
-  const previousG: number[] = lnGamma.slice();
+  // The first step (plain) writes both before any step reads them: scratch shared by every solve.
+  const previousL = scratchPreviousL;
+  const previousG = scratchPreviousG;
   for (let it = 1; it <= MAX_PITZER_ITERATIONS; it++) {
     const gH = Math.exp(lnGamma[H_INDEX]) / w;
     const gOH = Math.exp(lnGamma[OH_INDEX]) / w;
