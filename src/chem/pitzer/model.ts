@@ -259,9 +259,11 @@ const J_TABLE_SLOPE = new Float64Array(J_TABLE_SIZE);
 }
 
 /** J(x) and x·J′(x) at x = k·x₁₁ for the multipliers k that occur, filled once per evaluation. */
-const jValue = new Float64Array(10);
-const jxPrime = new Float64Array(10);
-const jStamp = new Float64Array(10).fill(-1);
+/** Largest multiplier k = z_i·z_j: charges reach ±6 (the composition's limit), so 36; typed arrays do not grow. */
+const J_MULTIPLIERS = 64;
+const jValue = new Float64Array(J_MULTIPLIERS);
+const jxPrime = new Float64Array(J_MULTIPLIERS);
+const jStamp = new Float64Array(J_MULTIPLIERS).fill(-1);
 const jOut = { j: 0, xjp: 0 };
 
 function jAt(multiplier: number, x11: number, stamp: number): void {
