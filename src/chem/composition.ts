@@ -185,21 +185,40 @@ export interface ChemistryAt {
   readonly warnings: readonly ChemWarning[];
   /** The Pitzer layout without amounts (model `pitzer` only). */
   readonly layout?: PitzerLayoutShape;
-  /** pKw and each step's pKa at the temperature (I = 0), for the report. */
+  /** pKw at the temperature. */
   readonly pKw: number;
-  readonly pKa: readonly number[];
-  /** The report's name of every species in the layout's order (H⁺, OH⁻, strong ions, each system's forms): built once. */
-  readonly speciesNames: readonly string[];
+  /** Filled on first use by a report (see reportConstants): what only the report needs. */
+  reportConstants?: ReportConstants;
   /** Filled on first use by a report of a one-number model: the Pitzer layout its osmotic coefficient is evaluated on. */
   osmoticLayout?: PitzerLayoutShape;
   /** What the constants were computed for, compared by identity (steps) and value (the rest) when found again. */
   readonly systems: readonly AcidBaseChemistry[];
 }
 
+/** What only a report needs of a chemistry: each step's pKa at the temperature (I = 0), and every species' name in the layout's order (H⁺, OH⁻, strong ions, each system's forms). */
+export interface ReportConstants {
+  readonly pKa: readonly number[];
+  readonly speciesNames: readonly string[];
+}
+
+/** A chemistry's report constants, built on the first report of it (a solve alone never needs them). */
+export function reportConstants(c: ChemistryAt): ReportConstants {
+  if (c.reportConstants) return c.reportConstants;
+  const speciesNames = ['H+', 'OH-'];
+  for (const name of c.strongIonNames) speciesNames.push(findStrongIon('strongIons', name).name);
+  for (const sys of c.systems) {
+    for (let k = 0; k <= sys.steps.length; k++) speciesNames.push(`${sys.name} ${chargeLabel(sys.chargeOfMostProtonated - k)}`);
+  }
+  c.reportConstants = { pKa: c.ka.map((k) => -Math.log10(k)), speciesNames };
+  return c.reportConstants;
+}
+
 /** Chemistries kept, most recent first found: a plan uses about ten (temperatures, titrant added), a worksheet a handful. */
-const CHEMISTRY_RING = 64;
+const CHEMISTRY_RING = 32;
 const chemistryRing: (ChemistryAt | undefined)[] = new Array<ChemistryAt | undefined>(CHEMISTRY_RING).fill(undefined);
 let chemistryNext = 0;
+/** The temperature of each ring entry (NaN where empty: it equals nothing). */
+const ringTemperatures = new Float64Array(CHEMISTRY_RING).fill(NaN);
 
 function sameChemistry(c: ChemistryAt, systems: readonly AcidBaseChemistry[], names: readonly string[], temperatureC: number, model: ActivityModel): boolean {
   if (c.temperatureC !== temperatureC || c.model !== model || c.systems.length !== systems.length || c.strongIonNames.length !== names.length) return false;
@@ -227,25 +246,33 @@ function sameChemistry(c: ChemistryAt, systems: readonly AcidBaseChemistry[], na
 export function chemistryOf(systems: readonly AcidBaseChemistry[], strongIonNames: readonly string[], temperatureC: number, model: ActivityModel): ChemistryAt {
   const found = knownChemistry(systems, strongIonNames, temperatureC, model);
   if (found) return found;
-  const c = computeChemistry(systems, strongIonNames, temperatureC, model);
+  for (let j = 0; j < systems.length; j++) validateChemistry('systems', systems[j], j);
+  return keep(computeChemistry(systems, strongIonNames, temperatureC, model));
+}
+
+/** Puts a chemistry in the ring, in place of the oldest. */
+function keep(c: ChemistryAt): ChemistryAt {
   chemistryRing[chemistryNext] = c;
+  ringTemperatures[chemistryNext] = c.temperatureC;
   chemistryNext = (chemistryNext + 1) % CHEMISTRY_RING;
   return c;
 }
 
 /** The chemistry among those kept, or undefined. */
 function knownChemistry(systems: readonly AcidBaseChemistry[], strongIonNames: readonly string[], temperatureC: number, model: ActivityModel): ChemistryAt | undefined {
+  // Temperatures first, from a typed array: a column of solutions at as many temperatures then costs a tight scan.
   for (let k = 1; k <= CHEMISTRY_RING; k++) {
-    const c = chemistryRing[(chemistryNext - k + CHEMISTRY_RING) % CHEMISTRY_RING];
-    if (c === undefined) return undefined;
+    const i = (chemistryNext - k + CHEMISTRY_RING) % CHEMISTRY_RING;
+    if (ringTemperatures[i] !== temperatureC) continue;
+    const c = chemistryRing[i]!;
     if (sameChemistry(c, systems, strongIonNames, temperatureC, model)) return c;
   }
   return undefined;
 }
 
+/** Computes a chemistry whose systems are validated already (strong-ion names are checked here). */
 function computeChemistry(systems: readonly AcidBaseChemistry[], strongIonNames: readonly string[], temperatureC: number, model: ActivityModel): ChemistryAt {
   const n = systems.length;
-  for (let j = 0; j < n; j++) validateChemistry('systems', systems[j], j);
   const z0: number[] = [];
   const firstStep: number[] = [];
   const stepCount: number[] = [];
@@ -264,12 +291,8 @@ function computeChemistry(systems: readonly AcidBaseChemistry[], strongIonNames:
     appendStepConstants(sys, terms, ka, zSquaredDiff);
     s += sys.steps.length;
   }
-  const strongIons = strongIonNames.map((name) => findStrongIon('strongIons', name));
-  const strongCharges = strongIons.map((ion) => ion.charge);
-  const speciesNames = ['H+', 'OH-', ...strongIons.map((ion) => ion.name)];
-  for (const sys of systems) {
-    for (let k = 0; k <= sys.steps.length; k++) speciesNames.push(`${sys.name} ${chargeLabel(sys.chargeOfMostProtonated - k)}`);
-  }
+  const strongCharges: number[] = [];
+  for (let i = 0; i < strongIonNames.length; i++) strongCharges.push(findStrongIon('strongIons', strongIonNames[i]).charge);
   const kwExponent = pKw(temperatureC);
   const a = debyeHuckelA(temperatureC);
   const warnings: ChemWarning[] = [];
@@ -282,8 +305,6 @@ function computeChemistry(systems: readonly AcidBaseChemistry[], strongIonNames:
     a,
     kw: Math.pow(10, -kwExponent),
     pKw: kwExponent,
-    pKa: ka.map((k) => -Math.log10(k)),
-    speciesNames,
     waterDensity: waterDensity(temperatureC),
     z0,
     firstStep,
@@ -295,7 +316,8 @@ function computeChemistry(systems: readonly AcidBaseChemistry[], strongIonNames:
     strongCharges,
     warnings,
     layout: model === 'pitzer' ? pitzerLayoutShape(strongIonNames, systems, temperatureC, a) : undefined,
-    systems: systems.map((sys) => ({ name: sys.name, chargeOfMostProtonated: sys.chargeOfMostProtonated, steps: sys.steps })),
+    // Held as given (their steps, names and charges are what is compared; compositions are never changed once built).
+    systems,
   };
 }
 
@@ -339,7 +361,7 @@ export function prepare(composition: Composition): PreparedComposition {
     const c = ions[name];
     if (!inRange(c, 0, MAX_CONCENTRATION_M)) requireNumber(`strongIons.${name}`, c, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
   }
-  return prepareWith(chemistryOf(systems, ionNames, temperatureC, model), composition);
+  return prepareWith(keep(computeChemistry(systems, ionNames, temperatureC, model)), composition);
 }
 
 /**

@@ -19,7 +19,7 @@
  * References: docs/science.md (methods and conventions); R. G. Bates, Determination of pH (1973), ch. 3–4.
  */
 import { integerPower, ionicStrengthFactor, ionicStrengthFactorSlope, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, PITZER_LIMIT_MOLAL } from './activity';
-import { Composition, PreparedComposition, prepare } from './composition';
+import { Composition, PreparedComposition, prepare, reportConstants } from './composition';
 export { chargeLabel } from './composition';
 import { ChemError, MESSAGES } from './errors';
 import { ChemWarning, warning } from './warnings';
@@ -687,7 +687,8 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     ionicStrengthMolal = reportEvaluation.ionicStrength;
     osmoticCoefficient = reportEvaluation.osmoticCoefficient;
   }
-  const names = chemistry.speciesNames;
+  const constants = reportConstants(chemistry);
+  const names = constants.speciesNames;
   const species: SpeciesAmount[] = [];
   // Species objects are written out literally, one shape with a system and one without: an object spread here cost
   // a fifth of a whole speciation.
@@ -740,7 +741,7 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     const apparentPKa: number[] = [];
     for (let k = 0; k < steps; k++) {
       const s = first + k;
-      apparentPKa.push(pitzer ? chemistry.pKa[s] - (pitzer.lnGamma[start + k] - pitzer.lnGamma[start + k + 1]) / Math.LN10 : chemistry.pKa[s] - p.zSquaredDiff[s] * log10G1);
+      apparentPKa.push(pitzer ? constants.pKa[s] - (pitzer.lnGamma[start + k] - pitzer.lnGamma[start + k + 1]) / Math.LN10 : constants.pKa[s] - p.zSquaredDiff[s] * log10G1);
     }
     systems.push({ name: sys.name, totalM: sys.totalM, meanCharge, fractions, apparentPKa });
   }
