@@ -30,6 +30,17 @@ import { gammaChange, mixedConstants, nextGammas } from './pitzer/iteration';
 import { waterKgPerLitre } from './pitzer/volumes';
 import { STRONG_IONS } from './strongIons';
 
+/**
+ * n zeros in a packed array of doubles. `new Array(n).fill(0)` leaves a holey array, whose every read in the
+ * evaluation loops checks for a hole; pushing a double first keeps the array packed.
+ */
+function packedZeros(n: number): number[] {
+  const a: number[] = [];
+  for (let i = 0; i < n; i++) a.push(0.5);
+  for (let i = 0; i < n; i++) a[i] = 0;
+  return a;
+}
+
 /** Lowest pH the bracket covers: a(H⁺) = 10^−16. Beyond any aqueous buffer; a target outside is refused. */
 export const PH_BRACKET_HIGH = 16;
 /** Highest a(H⁺) the bracket covers: pH −2. */
@@ -414,7 +425,7 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
  * Throws ChemError (no-convergence, infeasible-target).
  */
 export function solvePrepared(p: PreparedComposition, guessPh = 7): EquilibriumState {
-  const kp: number[] = new Array<number>(p.ka.length).fill(0);
+  const kp = packedZeros(p.ka.length);
   if (p.pitzer) return solvePitzer(p, p.pitzer, kp, guessPh);
   if (p.model === 'ideal') return solveNested(p, kp, guessPh);
   return solveCombined(p, kp, guessPh) ?? solveNested(p, kp, guessPh);
@@ -520,7 +531,7 @@ function solveCombined(p: PreparedComposition, kp: number[], guessPh: number): E
  * Converges for every composition; the combined step above hands over to it when a safeguard trips.
  */
 export function solvePreparedNested(p: PreparedComposition, guessPh = 7): EquilibriumState {
-  const kp: number[] = new Array<number>(p.ka.length).fill(0);
+  const kp = packedZeros(p.ka.length);
   return p.pitzer ? solvePitzer(p, p.pitzer, kp, guessPh) : solveNested(p, kp, guessPh);
 }
 
