@@ -47,6 +47,39 @@ export function ionicStrengthFactor(model: ActivityModel, ionicStrengthM: number
 }
 
 /**
+ * dF/dI of a model's ionic-strength factor (see ionicStrengthFactor), per mol/L: what the
+ * combined pH/ionic-strength Newton step needs. Infinite at I = 0 (√I); callers keep I > 0.
+ *
+ * @param model - activity model
+ * @param ionicStrengthM - ionic strength in mol/L (> 0)
+ */
+export function ionicStrengthFactorSlope(model: ActivityModel, ionicStrengthM: number): number {
+  if (model === 'ideal') return 0;
+  const s = Math.sqrt(ionicStrengthM);
+  if (model === 'davies') return 1 / (2 * s * (1 + s) * (1 + s)) - 0.3;
+  const d = 1 + 1.5 * s;
+  return 1 / (2 * s * d * d);
+}
+
+/**
+ * x to an integer power n (either sign) by repeated squaring: the γ of an ion of charge z
+ * in the one-number models is γ₁^(z²), so every charge's γ, and every mixed constant's
+ * factor γ₁^(2z−1), follows from one exponential. Agrees with Math.exp(n·ln x) to a few
+ * units in the last place for the |n| ≤ 64 that occur.
+ */
+export function integerPower(x: number, n: number): number {
+  let k = n < 0 ? -n : n;
+  let base = x;
+  let result = 1;
+  while (k > 0) {
+    if (k & 1) result *= base;
+    k >>= 1;
+    if (k > 0) base *= base;
+  }
+  return n < 0 ? 1 / result : result;
+}
+
+/**
  * log10 of the activity coefficient of an ion of charge z.
  *
  * @param model - activity model

@@ -7,7 +7,7 @@ import { ChemError, MESSAGES, requireInteger, requireNumber } from './errors';
 import { ChemWarning, warning } from './warnings';
 import { findStrongIon } from './strongIons';
 import { VantHoffTerms, lnKaAt, vantHoffTerms } from './vantHoff';
-import { PitzerLayout, pitzerLayout } from './pitzer/prepared';
+import { PitzerLayout, PitzerLayoutShape, layoutWith, pitzerLayoutShape } from './pitzer/prepared';
 import { debyeHuckelA, pKw, waterDensity } from './water';
 
 /** One proton-dissociation step of an acid–base system, constants at 25 °C and I = 0. */
@@ -97,13 +97,23 @@ export interface PreparedComposition {
   readonly strongIonicStrength: number;
   /** Largest ionic strength the composition could reach (every system in its most charged state), mol/L; scales rounding floors. */
   readonly ionicStrengthScale: number;
-  readonly warnings: ChemWarning[];
+  readonly warnings: readonly ChemWarning[];
   /** The composition as given (the Pitzer paths rebuild it with titrant added). */
   readonly source: Composition;
   /** Density of pure water at the temperature, g/cm³. */
   readonly waterDensity: number;
   /** The Pitzer model over this composition's species (model `pitzer` only). */
   readonly pitzer?: PitzerLayout;
+  /** Each strong ion's amount, mol/L, in the order of the keys. */
+  readonly strongConcentrations: readonly number[];
+  /** The constants this was prepared with (shared by every composition of the same chemistry). */
+  readonly chemistry: ChemistryAt;
+}
+
+/** Formats a charge the way chemists write it: 0, 1+, 2−. */
+export function chargeLabel(z: number): string {
+  if (z === 0) return '0';
+  return `${Math.abs(z)}${z > 0 ? '+' : '−'}`;
 }
 
 /** True when `v` is a number within [min, max] (NaN fails): the cheap test made before any message is built. */
@@ -151,107 +161,172 @@ export function appendStepConstants(chem: AcidBaseChemistry, terms: VantHoffTerm
   }
 }
 
-/** What depends on the temperature alone: the same for every composition prepared at it. */
-interface TemperatureConstants {
+/**
+ * The constants of a composition's chemistry at its temperature: everything `prepare`
+ * computes that does not depend on the amounts (the systems validated, Ka of every step
+ * by van 't Hoff, Kw, the Debye–Hückel A, the density of water, the strong ions' charges,
+ * and for the Pitzer model the layout of its species). The same for every composition of
+ * the same systems and strong ions at the same temperature and activity model, so a plan,
+ * a capacity, a dilution series or a worksheet column computes it once (see chemistryOf).
+ */
+export interface ChemistryAt {
   readonly temperatureC: number;
-  readonly terms: VantHoffTerms;
-  /** Debye–Hückel A, thermodynamic Kw, density of water (g/cm³). */
+  readonly model: ActivityModel;
   readonly a: number;
   readonly kw: number;
   readonly waterDensity: number;
-}
-
-/** Temperatures remembered: a plan prepares a dozen compositions at three or four temperatures (use, bench, ± half a degree, 25 °C). */
-const TEMPERATURE_SLOTS = 8;
-const temperatureSlots: TemperatureConstants[] = [];
-let nextTemperatureSlot = 0;
-
-/** The temperature's constants, computed once for the last few temperatures asked (a power and a logarithm cost more than the rest of a preparation). */
-function constantsAt(temperatureC: number): TemperatureConstants {
-  for (let i = 0; i < temperatureSlots.length; i++) if (temperatureSlots[i].temperatureC === temperatureC) return temperatureSlots[i];
-  const made: TemperatureConstants = {
-    temperatureC,
-    terms: vantHoffTerms(temperatureC),
-    a: debyeHuckelA(temperatureC),
-    kw: Math.pow(10, -pKw(temperatureC)),
-    waterDensity: waterDensity(temperatureC),
-  };
-  temperatureSlots[nextTemperatureSlot] = made;
-  nextTemperatureSlot = (nextTemperatureSlot + 1) % TEMPERATURE_SLOTS;
-  return made;
-}
-
-/**
- * What the solver's arrays hold that depends only on which systems a composition has, in which order: each
- * system's charge, first step and step count, each step's z² difference, and the Ka of every step at the
- * temperature last asked. Shared by every composition of the same systems (never changed once made).
- */
-interface SystemsShape {
-  readonly steps: readonly (readonly AcidBaseStep[])[];
   readonly z0: readonly number[];
   readonly firstStep: readonly number[];
   readonly stepCount: readonly number[];
+  readonly ka: readonly number[];
   readonly zSquaredDiff: readonly number[];
-  /** Largest |charge| of each system's states. */
-  readonly zMax: readonly number[];
-  kaTemperatureC: number;
-  ka: readonly number[] | undefined;
+  /** Per system: the largest z² any of its forms has (for the rounding scale of the ionic strength). */
+  readonly zMaxSquared: readonly number[];
+  /** The strong-ion keys as given, and each one's charge. */
+  readonly strongIonNames: readonly string[];
+  readonly strongCharges: readonly number[];
+  readonly warnings: readonly ChemWarning[];
+  /** The Pitzer layout without amounts (model `pitzer` only). */
+  readonly layout?: PitzerLayoutShape;
+  /** pKw at the temperature. */
+  readonly pKw: number;
+  /** Filled on first use by a report (see reportConstants): what only the report needs. */
+  reportConstants?: ReportConstants;
+  /** Filled on first use by a report of a one-number model: the Pitzer layout its osmotic coefficient is evaluated on. */
+  osmoticLayout?: PitzerLayoutShape;
+  /** What the constants were computed for, compared by identity (steps) and value (the rest) when found again. */
+  readonly systems: readonly AcidBaseChemistry[];
 }
 
-/** Shapes by the first system's steps array (library systems share theirs, see chemistryOf), weakly held. */
-const SHAPES = new WeakMap<object, SystemsShape[]>();
-/** Anchor for compositions of strong ions only. */
-const NO_SYSTEMS: object = {};
-/** Shapes kept per anchor before the list is emptied (companion systems a workbook puts beside one buffer). */
-const SHAPES_PER_ANCHOR = 64;
+/** What only a report needs of a chemistry: each step's pKa at the temperature (I = 0), and every species' name in the layout's order (H⁺, OH⁻, strong ions, each system's forms). */
+export interface ReportConstants {
+  readonly pKa: readonly number[];
+  readonly speciesNames: readonly string[];
+}
 
-function systemsShape(systems: readonly AcidBaseChemistry[]): SystemsShape {
-  const n = systems.length;
-  const anchor: object = n > 0 ? systems[0].steps : NO_SYSTEMS;
-  let list = SHAPES.get(anchor);
-  if (list) {
-    for (let e = 0; e < list.length; e++) {
-      const shape = list[e];
-      if (shape.steps.length !== n) continue;
-      let same = true;
-      for (let j = 0; same && j < n; j++) same = shape.steps[j] === systems[j].steps && shape.z0[j] === systems[j].chargeOfMostProtonated;
-      if (same) return shape;
-    }
-  } else SHAPES.set(anchor, (list = []));
-  const z0: number[] = [];
-  const firstStep: number[] = [];
-  const stepCount: number[] = [];
-  const zSquaredDiff: number[] = [];
-  const zMax: number[] = [];
-  let s = 0;
-  for (let j = 0; j < n; j++) {
-    const sys = systems[j];
-    const z = sys.chargeOfMostProtonated;
-    z0.push(z);
-    firstStep.push(s);
-    stepCount.push(sys.steps.length);
-    zMax.push(Math.max(Math.abs(z), Math.abs(z - sys.steps.length)));
-    for (let k = 0; k < sys.steps.length; k++) zSquaredDiff.push(2 * (z - k) - 1);
-    s += sys.steps.length;
+/** A chemistry's report constants, built on the first report of it (a solve alone never needs them). */
+export function reportConstants(c: ChemistryAt): ReportConstants {
+  if (c.reportConstants) return c.reportConstants;
+  const speciesNames = ['H+', 'OH-'];
+  for (const name of c.strongIonNames) speciesNames.push(findStrongIon('strongIons', name).name);
+  for (const sys of c.systems) {
+    for (let k = 0; k <= sys.steps.length; k++) speciesNames.push(`${sys.name} ${chargeLabel(sys.chargeOfMostProtonated - k)}`);
   }
-  const shape: SystemsShape = { steps: systems.map((sys) => sys.steps), z0, firstStep, stepCount, zSquaredDiff, zMax, kaTemperatureC: NaN, ka: undefined };
-  if (list.length >= SHAPES_PER_ANCHOR) list.length = 0;
-  list.push(shape);
-  return shape;
+  c.reportConstants = { pKa: c.ka.map((k) => -Math.log10(k)), speciesNames };
+  return c.reportConstants;
 }
 
-/** The Ka of every step at a temperature, kept on the shape for the next composition of the same systems there. */
-function kaOf(shape: SystemsShape, systems: readonly AcidBaseChemistry[], temperatureC: number, terms: VantHoffTerms): readonly number[] {
-  const ka: number[] = [];
-  const unused: number[] = [];
-  for (let j = 0; j < systems.length; j++) appendStepConstants(systems[j], terms, ka, unused);
-  shape.ka = ka;
-  shape.kaTemperatureC = temperatureC;
-  return ka;
+/** Chemistries kept, most recent first found: a plan uses about ten (temperatures, titrant added), a worksheet a handful. */
+const CHEMISTRY_RING = 32;
+const chemistryRing: (ChemistryAt | undefined)[] = new Array<ChemistryAt | undefined>(CHEMISTRY_RING).fill(undefined);
+let chemistryNext = 0;
+/** The temperature of each ring entry (NaN where empty: it equals nothing). */
+const ringTemperatures = new Float64Array(CHEMISTRY_RING).fill(NaN);
+
+function sameChemistry(c: ChemistryAt, systems: readonly AcidBaseChemistry[], names: readonly string[], temperatureC: number, model: ActivityModel): boolean {
+  if (c.temperatureC !== temperatureC || c.model !== model || c.systems.length !== systems.length || c.strongIonNames.length !== names.length) return false;
+  for (let j = 0; j < systems.length; j++) {
+    const a = c.systems[j];
+    const b = systems[j];
+    if (a.steps !== b.steps || a.chargeOfMostProtonated !== b.chargeOfMostProtonated || a.name !== b.name) return false;
+  }
+  for (let i = 0; i < names.length; i++) if (c.strongIonNames[i] !== names[i]) return false;
+  return true;
 }
 
 /**
- * Validates a composition and computes its constants at the temperature.
+ * The chemistry of a composition at its temperature and activity model: found among the
+ * last CHEMISTRY_RING computed (systems compared by their steps array, charge and name;
+ * compositions and their steps are never changed once built, so the array stands for its
+ * pKa, ΔH° and ΔCp°), or computed, validated and kept. Pure: the answer depends only on the
+ * arguments. Throws ChemError (invalid-input) for a bad system or strong-ion name.
+ *
+ * @param systems - the acid–base systems (their amounts are not read)
+ * @param strongIonNames - the strong-ion keys, in the order given
+ * @param temperatureC - °C, validated already
+ * @param model - the activity model
+ */
+export function chemistryOf(systems: readonly AcidBaseChemistry[], strongIonNames: readonly string[], temperatureC: number, model: ActivityModel): ChemistryAt {
+  const found = knownChemistry(systems, strongIonNames, temperatureC, model);
+  if (found) return found;
+  for (let j = 0; j < systems.length; j++) validateChemistry('systems', systems[j], j);
+  return keep(computeChemistry(systems, strongIonNames, temperatureC, model));
+}
+
+/** Puts a chemistry in the ring, in place of the oldest. */
+function keep(c: ChemistryAt): ChemistryAt {
+  chemistryRing[chemistryNext] = c;
+  ringTemperatures[chemistryNext] = c.temperatureC;
+  chemistryNext = (chemistryNext + 1) % CHEMISTRY_RING;
+  return c;
+}
+
+/** The chemistry among those kept, or undefined. */
+function knownChemistry(systems: readonly AcidBaseChemistry[], strongIonNames: readonly string[], temperatureC: number, model: ActivityModel): ChemistryAt | undefined {
+  // Temperatures first, from a typed array: a column of solutions at as many temperatures then costs a tight scan.
+  for (let k = 1; k <= CHEMISTRY_RING; k++) {
+    const i = (chemistryNext - k + CHEMISTRY_RING) % CHEMISTRY_RING;
+    if (ringTemperatures[i] !== temperatureC) continue;
+    const c = chemistryRing[i]!;
+    if (sameChemistry(c, systems, strongIonNames, temperatureC, model)) return c;
+  }
+  return undefined;
+}
+
+/** Computes a chemistry whose systems are validated already (strong-ion names are checked here). */
+function computeChemistry(systems: readonly AcidBaseChemistry[], strongIonNames: readonly string[], temperatureC: number, model: ActivityModel): ChemistryAt {
+  const n = systems.length;
+  const z0: number[] = [];
+  const firstStep: number[] = [];
+  const stepCount: number[] = [];
+  const ka: number[] = [];
+  const zSquaredDiff: number[] = [];
+  const zMaxSquared: number[] = [];
+  const terms = vantHoffTerms(temperatureC);
+  let s = 0;
+  for (let j = 0; j < n; j++) {
+    const sys = systems[j];
+    z0.push(sys.chargeOfMostProtonated);
+    firstStep.push(s);
+    stepCount.push(sys.steps.length);
+    const zMax = Math.max(Math.abs(sys.chargeOfMostProtonated), Math.abs(sys.chargeOfMostProtonated - sys.steps.length));
+    zMaxSquared.push(zMax * zMax);
+    appendStepConstants(sys, terms, ka, zSquaredDiff);
+    s += sys.steps.length;
+  }
+  const strongCharges: number[] = [];
+  for (let i = 0; i < strongIonNames.length; i++) strongCharges.push(findStrongIon('strongIons', strongIonNames[i]).charge);
+  const kwExponent = pKw(temperatureC);
+  const a = debyeHuckelA(temperatureC);
+  const warnings: ChemWarning[] = [];
+  if (temperatureC > FITTED_RANGE_MAX_C) {
+    warnings.push(warning('aboveFittedRange', MESSAGES.aboveFittedRange(temperatureC, FITTED_RANGE_MAX_C), 'temperatureC'));
+  }
+  return {
+    temperatureC,
+    model,
+    a,
+    kw: Math.pow(10, -kwExponent),
+    pKw: kwExponent,
+    waterDensity: waterDensity(temperatureC),
+    z0,
+    firstStep,
+    stepCount,
+    ka,
+    zSquaredDiff,
+    zMaxSquared,
+    strongIonNames: strongIonNames.slice(),
+    strongCharges,
+    warnings,
+    layout: model === 'pitzer' ? pitzerLayoutShape(strongIonNames, systems, temperatureC, a) : undefined,
+    // Held as given (their steps, names and charges are what is compared; compositions are never changed once built).
+    systems,
+  };
+}
+
+/**
+ * Validates a composition and computes its constants at the temperature (the chemistry
+ * part found again by chemistryOf when it was computed lately).
  * Throws ChemError (invalid-input) naming the field, value and what is allowed.
  */
 export function prepare(composition: Composition): PreparedComposition {
@@ -275,68 +350,72 @@ export function prepare(composition: Composition): PreparedComposition {
   if (systems.length === 0 && ionNames.length === 0) {
     throw new ChemError('invalid-input', 'emptyComposition', MESSAGES.emptyComposition(), 'systems');
   }
-
-  const n = systems.length;
-  for (let j = 0; j < n; j++) {
+  const known = knownChemistry(systems, ionNames, temperatureC, model);
+  if (known) return prepareWith(known, composition);
+  // New chemistry: everything is checked in the order of the composition (each system's chemistry and amount, then
+  // each strong ion's name and amount), so the first fault reported does not depend on what was computed before.
+  for (let j = 0; j < systems.length; j++) {
     validateChemistry('systems', systems[j], j);
     const total = systems[j].totalM;
     if (!inRange(total, 0, MAX_CONCENTRATION_M)) requireNumber(`systems[${j}].totalM`, total, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
   }
+  for (const name of ionNames) {
+    findStrongIon('strongIons', name);
+    const c = ions[name];
+    if (!inRange(c, 0, MAX_CONCENTRATION_M)) requireNumber(`strongIons.${name}`, c, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
+  }
+  return prepareWith(keep(computeChemistry(systems, ionNames, temperatureC, model)), composition);
+}
 
-  const atT = constantsAt(temperatureC);
-  const shape = systemsShape(systems);
-  const ka = shape.ka === undefined || shape.kaTemperatureC !== temperatureC ? kaOf(shape, systems, temperatureC, atT.terms) : shape.ka;
-  // Plain arrays: for the handful of entries a buffer has they allocate several times faster than typed arrays.
+/**
+ * A composition prepared with its chemistry given (from chemistryOf for the same systems,
+ * strong-ion keys, temperature and model): only the amounts are read and validated.
+ * Throws ChemError (invalid-input) for an amount out of range.
+ */
+export function prepareWith(chemistry: ChemistryAt, composition: Composition): PreparedComposition {
+  const systems = composition.systems ?? [];
+  const n = systems.length;
+  // Plain arrays filled by push: for the handful of entries a buffer has they allocate several times faster than typed arrays.
   const totals: number[] = [];
   let ionicStrengthScale = 1e-7;
   for (let j = 0; j < n; j++) {
     const total = systems[j].totalM;
+    if (!inRange(total, 0, MAX_CONCENTRATION_M)) requireNumber(`systems[${j}].totalM`, total, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
     totals.push(total);
-    const zMax = shape.zMax[j];
-    ionicStrengthScale += 0.5 * total * zMax * zMax;
+    ionicStrengthScale += 0.5 * total * chemistry.zMaxSquared[j];
   }
-
+  const ions = composition.strongIons ?? {};
+  const names = chemistry.strongIonNames;
+  const strongConcentrations: number[] = [];
   let strongCharge = 0;
   let strongIonicStrength = 0;
-  for (const name of ionNames) {
-    const ion = findStrongIon('strongIons', name);
-    const c = ions[name];
-    if (!inRange(c, 0, MAX_CONCENTRATION_M)) requireNumber(`strongIons.${name}`, c, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
-    strongCharge += ion.charge * c;
-    strongIonicStrength += 0.5 * ion.charge * ion.charge * c;
-  }
-
-  const a = atT.a;
-  const warnings: ChemWarning[] = [];
-  if (temperatureC > FITTED_RANGE_MAX_C) {
-    warnings.push(warning('aboveFittedRange', MESSAGES.aboveFittedRange(temperatureC, FITTED_RANGE_MAX_C), 'temperatureC'));
+  for (let i = 0; i < names.length; i++) {
+    const c = ions[names[i]];
+    if (!inRange(c, 0, MAX_CONCENTRATION_M)) requireNumber(`strongIons.${names[i]}`, c, 0, MAX_CONCENTRATION_M, `0 to ${MAX_CONCENTRATION_M} mol/L`);
+    const z = chemistry.strongCharges[i];
+    strongConcentrations.push(c);
+    strongCharge += z * c;
+    strongIonicStrength += 0.5 * z * z * c;
   }
   return {
-    temperatureC,
-    model,
-    a,
-    kw: atT.kw,
+    temperatureC: chemistry.temperatureC,
+    model: chemistry.model,
+    a: chemistry.a,
+    kw: chemistry.kw,
     totals,
-    z0: shape.z0,
-    firstStep: shape.firstStep,
-    stepCount: shape.stepCount,
-    ka,
-    zSquaredDiff: shape.zSquaredDiff,
+    z0: chemistry.z0,
+    firstStep: chemistry.firstStep,
+    stepCount: chemistry.stepCount,
+    ka: chemistry.ka,
+    zSquaredDiff: chemistry.zSquaredDiff,
     strongCharge,
     strongIonicStrength,
     ionicStrengthScale: ionicStrengthScale + strongIonicStrength,
-    warnings,
+    warnings: chemistry.warnings,
     source: composition,
-    waterDensity: atT.waterDensity,
-    pitzer:
-      model === 'pitzer'
-        ? pitzerLayout(
-            ionNames,
-            ionNames.map((name) => ions[name]),
-            systems,
-            temperatureC,
-            a,
-          )
-        : undefined,
+    waterDensity: chemistry.waterDensity,
+    pitzer: chemistry.layout ? layoutWith(chemistry.layout, strongConcentrations) : undefined,
+    strongConcentrations,
+    chemistry,
   };
 }

@@ -14,8 +14,19 @@ export {
 } from './activity';
 export { saltCoefficients } from './pitzer/model';
 export type { ActivityModel } from './activity';
-export { MAX_CONCENTRATION_M, MAX_STEPS, MAX_TEMPERATURE_C, MIN_TEMPERATURE_C, FITTED_RANGE_MAX_C, prepare, systemAt, withConditions } from './composition';
-export type { AcidBaseChemistry, AcidBaseStep, AcidBaseSystem, Composition } from './composition';
+export {
+  MAX_CONCENTRATION_M,
+  MAX_STEPS,
+  MAX_TEMPERATURE_C,
+  MIN_TEMPERATURE_C,
+  FITTED_RANGE_MAX_C,
+  chemistryOf,
+  prepare,
+  prepareWith,
+  systemAt,
+  withConditions,
+} from './composition';
+export type { AcidBaseChemistry, AcidBaseStep, AcidBaseSystem, ChemistryAt, Composition, PreparedComposition } from './composition';
 export { BUFFERING_HALF_WIDTH, CHELATORS, chelatorWarning, metalComplexWarning, solutionWarnings, weakBufferingWarning } from './checks';
 export { ChemError, MESSAGES } from './errors';
 export { uniqueWarnings, warning, warningTexts } from './warnings';

@@ -18,17 +18,28 @@
  *
  * References: docs/science.md (methods and conventions); R. G. Bates, Determination of pH (1973), ch. 3–4.
  */
-import { ionicStrengthFactor, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, PITZER_LIMIT_MOLAL } from './activity';
-import { Composition, PreparedComposition, prepare } from './composition';
+import { integerPower, ionicStrengthFactor, ionicStrengthFactorSlope, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES, PITZER_LIMIT_MOLAL } from './activity';
+import { Composition, PreparedComposition, prepare, reportConstants } from './composition';
+export { chargeLabel } from './composition';
 import { ChemError, MESSAGES } from './errors';
 import { ChemWarning, warning } from './warnings';
-import { selfConsistentIonicStrength } from './ionicStrength';
+import { ROUNDING_FLOOR, selfConsistentIonicStrength } from './ionicStrength';
 import { PitzerEvaluation, pitzerEvaluate } from './pitzer/model';
-import { H_INDEX, OH_INDEX, PitzerLayout, STRONG_START, pitzerLayout } from './pitzer/prepared';
+import { H_INDEX, OH_INDEX, PitzerLayout, STRONG_START, layoutWith, pitzerLayoutShape } from './pitzer/prepared';
 import { gammaChange, mixedConstants, nextGammas } from './pitzer/iteration';
 import { waterKgPerLitre } from './pitzer/volumes';
-import { STRONG_IONS, findStrongIon } from './strongIons';
-import { pKw } from './water';
+import { STRONG_IONS } from './strongIons';
+
+/**
+ * n zeros in a packed array of doubles. `new Array(n).fill(0)` leaves a holey array, whose every read in the
+ * evaluation loops checks for a hole; pushing a double first keeps the array packed.
+ */
+function packedZeros(n: number): number[] {
+  const a: number[] = [];
+  for (let i = 0; i < n; i++) a.push(0.5);
+  for (let i = 0; i < n; i++) a[i] = 0;
+  return a;
+}
 
 /** Lowest pH the bracket covers: a(H⁺) = 10^−16. Beyond any aqueous buffer; a target outside is refused. */
 export const PH_BRACKET_HIGH = 16;
@@ -104,13 +115,99 @@ function evaluate(p: PreparedComposition, kp: number[], aH: number, gH: number, 
   evDI2 = di2;
 }
 
+// Further results of `evaluateCombined`: how f and 2I move with ln γ₁ at fixed a_H.
+let evFG = 0;
+let evIG = 0;
+
+/**
+ * `evaluate` for the one-number models (γ(H⁺) = γ(OH⁻) = γ₁), with two derivatives more for
+ * the combined pH/ionic-strength step: ∂f/∂ln γ₁ and ∂(2I)/∂ln γ₁ at fixed a_H. A species of
+ * charge z has concentration ∝ γ₁^(−z²) relative to its system's total, so over a system
+ * ∂⟨g⟩/∂ln γ₁ = −(⟨z²g⟩ − ⟨z²⟩⟨g⟩); H⁺ and OH⁻ go as 1/γ₁.
+ */
+function evaluateCombined(p: PreparedComposition, kp: number[], aH: number, g1: number): void {
+  const hc = aH / g1;
+  const ohc = p.kw / (aH * g1);
+  let f = p.strongCharge + hc - ohc;
+  let d = hc + ohc;
+  let i2 = hc + ohc;
+  let di2 = hc - ohc;
+  let fg = ohc - hc;
+  let ig = -hc - ohc;
+  const inv = 1 / aH;
+  const totals = p.totals;
+  const n = totals.length;
+  for (let j = 0; j < n; j++) {
+    const c = totals[j];
+    if (c === 0) continue;
+    const first = p.firstStep[j];
+    const steps = p.stepCount[j];
+    const z = p.z0[j];
+    // Summed species by species, as in `evaluate`.
+    let t = 1;
+    let sum = 1;
+    let s1 = 0;
+    let s2 = 0;
+    let q = z;
+    let q2 = z * z;
+    let q3 = z * z * z;
+    let q4 = q2 * q2;
+    let kq2 = 0;
+    for (let k = 1; k <= steps; k++) {
+      t *= kp[first + k - 1] * inv;
+      const zk = z - k;
+      const zk2 = zk * zk;
+      sum += t;
+      s1 += k * t;
+      s2 += k * k * t;
+      q += zk * t;
+      q2 += zk2 * t;
+      q3 += zk2 * zk * t;
+      q4 += zk2 * zk2 * t;
+      kq2 += k * zk2 * t;
+    }
+    const w = c / sum;
+    const nb = s1 / sum;
+    const meanQ = q / sum;
+    const meanQ2 = q2 / sum;
+    f += w * q;
+    d += w * s2 - c * nb * nb;
+    i2 += c * meanQ2;
+    di2 -= w * kq2 - c * nb * meanQ2;
+    fg -= w * q3 - c * meanQ2 * meanQ;
+    ig -= w * q4 - c * meanQ2 * meanQ2;
+  }
+  evF = f;
+  evD = d;
+  evI2 = i2;
+  evDI2 = di2;
+  evFG = fg;
+  evIG = ig;
+}
+
 /** Sets the mixed constants for an ionic strength; returns γ₁. */
 function conditionalConstants(p: PreparedComposition, ionicStrengthM: number, kp: number[]): number {
-  const lnG = -p.a * ionicStrengthFactor(p.model, ionicStrengthM) * Math.LN10;
+  const g1 = Math.exp(-p.a * ionicStrengthFactor(p.model, ionicStrengthM) * Math.LN10);
+  mixedConstantsAt(p, g1, kp);
+  return g1;
+}
+
+/**
+ * Mixed constants K′ = Ka·γ₁^(2z−1) at γ₁, by multiplication: the first step of a system
+ * takes γ₁^(2z₀−1), and each further step one factor γ₁⁻² more (its acid is one charge lower).
+ */
+function mixedConstantsAt(p: PreparedComposition, g1: number, kp: number[]): void {
   const ka = p.ka;
-  const zd = p.zSquaredDiff;
-  for (let s = 0; s < ka.length; s++) kp[s] = ka[s] * Math.exp(lnG * zd[s]);
-  return Math.exp(lnG);
+  const inverseSquare = 1 / (g1 * g1);
+  for (let j = 0; j < p.firstStep.length; j++) {
+    const first = p.firstStep[j];
+    const steps = p.stepCount[j];
+    let factor = integerPower(g1, p.zSquaredDiff[first]);
+    for (let s = first; s < first + steps; s++) {
+      kp[s] = ka[s] * factor;
+      factor *= inverseSquare;
+    }
+  }
 }
 
 /** Solves f(x) = 0 at fixed constants from a warm start; returns x = ln a_H and counts iterations. */
@@ -236,6 +333,8 @@ let scratchMolality: number[] = [];
 const pitzerCounter = { n: 0 };
 const pitzerResult: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
 let scratchNext: number[] = [];
+let scratchPreviousL: number[] = [];
+let scratchPreviousG: number[] = [];
 
 /**
  * The Pitzer solve: the pH at fixed activity coefficients (the same safeguarded Newton as
@@ -256,6 +355,8 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
   if (scratchMolality.length < n) {
     scratchMolality = new Array<number>(n).fill(0);
     scratchNext = new Array<number>(n).fill(0);
+    scratchPreviousL = new Array<number>(n).fill(0);
+    scratchPreviousG = new Array<number>(n).fill(0);
   }
   const m = scratchMolality;
   const next = scratchNext;
@@ -276,8 +377,9 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
   let contraction = 1;
   let ionicStrengthM = 0;
   let finalPass = false;
-  const previousL: number[] = lnGamma.slice();
-  const previousG: number[] = lnGamma.slice();
+  // The first step (plain) writes both before any step reads them: scratch shared by every solve.
+  const previousL = scratchPreviousL;
+  const previousG = scratchPreviousG;
   for (let it = 1; it <= MAX_PITZER_ITERATIONS; it++) {
     const gH = Math.exp(lnGamma[H_INDEX]) / w;
     const gOH = Math.exp(lnGamma[OH_INDEX]) / w;
@@ -323,8 +425,117 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
  * Throws ChemError (no-convergence, infeasible-target).
  */
 export function solvePrepared(p: PreparedComposition, guessPh = 7): EquilibriumState {
-  const kp: number[] = new Array<number>(p.ka.length).fill(0);
+  const kp = packedZeros(p.ka.length);
   if (p.pitzer) return solvePitzer(p, p.pitzer, kp, guessPh);
+  if (p.model === 'ideal') return solveNested(p, kp, guessPh);
+  return solveCombined(p, kp, guessPh) ?? solveNested(p, kp, guessPh);
+}
+
+/** A Newton step in ln a(H⁺) at most this long (about 0.2 pH) hands over from the bracketed solve at the starting ionic strength to the combined step. */
+const COMBINED_SWITCH = 0.5;
+/** A combined step whose change of the ionic strength is this small (relative) ends the solve: what is left after it is ~(step)², below 1e-13. */
+const COMBINED_ACCEPT = 1e-7;
+/** Combined steps allowed before the nested iteration takes over (it converges in 2–4). */
+const MAX_COMBINED_STEPS = 30;
+const combinedCounter = { n: 0 };
+
+/**
+ * The pH and the ionic strength of a one-number model solved together.
+ *
+ * Method: first the safeguarded Newton solve in x = ln a_H at the starting ionic strength
+ * (bracketed, as in solveChargeBalance), until its Newton step is under COMBINED_SWITCH;
+ * from there Newton steps on both unknowns at once,
+ *   r₁ = f(x, I) = 0,   r₂ = ½Σz²c(x, I) + I_strong − I = 0,
+ * with the exact Jacobian (∂/∂I through ln γ₁ = −A·ln10·F(I) and the γ₁ powers in the mixed
+ * constants). Each step must shrink (in ln a_H relative to max(1, |x|), in I relative to I),
+ * keep I positive and x inside the pH bracket, and the determinant must have the sign a
+ * monotone charge balance gives it (∂f/∂x > 0, ∂r₂/∂I ≈ −1); when any of these fails, or
+ * after MAX_COMBINED_STEPS, it returns undefined and the nested iteration (solveNested,
+ * which converges for every composition) solves from scratch. Ends when the step is below
+ * NEWTON_ACCEPT in x and COMBINED_ACCEPT in I, and takes that step: Newton converges
+ * quadratically, so what is left is ~(step)².
+ */
+function solveCombined(p: PreparedComposition, kp: number[], guessPh: number): EquilibriumState | undefined {
+  const counter = combinedCounter;
+  counter.n = 0;
+  let ionicStrength = p.strongIonicStrength;
+  for (let j = 0; j < p.totals.length; j++) ionicStrength += 0.5 * p.totals[j] * p.z0[j] * p.z0[j];
+  let g1 = conditionalConstants(p, ionicStrength, kp);
+  let updates = 1;
+  let x = -guessPh * Math.LN10;
+  let lo = LN_AH_MIN;
+  let hi = LN_AH_MAX;
+  let combined = false;
+  let restarted = false;
+  let combinedSteps = 0;
+  let previousSize = Infinity;
+  const floor = ROUNDING_FLOOR * p.ionicStrengthScale;
+  const slopeScale = -p.a * Math.LN10;
+  for (let it = 0; it < MAX_PH_ITERATIONS; it++) {
+    counter.n++;
+    evaluateCombined(p, kp, Math.exp(x), g1);
+    const f = evF;
+    if (!combined) {
+      // At fixed I the charge balance is increasing in x: the bracket holds while I stays.
+      if (f < 0) lo = x;
+      else if (f > 0) hi = x;
+      const next = x - f / evD;
+      const inside = next > lo && next < hi;
+      if (!(inside && Math.abs(next - x) <= COMBINED_SWITCH)) {
+        x = inside ? next : 0.5 * (lo + hi);
+        continue;
+      }
+      // A starting I far from the species' own (none of the charged forms given, say) is replaced by theirs once,
+      // and the bracket opened again: Newton in I is poor near I = 0, where γ₁ moves as √I.
+      const speciesI = p.strongIonicStrength + 0.5 * evI2;
+      if (!restarted && !(ionicStrength > 0.5 * speciesI && ionicStrength < 2 * speciesI)) {
+        restarted = true;
+        ionicStrength = speciesI;
+        g1 = conditionalConstants(p, ionicStrength, kp);
+        updates++;
+        lo = LN_AH_MIN;
+        hi = LN_AH_MAX;
+        x = next;
+        continue;
+      }
+      combined = true;
+    }
+    if (++combinedSteps > MAX_COMBINED_STEPS) return undefined;
+    const lnGammaSlope = slopeScale * ionicStrengthFactorSlope(p.model, ionicStrength);
+    const j12 = evFG * lnGammaSlope;
+    const j21 = 0.5 * evDI2;
+    const j22 = 0.5 * evIG * lnGammaSlope - 1;
+    const r2 = p.strongIonicStrength + 0.5 * evI2 - ionicStrength;
+    const det = evD * j22 - j12 * j21;
+    const dx = (r2 * j12 - f * j22) / det;
+    const dI = (f * j21 - r2 * evD) / det;
+    const nextX = x + dx;
+    const nextI = ionicStrength + dI;
+    const size = Math.max(Math.abs(dx) / Math.max(1, Math.abs(x)), Math.abs(dI) / ionicStrength);
+    if (!(det < 0 && nextI > 0 && nextX > LN_AH_MIN + 1e-6 && nextX < LN_AH_MAX - 1e-6 && size < previousSize)) return undefined;
+    previousSize = size;
+    const done = Math.abs(dx) <= NEWTON_ACCEPT * Math.max(1, Math.abs(x)) && Math.abs(dI) <= COMBINED_ACCEPT * ionicStrength + floor;
+    x = nextX;
+    ionicStrength = nextI;
+    // The constants follow I to the last point too, so the species reported there balance their charges.
+    g1 = conditionalConstants(p, ionicStrength, kp);
+    updates++;
+    if (done) return { pH: -x / Math.LN10, ionicStrengthM: ionicStrength, gamma1: g1, mixedKa: kp, evaluations: counter.n, ionicStrengthIterations: updates };
+  }
+  return undefined;
+}
+
+/**
+ * The nested iteration: the ionic strength iterated to self-consistency (secant steps, see
+ * ionicStrength.ts) around a pH solve at fixed constants (each warm-started from the last).
+ * Converges for every composition; the combined step above hands over to it when a safeguard trips.
+ */
+export function solvePreparedNested(p: PreparedComposition, guessPh = 7): EquilibriumState {
+  const kp = packedZeros(p.ka.length);
+  return p.pitzer ? solvePitzer(p, p.pitzer, kp, guessPh) : solveNested(p, kp, guessPh);
+}
+
+function solveNested(p: PreparedComposition, kp: number[], guessPh: number): EquilibriumState {
   const counter = { n: 0 };
   let x = -guessPh * Math.LN10;
   let g1 = 1;
@@ -415,12 +626,6 @@ export interface SpeciationResult {
   readonly warnings: readonly ChemWarning[];
 }
 
-/** Formats a charge the way chemists write it: 0, 1+, 2−. */
-export function chargeLabel(z: number): string {
-  if (z === 0) return '0';
-  return `${Math.abs(z)}${z > 0 ? '+' : '−'}`;
-}
-
 /**
  * Solves a composition and reports every species.
  *
@@ -441,73 +646,73 @@ export const UNPARAMETERISED_IONIC_STRENGTH_MOLAL = 0.5;
 /** Temperature distance from 25 °C (K) beyond which parameters without a published slope earn a warning in concentrated solution. */
 export const PITZER_TEMPERATURE_WINDOW_K = 10;
 
-/** Builds the full report from a solved state. */
+/** Scratch for the one-number report's osmotic coefficient (the solver is synchronous). */
+const reportEvaluation: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
+let reportMolality: number[] = [];
+let reportLnGamma: number[] = [];
+
+/**
+ * Builds the full report from a solved state. Species names come from the chemistry (built
+ * once per chemistry); γ of the one-number models are integer powers of γ₁ and apparent pKa′
+ * follow from the pKa at the temperature and the γ, so no logarithm or power is taken per species.
+ */
 export function report(p: PreparedComposition, state: EquilibriumState, composition: Composition): SpeciationResult {
+  const chemistry = p.chemistry;
   const aH = Math.pow(10, -state.pH);
   const g1 = state.gamma1;
-  const ionNames = Object.keys(composition.strongIons ?? {});
-  const layout =
-    p.pitzer ??
-    pitzerLayout(
-      ionNames,
-      ionNames.map((name) => composition.strongIons![name]),
-      composition.systems,
-      p.temperatureC,
-      p.a,
-    );
+  let layout = p.pitzer;
+  if (!layout) {
+    chemistry.osmoticLayout ??= pitzerLayoutShape(chemistry.strongIonNames, chemistry.systems, p.temperatureC, p.a);
+    layout = layoutWith(chemistry.osmoticLayout, p.strongConcentrations);
+  }
   const n = layout.speciesCount;
   const charges = layout.system.charges;
+  const pitzer = state.pitzer;
   let conc: readonly number[];
   let waterKgPerL: number;
   let ionicStrengthMolal: number;
   let osmoticCoefficient: number;
-  const lnGamma = new Array<number>(n).fill(0);
-  if (state.pitzer) {
-    conc = state.pitzer.concentrations;
-    waterKgPerL = state.pitzer.waterKgPerL;
-    ionicStrengthMolal = state.pitzer.ionicStrengthMolal;
-    osmoticCoefficient = state.pitzer.osmoticCoefficient;
-    for (let i = 0; i < n; i++) lnGamma[i] = state.pitzer.lnGamma[i];
+  if (pitzer) {
+    conc = pitzer.concentrations;
+    waterKgPerL = pitzer.waterKgPerL;
+    ionicStrengthMolal = pitzer.ionicStrengthMolal;
+    osmoticCoefficient = pitzer.osmoticCoefficient;
   } else {
     // The pH model is a one-number model; the osmotic coefficient still comes from the Pitzer equations at the species found.
-    const c = new Array<number>(n).fill(0);
+    const c: number[] = [];
+    for (let i = 0; i < n; i++) c.push(0);
     c[H_INDEX] = aH / g1;
     c[OH_INDEX] = p.kw / (aH * g1);
-    layout.strongConcentrations.forEach((v, i) => (c[STRONG_START + i] = v));
+    const strong = p.strongConcentrations;
+    for (let i = 0; i < strong.length; i++) c[STRONG_START + i] = strong[i];
     systemConcentrations(p, layout, state.mixedKa, aH, c);
     conc = c;
     waterKgPerL = waterKgPerLitre(p.waterDensity, c, layout.volumes, state.ionicStrengthM);
-    const evaluation: PitzerEvaluation = { ionicStrength: 0, osmoticCoefficient: 1, lnGammaKcl: 0 };
-    pitzerEvaluate(
-      layout.system,
-      c.map((v) => v / waterKgPerL),
-      new Array<number>(n).fill(0),
-      evaluation,
-    );
-    ionicStrengthMolal = evaluation.ionicStrength;
-    osmoticCoefficient = evaluation.osmoticCoefficient;
-    const lnG1 = Math.log(g1);
-    for (let i = 0; i < n; i++) lnGamma[i] = lnG1 * charges[i] * charges[i];
+    if (reportMolality.length < n) {
+      reportMolality = new Array<number>(n).fill(0);
+      reportLnGamma = new Array<number>(n).fill(0);
+    }
+    const m = reportMolality;
+    for (let i = 0; i < n; i++) m[i] = c[i] / waterKgPerL;
+    pitzerEvaluate(layout.system, m, reportLnGamma, reportEvaluation);
+    ionicStrengthMolal = reportEvaluation.ionicStrength;
+    osmoticCoefficient = reportEvaluation.osmoticCoefficient;
   }
-  const molal = state.pitzer !== undefined;
+  const constants = reportConstants(chemistry);
+  const names = constants.speciesNames;
   const species: SpeciesAmount[] = [];
   // Species objects are written out literally, one shape with a system and one without: an object spread here cost
   // a fifth of a whole speciation.
-  const push = (i: number, name: string, system?: string, protonsLost?: number) => {
+  const strongEnd = STRONG_START + p.strongConcentrations.length;
+  for (let i = 0; i < strongEnd; i++) {
     const molality = conc[i] / waterKgPerL;
-    const activity = (molal ? molality : conc[i]) * Math.exp(lnGamma[i]);
-    if (system === undefined) species.push({ name, charge: charges[i], concentrationM: conc[i], molality, activity });
-    else species.push({ name, system, protonsLost, charge: charges[i], concentrationM: conc[i], molality, activity });
-  };
-  push(H_INDEX, 'H+');
-  push(OH_INDEX, 'OH-');
+    const z = charges[i];
+    const activity = pitzer ? molality * Math.exp(pitzer.lnGamma[i]) : conc[i] * integerPower(g1, z * z);
+    species.push({ name: names[i], charge: z, concentrationM: conc[i], molality, activity });
+  }
   let residual = p.strongCharge + conc[H_INDEX] - conc[OH_INDEX];
   let totalCharge = conc[H_INDEX] + conc[OH_INDEX];
-  ionNames.forEach((name, i) => {
-    const ion = findStrongIon('strongIons', name);
-    push(STRONG_START + i, ion.name);
-    totalCharge += Math.abs(ion.charge) * conc[STRONG_START + i];
-  });
+  for (let i = STRONG_START; i < strongEnd; i++) totalCharge += Math.abs(charges[i]) * conc[i];
   let sumMolal = 0;
   let idealOsmolarityM = 0;
   for (let i = 0; i < n; i++) {
@@ -515,34 +720,48 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     idealOsmolarityM += conc[i];
   }
   const systems: SystemSpeciation[] = [];
-  composition.systems.forEach((sys, j) => {
+  const kp = state.mixedKa;
+  const log10G1 = Math.log10(g1);
+  for (let j = 0; j < composition.systems.length; j++) {
+    const sys = composition.systems[j];
     const first = p.firstStep[j];
     const steps = p.stepCount[j];
     const start = layout.systemStart[j];
-    const weights = [1];
-    for (let k = 1; k <= steps; k++) weights.push((weights[k - 1] * state.mixedKa[first + k - 1]) / aH);
-    const sum = weights.reduce((a, b) => a + b, 0);
-    const fractions = weights.map((w) => w / sum);
+    const z0 = sys.chargeOfMostProtonated;
+    const fractions: number[] = [1];
+    let sum = 1;
+    for (let k = 1; k <= steps; k++) {
+      const w = (fractions[k - 1] * kp[first + k - 1]) / aH;
+      fractions.push(w);
+      sum += w;
+    }
     let meanCharge = 0;
-    fractions.forEach((fr, k) => {
-      const z = sys.chargeOfMostProtonated - k;
+    for (let k = 0; k <= steps; k++) {
+      const fr = fractions[k] / sum;
+      fractions[k] = fr;
+      const z = z0 - k;
       meanCharge += fr * z;
       totalCharge += Math.abs(z) * fr * sys.totalM;
-      push(start + k, `${sys.name} ${chargeLabel(z)}`, sys.name, k);
-    });
+      const i = start + k;
+      const molality = conc[i] / waterKgPerL;
+      const activity = pitzer ? molality * Math.exp(pitzer.lnGamma[i]) : conc[i] * integerPower(g1, z * z);
+      species.push({ name: names[i], system: sys.name, protonsLost: k, charge: z, concentrationM: conc[i], molality, activity });
+    }
     residual += sys.totalM * meanCharge;
-    systems.push({
-      name: sys.name,
-      totalM: sys.totalM,
-      meanCharge,
-      fractions,
-      apparentPKa: state.mixedKa.slice(first, first + steps).map((k) => -Math.log10(k)),
-    });
-  });
-  const warnings = [...p.warnings];
+    // pKa′ = pKa − log10(γ(HA)/γ(A)): with γ₁^(z²) the ratio is γ₁^(2z−1); with Pitzer, from the two ln γ.
+    const apparentPKa: number[] = [];
+    for (let k = 0; k < steps; k++) {
+      const s = first + k;
+      apparentPKa.push(pitzer ? constants.pKa[s] - (pitzer.lnGamma[start + k] - pitzer.lnGamma[start + k + 1]) / Math.LN10 : constants.pKa[s] - p.zSquaredDiff[s] * log10G1);
+    }
+    systems.push({ name: sys.name, totalM: sys.totalM, meanCharge, fractions, apparentPKa });
+  }
+  const warnings = p.warnings.slice();
   const coverage = pitzerCoverage(layout, conc, waterKgPerL, ionicStrengthMolal, composition);
-  if (p.model === 'pitzer') warnings.push(...pitzerWarnings(p, layout, coverage, ionicStrengthMolal));
-  else if (p.model !== 'ideal' && state.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M) {
+  if (p.model === 'pitzer') {
+    const more = pitzerWarnings(p, layout, coverage, ionicStrengthMolal);
+    for (let i = 0; i < more.length; i++) warnings.push(more[i]);
+  } else if (p.model !== 'ideal' && state.ionicStrengthM > ACTIVITY_MODEL_LIMIT_M) {
     warnings.push(warning('beyondActivityModel', MESSAGES.beyondActivityModel(state.ionicStrengthM, ACTIVITY_MODEL_LIMIT_M, ACTIVITY_MODEL_NAMES[p.model]), 'activityModel'));
   }
   return {
@@ -556,7 +775,7 @@ export function report(p: PreparedComposition, state: EquilibriumState, composit
     osmolalityMosmKg: osmoticCoefficient * sumMolal * 1000,
     idealOsmolarityMosmL: idealOsmolarityM * 1000,
     pitzerCoverage: coverage,
-    pKw: pKw(p.temperatureC),
+    pKw: chemistry.pKw,
     debyeHuckelA: p.a,
     species,
     systems,

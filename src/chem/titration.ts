@@ -9,7 +9,7 @@
  * iterated only on the ionic strength (which the titrant itself raises). No nested root
  * finding (docs/science.md, Methods: "Titrant for a known target pH").
  */
-import { ionicStrengthFactor, parseActivityModel } from './activity';
+import { integerPower, ionicStrengthFactor, parseActivityModel } from './activity';
 import { AcidBaseChemistry, Composition, MAX_CONCENTRATION_M, PreparedComposition, appendStepConstants, prepare, systemAt, validateChemistry } from './composition';
 import { ChemError, MESSAGES, requireNumber } from './errors';
 import { selfConsistentIonicStrength } from './ionicStrength';
@@ -79,40 +79,54 @@ function prepareTitrant(titrant: Titrant, temperatureC: number): PreparedTitrant
   return { strongCharge, strongHalfZ2, ka, zd, z0: sys.chargeOfMostProtonated, perMole };
 }
 
+// Results of `chargeAt` and `systemCharge`, kept in module scope so the iteration allocates nothing.
+let atF = 0;
+let atI2 = 0;
+let sysQ = 0;
+let sysQ2 = 0;
+
 /**
  * Charge balance of the composition alone at a fixed a_H and ionic strength
- * (f₀, mol/L) and 2·I of its non-strong species. The solver's `evaluate` computes the same
- * sums with derivatives besides; this lean form is kept apart because sharing that one made
- * capacity about 1.5× slower in `npm run bench` (8–10 against 12–13 µs per call).
+ * (f₀, mol/L, into atF) and 2·I of its non-strong species (into atI2), at γ₁ = g1. The
+ * solver's `evaluate` computes the same sums with derivatives besides; this lean form is
+ * kept apart because sharing that one made capacity about 1.5× slower in `npm run bench`
+ * (8–10 against 12–13 µs per call).
  */
-function chargeAt(p: PreparedComposition, aH: number, lnG: number): { f: number; i2: number } {
-  const g1 = Math.exp(lnG);
+function chargeAt(p: PreparedComposition, aH: number, g1: number): void {
   const hc = aH / g1;
   const ohc = p.kw / (aH * g1);
   let f = p.strongCharge + hc - ohc;
   let i2 = hc + ohc;
   for (let j = 0; j < p.totals.length; j++) {
-    const m = systemCharge(p.ka, p.zSquaredDiff, p.firstStep[j], p.stepCount[j], p.z0[j], aH, lnG);
-    f += p.totals[j] * m.q;
-    i2 += p.totals[j] * m.q2;
+    systemCharge(p.ka, p.zSquaredDiff, p.firstStep[j], p.stepCount[j], p.z0[j], aH, g1);
+    f += p.totals[j] * sysQ;
+    i2 += p.totals[j] * sysQ2;
   }
-  return { f, i2 };
+  atF = f;
+  atI2 = i2;
 }
 
-/** Mean charge and mean squared charge per molecule of one system at a_H and ln γ₁ (summed species by species, as in the solver). */
-function systemCharge(ka: readonly number[], zd: readonly number[], first: number, steps: number, z: number, aH: number, lnG: number): { q: number; q2: number } {
+/**
+ * Mean charge and mean squared charge per molecule of one system at a_H and γ₁ (into sysQ
+ * and sysQ2; summed species by species, as in the solver). The mixed constant of each step
+ * is Ka·γ₁^(2z−1), by multiplication: γ₁^(2z₀−1) for the first step, one factor γ₁⁻² more per step.
+ */
+function systemCharge(ka: readonly number[], zd: readonly number[], first: number, steps: number, z: number, aH: number, g1: number): void {
   let t = 1;
   let sum = 1;
   let q = z;
   let q2 = z * z;
+  let factor = steps > 0 ? integerPower(g1, zd[first]) / aH : 0;
+  const inverseSquare = 1 / (g1 * g1);
   for (let k = 1; k <= steps; k++) {
-    const s = first + k - 1;
-    t *= (ka[s] * Math.exp(lnG * zd[s])) / aH;
+    t *= ka[first + k - 1] * factor;
+    factor *= inverseSquare;
     sum += t;
     q += (z - k) * t;
     q2 += (z - k) * (z - k) * t;
   }
-  return { q: q / sum, q2: q2 / sum };
+  sysQ = q / sum;
+  sysQ2 = q2 / sum;
 }
 
 /**
@@ -195,18 +209,20 @@ function titrantForPhPrepared(p: PreparedComposition, t: PreparedTitrant, name: 
   // A negative amount mid-iteration may still turn positive as I settles; the sign is judged at the end.
   const speciesIonicStrength = (ionicStrengthM: number) => {
     iterations++;
-    const lnG = -p.a * ionicStrengthFactor(p.model, ionicStrengthM) * Math.LN10;
-    const base = chargeAt(p, aH, lnG);
+    const g1 = Math.exp(-p.a * ionicStrengthFactor(p.model, ionicStrengthM) * Math.LN10);
+    chargeAt(p, aH, g1);
+    const f0 = atF;
+    const i20 = atI2;
     q = t.strongCharge;
     let i2t = 2 * t.strongHalfZ2;
     if (t.perMole > 0) {
-      const m = systemCharge(t.ka, t.zd, 0, t.ka.length, t.z0, aH, lnG);
-      q += t.perMole * m.q;
-      i2t += t.perMole * m.q2;
+      systemCharge(t.ka, t.zd, 0, t.ka.length, t.z0, aH, g1);
+      q += t.perMole * sysQ;
+      i2t += t.perMole * sysQ2;
     }
-    c = q === 0 ? Infinity : -base.f / q;
+    c = q === 0 ? Infinity : -f0 / q;
     if (!Number.isFinite(c) || Math.abs(c) > MAX_CONCENTRATION_M) throw unreachable(p, name, targetPh, q, c);
-    return Math.max(0, p.strongIonicStrength + 0.5 * (base.i2 + Math.abs(c) * i2t));
+    return Math.max(0, p.strongIonicStrength + 0.5 * (i20 + Math.abs(c) * i2t));
   };
   const ionicStrength =
     p.model === 'ideal' ? speciesIonicStrength(0) : selfConsistentIonicStrength(p.strongIonicStrength, speciesIonicStrength, p.ionicStrengthScale + 1, 'The titrant amount');
@@ -227,9 +243,9 @@ export function netStrongBaseForPh(p: PreparedComposition, pH: number): number {
   const aH = Math.pow(10, -pH);
   let c = 0;
   const speciesIonicStrength = (ionicStrengthM: number) => {
-    const base = chargeAt(p, aH, -p.a * ionicStrengthFactor(p.model, ionicStrengthM) * Math.LN10);
-    c = -base.f;
-    return p.strongIonicStrength + 0.5 * (base.i2 + Math.abs(c));
+    chargeAt(p, aH, Math.exp(-p.a * ionicStrengthFactor(p.model, ionicStrengthM) * Math.LN10));
+    c = -atF;
+    return p.strongIonicStrength + 0.5 * (atI2 + Math.abs(c));
   };
   if (p.model === 'ideal') speciesIonicStrength(0);
   else selfConsistentIonicStrength(p.strongIonicStrength, speciesIonicStrength, p.ionicStrengthScale + 1, 'The strong-base equivalent');

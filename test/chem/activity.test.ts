@@ -1,5 +1,5 @@
 import { ionicStrengthFactor, log10Gamma } from '../../src/chem';
-import { parseActivityModel } from '../../src/chem/activity';
+import { integerPower, parseActivityModel } from '../../src/chem/activity';
 import { ChemError } from '../../src/chem';
 import { expectClose } from './fixtures';
 
@@ -18,6 +18,13 @@ describe('activity models', () => {
   it('ideal gives γ = 1 and neutral species always have γ = 1', () => {
     expect(ionicStrengthFactor('ideal', 0.3)).toBe(0);
     expect(log10Gamma('davies', 0, 0.3, 0.51)).toBeCloseTo(0, 15);
+  });
+  it('integer powers of γ₁ by multiplication agree with exp(n·ln γ₁) for every power a mixed constant uses (|n| ≤ 13)', () => {
+    /** A few units in the last place per multiplication: far below anything that moves a pH. */
+    const POWER_TOLERANCE = 1e-14;
+    for (const g of [0.2, 0.61, 0.93, 1, 1.3]) {
+      for (let n = -13; n <= 13; n++) expect(Math.abs(integerPower(g, n) / Math.exp(n * Math.log(g)) - 1)).toBeLessThan(POWER_TOLERANCE);
+    }
   });
   it('parses names case-insensitively, defaults to pitzer, and refuses unknown models naming the allowed ones', () => {
     expect(parseActivityModel('m', undefined)).toBe('pitzer');

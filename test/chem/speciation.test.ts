@@ -1,6 +1,8 @@
 import { ChemError, Composition, speciate, solvePh } from '../../src/chem';
 import { ACETATE, BORATE, CARBONATE, PHOSPHATE, PHTHALATE, TRIS, expectClose } from './fixtures';
 import { pHSAt25 } from './iupacStandards';
+import { prepare } from '../../src/chem/composition';
+import { solvePrepared, solvePreparedNested } from '../../src/chem/speciation';
 
 /** Warnings are compared by code (and field), never by message text. */
 const codes = (ws: readonly { code: string }[]) => ws.map((w) => w.code);
@@ -62,6 +64,16 @@ describe('speciate', () => {
     const phos = r.species.filter((s) => s.system === 'phosphate').reduce((a, s) => a + s.concentrationM, 0);
     expectClose('phosphate total', phos, 0.05, 1e-15);
     expect(r.systems[0].fractions.reduce((a, b) => a + b, 0)).toBeCloseTo(1, 14);
+  });
+
+  it('the combined pH/ionic-strength step takes fewer charge-balance evaluations than the nested iteration, for the same pH (Davies and Bates–Guggenheim)', () => {
+    for (const activityModel of ['davies', 'bates-guggenheim'] as const) {
+      const p = prepare({ ...buffer, activityModel });
+      const combined = solvePrepared(p);
+      const nested = solvePreparedNested(p);
+      expect(combined.evaluations).toBeLessThan(nested.evaluations);
+      expect(Math.abs(combined.pH - nested.pH)).toBeLessThan(1e-11);
+    }
   });
 
   it('reports a tiny charge-balance residual and its iteration counts', () => {

@@ -259,9 +259,11 @@ const J_TABLE_SLOPE = new Float64Array(J_TABLE_SIZE);
 }
 
 /** J(x) and x·J′(x) at x = k·x₁₁ for the multipliers k that occur, filled once per evaluation. */
-const jValue = new Array<number>(10).fill(0);
-const jxPrime = new Array<number>(10).fill(0);
-const jStamp = new Array<number>(10).fill(-1);
+/** Largest multiplier k = z_i·z_j: charges reach ±6 (the composition's limit), so 36; typed arrays do not grow. */
+const J_MULTIPLIERS = 64;
+const jValue = new Float64Array(J_MULTIPLIERS);
+const jxPrime = new Float64Array(J_MULTIPLIERS);
+const jStamp = new Float64Array(J_MULTIPLIERS).fill(-1);
 const jOut = { j: 0, xjp: 0 };
 
 function jAt(multiplier: number, x11: number, stamp: number): void {
@@ -309,9 +311,9 @@ function eTheta(zi: number, zj: number, x11: number, ionicStrength: number, stam
 
 const eOut = { eth: 0, ethp: 0 };
 /** Eθ and Eθ′ per charge pair (index zi·8 + zj), filled once per evaluation: they depend only on the charges and I. */
-const eThetaCache = new Array<number>(128).fill(0);
-const eThetaPrimeCache = new Array<number>(128).fill(0);
-const eThetaStamp = new Array<number>(128).fill(-1);
+const eThetaCache = new Float64Array(128);
+const eThetaPrimeCache = new Float64Array(128);
+const eThetaStamp = new Float64Array(128).fill(-1);
 let evaluationStamp = 0;
 
 /** Result of one evaluation. */

@@ -52,6 +52,24 @@ export function pitzerLayout(
   temperatureC: number,
   debyeHuckelA: number,
 ): PitzerLayout {
+  return layoutWith(pitzerLayoutShape(strongIonNames, systems, temperatureC, debyeHuckelA), strongConcentrations);
+}
+
+/** A layout's shape with the strong ions' amounts: a fresh object, the shape shared. */
+export function layoutWith(shape: PitzerLayoutShape, strongConcentrations: readonly number[]): PitzerLayout {
+  return {
+    system: shape.system,
+    volumes: shape.volumes,
+    systemStart: shape.systemStart,
+    speciesCount: shape.speciesCount,
+    strongConcentrations,
+    chlorideIndex: shape.chlorideIndex,
+    unparameterised: shape.unparameterised,
+  };
+}
+
+/** Everything of a layout but the strong-ion amounts, found in (or added to) the caches below. */
+export function pitzerLayoutShape(strongIonNames: readonly string[], systems: readonly AcidBaseChemistry[], temperatureC: number, debyeHuckelA: number): PitzerLayoutShape {
   // Layouts are found by the first system's steps array (library systems share it between compositions),
   // then compared field by field: no key string to build and hash on every solve.
   const anchor: object = systems.length > 0 ? systems[0].steps : NO_SYSTEMS;
@@ -86,15 +104,7 @@ export function pitzerLayout(
       entries.push({ temperatureC, names: [...strongIonNames], systems: systems.map((sys) => ({ steps: sys.steps, name: sys.name, z0: sys.chargeOfMostProtonated })), shape });
     }
   }
-  return {
-    system: shape.system,
-    volumes: shape.volumes,
-    systemStart: shape.systemStart,
-    speciesCount: shape.speciesCount,
-    strongConcentrations,
-    chlorideIndex: shape.chlorideIndex,
-    unparameterised: shape.unparameterised,
-  };
+  return shape;
 }
 
 interface LayoutEntry {
@@ -119,7 +129,8 @@ function sameLayout(entry: LayoutEntry, names: readonly string[], systems: reado
 const NO_SYSTEMS = {};
 
 /** Everything of a layout but the strong-ion amounts: the same for every solve of the same species at the same temperature. */
-type LayoutShape = Omit<PitzerLayout, 'strongConcentrations'>;
+export type PitzerLayoutShape = Omit<PitzerLayout, 'strongConcentrations'>;
+type LayoutShape = PitzerLayoutShape;
 
 /** Layouts already built (a solve of the same kind of buffer reuses its layout; the table lookups cost more than the solve), by the first system's steps array; weakly held, so a user's discarded substances take theirs with them. */
 const LAYOUT_CACHE = new WeakMap<object, LayoutEntry[]>();
