@@ -7,7 +7,7 @@
  */
 import { ACTIVITY_MODELS, AcidBaseSystem, ActivityModel, ChemError, Composition, MESSAGES } from '../chem';
 import { readChoiceField, readQuantity, readQuantityList, requireNumberField } from '../chem/input';
-import { SubstanceLibrary, UserSubstance, createLibrary } from '../chem/library';
+import { SubstanceLibrary, UserSubstance, createLibrary, defaultLibrary } from '../chem/library';
 import { closestNames, nameKey } from '../chem/library/names';
 
 /** A composition as the command line reads it (numbers may be text with units). */
@@ -79,8 +79,20 @@ export function readUserSubstances(value: unknown): Record<string, unknown>[] | 
 
 /** The library for an input: built-in plus the input's own substances. */
 export function libraryFor(userSubstances: readonly Record<string, unknown>[] | undefined): SubstanceLibrary {
-  return createLibrary((userSubstances ?? []) as unknown as UserSubstance[]);
+  // The built-in library is made once; a batch's rows usually share their own substances, so the last few libraries are kept by their JSON (a library costs about 0.8 ms to build, twenty plans).
+  if (userSubstances === undefined || userSubstances.length === 0) return defaultLibrary();
+  const key = JSON.stringify(userSubstances);
+  const kept = userLibraries.get(key);
+  if (kept) return kept;
+  const made = createLibrary(userSubstances as unknown as UserSubstance[]);
+  if (userLibraries.size >= USER_LIBRARIES_KEPT) userLibraries.delete(userLibraries.keys().next().value as string);
+  userLibraries.set(key, made);
+  return made;
 }
+
+/** Libraries with user substances kept, oldest dropped first. */
+const USER_LIBRARIES_KEPT = 8;
+const userLibraries = new Map<string, SubstanceLibrary>();
 
 /**
  * Turns command-line JSON into a core Composition (mM → mol/L; forms by name through the
