@@ -46,7 +46,7 @@ export function capacity(composition: Composition): Capacity {
  * @param pH - its solved pH
  */
 export function capacityOfPrepared(p: PreparedComposition, pH: number): Capacity {
-  // With the Pitzer model each amount's γ iteration starts from the last amount's γ (0.05–0.2 pH away): one round fewer.
+  // With the Pitzer model each amount's γ iteration starts from the last amount's γ (0.002–0.2 pH away): one round fewer on average.
   let near: PitzerStart | undefined;
   const at = (x: number) => {
     const found = strongBaseForPh(p, x, near);

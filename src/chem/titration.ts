@@ -281,7 +281,7 @@ export interface StrongBaseAmount {
 /**
  * netStrongBaseForPh with the Pitzer γ iteration started from a neighbouring amount's γ (`start`, used only as the
  * first iterate, see solvePrepared), returning this amount's γ for the next: capacity asks four amounts of one
- * composition 0.05–0.1 pH apart. The one-number models ignore `start`.
+ * composition 0.002–0.2 pH apart. The one-number models ignore `start`.
  */
 export function strongBaseForPh(p: PreparedComposition, pH: number, start: PitzerStart | undefined): StrongBaseAmount {
   if (p.pitzer) {
