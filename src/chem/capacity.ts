@@ -5,7 +5,8 @@
 import { Composition, PreparedComposition, prepare, systemAt, withConditions } from './composition';
 import { requireNumber } from './errors';
 import { SpeciationResult, speciate, solvePrepared } from './speciation';
-import { netStrongBaseForPh } from './titration';
+import { PitzerStart } from './pitzer/iteration';
+import { strongBaseForPh } from './titration';
 
 /** pH step for the central difference β = dC_b/dpH. Small enough that curvature error is < 1e-6 relative for any buffer, large enough to stay clear of rounding. */
 const CAPACITY_STEP_PH = 1e-3;
@@ -45,7 +46,13 @@ export function capacity(composition: Composition): Capacity {
  * @param pH - its solved pH
  */
 export function capacityOfPrepared(p: PreparedComposition, pH: number): Capacity {
-  const at = (x: number) => netStrongBaseForPh(p, x);
+  // With the Pitzer model each amount's γ iteration starts from the last amount's γ (0.002–0.2 pH away): one round fewer on average.
+  let near: PitzerStart | undefined;
+  const at = (x: number) => {
+    const found = strongBaseForPh(p, x, near);
+    near = found.pitzer ?? near;
+    return found.amount;
+  };
   // At its own solved pH the composition needs no strong base or acid: the amount there is the
   // solve's residual (about 1e-13 mol/L), so it is taken as zero rather than solved for (one of five amount solves).
   const here = 0;

@@ -26,7 +26,8 @@ import { ChemWarning, warning } from './warnings';
 import { ROUNDING_FLOOR, selfConsistentIonicStrength } from './ionicStrength';
 import { PitzerEvaluation, pitzerEvaluate } from './pitzer/model';
 import { H_INDEX, OH_INDEX, PitzerLayout, STRONG_START, layoutWith, pitzerLayoutShape } from './pitzer/prepared';
-import { gammaChange, mixedConstants, nextGammas } from './pitzer/iteration';
+import { PitzerStart, gammaChange, mixedConstants, nextGammas, warmGammas } from './pitzer/iteration';
+export type { PitzerStart } from './pitzer/iteration';
 import { waterKgPerLitre } from './pitzer/volumes';
 import { STRONG_IONS } from './strongIons';
 
@@ -268,9 +269,11 @@ export interface EquilibriumState {
   readonly pitzer?: PitzerState;
 }
 
-/** What the Pitzer solve leaves besides the pH. */
+/** What the Pitzer solve leaves besides the pH; it can start the solve of a neighbouring solution (a PitzerStart). */
 export interface PitzerState {
   readonly lnGamma: readonly number[];
+  /** The layout's species key (see PitzerLayout). */
+  readonly speciesKey: string;
   readonly concentrations: readonly number[];
   readonly waterKgPerL: number;
   readonly ionicStrengthMolal: number;
@@ -342,7 +345,7 @@ let scratchPreviousG: number[] = [];
  * by more than PITZER_TOLERANCE. Each γ depends weakly on how the buffer is split between
  * its forms, so plain substitution converges; a step is halved whenever the change grows.
  */
-function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[], guessPh: number): EquilibriumState {
+function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[], guessPh: number, warm: PitzerStart | undefined): EquilibriumState {
   const n = layout.speciesCount;
   // Filled by push: a packed array of doubles from the start (new Array(n).fill(0) costs more than this whole loop).
   const conc: number[] = [];
@@ -363,11 +366,14 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
   const strong = layout.strongConcentrations;
   for (let i = 0; i < strong.length; i++) conc[STRONG_START + i] = strong[i];
   const charges = layout.system.charges;
-  // Start from Bates–Guggenheim at the ionic strength of the composition as given: the first pH solve then starts close.
-  let start = p.strongIonicStrength;
-  for (let j = 0; j < p.totals.length; j++) start += 0.5 * p.totals[j] * p.z0[j] * p.z0[j];
-  const lnG0 = -p.a * ionicStrengthFactor('bates-guggenheim', start) * Math.LN10;
-  for (let i = 0; i < n; i++) lnGamma[i] = lnG0 * charges[i] * charges[i];
+  // Start from a neighbouring solution's γ when given and fitting; else from Bates–Guggenheim at the ionic strength
+  // of the composition as given: the first pH solve then starts close.
+  if (!warmGammas(layout, n, warm, lnGamma)) {
+    let start = p.strongIonicStrength;
+    for (let j = 0; j < p.totals.length; j++) start += 0.5 * p.totals[j] * p.z0[j] * p.z0[j];
+    const lnG0 = -p.a * ionicStrengthFactor('bates-guggenheim', start) * Math.LN10;
+    for (let i = 0; i < n; i++) lnGamma[i] = lnG0 * charges[i] * charges[i];
+  }
   let w = waterKgPerLitre(p.waterDensity, conc, layout.volumes, p.strongIonicStrength);
   const counter = pitzerCounter;
   counter.n = 0;
@@ -397,7 +403,14 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
         mixedKa: kp,
         evaluations: counter.n,
         ionicStrengthIterations: it - 1,
-        pitzer: { lnGamma, concentrations: conc, waterKgPerL: w, ionicStrengthMolal: result.ionicStrength, osmoticCoefficient: result.osmoticCoefficient },
+        pitzer: {
+          lnGamma,
+          speciesKey: layout.speciesKey,
+          concentrations: conc,
+          waterKgPerL: w,
+          ionicStrengthMolal: result.ionicStrength,
+          osmoticCoefficient: result.osmoticCoefficient,
+        },
       };
     }
     w = waterKgPerLitre(p.waterDensity, conc, layout.volumes, ionicStrengthM);
@@ -423,10 +436,14 @@ function solvePitzer(p: PreparedComposition, layout: PitzerLayout, kp: number[],
 /**
  * Solves a prepared composition: pH and ionic strength, self-consistent.
  * Throws ChemError (no-convergence, infeasible-target).
+ *
+ * @param guessPh - where the first Newton step starts (a pH known nearby, or 7)
+ * @param start - Pitzer only: a neighbouring solution's state (its `pitzer`) to start the γ iteration from; used
+ *   only when its species key matches and every ln γ is finite, and only as the first iterate (same stopping rule)
  */
-export function solvePrepared(p: PreparedComposition, guessPh = 7): EquilibriumState {
+export function solvePrepared(p: PreparedComposition, guessPh = 7, start?: PitzerStart): EquilibriumState {
   const kp = packedZeros(p.ka.length);
-  if (p.pitzer) return solvePitzer(p, p.pitzer, kp, guessPh);
+  if (p.pitzer) return solvePitzer(p, p.pitzer, kp, guessPh, start);
   if (p.model === 'ideal') return solveNested(p, kp, guessPh);
   return solveCombined(p, kp, guessPh) ?? solveNested(p, kp, guessPh);
 }
@@ -532,7 +549,7 @@ function solveCombined(p: PreparedComposition, kp: number[], guessPh: number): E
  */
 export function solvePreparedNested(p: PreparedComposition, guessPh = 7): EquilibriumState {
   const kp = packedZeros(p.ka.length);
-  return p.pitzer ? solvePitzer(p, p.pitzer, kp, guessPh) : solveNested(p, kp, guessPh);
+  return p.pitzer ? solvePitzer(p, p.pitzer, kp, guessPh, undefined) : solveNested(p, kp, guessPh);
 }
 
 function solveNested(p: PreparedComposition, kp: number[], guessPh: number): EquilibriumState {

@@ -17,7 +17,7 @@ import { ionicStrengthFactor } from '../activity';
 import { PitzerEvaluation, pitzerEvaluate } from './model';
 import { H_INDEX, OH_INDEX, STRONG_START } from './prepared';
 import { waterKgPerLitre } from './volumes';
-import { gammaChange, mixedConstants, nextGammas } from './iteration';
+import { PitzerStart, gammaChange, mixedConstants, nextGammas, warmGammas } from './iteration';
 
 /** How the amount c enters the composition: per mole of c ≥ 0 (up) and per mole of −c for c < 0 (down). */
 export interface AmountIncrements {
@@ -54,6 +54,9 @@ export interface PitzerAmount {
   /** Ionic strength with that amount, mol/L. */
   readonly ionicStrengthM: number;
   readonly iterations: number;
+  /** The converged ln γ in the layout's order and the layout's species key (a PitzerStart for a neighbouring solve); absent when the amount is NaN. */
+  readonly lnGamma?: readonly number[];
+  readonly speciesKey: string;
 }
 
 /**
@@ -63,9 +66,11 @@ export interface PitzerAmount {
  * @param inc - how the amount enters it
  * @param pH - the target pH
  * @param estimate - a starting amount (the one-number answer)
+ * @param start - a neighbouring solution's converged ln γ (the same species key) to start the γ iteration from; used
+ *   only when it fits (see warmGammas), and only as the first iterate: the stopping rule is the same
  * @returns the amount, its charge per mole, the ionic strength; amount NaN when q is 0
  */
-export function pitzerAmountAtPh(p: PreparedComposition, inc: AmountIncrements, pH: number, estimate: number): PitzerAmount {
+export function pitzerAmountAtPh(p: PreparedComposition, inc: AmountIncrements, pH: number, estimate: number, start?: PitzerStart): PitzerAmount {
   const layout = p.pitzer!;
   const n = layout.speciesCount;
   const charges = layout.system.charges;
@@ -86,11 +91,15 @@ export function pitzerAmountAtPh(p: PreparedComposition, inc: AmountIncrements, 
   const { conc, lnGamma, next, m, totals, meanCharge, kp } = scratch;
   // The chloride probe (a zero-concentration species, see prepared.ts) is never written below: clear every slot.
   for (let i = 0; i < n; i++) conc[i] = 0;
-  // Start from Bates–Guggenheim at the ionic strength the composition has with the estimate.
-  let start = p.strongIonicStrength + 0.5 * Math.abs(estimate);
-  for (let j = 0; j < nSystems; j++) start += 0.5 * totals0[j] * p.z0[j] * p.z0[j];
-  const lnG0 = -p.a * ionicStrengthFactor('bates-guggenheim', start) * Math.LN10;
-  for (let i = 0; i < n; i++) lnGamma[i] = lnG0 * charges[i] * charges[i];
+  // Start from a neighbouring solution's γ when given and fitting; else from Bates–Guggenheim at the ionic strength
+  // the composition has with the estimate.
+  if (!warmGammas(layout, n, start, lnGamma)) {
+    let i0 = p.strongIonicStrength + 0.5 * Math.abs(estimate);
+    for (let j = 0; j < nSystems; j++) i0 += 0.5 * totals0[j] * p.z0[j] * p.z0[j];
+    const lnG0 = -p.a * ionicStrengthFactor('bates-guggenheim', i0) * Math.LN10;
+    for (let i = 0; i < n; i++) lnGamma[i] = lnG0 * charges[i] * charges[i];
+  }
+  const speciesKey = layout.speciesKey;
   const result = scratchResult;
   let w = p.waterDensity;
   let c = estimate;
@@ -157,11 +166,11 @@ export function pitzerAmountAtPh(p: PreparedComposition, inc: AmountIncrements, 
     q = 0;
     for (let i = 0; i < strong0.length; i++) q += charges[STRONG_START + i] * (positive ? inc.strongUp[i] : -inc.strongDown[i]);
     for (let j = 0; j < nSystems; j++) q += meanCharge[j] * (positive ? inc.totalsUp[j] : -inc.totalsDown[j]);
-    if (q === 0) return { amount: NaN, chargePerMole: 0, ionicStrengthM: NaN, iterations: it };
+    if (q === 0) return { amount: NaN, chargePerMole: 0, ionicStrengthM: NaN, iterations: it, speciesKey };
     c -= f / q;
-    if (!Number.isFinite(c)) return { amount: NaN, chargePerMole: q, ionicStrengthM: NaN, iterations: it };
+    if (!Number.isFinite(c)) return { amount: NaN, chargePerMole: q, ionicStrengthM: NaN, iterations: it, speciesKey };
     ionicStrengthM = fill(c, gH, gOH);
-    if (finalPass) return { amount: c, chargePerMole: q, ionicStrengthM, iterations: it };
+    if (finalPass) return { amount: c, chargePerMole: q, ionicStrengthM, iterations: it, lnGamma: lnGamma.slice(0, n), speciesKey };
     w = waterKgPerLitre(p.waterDensity, conc, layout.volumes, ionicStrengthM);
     for (let i = 0; i < n; i++) m[i] = Math.max(0, conc[i]) / w;
     pitzerEvaluate(layout.system, m, next, result);

@@ -89,3 +89,30 @@ export function nextGammas(
     }
   }
 }
+
+/** Largest |ln γ| a start may hold (γ from 2e-9 to 5e8): far outside any solution the model covers, so a larger value is not a solution's. */
+export const MAX_START_LN_GAMMA = 20;
+
+/**
+ * A starting point for a Pitzer iteration: the converged ln γ of a neighbouring solution (the same species at
+ * another temperature, dilution, amount or pH), with its layout's species key. It is only the first iterate: the
+ * stopping rule, the tolerance and the residual checks are the same as from the default start, so the answer is
+ * the same fixed point within them (docs/performance.md, "Warm starts for the Pitzer iteration").
+ */
+export interface PitzerStart {
+  readonly lnGamma: readonly number[];
+  readonly speciesKey: string;
+}
+
+/**
+ * Writes a start's ln γ into `lnGamma` when it fits the layout (the same species key, at least n values, every one
+ * finite and within MAX_START_LN_GAMMA) and returns true; otherwise leaves `lnGamma` as it is and returns false.
+ */
+export function warmGammas(layout: PitzerLayout, n: number, start: PitzerStart | undefined, lnGamma: number[]): boolean {
+  if (start === undefined || start.speciesKey !== layout.speciesKey) return false;
+  const g = start.lnGamma;
+  if (g.length < n) return false;
+  for (let i = 0; i < n; i++) if (!(Math.abs(g[i]) <= MAX_START_LN_GAMMA)) return false;
+  for (let i = 0; i < n; i++) lnGamma[i] = g[i];
+  return true;
+}

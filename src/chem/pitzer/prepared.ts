@@ -28,6 +28,11 @@ export interface PitzerLayout {
   readonly chlorideIndex: number;
   /** True for charged species with no tabulated ion. */
   readonly unparameterised: readonly boolean[];
+  /**
+   * The species in order (strong ions, then each system's name, charge and steps), without the temperature: two
+   * layouts with the same key hold the same species in the same slots, so one's ln γ can start the other's iteration.
+   */
+  readonly speciesKey: string;
 }
 
 function volumeOf(species: PitzerSpecies, systemName?: string): number {
@@ -65,6 +70,7 @@ export function layoutWith(shape: PitzerLayoutShape, strongConcentrations: reado
     strongConcentrations,
     chlorideIndex: shape.chlorideIndex,
     unparameterised: shape.unparameterised,
+    speciesKey: shape.speciesKey,
   };
 }
 
@@ -142,6 +148,9 @@ const LAYOUT_BY_KEY = new Map<string, LayoutShape>();
 const LAYOUT_KEYS = 4096;
 
 function layoutShape(strongIonNames: readonly string[], systems: readonly AcidBaseChemistry[], temperatureC: number, debyeHuckelA: number): LayoutShape {
+  let speciesKey = '';
+  for (const name of strongIonNames) speciesKey += findStrongIon('strongIons', name).name + ',';
+  for (const sys of systems) speciesKey += '|' + sys.name + ':' + sys.chargeOfMostProtonated + ':' + sys.steps.length;
   const species: PitzerSpecies[] = [
     { charge: 1, ion: 'H+' },
     { charge: -1, ion: 'OH-' },
@@ -170,5 +179,5 @@ function layoutShape(strongIonNames: readonly string[], systems: readonly AcidBa
     volumes.push(0);
   }
   const system = pitzerSystem(species, temperatureC, debyeHuckelA);
-  return { system, volumes, systemStart, speciesCount: species.length, chlorideIndex, unparameterised: system.unparameterised };
+  return { system, volumes, systemStart, speciesCount: species.length, chlorideIndex, unparameterised: system.unparameterised, speciesKey };
 }

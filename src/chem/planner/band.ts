@@ -20,7 +20,8 @@ export function titrationPlan(s: Settled, made: RouteResult, volumeL: number, st
   const amounts = [-u, u].map((shift) => {
     const shifted = shiftSystem(before, s.system.name, shift);
     try {
-      return titrantForPh(shifted, t.titrant, madePh).concentrationM;
+      // The same species as the made solution: its amount's γ (the route's, not a stock's) start this one's iteration.
+      return titrantForPh(shifted, t.titrant, madePh, made.pitzer).concentrationM;
     } catch {
       return 0;
     }

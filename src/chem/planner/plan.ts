@@ -23,7 +23,7 @@ import { SubstanceLibrary, defaultLibrary } from '../library/lookup';
 import { nameKey } from '../library/names';
 import { conductivityOf } from '../conductivity';
 import { idealOsmolarity } from '../osmolarity';
-import { SpeciationResult, report, solvePrepared } from '../speciation';
+import { PitzerStart, SpeciationResult, report, solvePrepared } from '../speciation';
 import { temperatureWarnings } from '../temperatureChecks';
 import { pKaAt } from '../vantHoff';
 import { RecipeComponent, RecipeInput, RecipePlan, TitrationPlan } from './types';
@@ -62,24 +62,30 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
   const madeVolumeL = stockVolumeL;
   const finished = base.composition;
 
+  // The finished buffer first: its γ start every neighbouring solve below (the same species at another temperature
+  // or dilution). Its own solve starts cold: from the amount solve's γ (the same fixed point) the γ change of the first
+  // round sits at the two solves' noise floor (2e-10–4e-10), where the contraction cannot be read, and the stopping
+  // rule then takes three to five rounds instead of two.
+  const prepared = prepare(finished);
+  const state = solvePrepared(prepared, s.targetPh);
+  const result = report(prepared, state, finished);
+  const near = state.pitzer;
+
   // Each composition below is solved once: a speciation made for one figure gives the others their pH.
   const atMeter = withConditions(scaleComposition(made.composition, 1 / s.partFraction), s.benchT);
-  const meterSpeciation = fold === 1 ? undefined : speciateFrom(atMeter, s.targetPh);
+  const meterSpeciation = fold === 1 ? undefined : speciateFrom(atMeter, s.targetPh, near);
   // A stock's own activity warnings (past the model's range, ions without Pitzer parameters) bear on the meter reading.
   const stockWarnings = meterSpeciation
     ? meterSpeciation.warnings.filter((w) => ACTIVITY_RANGE_CODES.has(w.code)).map((w) => warning(w.code, MESSAGES.stockAtMeter(fold, w.message), w.field))
     : [];
-  const meterPh = meterSpeciation ? meterSpeciation.pH : phFrom(atMeter, s.targetPh);
+  const meterPh = meterSpeciation ? meterSpeciation.pH : phFrom(atMeter, s.targetPh, near);
   // The stock as made, at the temperature of use: its pH and conductivity (the stock route only).
   // Adjusted in the full volume at the temperature of use, the meter reads the stock itself.
   const meterReadsStock = s.partFraction === 1 && s.benchT === s.useT;
-  const stockSpeciation = s.route !== 'stock' ? undefined : meterReadsStock && meterSpeciation ? meterSpeciation : speciateFrom(made.composition, s.targetPh);
+  const stockSpeciation = s.route !== 'stock' ? undefined : meterReadsStock && meterSpeciation ? meterSpeciation : speciateFrom(made.composition, s.targetPh, near);
   const titration = made.titrant ? titrationPlan(s, made, madeVolumeL, stockSpeciation?.pH) : undefined;
   if (titration) checkTitrantFits(titration.volumeMl, madeVolumeL * 1000, s.partFraction, titration.stockM);
 
-  const prepared = prepare(finished);
-  const state = solvePrepared(prepared, s.targetPh);
-  const result = report(prepared, state, finished);
   const cap = capacityOfPrepared(prepared, state.pH);
   // One criterion for weak buffering everywhere: the apparent pKa′ of the finished buffer at its own ionic strength and temperature (checks.ts).
   const weak = weakBufferingWarning(result);
@@ -91,17 +97,17 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
     pHAtUse: result.pH,
     // With nothing scaled (no stock, adjusted in the full volume) the meter reads the finished buffer at the bench temperature;
     // at the bench temperature of use it is the finished buffer itself, solved above.
-    pHAtBench: fold === 1 && s.partFraction === 1 ? meterPh : s.benchT === s.useT ? result.pH : phFrom(withConditions(finished, s.benchT), meterPh),
+    pHAtBench: fold === 1 && s.partFraction === 1 ? meterPh : s.benchT === s.useT ? result.pH : phFrom(withConditions(finished, s.benchT), meterPh, near),
     ionicStrengthM: result.ionicStrengthM,
     idealOsmolarityMosm: idealOsmolarity(result) * 1000,
     osmolalityMosmKg: result.osmolalityMosmKg,
     baseMmPerTenthPh: cap.baseMmPerTenthPh,
     acidMmPerTenthPh: cap.acidMmPerTenthPh,
     betaMPerPh: cap.betaMPerPh,
-    pHPerDegreeC: dpHdT(finished, s.useT, result.pH),
-    pHAfterTenfoldDilution: phFrom(scaleComposition(finished, 0.1), result.pH),
+    pHPerDegreeC: dpHdT(finished, s.useT, result.pH, near),
+    pHAfterTenfoldDilution: phFrom(scaleComposition(finished, 0.1), result.pH, near),
     conductivityMsPerCm: conductivity.conductivityMsPerCm,
-    conductivity25MsPerCm: s.useT === 25 ? conductivity.conductivityMsPerCm : conductivityOf(speciateFrom(withConditions(finished, 25), result.pH)).conductivityMsPerCm,
+    conductivity25MsPerCm: s.useT === 25 ? conductivity.conductivityMsPerCm : conductivityOf(speciateFrom(withConditions(finished, 25), result.pH, near)).conductivityMsPerCm,
   };
 
   const components = componentsOf(s, made, madeVolumeL, titration);
@@ -116,7 +122,7 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
           waterPerBatchMl: s.volumeL * 1000 * (1 - 1 / fold),
           stockConductivityMsPerCm: stockKappa.conductivityMsPerCm,
           stockConductivity25MsPerCm:
-            s.useT === 25 ? stockKappa.conductivityMsPerCm : conductivityOf(speciateFrom(withConditions(made.composition, 25), stockSpeciation.pH)).conductivityMsPerCm,
+            s.useT === 25 ? stockKappa.conductivityMsPerCm : conductivityOf(speciateFrom(withConditions(made.composition, 25), stockSpeciation.pH, near)).conductivityMsPerCm,
         }
       : undefined;
 
@@ -165,26 +171,27 @@ export function planRecipe(input: RecipeInput, library: SubstanceLibrary = defau
 /** A plan while it is put together. */
 type Building = { -readonly [K in keyof RecipePlan]: RecipePlan[K] };
 
-/** dpH/dT of a composition at a temperature, by central difference (one-sided at 0 and 100 °C); each solve starts from the pH at t. */
-function dpHdT(c: Composition, t: number, pHAtT: number): number {
+/** dpH/dT of a composition at a temperature, by central difference (one-sided at 0 and 100 °C); each solve starts from the pH (and the Pitzer γ) at t. */
+function dpHdT(c: Composition, t: number, pHAtT: number, near: PitzerStart | undefined): number {
   const lo = Math.max(0, t - DPH_DT_STEP_C);
   const hi = Math.min(100, t + DPH_DT_STEP_C);
-  return (phFrom(withConditions(c, hi), pHAtT) - phFrom(withConditions(c, lo), pHAtT)) / (hi - lo);
+  return (phFrom(withConditions(c, hi), pHAtT, near) - phFrom(withConditions(c, lo), pHAtT, near)) / (hi - lo);
 }
 
 /**
  * pH of a composition, the solve's first Newton step taken from a pH already known nearby (the same
- * solution at another temperature or dilution): a few charge-balance evaluations fewer; the bracket,
- * tolerances and residual checks are the solver's own, unchanged.
+ * solution at another temperature or dilution), and with the Pitzer model its γ iteration from that
+ * solution's γ (`near`, used when the species match): a few charge-balance evaluations and γ rounds fewer;
+ * the bracket, tolerances, stopping rule and residual checks are the solver's own, unchanged.
  */
-function phFrom(c: Composition, nearPh: number): number {
-  return solvePrepared(prepare(c), nearPh).pH;
+function phFrom(c: Composition, nearPh: number, near: PitzerStart | undefined): number {
+  return solvePrepared(prepare(c), nearPh, near).pH;
 }
 
-/** The full speciation of a composition (as speciate), its solve started from a pH known nearby (see phFrom). */
-function speciateFrom(c: Composition, nearPh: number): SpeciationResult {
+/** The full speciation of a composition (as speciate), its solve started from a pH and γ known nearby (see phFrom). */
+function speciateFrom(c: Composition, nearPh: number, near: PitzerStart | undefined): SpeciationResult {
   const p = prepare(c);
-  return report(p, solvePrepared(p, nearPh), c);
+  return report(p, solvePrepared(p, nearPh, near), c);
 }
 
 function purityOf(s: Settled, form: LibraryForm, role: RecipeComponent['role']): number {

@@ -2,12 +2,12 @@
 import { readTextField } from '../input';
 import { scaleComposition } from '../capacity';
 import { ChemWarning, warning } from '../warnings';
-import { Composition } from '../composition';
+import { Composition, prepare } from '../composition';
 import { ChemError, MESSAGES } from '../errors';
 import { LibraryForm, SubstanceRecord } from '../library/types';
 import { titrantFromForm } from '../library/titrant';
 import { nameKey } from '../library/names';
-import { solvePh } from '../speciation';
+import { PitzerStart, solvePh, solvePrepared } from '../speciation';
 import { titrantForPh, withTitrant } from '../titration';
 import { DEFAULT_STOCK_TOLERANCE_PERCENT, NO_TITRANT_PH, HOLD_TOTAL_STEPS, HOLD_TOTAL_TOLERANCE } from './constants';
 import { RouteResult, Settled } from './settle';
@@ -72,16 +72,21 @@ export function saltComponents(s: Settled, saltTargetM: number): RouteResult['we
 export function titrateRoute(s: Settled, saltTargetM: number): RouteResult {
   const form = weighedForm(s);
   const perMole = systemMolesIn(form, s.system);
+  // Each attempt's γ start the next one's (the secant's attempts differ by a little buffer): Pitzer only.
+  let near: PitzerStart | undefined;
   const attempt = (formM: number): RouteResult => {
     const start = baseComposition(s, [{ form, concentrationM: formM }], saltTargetM);
     const weighed = [{ role: 'buffer' as const, form, concentrationM: formM }, ...saltComponents(s, saltTargetM)];
-    const startPh = solvePh(start);
-    if (Math.abs(startPh - s.targetPh) <= NO_TITRANT_PH) return { composition: start, weighed, unadjustedPh: startPh };
-    const chosen = chooseTitrant(s, start);
+    const before = solvePrepared(prepare(start), 7, near);
+    const startPh = before.pH;
+    if (Math.abs(startPh - s.targetPh) <= NO_TITRANT_PH) return { composition: start, weighed, unadjustedPh: startPh, pitzer: before.pitzer };
+    // The amount's γ iteration starts from the unadjusted solution's γ when the titrant adds no new species (NaOH to a buffer with NaCl).
+    const chosen = chooseTitrant(s, start, near ?? before.pitzer);
+    near = chosen.pitzer;
     const composition = withTitrant(start, chosen.titrant, chosen.concentrationM);
     // Written field by field: a spread that adds a field costs more here than a pH solve.
     const titrant = { form: chosen.form, titrant: chosen.titrant, concentrationM: chosen.concentrationM, stock: chosen.stock, before: start };
-    return { composition, weighed, titrant, unadjustedPh: startPh };
+    return { composition, weighed, titrant, unadjustedPh: startPh, pitzer: chosen.pitzer };
   };
   const stated = attempt(s.concentrationM / perMole);
   const shared = stated.titrant ? systemMolesIn(stated.titrant.form, s.system) : 0;
@@ -117,8 +122,11 @@ export function titrantTotalWarning(s: Settled, base: RouteResult): ChemWarning 
   return warning('titrantAddsBuffer', MESSAGES.titrantAddsBuffer(base.titrant.form.name, s.system.name, s.concentrationM * 1000, totalMm), 'titrantInBuffer');
 }
 
-/** The titrant named, or 1 M NaOH / 1 M HCl, whichever reaches the target. */
-export function chooseTitrant(s: Settled, start: Composition): Omit<NonNullable<RouteResult['titrant']>, 'before'> {
+/**
+ * The titrant named, or 1 M NaOH / 1 M HCl, whichever reaches the target; with the Pitzer model, the γ of the
+ * titrated solution besides (`near`: a neighbouring solution's γ to start the amount's iteration from).
+ */
+export function chooseTitrant(s: Settled, start: Composition, near?: PitzerStart): Omit<NonNullable<RouteResult['titrant']>, 'before'> & { readonly pitzer?: PitzerStart } {
   const stockM = s.titrant?.concentrationM ?? 1;
   const tolerance = s.titrant?.tolerancePercent ?? DEFAULT_STOCK_TOLERANCE_PERCENT;
   const candidates = s.titrant?.form
@@ -132,8 +140,8 @@ export function chooseTitrant(s: Settled, start: Composition): Omit<NonNullable<
     const form = s.library.findForm(name, 'titrant.form');
     const titrant = titrantFromForm(form, s.library, 'titrant.form');
     try {
-      const amount = titrantForPh(start, titrant, s.targetPh);
-      return { form, titrant, concentrationM: amount.concentrationM, stock: { concentrationM, tolerancePercent } };
+      const amount = titrantForPh(start, titrant, s.targetPh, near);
+      return { form, titrant, concentrationM: amount.concentrationM, stock: { concentrationM, tolerancePercent }, pitzer: amount.pitzer };
     } catch (e) {
       firstError ??= e;
     }
@@ -156,8 +164,11 @@ export function twoFormsRoute(s: Settled, saltTargetM: number): RouteResult {
   for (const [ion, n] of Object.entries(acid.counterIons)) swap[ion] = (swap[ion] ?? 0) - (n * mB) / mA;
   const maxBaseM = s.concentrationM / mB;
   let baseM: number;
+  let pitzer: PitzerStart | undefined;
   try {
-    baseM = titrantForPh(allAcid, { name: base.name, strongIons: swap }, s.targetPh).concentrationM;
+    const found = titrantForPh(allAcid, { name: base.name, strongIons: swap }, s.targetPh);
+    baseM = found.concentrationM;
+    pitzer = found.pitzer;
   } catch (e) {
     if (!(e instanceof ChemError) || e.kind !== 'infeasible-target') throw e;
     baseM = Infinity;
@@ -176,6 +187,7 @@ export function twoFormsRoute(s: Settled, saltTargetM: number): RouteResult {
   return {
     composition: baseComposition(s, weighed, saltTargetM),
     weighed: [...weighed, ...saltComponents(s, saltTargetM)],
+    pitzer,
   };
 }
 

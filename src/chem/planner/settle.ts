@@ -8,6 +8,7 @@ import { SubstanceLibrary } from '../library/lookup';
 import { nameKey } from '../library/names';
 import { CONDUCTIVITY_MAX_C, CONDUCTIVITY_MIN_C } from '../conductivity';
 import { Titrant } from '../titration';
+import type { PitzerStart } from '../speciation';
 import { RecipeComponent, RecipeInput, RecipeRoute } from './types';
 import { SaltGoal } from './constants';
 
@@ -26,6 +27,8 @@ export interface RouteResult {
   };
   /** pH of the weighed forms and salts before any titrant (titrate route). */
   readonly unadjustedPh?: number;
+  /** Pitzer only: the finished composition's γ at the target, from the amount solve (a start for its own solve and its neighbours'). */
+  readonly pitzer?: PitzerStart;
 }
 
 /** Validated, defaulted input. */
