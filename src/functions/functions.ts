@@ -35,8 +35,6 @@ import { RecipeInput, RecipePlan, hydrateWarning, planRecipe } from '../chem/pla
 import { checkTitrantFits } from '../chem/planner/band';
 import { DEFAULT_PART_VOLUME_FRACTION } from '../chem/planner/constants';
 import { titrantForPh } from '../chem/titration';
-import type { Composition } from '../chem/composition';
-import type { PitzerStart } from '../chem/pitzer/iteration';
 import { volumeText } from '../chem/planner/protocol';
 import { checkRowLimit, compositionFrom, formAlone } from './composition';
 import { invalid } from './errors';
@@ -81,14 +79,6 @@ export function ph(composition: any[][], temperatureC?: any, activityModel?: any
 }
 
 /**
- * The γ of the last titrant amount found per composition object (compositions are values, kept by their inputs in
- * ./composition): the next target pH asked of the same composition starts its Pitzer γ iteration there, one round
- * fewer than from Bates–Guggenheim. Only the first iterate: the answer is the same fixed point within the solver's
- * tolerance (docs/performance.md). Weakly held.
- */
-const lastTitrantGamma = new WeakMap<Composition, PitzerStart>();
-
-/**
  * Volume of titrant stock, in mL, that brings a weighed form to a target pH.
  * @customfunction TITRANT.ML TITRANT.ML
  * @helpurl https://localhost:3000/help/functions.html#titrant-ml
@@ -129,10 +119,7 @@ export function titrantMl(
       ? formAlone(s.library, formName, mM / 1000, s.temperatureC, s.model)
       : compositionFrom(s.library, [[formName, mM], ...toRange(salts)], s.temperatureC, s.model);
     const t = titrantFromForm(s.library.findForm(toText('titrant', titrant)), s.library);
-    // The composition's last amount (a grid column's previous target pH) starts this one's γ iteration (Pitzer).
-    const found = titrantForPh(composition, t, target, lastTitrantGamma.get(composition));
-    if (found.pitzer) lastTitrantGamma.set(composition, found.pitzer);
-    const ml = (found.concentrationM * volumeMl) / stockM;
+    const ml = (titrantForPh(composition, t, target).concentrationM * volumeMl) / stockM;
     // The same rule as a recipe's: the titrant must fit in the part volume the pH is adjusted in.
     checkTitrantFits(ml, volumeMl, DEFAULT_PART_VOLUME_FRACTION, stockM);
     return ml;
