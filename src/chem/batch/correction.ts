@@ -28,7 +28,7 @@ import { Titrant, titrantForPh, withTitrant } from '../titration';
 import { ChemWarning, warning } from '../warnings';
 import { BENCH_TEMPERATURE_SLACK_C, METER_RESOLUTION_PH } from './asMade';
 import { BenchCorrection, BenchState, LikelyCause } from './types';
-import { WeighedItem, madeVolumeMlOf, plannedAsWeighed, readWeighed, shiftBuffer, saltForms, siblingForms, titrantOf, weighedComposition } from './weighed';
+import { WeighedItem, madeVolumeMlOf, plannedAsWeighed, otherForms, readWeighed, shiftBuffer, titrantOf, weighedComposition } from './weighed';
 
 /** Off the plan, the first portion is this share of the next amount: the model was wrong once, so approach in halves (our rule). */
 export const OFF_PLAN_PORTION_SHARE = 0.5;
@@ -150,19 +150,16 @@ export function benchCorrection(plan: RecipePlan, state: BenchState, library: Su
     }
     for (const item of items) {
       if (!item.planned || item.planned.role === 'salt') continue;
-      for (const other of siblingForms(item.form, library)) {
-        const swapped: WeighedItem[] = items.map((x) => (x === item ? { ...x, moles: (x.moles * x.form.molarMass) / other.molarMass } : x));
-        const ph = solvePh(now(addedMol, weighedComposition(plan, swapped, volumeMl, temperatureC, library)));
-        if (Math.abs(ph - readingPh) <= fitTol) {
-          causes.push({ cause: 'hydrate', fits: other.name, warning: warning('causeHydrate', MESSAGES.causeHydrate(item.form.name, other.name), 'actual.weighed') });
-        }
-      }
-      for (const other of saltForms(item.form, library)) {
+      // Another hydrate, or another form of the buffer, weighed by the planned grams.
+      for (const { form: other, hydrate } of otherForms(item.form, library)) {
         const swapped: WeighedItem[] = items.map((x) => (x === item ? { ...x, form: other, moles: (x.moles * x.form.molarMass) / other.molarMass } : x));
         const ph = solvePh(now(addedMol, weighedComposition(plan, swapped, volumeMl, temperatureC, library)));
-        if (Math.abs(ph - readingPh) <= fitTol) {
-          causes.push({ cause: 'salt form', fits: other.name, warning: warning('causeSaltForm', MESSAGES.causeSaltForm(item.form.name, other.name), 'actual.weighed') });
-        }
+        if (Math.abs(ph - readingPh) > fitTol) continue;
+        causes.push(
+          hydrate
+            ? { cause: 'hydrate', fits: other.name, warning: warning('causeHydrate', MESSAGES.causeHydrate(item.form.name, other.name), 'actual.weighed') }
+            : { cause: 'salt form', fits: other.name, warning: warning('causeSaltForm', MESSAGES.causeSaltForm(item.form.name, other.name), 'actual.weighed') },
+        );
       }
     }
     const fittedC = temperatureFitting(now(addedMol), readingPh);

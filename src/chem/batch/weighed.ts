@@ -41,18 +41,28 @@ function sameChemistry(a: LibraryForm, b: LibraryForm): boolean {
   return adds(a) === adds(b) && ions(a) === ions(b);
 }
 
-/** Other forms on the shelf with the same chemistry as `form` (its hydrates), with their molar masses. */
-export function siblingForms(form: LibraryForm, library: SubstanceLibrary): LibraryForm[] {
+/**
+ * Other forms of the same substance on the shelf, each marked `hydrate` when it has the same
+ * chemistry as `form` (another hydrate of the one salt, of another molar mass) or not (the free
+ * acid for its sodium salt, tris base for tris HCl): a bottle picked up for the planned one.
+ * Hydrates come first, in shelf order.
+ */
+export function otherForms(form: LibraryForm, library: SubstanceLibrary): { readonly form: LibraryForm; readonly hydrate: boolean }[] {
   const record = library.records().find((r) => r.name === form.substance);
   if (!record) return [];
-  return record.forms.map((f) => library.findForm(f.name)).filter((f) => f.name !== form.name && sameChemistry(f, form) && Math.abs(f.molarMass - form.molarMass) > 1e-6);
+  return record.forms
+    .map((f) => library.findForm(f.name))
+    .filter((f) => f.name !== form.name)
+    .map((f) => ({ form: f, hydrate: sameChemistry(f, form) }))
+    .filter((o) => !o.hydrate || Math.abs(o.form.molarMass - form.molarMass) > 1e-6)
+    .sort((a, b) => Number(b.hydrate) - Number(a.hydrate));
 }
 
-/** Other forms of the same substance with another chemistry (the free acid for its sodium salt, tris base for tris HCl): a bottle picked up for the planned one. */
-export function saltForms(form: LibraryForm, library: SubstanceLibrary): LibraryForm[] {
-  const record = library.records().find((r) => r.name === form.substance);
-  if (!record) return [];
-  return record.forms.map((f) => library.findForm(f.name)).filter((f) => f.name !== form.name && !sameChemistry(f, form));
+/** Other forms on the shelf with the same chemistry as `form` (its hydrates), with their molar masses. */
+export function siblingForms(form: LibraryForm, library: SubstanceLibrary): LibraryForm[] {
+  return otherForms(form, library)
+    .filter((o) => o.hydrate)
+    .map((o) => o.form);
 }
 
 /** The weighed forms as planned (planned grams and purity). */
