@@ -17,20 +17,21 @@ describe('RECIPE.ROW', () => {
     ['partVolumeFraction', 0.8],
   ];
   const row = () => recipeRow('HEPES', 7.4, 25, 500, 4, [['NaCl', 150]], options);
+  /** The same recipe planned by the core: the row must carry its numbers. */
+  const plan = planRecipe({
+    buffer: 'HEPES',
+    targetPh: 7.4,
+    concentrationMm: 25,
+    volumeMl: 500,
+    form: 'HEPES free acid',
+    titrant: { form: 'NaOH', concentrationM: 1 },
+    useTemperatureC: 4,
+    benchTemperatureC: 22,
+    partVolumeFraction: 0.8,
+    salts: [{ form: 'NaCl', concentrationMm: 150 }],
+  });
 
   it("gives the planner's grams, titrant band, meter reading and predictions in the header's order", () => {
-    const plan = planRecipe({
-      buffer: 'HEPES',
-      targetPh: 7.4,
-      concentrationMm: 25,
-      volumeMl: 500,
-      form: 'HEPES free acid',
-      titrant: { form: 'NaOH', concentrationM: 1 },
-      useTemperatureC: 4,
-      benchTemperatureC: 22,
-      partVolumeFraction: 0.8,
-      salts: [{ form: 'NaCl', concentrationMm: 150 }],
-    });
     const [r] = row();
     expect(r).toHaveLength(RECIPE_ROW_HEADER.length);
     expect(Math.abs((r[col('form (g)')] as number) - plan.components[0].grams!)).toBeLessThan(SAME);
@@ -43,18 +44,6 @@ describe('RECIPE.ROW', () => {
   });
 
   it("gives the planner's osmolality and conductivity at the temperature of use and at 25 °C, the cold one reading lower", () => {
-    const plan = planRecipe({
-      buffer: 'HEPES',
-      targetPh: 7.4,
-      concentrationMm: 25,
-      volumeMl: 500,
-      form: 'HEPES free acid',
-      titrant: { form: 'NaOH', concentrationM: 1 },
-      useTemperatureC: 4,
-      benchTemperatureC: 22,
-      partVolumeFraction: 0.8,
-      salts: [{ form: 'NaCl', concentrationMm: 150 }],
-    });
     const [r] = row();
     expect(Math.abs((r[col('osmolality (mOsm/kg)')] as number) - plan.predictions.osmolalityMosmKg)).toBeLessThan(SAME);
     expect(Math.abs((r[col('conductivity at use temp. (mS/cm)')] as number) - plan.predictions.conductivityMsPerCm)).toBeLessThan(SAME);
